@@ -1,0 +1,2 @@
+package org.mobident.cli;
+public final class Main { public static void main(String[] a) { } }

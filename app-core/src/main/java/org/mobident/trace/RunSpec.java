@@ -1,0 +1,22 @@
+package org.mobident.trace;
+
+import java.nio.file.Path;
+
+/**
+ * One run to process: its trace file and conditions, and where it was declared.
+ *
+ * @param name       run name: the trace file name without extension
+ * @param traceFile  resolved path of the trace file
+ * @param conditions the run's conditions after defaults were applied
+ * @param origin     where the run was declared (the run sheet path, or "command line")
+ * @param originLine 1-based line of the run sheet, or 0
+ */
+public record RunSpec(String name, Path traceFile, RunConditions conditions, String origin, long originLine) {
+
+    /** The run name for a trace file: its file name without the last extension. */
+    public static String runNameOf(Path file) {
+        String n = file.getFileName().toString();
+        int dot = n.lastIndexOf('.');
+        return dot > 0 ? n.substring(0, dot) : n;
+    }
+}
