@@ -1,0 +1,19 @@
+package org.mobident.pipeline;
+
+import org.mobident.matching.PeakMatch;
+import org.mobident.signal.Peak;
+
+/**
+ * A peak with its mobility and its match.
+ *
+ * @param peak                  the measured peak
+ * @param role                  what the peak is: an analyte peak or one of the markers
+ * @param mobility              effective mobility at the run temperature, 1e-9 m²/(V s) (NaN if unknown)
+ * @param mobilitySd            its standard uncertainty (NaN if unknown)
+ * @param mobilityAtLibraryTemp mobility converted to the library temperature (equals mobility
+ *                              when the temperatures agree; NaN if unknown)
+ * @param match                 the matching outcome ({@link PeakMatch#none()} for markers)
+ */
+public record PeakResult(Peak peak, PeakRole role, double mobility, double mobilitySd,
+                         double mobilityAtLibraryTemp, PeakMatch match) {
+}

@@ -1,0 +1,34 @@
+package org.mobident.pipeline;
+
+import java.util.List;
+import org.mobident.InputException;
+import org.mobident.trace.RunSpec;
+
+/**
+ * The outcome of one run: either its peaks, or the reason it could not be processed.
+ *
+ * @param spec        the run as declared
+ * @param error       why the run failed as a whole (file unreadable, bad conditions), or null
+ * @param scaleNote   how mobilities were obtained (e.g. "neutral marker at 212.4 s"), or a
+ *                    statement that they could not be (no marker found), never null
+ * @param eofMobility EOF mobility of the run, 1e-9 m²/(V s), NaN when unknown
+ * @param mobilityKnown true when a mobility scale was set for this run
+ * @param peaks       peaks in order of apex time (empty when the run failed)
+ * @param notes       warnings and remarks an analyst should read (temperature conversion, …)
+ * @param noiseSd     baseline noise standard deviation of the trace (NaN when failed)
+ */
+public record RunResult(RunSpec spec, InputException error, String scaleNote, double eofMobility,
+                        boolean mobilityKnown, List<PeakResult> peaks, List<String> notes, double noiseSd) {
+    public RunResult {
+        peaks = List.copyOf(peaks);
+        notes = List.copyOf(notes);
+    }
+
+    public boolean failed() {
+        return error != null;
+    }
+
+    public static RunResult failure(RunSpec spec, InputException error) {
+        return new RunResult(spec, error, "run not processed", Double.NaN, false, List.of(), List.of(), Double.NaN);
+    }
+}
