@@ -109,8 +109,8 @@ public record RunConditions(
         if (!Double.isNaN(markerFromS) && !Double.isNaN(markerToS) && !(markerFromS < markerToS)) {
             return "marker window start (" + markerFromS + " s) must be before its end (" + markerToS + " s)";
         }
-        if (!Double.isNaN(temperatureC) && !(temperatureC > -20 && temperatureC < 100)) {
-            return "temperature must be between -20 and 100 °C, got " + temperatureC;
+        if (!Double.isNaN(temperatureC) && !(temperatureC >= 0 && temperatureC <= 100)) {
+            return "temperature must be between 0 and 100 °C, got " + temperatureC;
         }
         return null;
     }
