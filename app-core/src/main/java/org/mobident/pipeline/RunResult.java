@@ -2,6 +2,7 @@ package org.mobident.pipeline;
 
 import java.util.List;
 import org.mobident.InputException;
+import org.mobident.mobility.MobilityScale;
 import org.mobident.trace.RunSpec;
 
 /**
@@ -12,16 +13,21 @@ import org.mobident.trace.RunSpec;
  * @param scaleNote   how mobilities were obtained (e.g. "neutral marker at 212.4 s"), or a
  *                    statement that they could not be (no marker found), never null
  * @param eofMobility EOF mobility of the run, 1e-9 m²/(V s), NaN when unknown
- * @param mobilityKnown true when a mobility scale was set for this run
+ * @param scale       the run's time-to-mobility conversion, or null when none could be set
  * @param peaks       peaks in order of apex time (empty when the run failed)
  * @param notes       warnings and remarks an analyst should read (temperature conversion, …)
  * @param noiseSd     baseline noise standard deviation of the trace (NaN when failed)
  */
 public record RunResult(RunSpec spec, InputException error, String scaleNote, double eofMobility,
-                        boolean mobilityKnown, List<PeakResult> peaks, List<String> notes, double noiseSd) {
+                        MobilityScale scale, List<PeakResult> peaks, List<String> notes, double noiseSd) {
     public RunResult {
         peaks = List.copyOf(peaks);
         notes = List.copyOf(notes);
+    }
+
+    /** True when a mobility scale was set for this run. */
+    public boolean mobilityKnown() {
+        return scale != null;
     }
 
     public boolean failed() {
@@ -29,6 +35,6 @@ public record RunResult(RunSpec spec, InputException error, String scaleNote, do
     }
 
     public static RunResult failure(RunSpec spec, InputException error) {
-        return new RunResult(spec, error, "run not processed", Double.NaN, false, List.of(), List.of(), Double.NaN);
+        return new RunResult(spec, error, "run not processed", Double.NaN, null, List.of(), List.of(), Double.NaN);
     }
 }

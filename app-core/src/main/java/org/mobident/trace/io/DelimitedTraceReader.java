@@ -1,0 +1,516 @@
+package org.mobident.trace.io;
+
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.List;
+import java.util.Locale;
+
+import org.mobident.InputException;
+import org.mobident.trace.RunSpec;
+import org.mobident.trace.TimeScale;
+import org.mobident.trace.Trace;
+
+/**
+ * Reads a detector trace from delimited text: a header line naming the columns, then one row
+ * per point.
+ *
+ * <ul>
+ *   <li>Delimiter comma, semicolon or tab, taken from the header (the most frequent of the three;
+ *       ties go to tab, then semicolon). With semicolon or tab, numbers may use a decimal comma.</li>
+ *   <li>UTF-8 (a byte order mark is skipped); a header that is not valid UTF-8 is read as
+ *       ISO-8859-1. UTF-16 and binary files are refused. Lines end in LF, CRLF or CR.</li>
+ *   <li>Blank lines and lines starting with {@code #} are skipped anywhere. Fields may be quoted.
+ *       Trailing empty fields beyond the header are ignored.</li>
+ *   <li>Time column: the option, else a name such as {@code time}, {@code t}, {@code Time (min)},
+ *       {@code time_s}, {@code minutes}. Unit: the option, else the header, else seconds.</li>
+ *   <li>Signal column: the option, else a name with a word such as signal, absorbance, mAU,
+ *       intensity, detector, response or value, else the first other named column.</li>
+ *   <li>Times must strictly increase (sampling may be irregular); values must be finite.</li>
+ * </ul>
+ * Every problem is an {@link InputException} naming the file, the 1-based line and the column.
+ * Parsing works on the raw bytes with {@link FastDoubleParser}.
+ */
+public final class DelimitedTraceReader {
+
+    /** Longest piece of a bad field quoted back in a message. */
+    private static final int MAX_QUOTED_CHARS = 40;
+    /** Arrays start at this many points and grow by half. */
+    private static final int INITIAL_CAPACITY = 1024;
+    /** A rough lower bound of bytes per data row, to size the arrays once for typical files. */
+    private static final int MIN_BYTES_PER_ROW = 8;
+
+    private DelimitedTraceReader() {
+    }
+
+    /** Reads {@code file}; messages name it as {@code file.toString()}. */
+    public static Trace read(Path file, TraceReadOptions options) throws InputException {
+        return read(file, file.toString(), options);
+    }
+
+    /**
+     * Reads {@code file}; the trace is named {@link RunSpec#runNameOf(Path)}.
+     *
+     * @param displayName how messages and {@link Trace#sourceFile()} name the file
+     */
+    public static Trace read(Path file, String displayName, TraceReadOptions options) throws InputException {
+        byte[] bytes = TextSniffer.readAllBytes(file, displayName);
+        return parse(bytes, RunSpec.runNameOf(file), displayName, options);
+    }
+
+    /**
+     * Parses the bytes of a trace file already in memory (not modified).
+     *
+     * @param name        trace (run) name
+     * @param displayName file name for messages and {@link Trace#sourceFile()}
+     */
+    public static Trace parse(byte[] bytes, String name, String displayName, TraceReadOptions options)
+            throws InputException {
+        return new Parse(bytes, displayName, options == null ? TraceReadOptions.DEFAULT : options).run(name);
+    }
+
+    /** State of one parse; not shared. */
+    private static final class Parse {
+        private final byte[] b;
+        private final int n;
+        private final String file;
+        private final TraceReadOptions options;
+
+        private int pos;
+        private long line;
+        /** Bounds of the current line, without its terminator. */
+        private int lineStart;
+        private int lineEnd;
+
+        private byte delimiter;
+        private List<String> names;
+        private int namedCount;
+        private int[] fieldStart;
+        private int[] fieldEnd;
+
+        Parse(byte[] bytes, String file, TraceReadOptions options) {
+            this.b = bytes;
+            this.n = bytes.length;
+            this.file = file;
+            this.options = options;
+        }
+
+        /** Moves to the next line; false at the end of the bytes. */
+        private boolean nextLine() {
+            if (pos >= n) {
+                return false;
+            }
+            line++;
+            lineStart = pos;
+            int i = pos;
+            while (i < n && b[i] != '\n' && b[i] != '\r') {
+                i++;
+            }
+            lineEnd = i;
+            if (i < n && b[i] == '\r' && i + 1 < n && b[i + 1] == '\n') {
+                i++;
+            }
+            pos = i < n ? i + 1 : n;
+            return true;
+        }
+
+        /** True for a line of spaces and tabs only, or a comment line. */
+        private boolean skippable() {
+            int i = lineStart;
+            while (i < lineEnd && (b[i] == ' ' || b[i] == '\t')) {
+                i++;
+            }
+            return i == lineEnd || b[i] == '#';
+        }
+
+        Trace run(String traceName) throws InputException {
+            TextSniffer.requireText(b, file);
+            pos = TextSniffer.utf8BomLength(b);
+            boolean found = false;
+            while (nextLine()) {
+                if (!skippable()) {
+                    found = true;
+                    break;
+                }
+            }
+            if (!found) {
+                throw new InputException(file, 0, null, n == 0 ? "the file is empty"
+                        : "the file has no header line (only blank or comment lines)");
+            }
+            long headerLine = line;
+            String header = TextSniffer.decode(b, lineStart, lineEnd);
+            readHeader(header, headerLine);
+
+            int timeIndex = timeColumn(headerLine);
+            int signalIndex = signalColumn(headerLine, timeIndex);
+            TimeScale scale = timeScale(timeIndex, headerLine);
+            String timeName = names.get(timeIndex);
+            String signalName = names.get(signalIndex);
+            boolean decimalComma = delimiter != ',';
+
+            int capacity = (int) Math.max(INITIAL_CAPACITY, Math.min(n / MIN_BYTES_PER_ROW, 1 << 20));
+            double[] times = new double[capacity];
+            double[] signal = new double[capacity];
+            int count = 0;
+            double previousRaw = Double.NaN;
+            long previousLine = 0;
+            while (nextLine()) {
+                if (skippable()) {
+                    continue;
+                }
+                splitRow();
+                double t = value(timeIndex, timeName, decimalComma);
+                double y = value(signalIndex, signalName, decimalComma);
+                double tS = scale.toSeconds(t);
+                if (!Double.isFinite(tS)) {
+                    throw new InputException(file, line, timeName, "time " + quote(timeIndex)
+                            + " is too large to be converted to seconds");
+                }
+                if (count > 0 && !(tS > times[count - 1])) {
+                    String what = t == previousRaw || tS == times[count - 1] ? "repeats" : "is before";
+                    throw new InputException(file, line, timeName, "time " + quote(timeIndex) + " " + what
+                            + " the previous time " + shortNumber(previousRaw) + " (line " + previousLine
+                            + "); times must strictly increase");
+                }
+                if (count == times.length) {
+                    int grown = count + (count >> 1) + 1;
+                    times = Arrays.copyOf(times, grown);
+                    signal = Arrays.copyOf(signal, grown);
+                }
+                times[count] = tS;
+                signal[count] = y;
+                count++;
+                previousRaw = t;
+                previousLine = line;
+            }
+            if (count == 0) {
+                throw new InputException(file, 0, null, "the file has a header but no data rows");
+            }
+            if (count == 1) {
+                throw new InputException(file, previousLine, null,
+                        "the file has a single data point; a trace needs at least two");
+            }
+            return new Trace(traceName, file, Arrays.copyOf(times, count), Arrays.copyOf(signal, count));
+        }
+
+        // ---- header ----
+
+        private void readHeader(String header, long headerLine) throws InputException {
+            char d = detectDelimiter(header);
+            if (d == 0) {
+                String only = unquote(header.trim());
+                if (!Double.isNaN(parseText(only))) {
+                    throw new InputException(file, headerLine, null, "the first line holds a number, not column "
+                            + "names; add a header line such as time_s,signal");
+                }
+                throw new InputException(file, headerLine, null, "the header names a single column ('"
+                        + clip(only) + "'); expected a time and a signal column separated by comma, "
+                        + "semicolon or tab");
+            }
+            delimiter = (byte) d;
+            names = splitText(header, d);
+            boolean allNumbers = true;
+            for (String s : names) {
+                allNumbers &= !s.isEmpty() && !Double.isNaN(parseText(s));
+            }
+            if (allNumbers) {
+                throw new InputException(file, headerLine, null, "the first line holds numbers, not column names;"
+                        + " add a header line such as time_s" + d + "signal");
+            }
+            namedCount = names.size();
+            while (namedCount > 0 && names.get(namedCount - 1).isEmpty()) {
+                namedCount--;
+            }
+            fieldStart = new int[names.size()];
+            fieldEnd = new int[names.size()];
+        }
+
+        private int timeColumn(long headerLine) throws InputException {
+            String wanted = options.timeColumn();
+            if (wanted != null) {
+                return find(wanted, headerLine);
+            }
+            for (int i = 0; i < namedCount; i++) {
+                if (ColumnNames.isTime(ColumnNames.parse(names.get(i)))) {
+                    return i;
+                }
+            }
+            throw new InputException(file, headerLine, "time", "no time column found (expected a name such as"
+                    + " time, time_s, Time (min)); columns present: " + present()
+                    + "; name the time column in the options");
+        }
+
+        private int signalColumn(long headerLine, int timeIndex) throws InputException {
+            String wanted = options.signalColumn();
+            if (wanted != null) {
+                int i = find(wanted, headerLine);
+                if (i == timeIndex) {
+                    throw new InputException(file, headerLine, names.get(i),
+                            "the signal column is the same as the time column");
+                }
+                return i;
+            }
+            for (int i = 0; i < namedCount; i++) {
+                if (i != timeIndex && ColumnNames.isSignal(ColumnNames.parse(names.get(i)))) {
+                    return i;
+                }
+            }
+            for (int i = 0; i < namedCount; i++) {
+                if (i != timeIndex && !names.get(i).isEmpty()) {
+                    return i;
+                }
+            }
+            throw new InputException(file, headerLine, "signal", "no signal column: the header names only the "
+                    + "time column; columns present: " + present());
+        }
+
+        private TimeScale timeScale(int timeIndex, long headerLine) throws InputException {
+            if (options.timeScale() != null) {
+                return options.timeScale();
+            }
+            String unit = ColumnNames.parse(names.get(timeIndex)).unit();
+            if (unit.isEmpty()) {
+                return TimeScale.SECONDS;
+            }
+            TimeScale s = ColumnNames.scaleOf(unit);
+            if (s == null) {
+                throw new InputException(file, headerLine, names.get(timeIndex), "time unit '" + unit
+                        + "' is not supported; use s or min in the header, or give the time unit in the options");
+            }
+            return s;
+        }
+
+        private int find(String wanted, long headerLine) throws InputException {
+            String w = wanted.trim();
+            for (int i = 0; i < namedCount; i++) {
+                if (names.get(i).equalsIgnoreCase(w)) {
+                    return i;
+                }
+            }
+            for (int i = 0; i < namedCount; i++) {
+                if (!names.get(i).isEmpty() && ColumnNames.matches(w, ColumnNames.parse(names.get(i)))) {
+                    return i;
+                }
+            }
+            throw new InputException(file, headerLine, wanted, "column '" + wanted + "' not found; columns present: "
+                    + present());
+        }
+
+        private String present() {
+            StringBuilder sb = new StringBuilder();
+            for (int i = 0; i < namedCount; i++) {
+                if (sb.length() > 0) {
+                    sb.append(", ");
+                }
+                sb.append(names.get(i).isEmpty() ? "(unnamed)" : names.get(i));
+            }
+            return sb.toString();
+        }
+
+        // ---- rows ----
+
+        /** Splits the current line at the delimiter; throws when the field count does not fit the header. */
+        private void splitRow() throws InputException {
+            int capacity = fieldStart.length;
+            int count = 0;
+            boolean extraContent = false;
+            int i = lineStart;
+            while (true) {
+                int start = i;
+                if (i < lineEnd && b[i] == '"') {
+                    i++;
+                    while (i < lineEnd && b[i] != '"') {
+                        i++;
+                    }
+                }
+                while (i < lineEnd && b[i] != delimiter) {
+                    i++;
+                }
+                if (count < capacity) {
+                    fieldStart[count] = start;
+                    fieldEnd[count] = i;
+                } else if (!blank(start, i)) {
+                    extraContent = true;
+                }
+                count++;
+                if (i >= lineEnd) {
+                    break;
+                }
+                i++;
+            }
+            if (count < namedCount || extraContent) {
+                throw rowShapeProblem(count);
+            }
+            for (int k = count; k < capacity; k++) {
+                fieldStart[k] = lineStart;
+                fieldEnd[k] = lineStart;
+            }
+        }
+
+        private InputException rowShapeProblem(int count) {
+            int expected = namedCount;
+            String fields = "the row has " + count + (count == 1 ? " field" : " fields") + " but the header has "
+                    + expected;
+            String missing = count < expected ? names.get(count) : null;
+            boolean unterminated = lineEnd == n;
+            if (count < expected && unterminated) {
+                return new InputException(file, line, missing, "the last line lacks fields (" + fields
+                        + "); the file looks truncated");
+            }
+            for (byte other : new byte[] {',', ';', '\t'}) {
+                if (other != delimiter && occurrences(other) + 1 == expected) {
+                    return new InputException(file, line, missing, fields + "; the row seems to use "
+                            + delimiterName(other) + " as delimiter but the header uses " + delimiterName(delimiter)
+                            + " (mixed delimiters)");
+                }
+            }
+            if (delimiter == ',' && count > expected) {
+                return new InputException(file, line, null, fields + "; this looks like a decimal comma in a "
+                        + "comma-delimited file: use decimal points, or separate the columns with semicolons or tabs");
+            }
+            return new InputException(file, line, missing, fields);
+        }
+
+        private int occurrences(byte c) {
+            int k = 0;
+            for (int i = lineStart; i < lineEnd; i++) {
+                if (b[i] == c) {
+                    k++;
+                }
+            }
+            return k;
+        }
+
+        /** Parses field {@code index} of the current row. */
+        private double value(int index, String column, boolean decimalComma) throws InputException {
+            int s = fieldStart[index];
+            int e = fieldEnd[index];
+            while (s < e && (b[s] == ' ' || b[s] == '\t')) {
+                s++;
+            }
+            while (e > s && (b[e - 1] == ' ' || b[e - 1] == '\t')) {
+                e--;
+            }
+            if (e - s >= 2 && b[s] == '"' && b[e - 1] == '"') {
+                s++;
+                e--;
+            }
+            if (s == e) {
+                throw new InputException(file, line, column, "the value is empty");
+            }
+            double v = FastDoubleParser.parse(b, s, e, decimalComma);
+            if (Double.isNaN(v)) {
+                String text = TextSniffer.decode(b, s, e);
+                String lower = text.toLowerCase(Locale.ROOT).replace("+", "").replace("-", "");
+                if (lower.equals("nan") || lower.startsWith("inf") || lower.contains("#inf")) {
+                    throw new InputException(file, line, column, "'" + clip(text)
+                            + "' is not allowed: values must be finite numbers");
+                }
+                throw new InputException(file, line, column, "'" + clip(text) + "' is not a number");
+            }
+            if (Double.isInfinite(v)) {
+                throw new InputException(file, line, column, "'" + clip(TextSniffer.decode(b, s, e))
+                        + "' is too large for a double (overflows to infinity)");
+            }
+            return v;
+        }
+
+        private String quote(int index) {
+            String text = TextSniffer.decode(b, fieldStart[index], fieldEnd[index]).trim();
+            return clip(text);
+        }
+
+        private boolean blank(int s, int e) {
+            for (int i = s; i < e; i++) {
+                if (b[i] != ' ' && b[i] != '\t') {
+                    return false;
+                }
+            }
+            return true;
+        }
+
+        private double parseText(String s) {
+            byte[] bytes = s.trim().getBytes(StandardCharsets.ISO_8859_1);
+            return FastDoubleParser.parse(bytes, 0, bytes.length, true);
+        }
+    }
+
+    // ---- text helpers ----
+
+    /** The most frequent of tab, semicolon, comma outside quotes (ties: that order), or 0 when none occurs. */
+    static char detectDelimiter(String header) {
+        int tabs = 0;
+        int semicolons = 0;
+        int commas = 0;
+        boolean quoted = false;
+        for (int i = 0; i < header.length(); i++) {
+            char c = header.charAt(i);
+            if (c == '"') {
+                quoted = !quoted;
+            } else if (!quoted) {
+                if (c == '\t') {
+                    tabs++;
+                } else if (c == ';') {
+                    semicolons++;
+                } else if (c == ',') {
+                    commas++;
+                }
+            }
+        }
+        if (tabs == 0 && semicolons == 0 && commas == 0) {
+            return 0;
+        }
+        if (tabs >= semicolons && tabs >= commas) {
+            return '\t';
+        }
+        return semicolons >= commas ? ';' : ',';
+    }
+
+    /** Splits at {@code d} outside quotes; each part trimmed and unquoted. */
+    static List<String> splitText(String text, char d) {
+        List<String> out = new ArrayList<>();
+        StringBuilder cur = new StringBuilder();
+        boolean quoted = false;
+        for (int i = 0; i < text.length(); i++) {
+            char c = text.charAt(i);
+            if (c == '"') {
+                quoted = !quoted;
+                cur.append(c);
+            } else if (c == d && !quoted) {
+                out.add(unquote(cur.toString().trim()));
+                cur.setLength(0);
+            } else {
+                cur.append(c);
+            }
+        }
+        out.add(unquote(cur.toString().trim()));
+        return out;
+    }
+
+    private static String unquote(String s) {
+        if (s.length() >= 2 && s.charAt(0) == '"' && s.charAt(s.length() - 1) == '"') {
+            return s.substring(1, s.length() - 1).replace("\"\"", "\"").trim();
+        }
+        return s;
+    }
+
+    static String delimiterName(byte d) {
+        switch (d) {
+            case '\t':
+                return "tab";
+            case ';':
+                return "semicolon";
+            default:
+                return "comma";
+        }
+    }
+
+    private static String clip(String s) {
+        return s.length() <= MAX_QUOTED_CHARS ? s : s.substring(0, MAX_QUOTED_CHARS) + "…";
+    }
+
+    private static String shortNumber(double v) {
+        return v == Math.rint(v) && Math.abs(v) < 1e15 ? Long.toString((long) v) : Double.toString(v);
+    }
+}

@@ -1,0 +1,377 @@
+package org.mobident.trace.io;
+
+import java.io.IOException;
+import java.io.StringReader;
+import java.io.UncheckedIOException;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.InvalidPathException;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.HashMap;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+
+import org.apache.commons.csv.CSVFormat;
+import org.apache.commons.csv.CSVParser;
+import org.apache.commons.csv.CSVRecord;
+import org.mobident.InputException;
+import org.mobident.trace.Detection;
+import org.mobident.trace.RunConditions;
+import org.mobident.trace.RunSpec;
+
+/**
+ * Reads a run sheet: one row per run, naming its trace file and conditions.
+ *
+ * <p>Columns (case-insensitive, in any order; spaces and hyphens in names count as {@code _}); only
+ * {@code file} is required: file, total_length_cm, detector_length_cm, voltage_kv, ramp_s,
+ * temperature_c, buffer, marker_from_s, marker_to_s, detection, ref_marker_mobility,
+ * ref_marker_from_s, ref_marker_to_s, sample, note. {@code sample} and {@code note} are free text and
+ * ignored. An unknown column is an error, so that a misspelt condition is never dropped silently.
+ * {@code file} is relative to the sheet's folder. Lengths in cm, signed voltage in kV, times in s,
+ * {@code ref_marker_mobility} in 1e-9 m²/(V s), {@code detection} is {@code direct} or
+ * {@code indirect}. An empty cell takes the value from the defaults.
+ *
+ * <p>Delimiter comma, semicolon or tab, taken from the header; with semicolon or tab, numbers may
+ * use a decimal comma. A UTF-8 byte order mark, blank lines and {@code #} comment lines are
+ * skipped. Each line holds one row (quoted cells may hold the delimiter, not a line break).
+ */
+public final class RunSheetReader {
+
+    /** Origin of a run declared without a sheet. */
+    public static final String COMMAND_LINE = "command line";
+
+    /** Label of {@link InputException#file()} for problems in the conditions given to {@link #single}. */
+    public static final String OPTIONS = "options";
+
+    static final String FILE = "file";
+    static final String TOTAL_LENGTH = "total_length_cm";
+    static final String DETECTOR_LENGTH = "detector_length_cm";
+    static final String VOLTAGE = "voltage_kv";
+    static final String RAMP = "ramp_s";
+    static final String TEMPERATURE = "temperature_c";
+    static final String BUFFER = "buffer";
+    static final String MARKER_FROM = "marker_from_s";
+    static final String MARKER_TO = "marker_to_s";
+    static final String DETECTION = "detection";
+    static final String REF_MOBILITY = "ref_marker_mobility";
+    static final String REF_FROM = "ref_marker_from_s";
+    static final String REF_TO = "ref_marker_to_s";
+    static final String SAMPLE = "sample";
+    static final String NOTE = "note";
+
+    private static final String COLUMN_LIST = "file, total_length_cm, detector_length_cm, voltage_kv, ramp_s, "
+            + "temperature_c, buffer, marker_from_s, marker_to_s, detection, ref_marker_mobility, "
+            + "ref_marker_from_s, ref_marker_to_s, sample, note";
+
+    /** The known columns, in documentation order. */
+    public static final List<String> COLUMNS = List.of(COLUMN_LIST.split(", "));
+
+    private static final List<String> NUMBER_COLUMNS = List.of(TOTAL_LENGTH, DETECTOR_LENGTH, VOLTAGE, RAMP,
+            TEMPERATURE, MARKER_FROM, MARKER_TO, REF_MOBILITY, REF_FROM, REF_TO);
+
+    private RunSheetReader() {
+    }
+
+    /**
+     * Reads a run sheet. Rows that cannot be used go to {@link RunSheet#rowProblems()}, the others
+     * are returned with {@code defaults} filling their empty cells.
+     *
+     * @param defaults conditions for cells left empty (use {@link RunConditions#EMPTY} for none)
+     * @throws InputException when the sheet as a whole cannot be used: unreadable, empty, without a
+     *                        {@code file} column, with an unknown or repeated column, or without rows
+     */
+    public static RunSheet read(Path sheet, RunConditions defaults) throws InputException {
+        String name = sheet.toString();
+        byte[] bytes = TextSniffer.readAllBytes(sheet, name);
+        TextSniffer.requireText(bytes, name);
+        int bom = TextSniffer.utf8BomLength(bytes);
+        String text = TextSniffer.decode(bytes, bom, bytes.length);
+        return new SheetParse(sheet, name, defaults == null ? RunConditions.EMPTY : defaults).run(text);
+    }
+
+    /**
+     * A run for one trace file without a sheet, with origin {@value #COMMAND_LINE}.
+     *
+     * @param conditions the run's full conditions ({@code null}: none)
+     *
+     * @throws InputException when the conditions are impossible (file {@value #OPTIONS}) or the trace
+     *                        file is missing or unreadable
+     */
+    public static RunSpec single(Path traceFile, RunConditions conditions) throws InputException {
+        if (conditions == null) {
+            conditions = RunConditions.EMPTY;
+        }
+        String problem = conditionsProblem(conditions);
+        if (problem != null) {
+            throw new InputException(OPTIONS, 0, problemField(conditions), problem);
+        }
+        String fileProblem = traceFileProblem(traceFile);
+        if (fileProblem != null) {
+            throw new InputException(traceFile.toString(), 0, null, fileProblem);
+        }
+        return new RunSpec(RunSpec.runNameOf(traceFile), traceFile, conditions, COMMAND_LINE, 0);
+    }
+
+    // ---- checks shared by sheet rows and single runs ----
+
+    /** Geometry problem, or a half-given marker window, or {@code null}. */
+    private static String conditionsProblem(RunConditions c) {
+        String g = c.geometryProblem();
+        if (g != null) {
+            return g;
+        }
+        if (Double.isNaN(c.markerFromS()) != Double.isNaN(c.markerToS())) {
+            return "the neutral marker window needs both " + MARKER_FROM + " and " + MARKER_TO;
+        }
+        if (Double.isNaN(c.refMarkerFromS()) != Double.isNaN(c.refMarkerToS())) {
+            return "the charged marker window needs both " + REF_FROM + " and " + REF_TO;
+        }
+        if (!Double.isNaN(c.refMarkerFromS()) && !(c.refMarkerFromS() < c.refMarkerToS())) {
+            return "charged marker window start (" + c.refMarkerFromS() + " s) must be before its end ("
+                    + c.refMarkerToS() + " s)";
+        }
+        if (!Double.isNaN(c.refMarkerMobility()) && !Double.isFinite(c.refMarkerMobility())) {
+            return "charged marker mobility must be a finite number";
+        }
+        return null;
+    }
+
+    /** The column to blame for {@link #conditionsProblem}: each value is checked alone, then in pairs. */
+    private static String problemField(RunConditions c) {
+        double x = Double.NaN;
+        if (cond(c.totalLengthCm(), x, x, x, x, x, x).geometryProblem() != null) {
+            return TOTAL_LENGTH;
+        }
+        if (cond(x, c.detectorLengthCm(), x, x, x, x, x).geometryProblem() != null
+                || cond(c.totalLengthCm(), c.detectorLengthCm(), x, x, x, x, x).geometryProblem() != null) {
+            return DETECTOR_LENGTH;
+        }
+        if (cond(x, x, c.voltageKv(), x, x, x, x).geometryProblem() != null) {
+            return VOLTAGE;
+        }
+        if (cond(x, x, x, c.rampS(), x, x, x).geometryProblem() != null) {
+            return RAMP;
+        }
+        if (cond(x, x, x, x, c.temperatureC(), x, x).geometryProblem() != null) {
+            return TEMPERATURE;
+        }
+        if (Double.isNaN(c.markerToS()) && !Double.isNaN(c.markerFromS())) {
+            return MARKER_TO;
+        }
+        if (Double.isNaN(c.markerFromS()) && !Double.isNaN(c.markerToS())) {
+            return MARKER_FROM;
+        }
+        if (cond(x, x, x, x, x, c.markerFromS(), c.markerToS()).geometryProblem() != null) {
+            return MARKER_TO;
+        }
+        if (!Double.isNaN(c.refMarkerMobility()) && !Double.isFinite(c.refMarkerMobility())) {
+            return REF_MOBILITY;
+        }
+        return Double.isNaN(c.refMarkerFromS()) ? REF_FROM : REF_TO;
+    }
+
+    private static RunConditions cond(double lt, double ld, double v, double ramp, double temp,
+            double markerFrom, double markerTo) {
+        return new RunConditions(lt, ld, v, ramp, temp, null, markerFrom, markerTo, null,
+                Double.NaN, Double.NaN, Double.NaN);
+    }
+
+    private static String traceFileProblem(Path file) {
+        if (!Files.exists(file)) {
+            return "trace file not found: " + file;
+        }
+        if (!Files.isRegularFile(file)) {
+            return "trace file is not a regular file: " + file;
+        }
+        if (!Files.isReadable(file)) {
+            return "trace file cannot be read: " + file;
+        }
+        return null;
+    }
+
+    /** State of one sheet parse; not shared. */
+    private static final class SheetParse {
+        private final Path sheet;
+        private final String name;
+        private final RunConditions defaults;
+        private CSVFormat format;
+        private char delimiter;
+        private List<String> columns;
+        private int columnIndexOfFile;
+        private final Map<String, Long> runNames = new HashMap<>();
+
+        SheetParse(Path sheet, String name, RunConditions defaults) {
+            this.sheet = sheet;
+            this.name = name;
+            this.defaults = defaults;
+        }
+
+        RunSheet run(String text) throws InputException {
+            String[] lines = text.split("\r\n|\r|\n", -1);
+            List<RunSpec> runs = new ArrayList<>();
+            List<InputException> problems = new ArrayList<>();
+            boolean headerSeen = false;
+            int rows = 0;
+            for (int i = 0; i < lines.length; i++) {
+                String line = lines[i];
+                String stripped = line.strip();
+                if (stripped.isEmpty() || stripped.startsWith("#")) {
+                    continue;
+                }
+                long lineNo = i + 1L;
+                if (!headerSeen) {
+                    readHeader(line, lineNo);
+                    headerSeen = true;
+                    continue;
+                }
+                rows++;
+                try {
+                    runs.add(row(line, lineNo));
+                } catch (InputException e) {
+                    problems.add(e);
+                }
+            }
+            if (!headerSeen) {
+                throw new InputException(name, 0, null, "the run sheet is empty (no header line)");
+            }
+            if (rows == 0) {
+                throw new InputException(name, 0, null, "the run sheet has a header but no runs");
+            }
+            return new RunSheet(runs, problems);
+        }
+
+        private void readHeader(String line, long lineNo) throws InputException {
+            char d = DelimitedTraceReader.detectDelimiter(line);
+            delimiter = d == 0 ? ',' : d;
+            format = CSVFormat.DEFAULT.builder()
+                    .setDelimiter(delimiter)
+                    .setTrim(true)
+                    .setIgnoreSurroundingSpaces(true)
+                    .get();
+            List<String> raw = cells(line, lineNo);
+            columns = new ArrayList<>();
+            for (String r : raw) {
+                String c = r.strip().toLowerCase(Locale.ROOT).replace(' ', '_').replace('-', '_');
+                if (!c.isEmpty() && !COLUMNS.contains(c)) {
+                    throw new InputException(name, lineNo, r, "unknown column '" + r + "'; known columns: "
+                            + COLUMN_LIST);
+                }
+                if (!c.isEmpty() && columns.contains(c)) {
+                    throw new InputException(name, lineNo, r, "column '" + r + "' appears twice");
+                }
+                columns.add(c);
+            }
+            columnIndexOfFile = columns.indexOf(FILE);
+            if (columnIndexOfFile < 0) {
+                throw new InputException(name, lineNo, FILE, "the run sheet has no 'file' column; columns present: "
+                        + String.join(", ", raw));
+            }
+        }
+
+        /** The cells of one line, parsed by Commons CSV. */
+        private List<String> cells(String line, long lineNo) throws InputException {
+            try (CSVParser parser = CSVParser.builder().setReader(new StringReader(line)).setFormat(format).get()) {
+                List<CSVRecord> records = parser.getRecords();
+                return records.isEmpty() ? List.of() : records.get(0).toList();
+            } catch (IOException | UncheckedIOException | IllegalStateException e) {
+                throw new InputException(name, lineNo, null, "cannot split the line into cells: "
+                        + e.getMessage(), e);
+            }
+        }
+
+        private RunSpec row(String line, long lineNo) throws InputException {
+            List<String> cells = cells(line, lineNo);
+            if (cells.size() > columns.size()) {
+                boolean extra = false;
+                for (int k = columns.size(); k < cells.size(); k++) {
+                    extra |= !cells.get(k).isBlank();
+                }
+                if (extra) {
+                    String hint = delimiter == ',' ? "; a decimal comma in a comma-delimited sheet does this: use"
+                            + " decimal points, or quote the value, or separate the columns with semicolons" : "";
+                    throw new InputException(name, lineNo, null, "the row has " + cells.size()
+                            + " cells but the header has " + columns.size() + hint);
+                }
+            }
+            Map<String, String> values = new HashMap<>();
+            for (int k = 0; k < columns.size() && k < cells.size(); k++) {
+                String column = columns.get(k);
+                String v = cells.get(k).strip();
+                if (column.isEmpty()) {
+                    if (!v.isEmpty()) {
+                        throw new InputException(name, lineNo, null, "a value ('" + v
+                                + "') stands in a column without a name (cell " + (k + 1) + ")");
+                    }
+                    continue;
+                }
+                values.put(column, v);
+            }
+
+            String fileText = values.getOrDefault(FILE, "");
+            if (fileText.isEmpty()) {
+                throw new InputException(name, lineNo, FILE, "no trace file given");
+            }
+            Path traceFile;
+            try {
+                traceFile = sheet.resolveSibling(fileText);
+            } catch (InvalidPathException e) {
+                throw new InputException(name, lineNo, FILE, "'" + fileText + "' is not a valid path", e);
+            }
+            String runName = RunSpec.runNameOf(traceFile);
+            String key = runName.toLowerCase(Locale.ROOT);
+            Long first = runNames.putIfAbsent(key, lineNo);
+            if (first != null) {
+                throw new InputException(name, lineNo, FILE, "run name '" + runName + "' is already used on line "
+                        + first + " (a run is named by its trace file without extension)");
+            }
+
+            double[] numbers = new double[NUMBER_COLUMNS.size()];
+            for (int k = 0; k < numbers.length; k++) {
+                numbers[k] = number(values.get(NUMBER_COLUMNS.get(k)), NUMBER_COLUMNS.get(k), lineNo);
+            }
+            String buffer = values.getOrDefault(BUFFER, "");
+            String detectionText = values.getOrDefault(DETECTION, "");
+            Detection detection = null;
+            if (!detectionText.isEmpty()) {
+                detection = Detection.parse(detectionText);
+                if (detection == null) {
+                    throw new InputException(name, lineNo, DETECTION, "'" + detectionText
+                            + "' is not a detection mode; use direct or indirect");
+                }
+            }
+            RunConditions own = new RunConditions(numbers[0], numbers[1], numbers[2], numbers[3], numbers[4],
+                    buffer.isEmpty() ? null : buffer, numbers[5], numbers[6], detection,
+                    numbers[7], numbers[8], numbers[9]);
+            RunConditions conditions = own.orElse(defaults);
+            String problem = conditionsProblem(conditions);
+            if (problem != null) {
+                throw new InputException(name, lineNo, problemField(conditions), problem);
+            }
+            String fileProblem = traceFileProblem(traceFile);
+            if (fileProblem != null) {
+                throw new InputException(name, lineNo, FILE, fileProblem);
+            }
+            return new RunSpec(runName, traceFile, conditions, name, lineNo);
+        }
+
+        /** An empty cell is NaN (unset); anything else must be a finite number. */
+        private double number(String text, String column, long lineNo) throws InputException {
+            if (text == null || text.isEmpty()) {
+                return Double.NaN;
+            }
+            byte[] b = text.getBytes(StandardCharsets.UTF_8);
+            double v = FastDoubleParser.parse(b, 0, b.length, delimiter != ',');
+            if (Double.isNaN(v)) {
+                String hint = delimiter == ',' && text.indexOf(',') >= 0
+                        ? " (a decimal comma needs a semicolon-delimited sheet)" : "";
+                throw new InputException(name, lineNo, column, "'" + text + "' is not a number" + hint);
+            }
+            if (Double.isInfinite(v)) {
+                throw new InputException(name, lineNo, column, "'" + text + "' is too large a number");
+            }
+            return v;
+        }
+    }
+}

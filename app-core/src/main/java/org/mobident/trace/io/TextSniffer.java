@@ -1,0 +1,107 @@
+package org.mobident.trace.io;
+
+import java.io.IOException;
+import java.nio.ByteBuffer;
+import java.nio.CharBuffer;
+import java.nio.charset.CharacterCodingException;
+import java.nio.charset.CodingErrorAction;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.AccessDeniedException;
+import java.nio.file.Files;
+import java.nio.file.NoSuchFileException;
+import java.nio.file.Path;
+
+import org.mobident.InputException;
+
+/** Checks that bytes are plain 8-bit text and decodes short pieces of it. */
+final class TextSniffer {
+
+    /** How many leading bytes are inspected for NUL and control bytes. */
+    private static final int SAMPLE_BYTES = 8192;
+    /** Share of NUL bytes in the sample above which NULs at one parity mean UTF-16 (ASCII text as UTF-16 is ~50 %). */
+    private static final double UTF16_NUL_SHARE = 0.2;
+    /** Share of NULs that must sit at the same parity (even or odd offsets) for UTF-16. */
+    private static final double UTF16_PARITY_SHARE = 0.9;
+    /** Share of control bytes (other than tab, CR, LF, FF) above which a file is not text. */
+    private static final double BINARY_CONTROL_SHARE = 0.01;
+
+    /** Largest file read into one byte array. */
+    private static final long MAX_FILE_BYTES = Integer.MAX_VALUE - 64;
+
+    private TextSniffer() {
+    }
+
+    /** Reads a whole file; every failure is an {@link InputException} naming {@code display}. */
+    static byte[] readAllBytes(Path file, String display) throws InputException {
+        try {
+            if (Files.isDirectory(file)) {
+                throw new InputException(display, 0, null, "is a folder, not a file");
+            }
+            if (Files.size(file) > MAX_FILE_BYTES) {
+                throw new InputException(display, 0, null, "is too large to read");
+            }
+            return Files.readAllBytes(file);
+        } catch (NoSuchFileException e) {
+            throw new InputException(display, 0, null, "file not found", e);
+        } catch (AccessDeniedException e) {
+            throw new InputException(display, 0, null, "cannot be read (access denied)", e);
+        } catch (IOException e) {
+            throw new InputException(display, 0, null, "cannot be read: " + e.getMessage(), e);
+        }
+    }
+
+    /** Number of bytes of a UTF-8 byte order mark at the start, 0 or 3. */
+    static int utf8BomLength(byte[] b) {
+        return b.length >= 3 && (b[0] & 0xFF) == 0xEF && (b[1] & 0xFF) == 0xBB && (b[2] & 0xFF) == 0xBF ? 3 : 0;
+    }
+
+    /**
+     * Throws when the bytes are UTF-16 (byte order mark, or NULs in every other byte) or binary
+     * (NULs or many control bytes in the first {@value #SAMPLE_BYTES} bytes).
+     */
+    static void requireText(byte[] b, String file) throws InputException {
+        if (b.length >= 2 && (((b[0] & 0xFF) == 0xFE && (b[1] & 0xFF) == 0xFF)
+                || ((b[0] & 0xFF) == 0xFF && (b[1] & 0xFF) == 0xFE))) {
+            throw new InputException(file, 0, null, "looks like UTF-16 text; save it as UTF-8");
+        }
+        int n = Math.min(b.length, SAMPLE_BYTES);
+        int nulEven = 0;
+        int nulOdd = 0;
+        int control = 0;
+        for (int i = 0; i < n; i++) {
+            int v = b[i] & 0xFF;
+            if (v == 0) {
+                if ((i & 1) == 0) {
+                    nulEven++;
+                } else {
+                    nulOdd++;
+                }
+            } else if (v < 0x20 && v != '\t' && v != '\n' && v != '\r' && v != '\f') {
+                control++;
+            }
+        }
+        int nul = nulEven + nulOdd;
+        if (nul > 0) {
+            if (nul >= UTF16_NUL_SHARE * n && Math.max(nulEven, nulOdd) >= UTF16_PARITY_SHARE * nul) {
+                throw new InputException(file, 0, null, "looks like UTF-16 text; save it as UTF-8");
+            }
+            throw new InputException(file, 0, null, "not a text file (it contains NUL bytes)");
+        }
+        if (control > BINARY_CONTROL_SHARE * n) {
+            throw new InputException(file, 0, null, "not a text file (it contains many control bytes)");
+        }
+    }
+
+    /** Decodes {@code b[from, to)} as UTF-8, or as ISO-8859-1 when it is not valid UTF-8. */
+    static String decode(byte[] b, int from, int to) {
+        try {
+            CharBuffer cb = StandardCharsets.UTF_8.newDecoder()
+                    .onMalformedInput(CodingErrorAction.REPORT)
+                    .onUnmappableCharacter(CodingErrorAction.REPORT)
+                    .decode(ByteBuffer.wrap(b, from, to - from));
+            return cb.toString();
+        } catch (CharacterCodingException e) {
+            return new String(b, from, to - from, StandardCharsets.ISO_8859_1);
+        }
+    }
+}

@@ -1,0 +1,333 @@
+package org.mobident.trace.io;
+
+import static org.junit.jupiter.api.Assertions.assertArrayEquals;
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertNull;
+import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.io.IOException;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.Random;
+
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+import org.mobident.InputException;
+import org.mobident.trace.TimeScale;
+import org.mobident.trace.Trace;
+
+class DelimitedTraceReaderTest {
+
+    private static final double EXACT = 0.0;
+
+    @TempDir
+    Path dir;
+
+    private Path write(String name, String content) throws IOException {
+        return writeBytes(name, content.getBytes(StandardCharsets.UTF_8));
+    }
+
+    private Path writeBytes(String name, byte[] content) throws IOException {
+        Path p = dir.resolve(name);
+        Files.write(p, content);
+        return p;
+    }
+
+    private static Trace read(Path p) throws InputException {
+        return DelimitedTraceReader.read(p, TraceReadOptions.DEFAULT);
+    }
+
+    private InputException fails(String content) throws IOException {
+        Path p = write("bad.csv", content);
+        InputException e = assertThrows(InputException.class, () -> read(p));
+        assertEquals(p.toString(), e.file());
+        return e;
+    }
+
+    private static void assertWhere(InputException e, long line, String field) {
+        assertEquals(line, e.line(), e::getMessage);
+        assertEquals(field, e.field(), e::getMessage);
+    }
+
+    // ---------------------------------------------------------------- good files
+
+    @Test
+    void commaSecondsWithCrlf() throws Exception {
+        Path p = write("run01.csv", "time_s,signal\r\n0.0,1.5\r\n0.5,-2.25e-1\r\n1.0,3\r\n");
+        Trace t = read(p);
+        assertEquals("run01", t.name());
+        assertEquals(p.toString(), t.sourceFile());
+        assertArrayEquals(new double[] {0.0, 0.5, 1.0}, t.timesS(), EXACT);
+        assertArrayEquals(new double[] {1.5, -0.225, 3.0}, t.signals(), EXACT);
+    }
+
+    @Test
+    void semicolonDecimalCommaMinutesFromHeader() throws Exception {
+        Path p = write("a.txt", "Time (min);Absorbance (mAU)\n0,5;1,25\n1,0;-0,5\n1,5;2\n");
+        Trace t = read(p);
+        assertArrayEquals(new double[] {30.0, 60.0, 90.0}, t.timesS(), EXACT);
+        assertArrayEquals(new double[] {1.25, -0.5, 2.0}, t.signals(), EXACT);
+    }
+
+    @Test
+    void tabDecimalCommaBracketUnit() throws Exception {
+        Path p = write("b.tsv", "time [min]\tUV\n0,1\t5\n0,2\t6\n");
+        assertArrayEquals(new double[] {6.0, 12.0}, read(p).timesS(), 1e-12);
+    }
+
+    @Test
+    void unitWordsInHeader() throws Exception {
+        String[][] headers = {
+            {"time_min", "60"}, {"t/min", "60"}, {"minutes", "60"}, {"Time (s)", "1"}, {"sec", "1"},
+            {"t", "1"}, {"Retention time [min]", "60"}, {"time_seconds", "1"}, {"Time", "1"},
+            {"Time in min", "60"}, {"Zeit [min]", "60"}, {"TIME/S", "1"},
+        };
+        for (String[] h : headers) {
+            Path p = write("u.csv", h[0] + ",signal\n1,0\n2,0\n");
+            assertEquals(Double.parseDouble(h[1]), read(p).timeS(0), EXACT, h[0]);
+        }
+    }
+
+    @Test
+    void optionTimeScaleOverridesHeader() throws Exception {
+        Path p = write("c.csv", "time (s),signal\n1,0\n2,0\n");
+        Trace t = DelimitedTraceReader.read(p, TraceReadOptions.DEFAULT.withTimeScale(TimeScale.MINUTES));
+        assertArrayEquals(new double[] {60.0, 120.0}, t.timesS(), EXACT);
+        Path q = write("d.csv", "time (min),signal\n1,0\n2,0\n");
+        Trace s = DelimitedTraceReader.read(q, TraceReadOptions.DEFAULT.withTimeScale(TimeScale.SECONDS));
+        assertArrayEquals(new double[] {1.0, 2.0}, s.timesS(), EXACT);
+    }
+
+    @Test
+    void bomCommentsBlankLinesAndIrregularSampling() throws Exception {
+        byte[] body = ("# exported 2024-05-01\n\n  # indented comment\ntime,signal\n\n0.00,1\n# mid comment\n"
+                + "0.10,2\n   \n0.35,3\n1.00,4\n\n# trailing\n").getBytes(StandardCharsets.UTF_8);
+        byte[] withBom = new byte[body.length + 3];
+        withBom[0] = (byte) 0xEF;
+        withBom[1] = (byte) 0xBB;
+        withBom[2] = (byte) 0xBF;
+        System.arraycopy(body, 0, withBom, 3, body.length);
+        Trace t = read(writeBytes("e.csv", withBom));
+        assertArrayEquals(new double[] {0.0, 0.1, 0.35, 1.0}, t.timesS(), EXACT);
+        assertArrayEquals(new double[] {1, 2, 3, 4}, t.signals(), EXACT);
+    }
+
+    @Test
+    void carriageReturnOnlyLineEnds() throws Exception {
+        Trace t = read(write("f.csv", "time,signal\r1,2\r3,4"));
+        assertArrayEquals(new double[] {1, 3}, t.timesS(), EXACT);
+    }
+
+    @Test
+    void columnOptionsAreCaseInsensitiveAndMayOmitTheUnit() throws Exception {
+        Path p = write("g.csv", "X,Y1,Y2 (mAU)\n0,1,10\n1,2,20\n");
+        Trace t = DelimitedTraceReader.read(p, TraceReadOptions.DEFAULT.withColumns("x", "y2"));
+        assertArrayEquals(new double[] {10, 20}, t.signals(), EXACT);
+    }
+
+    @Test
+    void signalRecognisedByNameElseFirstOtherColumn() throws Exception {
+        Path p = write("h.csv", "index,time,current_uA,Absorbance\n1,0,5,100\n2,1,5,200\n");
+        assertArrayEquals(new double[] {100, 200}, read(p).signals(), EXACT);
+        Path q = write("i.csv", "Time,UV214\n0,7\n1,8\n");
+        assertArrayEquals(new double[] {7, 8}, read(q).signals(), EXACT);
+    }
+
+    @Test
+    void latin1HeaderIsTolerated() throws Exception {
+        byte[] b = "Zeit (min);Signal (\u00b5AU)\n0,5;1\n1,0;2\n".getBytes(StandardCharsets.ISO_8859_1);
+        Trace t = read(writeBytes("latin.csv", b));
+        assertArrayEquals(new double[] {30, 60}, t.timesS(), EXACT);
+    }
+
+    @Test
+    void quotedFieldsAndTrailingDelimiters() throws Exception {
+        Trace t = read(write("q.csv", "\"Time (s)\",\"Signal\",\n\"0.5\",\"1\",\n1.5 , 2 ,\n"));
+        assertArrayEquals(new double[] {0.5, 1.5}, t.timesS(), EXACT);
+        assertArrayEquals(new double[] {1, 2}, t.signals(), EXACT);
+    }
+
+    @Test
+    void sixtyThousandPointsAreReadExactly() throws Exception {
+        StringBuilder sb = new StringBuilder("time_s,signal_mAU\n");
+        Random r = new Random(1);
+        double[] y = new double[60_000];
+        for (int i = 0; i < y.length; i++) {
+            y[i] = Math.round(r.nextGaussian() * 1e6) / 1e4;
+            sb.append(i * 0.05).append(',').append(y[i]).append('\n');
+        }
+        Trace t = read(write("big.csv", sb.toString()));
+        assertEquals(60_000, t.size());
+        assertArrayEquals(y, t.signals(), EXACT);
+        assertEquals(59_999 * 0.05, t.endTimeS(), EXACT);
+    }
+
+    @Test
+    void displayNameIsUsedForSourceAndMessages() throws Exception {
+        Path p = write("named.csv", "time,signal\n0,1\n1,x\n");
+        InputException e = assertThrows(InputException.class,
+                () -> DelimitedTraceReader.read(p, "day1/named.csv", TraceReadOptions.DEFAULT));
+        assertEquals("day1/named.csv", e.file());
+        Path ok = write("ok.csv", "time,signal\n0,1\n1,2\n");
+        assertEquals("shown", DelimitedTraceReader.read(ok, "shown", null).sourceFile());
+    }
+
+    // ---------------------------------------------------------------- bad files
+
+    @Test
+    void emptyFile() throws Exception {
+        assertWhere(fails(""), 0, null);
+        InputException e = fails("# only a comment\n\n");
+        assertWhere(e, 0, null);
+        assertTrue(e.problem().contains("no header"), e.getMessage());
+    }
+
+    @Test
+    void headerOnly() throws Exception {
+        InputException e = fails("time,signal\n\n");
+        assertWhere(e, 0, null);
+        assertTrue(e.problem().contains("no data"), e.getMessage());
+    }
+
+    @Test
+    void singleDataPoint() throws Exception {
+        InputException e = fails("time,signal\n# c\n0,1\n");
+        assertWhere(e, 3, null);
+        assertTrue(e.problem().contains("single data point"), e.getMessage());
+    }
+
+    @Test
+    void namedColumnNotFoundListsColumns() throws Exception {
+        Path p = write("n.csv", "time,UV\n0,1\n1,2\n");
+        InputException e = assertThrows(InputException.class,
+                () -> DelimitedTraceReader.read(p, TraceReadOptions.DEFAULT.withColumns(null, "absorbance")));
+        assertWhere(e, 1, "absorbance");
+        assertTrue(e.problem().contains("time, UV"), e.getMessage());
+    }
+
+    @Test
+    void noTimeColumnListsColumns() throws Exception {
+        InputException e = fails("# x\nwavelength,signal\n0,1\n1,2\n");
+        assertWhere(e, 2, "time");
+        assertTrue(e.problem().contains("wavelength, signal"), e.getMessage());
+    }
+
+    @Test
+    void unsupportedTimeUnit() throws Exception {
+        assertWhere(fails("time (ms),signal\n0,1\n1,2\n"), 1, "time (ms)");
+    }
+
+    @Test
+    void firstLineOfNumbersIsNotAHeader() throws Exception {
+        InputException e = fails("0.0,1.0\n0.1,2.0\n");
+        assertWhere(e, 1, null);
+        assertTrue(e.problem().contains("not column names"), e.getMessage());
+    }
+
+    @Test
+    void singleColumnHeader() throws Exception {
+        assertWhere(fails("time\n0\n1\n"), 1, null);
+    }
+
+    @Test
+    void textInANumberField() throws Exception {
+        InputException e = fails("time,signal\n0,1\n0.1,abc\n0.2,3\n");
+        assertWhere(e, 3, "signal");
+        assertTrue(e.problem().contains("'abc' is not a number"), e.getMessage());
+        assertWhere(fails("Time (s),Signal\n0,1\n1 s,2\n"), 3, "Time (s)");
+    }
+
+    @Test
+    void emptyValue() throws Exception {
+        assertWhere(fails("time,signal\n0,1\n1,\n"), 3, "signal");
+    }
+
+    @Test
+    void nanInfinityAndOverflow() throws Exception {
+        assertWhere(fails("time,signal\n0,1\n1,NaN\n"), 3, "signal");
+        assertWhere(fails("time,signal\n0,1\n1,-Infinity\n"), 3, "signal");
+        InputException e = fails("time,signal\n0,1\n1,2\n2,1e999\n");
+        assertWhere(e, 4, "signal");
+        assertTrue(e.problem().contains("infinity"), e.getMessage());
+        assertWhere(fails("time,signal\n0,1\n1e400,2\n"), 3, "time");
+        Path p = write("m.csv", "time,signal\n1,1\n1e307,2\n");
+        assertWhere(assertThrows(InputException.class,
+                () -> DelimitedTraceReader.read(p, new TraceReadOptions(TimeScale.MINUTES, null, null))), 3, "time");
+    }
+
+    @Test
+    void duplicatedTimeNamesThePreviousOne() throws Exception {
+        InputException e = fails("time,signal\n0,1\n0.5,1\n\n0.5,2\n");
+        assertWhere(e, 5, "time");
+        assertTrue(e.problem().contains("repeats the previous time 0.5 (line 3)"), e.getMessage());
+    }
+
+    @Test
+    void descendingTimeNamesThePreviousOne() throws Exception {
+        InputException e = fails("time,signal\n0,1\n2,1\n1,2\n");
+        assertWhere(e, 4, "time");
+        assertTrue(e.problem().contains("before the previous time 2 (line 3)"), e.getMessage());
+    }
+
+    @Test
+    void tooFewFields() throws Exception {
+        InputException e = fails("time,temp,signal\n0,20,1\n1,20\n2,20,3\n");
+        assertWhere(e, 3, "signal");
+        assertTrue(e.problem().contains("2 fields but the header has 3"), e.getMessage());
+    }
+
+    @Test
+    void tooManyFields() throws Exception {
+        InputException e = fails("time\tsignal\n0\t1\n1\t2\t3\n");
+        assertWhere(e, 3, null);
+        assertTrue(e.problem().contains("3 fields but the header has 2"), e.getMessage());
+    }
+
+    @Test
+    void mixedDelimiters() throws Exception {
+        InputException e = fails("time;signal\n0;1\n1,5\n");
+        assertWhere(e, 3, "signal");
+        assertTrue(e.problem().contains("mixed delimiters"), e.getMessage());
+        InputException f = fails("time,signal\n0,1\n1;5\n2,3\n");
+        assertTrue(f.problem().contains("semicolon as delimiter"), f.getMessage());
+    }
+
+    @Test
+    void decimalCommaInCommaFile() throws Exception {
+        InputException e = fails("time,signal\n0,5,1,25\n1,0,2,0\n");
+        assertWhere(e, 2, null);
+        assertTrue(e.problem().contains("decimal comma"), e.getMessage());
+    }
+
+    @Test
+    void truncatedLastLine() throws Exception {
+        InputException e = fails("time,temp,signal\n0,20,1\n1,20,2\n2,2");
+        assertWhere(e, 4, "signal");
+        assertTrue(e.problem().contains("truncated"), e.getMessage());
+    }
+
+    @Test
+    void utf16AndBinaryAreRefused() throws Exception {
+        Path withBom = writeBytes("u16.csv", "time,signal\n0,1\n1,2\n".getBytes(StandardCharsets.UTF_16));
+        InputException e = assertThrows(InputException.class, () -> read(withBom));
+        assertTrue(e.problem().contains("UTF-16"), e.getMessage());
+        Path noBom = writeBytes("u16le.csv", "time,signal\n0,1\n1,2\n".getBytes(StandardCharsets.UTF_16LE));
+        assertTrue(assertThrows(InputException.class, () -> read(noBom)).problem().contains("save it as UTF-8"));
+        byte[] junk = new byte[4000];
+        new Random(3).nextBytes(junk);
+        Path bin = writeBytes("x.csv", junk);
+        InputException b = assertThrows(InputException.class, () -> read(bin));
+        assertWhere(b, 0, null);
+        assertTrue(b.problem().contains("not a text file"), b.getMessage());
+    }
+
+    @Test
+    void missingFileAndFolder() throws Exception {
+        InputException e = assertThrows(InputException.class, () -> read(dir.resolve("absent.csv")));
+        assertTrue(e.problem().contains("not found"), e.getMessage());
+        assertNull(e.field());
+        assertThrows(InputException.class, () -> read(dir));
+    }
+}
