@@ -1,0 +1,139 @@
+package org.mobident.report;
+
+import java.io.IOException;
+import java.io.Writer;
+import java.util.List;
+import org.mobident.matching.Candidate;
+import org.mobident.pipeline.PeakResult;
+import org.mobident.pipeline.PeakRole;
+import org.mobident.pipeline.RunResult;
+
+/**
+ * The machine-readable peak table as JSON (RFC 8259), deterministic for a given input:
+ *
+ * <pre>
+ * {"runs": [
+ *   {"run": "...", "file": "...", "status": "ok" | "failed", "error": null | "...",
+ *    "scale": "...", "eof_mobility": number | null, "mobility_known": true | false,
+ *    "noise_sd": number | null, "notes": ["..."],
+ *    "peaks": [{"peak": 1, "role": "analyte", "apex_time_s": ..., ..., "candidates": [
+ *        {"name": "nitrate", "probability": 0.930, "library_mobility": -69.600,
+ *         "residual": 0.120, "z": 0.40}], "note": null}]}]}
+ * </pre>
+ *
+ * <p>Each peak object carries the columns of {@link PeakTableCsv} (except {@code run}, which is
+ * the run's own field) with the same number formats; numbers are JSON numbers and unknown
+ * values are {@code null}. Unlike the CSV, {@code candidates} is an array of objects. A failed
+ * run has an empty {@code peaks} array and its reason in {@code error}.
+ */
+public final class PeakTableJson {
+
+    private static final String INDENT = "  ";
+    private static final int Z_DECIMALS = 2;
+
+    private PeakTableJson() {
+    }
+
+    /** Writes all runs as one JSON document to {@code out} (flushed, not closed). */
+    public static void write(List<RunResult> runs, Writer out) throws IOException {
+        StringBuilder sb = new StringBuilder();
+        sb.append("{\n").append(INDENT).append("\"runs\": [");
+        for (int r = 0; r < runs.size(); r++) {
+            sb.append(r == 0 ? "\n" : ",\n");
+            appendRun(sb, runs.get(r));
+            out.write(sb.toString());
+            sb.setLength(0);
+        }
+        sb.append(runs.isEmpty() ? "]\n" : "\n" + INDENT + "]\n").append("}\n");
+        out.write(sb.toString());
+        out.flush();
+    }
+
+    private static void appendRun(StringBuilder sb, RunResult run) {
+        String in = INDENT + INDENT;
+        String in2 = in + INDENT;
+        sb.append(in).append("{\n");
+        field(sb, in2, "run", Json.quote(run.spec().name()));
+        field(sb, in2, "file", Json.quote(run.spec().traceFile() == null ? null
+                : run.spec().traceFile().toString()));
+        field(sb, in2, "status", Json.quote(run.failed() ? "failed" : "ok"));
+        field(sb, in2, "error", Json.quote(run.failed() ? run.error().getMessage() : null));
+        field(sb, in2, "scale", Json.quote(run.scaleNote()));
+        field(sb, in2, "eof_mobility", Json.number(Numbers.fixed(run.eofMobility(),
+                PeakRows.MOBILITY_DECIMALS)));
+        field(sb, in2, "mobility_known", Boolean.toString(run.mobilityKnown()));
+        field(sb, in2, "noise_sd", Json.number(Numbers.significant(run.noiseSd(),
+                PeakRows.MAGNITUDE_DIGITS)));
+        StringBuilder notes = new StringBuilder("[");
+        for (int i = 0; i < run.notes().size(); i++) {
+            notes.append(i == 0 ? "" : ", ").append(Json.quote(run.notes().get(i)));
+        }
+        field(sb, in2, "notes", notes.append(']').toString());
+        sb.append(in2).append("\"peaks\": [");
+        if (!run.failed()) {
+            List<List<PeakRows.Cell>> rows = PeakRows.rowsOf(run);
+            List<PeakResult> peaks = run.peaks();
+            for (int i = 0; i < peaks.size(); i++) {
+                sb.append(i == 0 ? "\n" : ",\n").append(in2).append(INDENT);
+                appendPeak(sb, rows.get(i), peaks.get(i));
+            }
+            if (!peaks.isEmpty()) {
+                sb.append('\n').append(in2);
+            }
+        }
+        sb.append("]\n").append(in).append('}');
+    }
+
+    private static void appendPeak(StringBuilder sb, List<PeakRows.Cell> row, PeakResult pr) {
+        sb.append('{');
+        boolean first = true;
+        for (int c = 0; c < PeakRows.COLUMNS.size(); c++) {
+            String column = PeakRows.COLUMNS.get(c);
+            if (column.equals("run")) {
+                continue;
+            }
+            String value;
+            if (column.equals("candidates")) {
+                value = candidates(pr);
+            } else {
+                PeakRows.Cell cell = row.get(c);
+                if (cell.empty()) {
+                    value = "null";
+                } else {
+                    value = cell.numeric() ? cell.text() : Json.quote(cell.text());
+                }
+            }
+            sb.append(first ? "" : ", ").append(Json.quote(column)).append(": ").append(value);
+            first = false;
+        }
+        sb.append('}');
+    }
+
+    private static String candidates(PeakResult pr) {
+        if (pr.role() != PeakRole.ANALYTE || !Double.isFinite(pr.mobility())) {
+            return "[]";
+        }
+        StringBuilder sb = new StringBuilder("[");
+        List<Candidate> list = pr.match().candidates();
+        for (int i = 0; i < list.size(); i++) {
+            Candidate c = list.get(i);
+            sb.append(i == 0 ? "" : ", ")
+                    .append("{\"name\": ").append(Json.quote(c.name()))
+                    .append(", \"probability\": ")
+                    .append(Json.number(Numbers.fixed(c.probability(), PeakRows.PROBABILITY_DECIMALS)))
+                    .append(", \"library_mobility\": ")
+                    .append(Json.number(Numbers.fixed(c.libraryMobility(), PeakRows.MOBILITY_DECIMALS)))
+                    .append(", \"residual\": ")
+                    .append(Json.number(Numbers.fixed(c.residual(), PeakRows.MOBILITY_DECIMALS)))
+                    .append(", \"z\": ")
+                    .append(Json.number(Numbers.fixed(c.z(), Z_DECIMALS)))
+                    .append('}');
+        }
+        return sb.append(']').toString();
+    }
+
+    /** One {@code "name": literal,} line of a run object (the last field, peaks, is written apart). */
+    private static void field(StringBuilder sb, String indent, String name, String literal) {
+        sb.append(indent).append(Json.quote(name)).append(": ").append(literal).append(",\n");
+    }
+}

@@ -1,0 +1,179 @@
+package org.mobident.report;
+
+import java.io.PrintWriter;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import org.mobident.matching.MatchStatus;
+import org.mobident.matching.PeakMatch;
+import org.mobident.pipeline.PeakResult;
+import org.mobident.pipeline.PeakRole;
+import org.mobident.pipeline.RunResult;
+
+/**
+ * A readable terminal summary of processed runs, in plain ASCII.
+ *
+ * <p>For each run: a heading (run name, how the mobility scale was set, EOF mobility), an
+ * aligned table of its analyte peaks (apex time, mobility ± standard uncertainty, assigned
+ * analyte or "-", confidence in %, status), then the run's notes. A failed run gets one line
+ * with the reason. The summary ends with counts of runs and peaks and a caution that mobility
+ * identification is presumptive.
+ */
+public final class RunSummaryText {
+
+    /** The closing caution printed under every summary. */
+    public static final String CAUTION =
+            "Caution: identification by mobility alone is presumptive. Where a result carries legal, "
+            + "clinical or safety weight, confirm it by an orthogonal method and follow your "
+            + "laboratory's validated procedures.";
+
+    /** What the table shows for a missing value. */
+    static final String NONE = "-";
+
+    private static final String[] HEADERS = {"peak", "time/s", "mobility +/- sd", "assigned", "confidence", "status"};
+    private static final boolean[] RIGHT_ALIGNED = {true, true, true, false, true, false};
+    private static final String COLUMN_GAP = "  ";
+    private static final String TABLE_INDENT = "  ";
+    private static final int TIME_DECIMALS = 2;
+    private static final int MOBILITY_DECIMALS = 2;
+    private static final int PERCENT_DECIMALS = 0;
+    private static final double PERCENT = 100.0;
+
+    private RunSummaryText() {
+    }
+
+    /** Writes the summary of {@code runs} to {@code out} (flushed, not closed). */
+    public static void write(List<RunResult> runs, PrintWriter out) {
+        out.println("Mobilities in 1e-9 m^2/(V s), effective, at the run temperature.");
+        int ok = 0;
+        int failed = 0;
+        int identified = 0;
+        int ambiguous = 0;
+        int unassigned = 0;
+        for (RunResult run : runs) {
+            out.println();
+            if (run.failed()) {
+                failed++;
+                out.println("Run " + run.spec().name() + ": FAILED - " + oneLine(run.error().getMessage()));
+                continue;
+            }
+            ok++;
+            out.println(heading(run));
+            List<String[]> rows = new ArrayList<>();
+            int number = 0;
+            for (PeakResult pr : run.peaks()) {
+                number++;
+                if (pr.role() != PeakRole.ANALYTE) {
+                    continue;
+                }
+                MatchStatus status = pr.match().status();
+                if (status == MatchStatus.IDENTIFIED) {
+                    identified++;
+                } else if (status == MatchStatus.AMBIGUOUS) {
+                    ambiguous++;
+                } else {
+                    unassigned++;
+                }
+                rows.add(row(number, pr));
+            }
+            if (rows.isEmpty()) {
+                out.println(TABLE_INDENT + "no analyte peaks detected");
+            } else {
+                printTable(rows, out);
+            }
+            for (String note : run.notes()) {
+                out.println(TABLE_INDENT + "note: " + oneLine(note));
+            }
+        }
+        out.println();
+        out.println(String.format(Locale.ROOT,
+                "%d run%s: %d ok, %d failed. Analyte peaks: %d identified, %d ambiguous, %d unassigned.",
+                runs.size(), runs.size() == 1 ? "" : "s", ok, failed, identified, ambiguous, unassigned));
+        out.println(CAUTION);
+        out.flush();
+    }
+
+    private static String heading(RunResult run) {
+        StringBuilder sb = new StringBuilder("Run ").append(run.spec().name()).append(": ")
+                .append(oneLine(run.scaleNote()));
+        String eof = Numbers.fixed(run.eofMobility(), MOBILITY_DECIMALS);
+        sb.append("; EOF mobility ").append(eof == null ? "unknown" : eof);
+        return sb.toString();
+    }
+
+    private static String[] row(int number, PeakResult pr) {
+        PeakMatch m = pr.match();
+        boolean known = Double.isFinite(pr.mobility());
+        String mobility;
+        if (!known) {
+            mobility = "n/a";
+        } else {
+            String sd = Numbers.fixed(pr.mobilitySd(), MOBILITY_DECIMALS);
+            mobility = Numbers.fixed(pr.mobility(), MOBILITY_DECIMALS) + " +/- " + (sd == null ? "?" : sd);
+        }
+        boolean assigned = known && m.assigned() != null;
+        String confidence = assigned ? percent(m.confidence()) : NONE;
+        String status = m.status() == null ? MatchStatus.UNASSIGNED.label() : m.status().label();
+        if (m.status() == MatchStatus.AMBIGUOUS && m.runnerUp() != null) {
+            status += " (or " + m.runnerUp() + " " + percent(m.runnerUpProbability()) + ")";
+        }
+        return new String[] {
+            Integer.toString(number),
+            Numbers.fixed(pr.peak().apexTimeS(), TIME_DECIMALS),
+            mobility,
+            assigned ? m.assigned() : NONE,
+            confidence,
+            status
+        };
+    }
+
+    private static String percent(double p) {
+        String s = Numbers.fixed(p * PERCENT, PERCENT_DECIMALS);
+        return s == null ? NONE : s + " %";
+    }
+
+    private static void printTable(List<String[]> rows, PrintWriter out) {
+        int[] width = new int[HEADERS.length];
+        for (int c = 0; c < HEADERS.length; c++) {
+            width[c] = HEADERS[c].length();
+        }
+        for (String[] r : rows) {
+            for (int c = 0; c < r.length; c++) {
+                width[c] = Math.max(width[c], r[c] == null ? 0 : r[c].length());
+            }
+        }
+        out.println(line(HEADERS, width));
+        for (String[] r : rows) {
+            out.println(line(r, width));
+        }
+    }
+
+    private static String line(String[] cells, int[] width) {
+        StringBuilder sb = new StringBuilder(TABLE_INDENT);
+        for (int c = 0; c < cells.length; c++) {
+            String cell = cells[c] == null ? "" : cells[c];
+            boolean last = c == cells.length - 1;
+            if (c > 0) {
+                sb.append(COLUMN_GAP);
+            }
+            int pad = width[c] - cell.length();
+            if (RIGHT_ALIGNED[c]) {
+                sb.append(" ".repeat(pad)).append(cell);
+            } else {
+                sb.append(cell);
+                if (!last) {
+                    sb.append(" ".repeat(pad));
+                }
+            }
+        }
+        return sb.toString();
+    }
+
+    /** Text on a single line: line breaks and tabs become spaces. */
+    private static String oneLine(String text) {
+        if (text == null) {
+            return "";
+        }
+        return text.replace("\r\n", " ").replace('\n', ' ').replace('\r', ' ').replace('\t', ' ');
+    }
+}

@@ -1,0 +1,71 @@
+package org.mobident.report;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.io.PrintWriter;
+import java.io.StringWriter;
+import java.util.Arrays;
+import java.util.List;
+import org.junit.jupiter.api.Test;
+import org.mobident.pipeline.RunResult;
+
+class RunSummaryTextTest {
+
+    private static String summary(List<RunResult> runs) {
+        StringWriter sw = new StringWriter();
+        RunSummaryText.write(runs, new PrintWriter(sw));
+        return sw.toString();
+    }
+
+    @Test
+    void namesRunsAssignmentsAndCaution() {
+        String text = summary(List.of(ReportFixtures.okRun(), ReportFixtures.failedRun(), ReportFixtures.noMarkerRun()));
+        assertTrue(text.contains("Run spring-01: neutral marker at 576.0 s; EOF mobility -50.00"), text);
+        assertTrue(text.contains("chloride"), text);
+        assertTrue(text.contains("nitrate"), text);
+        assertTrue(text.contains("97 %"), text);
+        assertTrue(text.contains("ambiguous (or nitrite 38 %)"), text);
+        assertTrue(text.contains("-71.52 +/- 0.21"), text);
+        assertTrue(text.contains("note: run at 30.0 C"), text);
+        assertTrue(text.contains("Run well-09: FAILED - samples/well-09.csv, line 3"), text);
+        assertTrue(text.contains("Run spring-02: no neutral marker found; EOF mobility unknown"), text);
+        assertTrue(text.contains("3 runs: 2 ok, 1 failed. Analyte peaks: 1 identified, 1 ambiguous, 2 unassigned."), text);
+        assertTrue(text.contains("presumptive"), text);
+        assertTrue(text.contains("orthogonal method"), text);
+        assertTrue(text.contains("validated procedures"), text);
+        assertTrue(text.trim().endsWith(RunSummaryText.CAUTION), "caution closes the summary");
+    }
+
+    @Test
+    void tableIsAlignedAndMarkersAreLeftOut() {
+        String text = summary(List.of(ReportFixtures.okRun()));
+        List<String> lines = Arrays.asList(text.split("\n"));
+        int header = -1;
+        for (int i = 0; i < lines.size(); i++) {
+            if (lines.get(i).trim().startsWith("peak")) {
+                header = i;
+                break;
+            }
+        }
+        assertTrue(header >= 0, text);
+        String h = lines.get(header);
+        int statusCol = h.indexOf("status");
+        for (int i = header + 1; i <= header + 3; i++) {
+            String row = lines.get(i);
+            assertTrue(row.length() > statusCol, row);
+            assertTrue(row.charAt(statusCol - 1) == ' ' && row.charAt(statusCol) != ' ', "aligned: " + row);
+        }
+        assertTrue(lines.get(header + 4).isBlank() || lines.get(header + 4).contains("note"),
+                "marker row not in the analyte table");
+        assertEquals(-1, text.indexOf("576.00  "), "marker time is not a table row");
+    }
+
+    @Test
+    void outputIsAscii() {
+        String text = summary(List.of(ReportFixtures.okRun(), ReportFixtures.failedRun()));
+        for (char c : text.toCharArray()) {
+            assertTrue(c < 128, "non-ASCII character " + (int) c);
+        }
+    }
+}
