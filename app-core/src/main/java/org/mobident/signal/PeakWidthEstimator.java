@@ -1,0 +1,160 @@
+package org.mobident.signal;
+
+import java.util.Arrays;
+
+/**
+ * Typical full width at half height of the peaks of a trace, before any baseline is known; it
+ * sets the smoothing window, the baseline reach, the spike limit and the noise window.
+ *
+ * <p>Steps, all linear: a light 5-point quadratic Savitzky–Golay smoothing; removal of the
+ * slow background by a morphological top-hat (the signal minus its opening, i.e. a moving
+ * minimum followed by a moving maximum over 5 % of the trace duration: Serra, Image Analysis
+ * and Mathematical Morphology, 1982), computed with monotone queues; then every excursion (a
+ * run of points above 3 smoothed-noise SDs) whose maximum rises more than 10 smoothed-noise
+ * SDs is measured at half its maximum by linear
+ * interpolation between samples. When there is no such excursion, those below the background
+ * (the closing minus the signal) are measured instead: the width scale of a run does not depend
+ * on the sign of its zones, and the baseline must know the width of dips as well. Excursions
+ * below are only a fallback because, beside a large peak on a sloping background, the closing
+ * leaves a step of about slope × window that would pass for a broad dip. Excursions narrower than 3 sampling intervals are taken for
+ * spikes. The result is the median of the widths (an overlapped pair counts as one wider
+ * excursion, which the median tolerates); with no excursion it falls back to 10 sampling
+ * intervals.
+ */
+final class PeakWidthEstimator {
+
+    private static final int LIGHT_HALF_WIDTH = 2;
+    private static final int LIGHT_ORDER = 2;
+
+    private PeakWidthEstimator() {
+    }
+
+    /**
+     * @param timeS     strictly increasing times, s (not modified)
+     * @param y         signal with peaks pointing up (not modified)
+     * @param noiseSd   noise SD of y
+     * @param samplingS typical sampling interval, s
+     * @return typical width at half height, s
+     */
+    static double typicalWidthS(double[] timeS, double[] y, double noiseSd, double samplingS) {
+        int n = y.length;
+        double[] light = SavitzkyGolay.smooth(y, LIGHT_HALF_WIDTH, LIGHT_ORDER);
+        double gain = Math.sqrt(sumOfSquares(SavitzkyGolay.weights(LIGHT_HALF_WIDTH, LIGHT_ORDER)));
+        double span = timeS[n - 1] - timeS[0];
+        int radius = Math.max(1, (int) Math.round(
+                0.5 * SignalLimits.TOPHAT_FRACTION_OF_SPAN * span / samplingS));
+        // extended by odd reflection, so that a sloping background has no step at the ends
+        int pad = Math.min(2 * radius, n - 1);
+        double[] extended = SnipBaseline.reflect(light, pad);
+        double[] opening = movingExtreme(movingExtreme(extended, radius, false), radius, true);
+        double[] closing = movingExtreme(movingExtreme(extended, radius, true), radius, false);
+        double[] rise = new double[n];
+        double[] fall = new double[n];
+        for (int i = 0; i < n; i++) {
+            rise[i] = light[i] - opening[i + pad];
+            fall[i] = closing[i + pad] - light[i];
+        }
+        double threshold = SignalLimits.WIDTH_ESTIMATE_MIN_SIGMAS * noiseSd * gain;
+        double minWidth = SignalLimits.WIDTH_ESTIMATE_MIN_SAMPLES * samplingS;
+        double[] widths = new double[16];
+        int[] found = {0};
+        widths = collectWidths(timeS, rise, threshold, minWidth, widths, found);
+        if (found[0] == 0) {
+            widths = collectWidths(timeS, fall, threshold, minWidth, widths, found);
+        }
+        if (found[0] == 0) {
+            return SignalLimits.FALLBACK_WIDTH_SAMPLES * samplingS;
+        }
+        return Selection.medianInPlace(widths, found[0]);
+    }
+
+    /** Appends the half-height widths of the excursions of {@code v} above the threshold. */
+    private static double[] collectWidths(double[] timeS, double[] v, double threshold, double minWidth,
+                                          double[] widths, int[] found) {
+        int n = v.length;
+        double regionLevel = threshold * SignalLimits.WIDTH_ESTIMATE_REGION_SIGMAS
+                / SignalLimits.WIDTH_ESTIMATE_MIN_SIGMAS;
+        int i = 0;
+        while (i < n) {
+            if (!(v[i] > regionLevel)) {
+                i++;
+                continue;
+            }
+            // the excursion: contiguous points above the lower region level, and its maximum;
+            // it counts only when the maximum passes the threshold
+            int end = i;
+            int apex = i;
+            while (end + 1 < n && v[end + 1] > regionLevel) {
+                end++;
+                if (v[end] > v[apex]) {
+                    apex = end;
+                }
+            }
+            if (!(v[apex] > threshold)) {
+                i = end + 1;
+                continue;
+            }
+            double half = 0.5 * v[apex];
+            int left = apex;
+            while (left > 0 && v[left - 1] > half) {
+                left--;
+            }
+            int right = apex;
+            while (right < n - 1 && v[right + 1] > half) {
+                right++;
+            }
+            double tLeft = left > 0 ? crossing(timeS, v, left - 1, left, half) : timeS[0];
+            double tRight = right < n - 1 ? crossing(timeS, v, right, right + 1, half) : timeS[n - 1];
+            double width = tRight - tLeft;
+            if (width >= minWidth) {
+                if (found[0] == widths.length) {
+                    widths = Arrays.copyOf(widths, 2 * found[0]);
+                }
+                widths[found[0]++] = width;
+            }
+            i = Math.max(end, right) + 1;
+        }
+        return widths;
+    }
+
+    private static double crossing(double[] t, double[] v, int a, int b, double level) {
+        double f = (level - v[a]) / (v[b] - v[a]);
+        return t[a] + f * (t[b] - t[a]);
+    }
+
+    static double sumOfSquares(double[] w) {
+        double s = 0;
+        for (double v : w) {
+            s += v * v;
+        }
+        return s;
+    }
+
+    /**
+     * Moving minimum or maximum over [i − r, i + r] (clipped to the ends) with a monotone
+     * double-ended queue: each index enters and leaves once, O(n).
+     */
+    static double[] movingExtreme(double[] x, int radius, boolean max) {
+        int n = x.length;
+        double[] out = new double[n];
+        int[] queue = new int[n]; // each index enters once, so no wrap-around is needed
+        int head = 0;
+        int tail = 0;
+        int next = 0;
+        for (int i = 0; i < n; i++) {
+            int hi = Math.min(n - 1, i + radius);
+            while (next <= hi) {
+                while (tail > head && (max ? x[queue[tail - 1]] <= x[next] : x[queue[tail - 1]] >= x[next])) {
+                    tail--;
+                }
+                queue[tail++] = next;
+                next++;
+            }
+            while (queue[head] < i - radius) {
+                head++;
+            }
+            out[i] = x[queue[head]];
+        }
+        return out;
+    }
+}

@@ -1,0 +1,100 @@
+package org.mobident.signal;
+
+/**
+ * Named constants of the signal package: fractions, multiples and floors used by the
+ * detection steps. They are kept here, in one place, so that every comparison in the package
+ * refers to a named value. Each constant says where its value comes from.
+ */
+final class SignalLimits {
+
+    /** 1 / Φ⁻¹(3/4): turns a median absolute deviation into a normal standard deviation
+     *  (Rousseeuw &amp; Croux, J. Am. Stat. Assoc. 88 (1993) 1273). */
+    static final double MAD_TO_SD = 1.482602218505602;
+
+    /** The noise SD is never taken below this fraction of the signal range, so that a perfect
+     *  synthetic trace still gets finite thresholds and a finite S/N (common practice). */
+    static final double NOISE_FLOOR_RELATIVE = 1e-9;
+
+    /** Automatic smoothing window, as a fraction of the typical full width at half height.
+     *  A Savitzky–Golay window below the peak width keeps its height and width
+     *  (Enke &amp; Nieman, Anal. Chem. 48 (1976) 705A, from memory; common practice). */
+    static final double SMOOTHING_FRACTION_OF_WIDTH = 0.5;
+
+    /** Reach (half-window) of the SNIP clipping, in typical widths at half height. An isolated
+     *  Gaussian is fully clipped when the reach exceeds about 3.5 w½; 4 leaves margin. */
+    static final double BASELINE_REACH_IN_WIDTHS = 4.0;
+
+    /** Half-width of the closing that fills dips before the clipping, in typical widths at
+     *  half height: a Gaussian dip is about 1.7 w½ wide at its base (4σ). */
+    static final double BASELINE_CLOSING_IN_WIDTHS = 1.0;
+
+    /** Time bins per typical width at half height in the decimated grid of the baseline. */
+    static final double BASELINE_BINS_PER_WIDTH = 8.0;
+
+    /** Half-range, in bin noise SDs, of the trimmed median that re-centres the baseline on the
+     *  noise (common practice). */
+    static final double BASELINE_OFFSET_TRIM_SIGMAS = 2.5;
+
+    /** Iterations of that trimmed median. */
+    static final int BASELINE_OFFSET_ITERATIONS = 4;
+
+    /** Structuring element of the top-hat used to estimate the typical width, as a fraction of
+     *  the trace duration (common practice: much wider than any single zone). */
+    static final double TOPHAT_FRACTION_OF_SPAN = 0.05;
+
+    /** A feature must rise this many noise SDs above the top-hat floor to enter the width
+     *  estimate (common practice). */
+    static final double WIDTH_ESTIMATE_MIN_SIGMAS = 10.0;
+
+    /** An excursion, for the width estimate, is a run of points above this many noise SDs
+     *  (common practice); it counts when its maximum passes the threshold above. */
+    static final double WIDTH_ESTIMATE_REGION_SIGMAS = 3.0;
+
+    /** Widths below this many sampling intervals are spikes for the width estimate. */
+    static final double WIDTH_ESTIMATE_MIN_SAMPLES = 3.0;
+
+    /** Fallback typical width, in sampling intervals, when the trace shows no clear peak. */
+    static final double FALLBACK_WIDTH_SAMPLES = 10.0;
+
+    /** Default minimum width at half height (spike rejection), fraction of the typical width. */
+    static final double MIN_WIDTH_FRACTION_OF_TYPICAL = 0.25;
+
+    /** Default minimum width at half height, in sampling intervals: a one-point spike has a
+     *  width of one interval. */
+    static final double MIN_WIDTH_SAMPLES = 2.0;
+
+    /** The signal has returned to the baseline when the smoothed corrected signal is within
+     *  this many smoothed-noise SDs of zero (common practice). */
+    static final double RETURN_TO_BASELINE_SIGMAS = 1.0;
+
+    /** Hysteresis of the valley split: two maxima are separate peaks when the signal falls and
+     *  rises again by at least this fraction of the minimum reportable height ... */
+    static final double SPLIT_FRACTION_OF_MIN_HEIGHT = 0.5;
+
+    /** ... and by at least this many smoothed-noise SDs (common practice). */
+    static final double SPLIT_MIN_SIGMAS = 4.0;
+
+    /** Window of the peak-to-peak noise, in widths at half height (Ph. Eur. 2.2.46, 20 w½;
+     *  from memory). */
+    static final double PEAK_TO_PEAK_WINDOW_WIDTHS = 20.0;
+
+    /** Points of the apex fit: the top of the peak down to this fraction of the apex. */
+    static final double APEX_FIT_LEVEL = 0.5;
+
+    /** Band of each flank, as fractions of the height, whose samples give the straight line
+     *  that is solved for half height (common practice: the middle of a flank is nearly straight). */
+    static final double FLANK_LOWER = 0.25;
+    static final double FLANK_UPPER = 0.75;
+
+    /** Smallest trace that is analysed at all, points. */
+    static final int MIN_POINTS = 7;
+
+    /** Above this half-width the quadratic/cubic smoothing uses running moments, O(n). */
+    static final int SMOOTHING_MOMENTS_MIN_HALF_WIDTH = 8;
+
+    /** Running moments are recomputed from scratch this often, to bound rounding drift. */
+    static final int SMOOTHING_MOMENTS_REFRESH = 2048;
+
+    private SignalLimits() {
+    }
+}

@@ -1,0 +1,58 @@
+package org.mobident.signal;
+
+import java.util.Random;
+import org.mobident.trace.Trace;
+
+/** Synthetic electropherograms for the tests: Gaussian zones, drift, white noise, fixed seeds. */
+final class Synthetic {
+
+    private Synthetic() {
+    }
+
+    /** Equally spaced times from {@code startS}, {@code count} points, step {@code stepS}. */
+    static double[] regularTimes(double startS, double stepS, int count) {
+        double[] t = new double[count];
+        for (int i = 0; i < count; i++) {
+            t[i] = startS + i * stepS;
+        }
+        return t;
+    }
+
+    /** Times with steps drawn uniformly in [(1 − jitter) step, (1 + jitter) step]. */
+    static double[] jitteredTimes(double startS, double stepS, int count, double jitter, long seed) {
+        Random random = new Random(seed);
+        double[] t = new double[count];
+        t[0] = startS;
+        for (int i = 1; i < count; i++) {
+            t[i] = t[i - 1] + stepS * (1 + jitter * (2 * random.nextDouble() - 1));
+        }
+        return t;
+    }
+
+    /** Adds a Gaussian H·exp(−(t − t0)²/(2σ²)) to {@code y}. */
+    static void addGaussian(double[] t, double[] y, double apexS, double height, double sigmaS) {
+        for (int i = 0; i < t.length; i++) {
+            double z = (t[i] - apexS) / sigmaS;
+            y[i] += height * Math.exp(-0.5 * z * z);
+        }
+    }
+
+    /** Adds white Gaussian noise of SD {@code sd}. */
+    static void addNoise(double[] y, double sd, long seed) {
+        Random random = new Random(seed);
+        for (int i = 0; i < y.length; i++) {
+            y[i] += sd * random.nextGaussian();
+        }
+    }
+
+    /** Adds {@code a + b t + c t²}. */
+    static void addDrift(double[] t, double[] y, double a, double b, double c) {
+        for (int i = 0; i < t.length; i++) {
+            y[i] += a + b * t[i] + c * t[i] * t[i];
+        }
+    }
+
+    static Trace trace(double[] t, double[] y) {
+        return new Trace("synthetic", "synthetic.csv", t, y);
+    }
+}
