@@ -1,0 +1,505 @@
+package org.mobident.library;
+
+import java.io.IOException;
+import java.io.PushbackReader;
+import java.io.Reader;
+import java.io.StringReader;
+import java.io.StringWriter;
+import java.io.UncheckedIOException;
+import java.io.Writer;
+import java.math.BigDecimal;
+import java.nio.ByteBuffer;
+import java.nio.charset.CharacterCodingException;
+import java.nio.charset.CodingErrorAction;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.EnumMap;
+import java.util.EnumSet;
+import java.util.HashMap;
+import java.util.Iterator;
+import java.util.List;
+import java.util.Map;
+import java.util.Set;
+import java.util.regex.Pattern;
+import org.apache.commons.csv.CSVFormat;
+import org.apache.commons.csv.CSVParser;
+import org.apache.commons.csv.CSVPrinter;
+import org.apache.commons.csv.CSVRecord;
+import org.mobident.InputException;
+
+/**
+ * Reads and writes mobility libraries as human-editable CSV.
+ *
+ * <h2>Format</h2>
+ * <ul>
+ *   <li>UTF-8 (a leading byte-order mark is tolerated), comma-delimited, double quotes around
+ *       fields that contain commas, quotes or line breaks (RFC 4180, as Apache Commons CSV reads it).</li>
+ *   <li>Lines whose first character is {@code #} are comments; their text (without the {@code #}
+ *       and surrounding spaces) becomes {@link Library#notes()}, in file order, and is written back
+ *       at the top of the file. Blank lines, and lines of nothing but commas, are ignored.</li>
+ *   <li>The first other line is the header. Column names are matched without regard to case or
+ *       surrounding spaces and may come in any order; only {@code name} and {@code mobility} are
+ *       required. Known columns: {@code name, mobility, mobility_sd, n, charge, tolerance, pka,
+ *       limiting_mobility, buffer, ph, ionic_strength_mm, temperature_c, source}. Any other
+ *       column is an error.</li>
+ *   <li>Mobilities (and {@code mobility_sd}, {@code tolerance}, {@code limiting_mobility}) are in
+ *       1e-9 m²/(V·s), signed: cations positive, anions negative. {@code pka} and
+ *       {@code limiting_mobility} hold several numbers separated by spaces, e.g.
+ *       {@code 2.15 7.20 12.35}.</li>
+ *   <li>Numbers use a decimal point and an optional exponent ({@code 1e-3}); the typographic minus
+ *       sign (U+2212) is accepted. NaN and infinities are rejected. An empty optional field means
+ *       "unknown" (NaN for measures, 0 for {@code n} and {@code charge}, null for text).</li>
+ *   <li>Text fields are trimmed; an empty text field reads as null.</li>
+ * </ul>
+ *
+ * <p>Every problem raises an {@link InputException} naming the file, the 1-based line and the
+ * column. {@code read(write(library))} reproduces the library exactly (entries and notes) as long
+ * as its text values carry no surrounding spaces and no empty strings, and its notes are single,
+ * trimmed lines; numbers are written in their shortest round-tripping decimal form.
+ */
+public final class LibraryCsv {
+
+    private static final char COMMENT = '#';
+    private static final char BYTE_ORDER_MARK = '\uFEFF';
+    private static final char UNICODE_MINUS = '\u2212';
+    /** A plain decimal number with optional sign, fraction and exponent (no NaN, hex or suffix). */
+    private static final Pattern DECIMAL = Pattern.compile("[+-]?(\\d+\\.?\\d*|\\.\\d+)([eE][+-]?\\d+)?");
+    private static final String RECORD_SEPARATOR = "\n";
+    private static final Pattern LIST_SEPARATOR = Pattern.compile("\\s+");
+    /** Magnitudes in [1e-4, 1e9) are written as plain decimals, others in exponent form. */
+    private static final double PLAIN_MIN = 1e-4;
+    private static final double PLAIN_MAX = 1e9;
+
+    private static final CSVFormat READ_FORMAT = CSVFormat.DEFAULT.builder()
+            .setCommentMarker(COMMENT)
+            .setIgnoreEmptyLines(true)
+            .get();
+    private static final CSVFormat WRITE_FORMAT = CSVFormat.DEFAULT.builder()
+            .setCommentMarker(COMMENT)
+            .setRecordSeparator(RECORD_SEPARATOR)
+            .get();
+
+    private LibraryCsv() {
+    }
+
+    /**
+     * Reads a library file.
+     *
+     * @param file the CSV file; its name is used in messages and as {@link Library#sourceFile()}
+     * @return the library, entries in file order
+     * @throws InputException when the file cannot be read or any line is invalid
+     */
+    public static Library read(Path file) throws InputException {
+        String label = file.toString();
+        byte[] bytes;
+        try {
+            bytes = Files.readAllBytes(file);
+        } catch (IOException e) {
+            throw new InputException(label, 0, null, "cannot read the library file: " + e.getMessage(), e);
+        }
+        String text;
+        try {
+            text = StandardCharsets.UTF_8.newDecoder()
+                    .onMalformedInput(CodingErrorAction.REPORT)
+                    .onUnmappableCharacter(CodingErrorAction.REPORT)
+                    .decode(ByteBuffer.wrap(bytes))
+                    .toString();
+        } catch (CharacterCodingException e) {
+            throw new InputException(label, 0, null, "the library file is not valid UTF-8 text", e);
+        }
+        return read(new StringReader(text), label);
+    }
+
+    /**
+     * Reads a library from text.
+     *
+     * @param in          the CSV text (not closed)
+     * @param sourceLabel the name used in messages and as {@link Library#sourceFile()}
+     * @return the library, entries in file order
+     * @throws InputException when the text cannot be read or any line is invalid
+     */
+    public static Library read(Reader in, String sourceLabel) throws InputException {
+        try {
+            return new Parse(sourceLabel).run(skipByteOrderMark(in));
+        } catch (IOException | UncheckedIOException e) {
+            throw new InputException(sourceLabel, 0, null, "cannot read the library: " + e.getMessage(), e);
+        }
+    }
+
+    /**
+     * Writes a library as CSV: its notes as comment lines, a header, then one analyte per line.
+     * Columns that no entry uses are left out (only {@code name, mobility, mobility_sd} are always
+     * written). The writer is flushed but not closed.
+     *
+     * @param library the library
+     * @param out     where to write
+     * @throws IOException              when writing fails
+     * @throws IllegalArgumentException when a value is infinite (it could not be read back)
+     */
+    public static void write(Library library, Writer out) throws IOException {
+        List<LibraryColumn> columns = usedColumns(library.entries());
+        for (String note : library.notes()) {
+            for (String line : note.split("\r\n|\r|\n", -1)) {
+                out.write(line.isBlank() ? "#" : "# " + line.trim());
+                out.write(RECORD_SEPARATOR);
+            }
+        }
+        CSVPrinter printer = new CSVPrinter(out, WRITE_FORMAT);
+        List<String> header = new ArrayList<>();
+        for (LibraryColumn c : columns) {
+            header.add(c.header());
+        }
+        printer.printRecord(header);
+        for (LibraryEntry e : library.entries()) {
+            List<String> row = new ArrayList<>(columns.size());
+            for (LibraryColumn c : columns) {
+                row.add(cell(e, c));
+            }
+            printer.printRecord(row);
+        }
+        printer.flush();
+    }
+
+    /**
+     * Writes a library to a file (UTF-8, no byte-order mark), replacing it.
+     *
+     * @param library the library
+     * @param file    the target file
+     * @throws IOException when writing fails
+     */
+    public static void write(Library library, Path file) throws IOException {
+        try (Writer w = Files.newBufferedWriter(file, StandardCharsets.UTF_8)) {
+            write(library, w);
+        }
+    }
+
+    /** The library as CSV text, exactly as {@link #write(Library, Writer)} writes it. */
+    public static String toCsv(Library library) {
+        StringWriter w = new StringWriter();
+        try {
+            write(library, w);
+        } catch (IOException e) {
+            throw new UncheckedIOException("a StringWriter does not fail", e);
+        }
+        return w.toString();
+    }
+
+    /**
+     * A number in the shortest decimal form that reads back to the same double: plain notation
+     * for ordinary magnitudes ({@code -55.43}, {@code 0.001}, {@code 25}), exponent notation
+     * otherwise ({@code 1.5e-7}); empty for NaN.
+     */
+    static String formatNumber(double v) {
+        if (Double.isNaN(v)) {
+            return "";
+        }
+        if (Double.isInfinite(v)) {
+            throw new IllegalArgumentException("an infinite value cannot be written to a library file");
+        }
+        if (v == 0.0) {
+            return Double.doubleToRawLongBits(v) == 0L ? "0" : "-0";
+        }
+        // Double.toString gives a decimal string that parses back to exactly v (JLS / Double javadoc).
+        String repr = Double.toString(v);
+        double mag = Math.abs(v);
+        if (mag >= PLAIN_MIN && mag < PLAIN_MAX) {
+            return new BigDecimal(repr).stripTrailingZeros().toPlainString();
+        }
+        int e = repr.indexOf('E');
+        if (e < 0) {
+            return new BigDecimal(repr).stripTrailingZeros().toPlainString();
+        }
+        String mantissa = new BigDecimal(repr.substring(0, e)).stripTrailingZeros().toPlainString();
+        return mantissa + "e" + repr.substring(e + 1);
+    }
+
+    private static String formatList(List<Double> values) {
+        StringBuilder sb = new StringBuilder();
+        for (Double v : values) {
+            if (sb.length() > 0) {
+                sb.append(' ');
+            }
+            if (v == null || Double.isNaN(v)) {
+                throw new IllegalArgumentException("a missing value inside a list cannot be written");
+            }
+            sb.append(formatNumber(v));
+        }
+        return sb.toString();
+    }
+
+    private static List<LibraryColumn> usedColumns(List<LibraryEntry> entries) {
+        Set<LibraryColumn> used = EnumSet.of(LibraryColumn.NAME, LibraryColumn.MOBILITY, LibraryColumn.MOBILITY_SD);
+        for (LibraryEntry e : entries) {
+            for (LibraryColumn c : LibraryColumn.values()) {
+                if (!cell(e, c).isEmpty()) {
+                    used.add(c);
+                }
+            }
+        }
+        return new ArrayList<>(used);
+    }
+
+    private static String cell(LibraryEntry e, LibraryColumn c) {
+        return switch (c) {
+            case NAME -> text(e.name());
+            case MOBILITY -> formatNumber(e.mobility());
+            case MOBILITY_SD -> formatNumber(e.mobilitySd());
+            case N -> e.n() == 0 ? "" : Integer.toString(e.n());
+            case CHARGE -> e.charge() == 0 ? "" : Integer.toString(e.charge());
+            case TOLERANCE -> formatNumber(e.tolerance());
+            case PKA -> formatList(e.pKa());
+            case LIMITING_MOBILITY -> formatList(e.limitingMobilities());
+            case BUFFER -> text(e.buffer());
+            case PH -> formatNumber(e.pH());
+            case IONIC_STRENGTH_MM -> formatNumber(e.ionicStrengthMm());
+            case TEMPERATURE_C -> formatNumber(e.temperatureC());
+            case SOURCE -> text(e.source());
+        };
+    }
+
+    private static String text(String s) {
+        return s == null ? "" : s;
+    }
+
+    private static Reader skipByteOrderMark(Reader in) throws IOException {
+        PushbackReader r = new PushbackReader(in, 1);
+        int first = r.read();
+        if (first >= 0 && first != BYTE_ORDER_MARK) {
+            r.unread(first);
+        }
+        return r;
+    }
+
+    /** One reading of one library: keeps the location for messages. */
+    private static final class Parse {
+        private final String file;
+        private final List<String> notes = new ArrayList<>();
+        private final List<LibraryEntry> entries = new ArrayList<>();
+        private final Map<String, Long> lineOfName = new HashMap<>();
+        /** Column index in the file → library column (null: an unnamed column that must stay empty). */
+        private final Map<Integer, LibraryColumn> columnAt = new HashMap<>();
+        private int headerWidth;
+        private long line;
+
+        Parse(String file) {
+            this.file = file;
+        }
+
+        Library run(Reader in) throws IOException, InputException {
+            boolean sawHeader = false;
+            try (CSVParser parser = CSVParser.parse(in, READ_FORMAT)) {
+                Iterator<CSVRecord> it = parser.iterator();
+                while (true) {
+                    CSVRecord rec;
+                    try {
+                        if (!it.hasNext()) {
+                            break;
+                        }
+                        rec = it.next();
+                    } catch (UncheckedIOException | IllegalStateException e) {
+                        throw new InputException(file, parser.getCurrentLineNumber() + 1, null,
+                                "malformed CSV (check the quotes): " + rootMessage(e), e);
+                    }
+                    line = startLine(rec, parser.getCurrentLineNumber());
+                    if (rec.hasComment()) {
+                        addNotes(rec.getComment());
+                    }
+                    if (isBlank(rec)) {
+                        continue;
+                    }
+                    if (!sawHeader) {
+                        header(rec);
+                        sawHeader = true;
+                    } else {
+                        entries.add(entry(rec));
+                    }
+                }
+                if (parser.hasTrailerComment()) {
+                    addNotes(parser.getTrailerComment());
+                }
+            }
+            if (!sawHeader) {
+                throw new InputException(file, 0, null, "the library file is empty (no header, no analytes)");
+            }
+            if (entries.isEmpty()) {
+                throw new InputException(file, 0, null, "the library has a header but no analytes");
+            }
+            return new Library(entries, file, notes);
+        }
+
+        private static String rootMessage(Throwable e) {
+            Throwable t = e;
+            while (t.getCause() != null) {
+                t = t.getCause();
+            }
+            return t.getMessage();
+        }
+
+        /** The first physical line of a record: its last line minus the line breaks inside its fields. */
+        private static long startLine(CSVRecord rec, long endLine) {
+            long breaks = 0;
+            for (String v : rec.values()) {
+                for (int i = 0; i < v.length(); i++) {
+                    char c = v.charAt(i);
+                    if (c == '\n' || (c == '\r' && (i + 1 == v.length() || v.charAt(i + 1) != '\n'))) {
+                        breaks++;
+                    }
+                }
+            }
+            return Math.max(1, endLine - breaks);
+        }
+
+        private void addNotes(String comment) {
+            for (String s : comment.split("\n", -1)) {
+                notes.add(s.trim());
+            }
+        }
+
+        private static boolean isBlank(CSVRecord rec) {
+            for (String v : rec.values()) {
+                if (!v.isBlank()) {
+                    return false;
+                }
+            }
+            return true;
+        }
+
+        private void header(CSVRecord rec) throws InputException {
+            headerWidth = rec.size();
+            Map<LibraryColumn, Integer> seen = new EnumMap<>(LibraryColumn.class);
+            for (int i = 0; i < rec.size(); i++) {
+                String cell = rec.get(i).trim();
+                if (cell.isEmpty()) {
+                    columnAt.put(i, null);
+                    continue;
+                }
+                String hint = cell.indexOf(';') >= 0 || cell.indexOf('\t') >= 0
+                        ? " (library files are comma-delimited)" : "";
+                LibraryColumn c = LibraryColumn.fromHeader(cell).orElseThrow(() -> new InputException(file, line, cell,
+                        "unknown column '" + cell + "'; known columns are: " + LibraryColumn.knownHeaders() + hint));
+                if (seen.containsKey(c)) {
+                    throw new InputException(file, line, c.header(), "column '" + c.header() + "' appears twice (columns "
+                            + (seen.get(c) + 1) + " and " + (i + 1) + ")");
+                }
+                seen.put(c, i);
+                columnAt.put(i, c);
+            }
+            for (LibraryColumn required : List.of(LibraryColumn.NAME, LibraryColumn.MOBILITY)) {
+                if (!seen.containsKey(required)) {
+                    throw new InputException(file, line, required.header(),
+                            "required column '" + required.header() + "' is missing from the header");
+                }
+            }
+        }
+
+        private LibraryEntry entry(CSVRecord rec) throws InputException {
+            Map<LibraryColumn, String> v = new EnumMap<>(LibraryColumn.class);
+            for (int i = 0; i < rec.size(); i++) {
+                String cell = rec.get(i).trim();
+                if (i >= headerWidth || columnAt.get(i) == null) {
+                    if (!cell.isEmpty()) {
+                        throw new InputException(file, line, "column " + (i + 1),
+                                "value '" + cell + "' in a column that has no name in the header");
+                    }
+                    continue;
+                }
+                v.put(columnAt.get(i), cell);
+            }
+            String name = v.getOrDefault(LibraryColumn.NAME, "");
+            if (name.isEmpty()) {
+                throw new InputException(file, line, LibraryColumn.NAME.header(), "the analyte name is empty");
+            }
+            Long earlier = lineOfName.putIfAbsent(name, line);
+            if (earlier != null) {
+                throw new InputException(file, line, LibraryColumn.NAME.header(),
+                        "duplicate analyte name '" + name + "' (lines " + earlier + " and " + line + ")");
+            }
+            String mob = v.getOrDefault(LibraryColumn.MOBILITY, "");
+            if (mob.isEmpty()) {
+                throw new InputException(file, line, LibraryColumn.MOBILITY.header(),
+                        "the mobility of '" + name + "' is missing");
+            }
+            double mobility = number(LibraryColumn.MOBILITY, mob);
+            double sd = optionalNumber(v, LibraryColumn.MOBILITY_SD);
+            requireNotNegative(LibraryColumn.MOBILITY_SD, sd);
+            int n = optionalInteger(v, LibraryColumn.N);
+            if (n < 0) {
+                throw new InputException(file, line, LibraryColumn.N.header(), "n must not be negative, got " + n);
+            }
+            int charge = optionalInteger(v, LibraryColumn.CHARGE);
+            double tolerance = optionalNumber(v, LibraryColumn.TOLERANCE);
+            if (tolerance <= 0) {
+                throw new InputException(file, line, LibraryColumn.TOLERANCE.header(),
+                        "the tolerance must be positive (or empty to use the matching rule), got "
+                                + v.get(LibraryColumn.TOLERANCE));
+            }
+            List<Double> pKa = numberList(v, LibraryColumn.PKA);
+            List<Double> limiting = numberList(v, LibraryColumn.LIMITING_MOBILITY);
+            String buffer = optionalText(v, LibraryColumn.BUFFER);
+            double pH = optionalNumber(v, LibraryColumn.PH);
+            double ionic = optionalNumber(v, LibraryColumn.IONIC_STRENGTH_MM);
+            requireNotNegative(LibraryColumn.IONIC_STRENGTH_MM, ionic);
+            double temperature = optionalNumber(v, LibraryColumn.TEMPERATURE_C);
+            String source = optionalText(v, LibraryColumn.SOURCE);
+            return new LibraryEntry(name, mobility, sd, n, charge, tolerance, pKa, limiting, buffer, pH, ionic,
+                    temperature, source);
+        }
+
+        private void requireNotNegative(LibraryColumn c, double value) throws InputException {
+            if (value < 0) {
+                throw new InputException(file, line, c.header(), c.header() + " must not be negative, got "
+                        + formatNumber(value));
+            }
+        }
+
+        private static String optionalText(Map<LibraryColumn, String> v, LibraryColumn c) {
+            String s = v.getOrDefault(c, "");
+            return s.isEmpty() ? null : s;
+        }
+
+        private double optionalNumber(Map<LibraryColumn, String> v, LibraryColumn c) throws InputException {
+            String s = v.getOrDefault(c, "");
+            return s.isEmpty() ? Double.NaN : number(c, s);
+        }
+
+        private int optionalInteger(Map<LibraryColumn, String> v, LibraryColumn c) throws InputException {
+            String s = v.getOrDefault(c, "");
+            if (s.isEmpty()) {
+                return 0;
+            }
+            double d = number(c, s);
+            if (d != Math.rint(d) || Math.abs(d) > Integer.MAX_VALUE) {
+                throw new InputException(file, line, c.header(), "expected a whole number, got '" + s + "'");
+            }
+            return (int) d;
+        }
+
+        private List<Double> numberList(Map<LibraryColumn, String> v, LibraryColumn c) throws InputException {
+            String s = v.getOrDefault(c, "");
+            if (s.isEmpty()) {
+                return List.of();
+            }
+            List<Double> out = new ArrayList<>();
+            for (String part : LIST_SEPARATOR.split(s)) {
+                out.add(number(c, part));
+            }
+            return out;
+        }
+
+        private double number(LibraryColumn c, String raw) throws InputException {
+            String s = raw.trim().replace(UNICODE_MINUS, '-');
+            if (!DECIMAL.matcher(s).matches()) {
+                String hint = c == LibraryColumn.PKA || c == LibraryColumn.LIMITING_MOBILITY
+                        ? " (separate several values with spaces)" : "";
+                throw new InputException(file, line, c.header(), "expected a number, got '" + raw + "'" + hint);
+            }
+            double d = Double.parseDouble(s);
+            if (!Double.isFinite(d)) {
+                throw new InputException(file, line, c.header(), "the number '" + raw + "' is out of range");
+            }
+            return d;
+        }
+    }
+}

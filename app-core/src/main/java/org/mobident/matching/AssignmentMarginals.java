@@ -1,0 +1,165 @@
+package org.mobident.matching;
+
+import java.util.ArrayList;
+import java.util.BitSet;
+import java.util.HashMap;
+import java.util.List;
+import java.util.Map;
+
+/**
+ * Exact marginal probabilities of a one-to-one assignment of peaks to library entries.
+ *
+ * <p>The joint probability of an assignment a (each peak to one candidate entry or to "none",
+ * no entry to two peaks) is proportional to the product over peaks of the peak's option weight
+ * ({@code 1} for none, the likelihood ratio ρ for an entry). The marginal P(a_t = option) sums
+ * that product over every valid assignment. It is computed by a forward–backward pass over the
+ * peaks in a fixed order (a sum–product dynamic programme over partial matchings, as in
+ * Rabiner, Proc. IEEE 77 (1989) 257 for chains): the state after a peak is the set of entries
+ * already taken that a later peak could still want. Entries that only one peak can use never enter
+ * the state, and an entry leaves the state after the last peak that can use it, so with narrow
+ * candidate windows and peaks ordered by mobility the state sets stay small. When a layer would
+ * exceed {@code maxStates}, {@link #compute} returns null and the caller approximates.
+ */
+final class AssignmentMarginals {
+
+    private AssignmentMarginals() {
+    }
+
+    /**
+     * @param entryOf   for each peak (in processing order), the entry index of each candidate
+     * @param logWeight for each peak, the log likelihood ratio (vs none) of each candidate
+     * @param maxStates largest number of states allowed in one layer
+     * @return per peak, {@code [P(none), P(candidate 0), P(candidate 1), …]}, or null when too large
+     */
+    static double[][] compute(int[][] entryOf, double[][] logWeight, int maxStates) {
+        int peaks = entryOf.length;
+        // Entries wanted by two or more peaks get a bit; remember the last peak that wants each.
+        Map<Integer, Integer> firstUser = new HashMap<>();
+        Map<Integer, Integer> bitOf = new HashMap<>();
+        List<Integer> lastUserOfBit = new ArrayList<>();
+        for (int t = 0; t < peaks; t++) {
+            for (int e : entryOf[t]) {
+                Integer first = firstUser.putIfAbsent(e, t);
+                if (first != null && first != t) {
+                    Integer bit = bitOf.get(e);
+                    if (bit == null) {
+                        bitOf.put(e, lastUserOfBit.size());
+                        lastUserOfBit.add(t);
+                    } else {
+                        lastUserOfBit.set(bit, t);
+                    }
+                }
+            }
+        }
+        int[] lastUser = lastUserOfBit.stream().mapToInt(Integer::intValue).toArray();
+        // Option weights per peak, scaled so that the largest is 1 (the scale cancels).
+        double[] noneWeight = new double[peaks];
+        double[][] weight = new double[peaks][];
+        int[][] bit = new int[peaks][];
+        for (int t = 0; t < peaks; t++) {
+            double maxLog = 0.0;
+            for (double lw : logWeight[t]) {
+                maxLog = Math.max(maxLog, lw);
+            }
+            noneWeight[t] = Math.exp(-maxLog);
+            weight[t] = new double[entryOf[t].length];
+            bit[t] = new int[entryOf[t].length];
+            for (int k = 0; k < entryOf[t].length; k++) {
+                weight[t][k] = Math.exp(logWeight[t][k] - maxLog);
+                bit[t][k] = bitOf.getOrDefault(entryOf[t][k], -1);
+            }
+        }
+
+        List<Map<BitSet, Double>> forward = new ArrayList<>(peaks + 1);
+        Map<BitSet, Double> start = new HashMap<>();
+        start.put(new BitSet(), 1.0);
+        forward.add(start);
+        for (int t = 0; t < peaks; t++) {
+            Map<BitSet, Double> next = new HashMap<>();
+            double total = 0.0;
+            for (Map.Entry<BitSet, Double> s : forward.get(t).entrySet()) {
+                BitSet used = s.getKey();
+                double f = s.getValue();
+                total += accumulate(next, project(used, -1, t + 1, lastUser), f * noneWeight[t]);
+                for (int k = 0; k < weight[t].length; k++) {
+                    int b = bit[t][k];
+                    if (b >= 0 && used.get(b)) {
+                        continue;
+                    }
+                    total += accumulate(next, project(used, b, t + 1, lastUser), f * weight[t][k]);
+                }
+            }
+            if (next.size() > maxStates) {
+                return null;
+            }
+            if (total > 0) {
+                for (Map.Entry<BitSet, Double> s : next.entrySet()) {
+                    s.setValue(s.getValue() / total);
+                }
+            }
+            forward.add(next);
+        }
+
+        double[][] marginal = new double[peaks][];
+        Map<BitSet, Double> after = new HashMap<>();
+        after.put(new BitSet(), 1.0);
+        for (int t = peaks - 1; t >= 0; t--) {
+            double[] m = new double[weight[t].length + 1];
+            Map<BitSet, Double> here = new HashMap<>();
+            double max = 0.0;
+            for (Map.Entry<BitSet, Double> s : forward.get(t).entrySet()) {
+                BitSet used = s.getKey();
+                double f = s.getValue();
+                double b0 = noneWeight[t] * after.getOrDefault(project(used, -1, t + 1, lastUser), 0.0);
+                double sum = b0;
+                m[0] += f * b0;
+                for (int k = 0; k < weight[t].length; k++) {
+                    int b = bit[t][k];
+                    if (b >= 0 && used.get(b)) {
+                        continue;
+                    }
+                    double bk = weight[t][k] * after.getOrDefault(project(used, b, t + 1, lastUser), 0.0);
+                    sum += bk;
+                    m[k + 1] += f * bk;
+                }
+                here.put(used, sum);
+                max = Math.max(max, sum);
+            }
+            double z = 0.0;
+            for (double v : m) {
+                z += v;
+            }
+            if (!(z > 0) || !Double.isFinite(z) || !(max > 0)) {
+                return null;
+            }
+            for (int k = 0; k < m.length; k++) {
+                m[k] /= z;
+            }
+            marginal[t] = m;
+            for (Map.Entry<BitSet, Double> s : here.entrySet()) {
+                s.setValue(s.getValue() / max);
+            }
+            after = here;
+        }
+        return marginal;
+    }
+
+    private static double accumulate(Map<BitSet, Double> layer, BitSet state, double value) {
+        layer.merge(state, value, Double::sum);
+        return value;
+    }
+
+    /** {@code used ∪ {add}} without the entries no peak from {@code nextPeak} on can use. */
+    private static BitSet project(BitSet used, int add, int nextPeak, int[] lastUser) {
+        BitSet s = (BitSet) used.clone();
+        if (add >= 0) {
+            s.set(add);
+        }
+        for (int b = s.nextSetBit(0); b >= 0; b = s.nextSetBit(b + 1)) {
+            if (lastUser[b] < nextPeak) {
+                s.clear(b);
+            }
+        }
+        return s;
+    }
+}
