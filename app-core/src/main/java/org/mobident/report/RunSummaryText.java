@@ -36,6 +36,7 @@ public final class RunSummaryText {
     private static final String TABLE_INDENT = "  ";
     private static final int TIME_DECIMALS = 2;
     private static final int MOBILITY_DECIMALS = 2;
+    private static final int SD_DECIMALS = 3;
     private static final int PERCENT_DECIMALS = 0;
     private static final double PERCENT = 100.0;
 
@@ -96,8 +97,10 @@ public final class RunSummaryText {
     private static String heading(RunResult run) {
         StringBuilder sb = new StringBuilder("Run ").append(run.spec().name()).append(": ")
                 .append(oneLine(run.scaleNote()));
-        String eof = Numbers.fixed(run.eofMobility(), MOBILITY_DECIMALS);
-        sb.append("; EOF mobility ").append(eof == null ? "unknown" : eof);
+        if (!run.scaleNote().contains("EOF")) {
+            String eof = Numbers.fixed(run.eofMobility(), MOBILITY_DECIMALS);
+            sb.append("; EOF mobility ").append(eof == null ? "unknown" : eof);
+        }
         return sb.toString();
     }
 
@@ -108,7 +111,7 @@ public final class RunSummaryText {
         if (!known) {
             mobility = "n/a";
         } else {
-            String sd = Numbers.fixed(pr.mobilitySd(), MOBILITY_DECIMALS);
+            String sd = Numbers.fixed(pr.mobilitySd(), SD_DECIMALS);
             mobility = Numbers.fixed(pr.mobility(), MOBILITY_DECIMALS) + " +/- " + (sd == null ? "?" : sd);
         }
         boolean assigned = known && m.assigned() != null;
