@@ -1,0 +1,48 @@
+package org.mobident.pipeline;
+
+import java.util.Objects;
+import org.mobident.matching.MatchSettings;
+import org.mobident.signal.PeakSettings;
+import org.mobident.trace.io.TraceReadOptions;
+
+/**
+ * Everything that steers identification apart from the runs and the library.
+ *
+ * @param readOptions   how trace files are read
+ * @param peakSettings  how peaks are detected
+ * @param matchSettings how peaks are matched to library analytes
+ * @param threads       number of runs processed at once (≥ 1)
+ */
+public record IdentifySettings(TraceReadOptions readOptions, PeakSettings peakSettings,
+                               MatchSettings matchSettings, int threads) {
+
+    public static IdentifySettings defaults() {
+        return new IdentifySettings(TraceReadOptions.DEFAULT, PeakSettings.DEFAULT, MatchSettings.DEFAULT,
+                Runtime.getRuntime().availableProcessors());
+    }
+
+    public IdentifySettings {
+        Objects.requireNonNull(readOptions, "readOptions");
+        Objects.requireNonNull(peakSettings, "peakSettings");
+        Objects.requireNonNull(matchSettings, "matchSettings");
+        if (threads < 1) {
+            throw new IllegalArgumentException("threads must be at least 1, got " + threads);
+        }
+    }
+
+    public IdentifySettings withThreads(int n) {
+        return new IdentifySettings(readOptions, peakSettings, matchSettings, n);
+    }
+
+    public IdentifySettings withPeakSettings(PeakSettings p) {
+        return new IdentifySettings(readOptions, p, matchSettings, threads);
+    }
+
+    public IdentifySettings withMatchSettings(MatchSettings m) {
+        return new IdentifySettings(readOptions, peakSettings, m, threads);
+    }
+
+    public IdentifySettings withReadOptions(TraceReadOptions r) {
+        return new IdentifySettings(r, peakSettings, matchSettings, threads);
+    }
+}

@@ -1,0 +1,225 @@
+package org.mobident.pipeline;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertNotNull;
+import static org.junit.jupiter.api.Assertions.assertNull;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.SplittableRandom;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.ValueSource;
+import org.mobident.library.Library;
+import org.mobident.library.LibraryEntry;
+import org.mobident.matching.MatchStatus;
+import org.mobident.simulate.SimulationSpec;
+import org.mobident.simulate.TraceSimulator;
+import org.mobident.trace.Detection;
+import org.mobident.trace.RunConditions;
+import org.mobident.trace.RunSpec;
+import org.mobident.trace.Trace;
+
+/**
+ * End to end: traces synthesised from known mobilities (EOF drifting ±15 % between runs, noise,
+ * baseline drift, both polarities, dips from indirect detection) must be identified correctly and
+ * their mobilities must come back within the stated uncertainty. The traces are made by
+ * {@link TraceSimulator} from the definition μ_app = Ld·Lt/(V·t') (IUPAC) — the same physics the
+ * engine inverts, but through separate code (the simulator never calls the mobility package).
+ */
+class IdentifierEndToEndTest {
+
+    /** Anions, effective mobilities in 1e-9 m²/(V s); invented test values, not a source. */
+    private static final Library ANIONS = new Library(List.of(
+            entry("chloride", -76.2, 0.4), entry("sulfate", -73.9, 0.4), entry("nitrite", -71.1, 0.4),
+            entry("nitrate", -69.8, 0.4), entry("chlorate", -63.3, 0.4), entry("fluoride", -55.6, 0.5),
+            entry("formate", -53.3, 0.4), entry("phosphate", -47.3, 0.6), entry("acetate", -40.9, 0.4)),
+            "test", List.of());
+
+    private static final Library CATIONS = new Library(List.of(
+            entry("potassium", 70.2, 0.4), entry("ammonium", 68.8, 0.4), entry("calcium", 54.8, 0.5),
+            entry("magnesium", 50.6, 0.5), entry("sodium", 46.2, 0.4), entry("lithium", 36.5, 0.4)),
+            "test", List.of());
+
+    /** Apex and marker times are estimated, so is the mobility: allow this many stated SDs. */
+    private static final double SD_COVERAGE = 4.0;
+
+    /** Absolute allowance for the bias of peak-shape estimation on noisy, drifting data, units. */
+    private static final double BIAS_ALLOWANCE = 0.05;
+
+    private static LibraryEntry entry(String name, double mobility, double sd) {
+        return new LibraryEntry(name, mobility, sd, 6, mobility < 0 ? -1 : 1, Double.NaN, List.of(), List.of(),
+                "test buffer", Double.NaN, Double.NaN, 25.0, "test");
+    }
+
+    private static RunConditions conditions(double ltCm, double ldCm, double kv, double rampS, Detection det,
+                                            double markerFromS, double markerToS) {
+        return new RunConditions(ltCm, ldCm, kv, rampS, 25.0, "test buffer", markerFromS, markerToS, det,
+                Double.NaN, Double.NaN, Double.NaN);
+    }
+
+    private record Truth(String name, double mobility) {
+    }
+
+    private static RunResult run(Library library, RunConditions c, double eof, List<Truth> zones, long seed,
+                                 double noiseSd) {
+        SimulationSpec.Builder b = SimulationSpec.builder(c).eofMobility(eof).neutralMarker(1.0)
+                .samplingHz(20).durationS(900).noiseSd(noiseSd).baseline(0.3).drift(2e-4, 1e-7).seed(seed);
+        for (Truth z : zones) {
+            b.zone(z.name(), z.mobility(), 0.8, 120_000);
+        }
+        Trace t = TraceSimulator.simulate("run-" + seed, b.build());
+        RunSpec spec = new RunSpec("run-" + seed, Path.of("run-" + seed + ".csv"), c, "test", 0);
+        return new Identifier(library, IdentifySettings.defaults().withThreads(1)).identify(spec, t);
+    }
+
+    private static void assertIdentified(RunResult r, List<Truth> zones) {
+        assertFalse(r.failed(), () -> "run failed: " + r.error());
+        assertTrue(r.mobilityKnown(), r.scaleNote());
+        for (Truth z : zones) {
+            PeakResult best = null;
+            for (PeakResult p : r.peaks()) {
+                if (p.role() == PeakRole.ANALYTE && (best == null
+                        || Math.abs(p.mobility() - z.mobility()) < Math.abs(best.mobility() - z.mobility()))) {
+                    best = p;
+                }
+            }
+            assertNotNull(best, "no peak for " + z.name());
+            PeakResult found = best;
+            double err = Math.abs(found.mobility() - z.mobility());
+            assertTrue(err <= SD_COVERAGE * found.mobilitySd() + BIAS_ALLOWANCE,
+                    () -> z.name() + ": mobility " + found.mobility() + " vs true " + z.mobility()
+                            + ", stated sd " + found.mobilitySd());
+            if (z.name().startsWith("unknown")) {
+                assertNull(found.match().assigned(), () -> z.name() + " must stay unassigned: " + found.match());
+                assertEquals(MatchStatus.UNASSIGNED, found.match().status());
+            } else {
+                assertEquals(z.name(), found.match().assigned(), () -> "peak at " + found.peak().apexTimeS()
+                        + " s, mobility " + found.mobility() + ": " + found.match());
+            }
+        }
+        long analytes = r.peaks().stream().filter(p -> p.role() == PeakRole.ANALYTE).count();
+        assertEquals(zones.size(), analytes, () -> "extra or missing peaks: " + r.peaks());
+    }
+
+    /** Each zone's true mobility scatters around its library value as between real runs. */
+    private static List<Truth> draw(Library library, SplittableRandom rnd, int skipEvery) {
+        List<Truth> zones = new ArrayList<>();
+        int i = 0;
+        for (LibraryEntry e : library.entries()) {
+            if (skipEvery > 0 && i++ % skipEvery == 0) {
+                continue;
+            }
+            zones.add(new Truth(e.name(), e.mobility() + 0.5 * e.mobilitySd() * gaussian(rnd)));
+        }
+        return zones;
+    }
+
+    private static double gaussian(SplittableRandom rnd) {
+        double u = rnd.nextDouble(1e-12, 1.0);
+        double v = rnd.nextDouble();
+        return Math.sqrt(-2 * Math.log(u)) * Math.cos(2 * Math.PI * v);
+    }
+
+    @ParameterizedTest(name = "reversed polarity, coated wall, indirect: seed {0}")
+    @ValueSource(longs = {1, 2, 3, 4, 5, 6})
+    void reversedPolarityAnionsWithDriftingEof(long seed) {
+        SplittableRandom rnd = new SplittableRandom(seed);
+        double eof = -50.0 * (1 + rnd.nextDouble(-0.15, 0.15));
+        List<Truth> zones = draw(ANIONS, rnd, (int) (seed % 4) + 2);
+        zones.add(new Truth("unknown-a", -59.8));
+        RunConditions c = conditions(80, 72, -20, 6, Detection.INDIRECT, 380, 800);
+        assertIdentified(run(ANIONS, c, eof, zones, seed, 0.004), zones);
+    }
+
+    @ParameterizedTest(name = "normal polarity, bare silica, cations: seed {0}")
+    @ValueSource(longs = {11, 12, 13, 14})
+    void normalPolarityCationsWithDriftingEof(long seed) {
+        SplittableRandom rnd = new SplittableRandom(seed);
+        double eof = 45.0 * (1 + rnd.nextDouble(-0.15, 0.15));
+        List<Truth> zones = draw(CATIONS, rnd, 0);
+        Detection det = seed % 2 == 0 ? Detection.DIRECT : Detection.INDIRECT;
+        RunConditions c = conditions(60, 52, 25, 0, det, 200, 500);
+        assertIdentified(run(CATIONS, c, eof, zones, seed, 0.004), zones);
+    }
+
+    @Test
+    void markerFoundWithoutWindowByLibraryFit() {
+        SplittableRandom rnd = new SplittableRandom(21);
+        List<Truth> zones = draw(ANIONS, rnd, 0);
+        RunConditions c = conditions(80, 72, -20, 0, Detection.INDIRECT, Double.NaN, Double.NaN);
+        RunResult r = run(ANIONS, c, -46.0, zones, 21, 0.004);
+        assertIdentified(r, zones);
+        assertTrue(r.notes().get(0).contains("no marker window"), r.notes().toString());
+        assertEquals(-46.0, r.eofMobility(), 0.05, "EOF mobility recovered (value used to synthesise)");
+    }
+
+    @Test
+    void twoMarkerModeNeedsNoGeometryAndResistsAWrongVoltage() {
+        // The charged marker (sulfate-like, known mobility -73.9) and the neutral marker fix the scale;
+        // the stated voltage is 10 % off, which would bias the neutral-marker-only scale.
+        SplittableRandom rnd = new SplittableRandom(31);
+        List<Truth> zones = new ArrayList<>(draw(ANIONS, rnd, 0));
+        zones.removeIf(z -> z.name().equals("sulfate"));
+        RunConditions truth = conditions(80, 72, -20, 0, Detection.INDIRECT, 380, 800);
+        SimulationSpec.Builder b = SimulationSpec.builder(truth).eofMobility(-48).neutralMarker(1.0)
+                .samplingHz(20).durationS(900).noiseSd(0.004).seed(31).zone("sulfate", -73.9, 0.8, 120_000);
+        for (Truth z : zones) {
+            b.zone(z.name(), z.mobility(), 0.8, 120_000);
+        }
+        Trace t = TraceSimulator.simulate("two-marker", b.build());
+        double sulfateTimeS = TraceSimulator.apexTimeS(b.build(), -73.9);
+        RunConditions stated = new RunConditions(Double.NaN, Double.NaN, Double.NaN, 0, 25.0, "test", 380, 800,
+                Detection.INDIRECT, -73.9, sulfateTimeS - 1.0, sulfateTimeS + 1.0);
+        Library noSulfate = new Library(ANIONS.entries().stream().filter(e -> !e.name().equals("sulfate")).toList(),
+                "test", List.of());
+        RunResult r = new Identifier(noSulfate, IdentifySettings.defaults().withThreads(1))
+                .identify(new RunSpec("two-marker", Path.of("two-marker.csv"), stated, "test", 0), t);
+        assertIdentified(r, zones);
+        assertTrue(r.peaks().stream().anyMatch(p -> p.role() == PeakRole.MOBILITY_MARKER));
+    }
+
+    @Test
+    void runWithoutMarkerInItsWindowIsReportedAndHasNoMobilities() {
+        SplittableRandom rnd = new SplittableRandom(41);
+        List<Truth> zones = draw(ANIONS, rnd, 0);
+        RunConditions c = conditions(80, 72, -20, 0, Detection.INDIRECT, 800, 880);
+        RunResult r = run(ANIONS, c, -50, zones, 41, 0.004);
+        assertFalse(r.failed());
+        assertFalse(r.mobilityKnown());
+        assertTrue(r.scaleNote().contains("no peak in the neutral-marker window"), r.scaleNote());
+        assertTrue(r.peaks().stream().allMatch(p -> Double.isNaN(p.mobility()) && p.match().assigned() == null));
+    }
+
+    @Test
+    void temperatureDifferenceIsCorrectedThroughWaterViscosity() {
+        // Zones synthesised at 30 °C with mobilities scaled from the 25 °C library by η(25)/η(30):
+        // IAPWS 2008 viscosities 0.8900 and 0.7972 mPa s (from memory), ratio 1.1164.
+        SplittableRandom rnd = new SplittableRandom(51);
+        List<Truth> at25 = draw(ANIONS, rnd, 0);
+        List<Truth> at30 = at25.stream().map(z -> new Truth(z.name(), z.mobility() * 0.8900 / 0.7972)).toList();
+        RunConditions c = new RunConditions(80, 72, -20, 0, 30.0, "test buffer", 380, 800, Detection.INDIRECT,
+                Double.NaN, Double.NaN, Double.NaN);
+        RunResult r = run(ANIONS, c, -52, at30, 51, 0.004);
+        assertIdentified(r, at30);
+        assertTrue(r.notes().stream().anyMatch(n -> n.contains("30.0 °C")), r.notes().toString());
+        for (PeakResult p : r.peaks()) {
+            if (p.role() == PeakRole.ANALYTE) {
+                assertEquals(p.mobility() * 0.7972 / 0.8900, p.mobilityAtLibraryTemp(), 0.01);
+            }
+        }
+    }
+
+    @Test
+    void batchGoesOnPastAMissingFile() {
+        RunConditions c = conditions(80, 72, -20, 0, Detection.INDIRECT, 380, 800);
+        RunSpec missing = new RunSpec("gone", Path.of("does-not-exist.csv"), c, "sheet.csv", 4);
+        List<RunResult> out = new Identifier(ANIONS, IdentifySettings.defaults()).identifyAll(List.of(missing));
+        assertEquals(1, out.size());
+        assertTrue(out.get(0).failed());
+        assertTrue(out.get(0).error().getMessage().contains("does-not-exist.csv"), out.get(0).error().getMessage());
+    }
+}
