@@ -1,0 +1,49 @@
+package org.mobident.cli;
+
+import org.mobident.signal.PeakSettings;
+import org.mobident.trace.TimeScale;
+import org.mobident.trace.io.TraceReadOptions;
+import picocli.CommandLine.Option;
+
+/** Options shared by the commands that read traces. */
+public final class CommonOptions {
+    @Option(names = "--time-unit", paramLabel = "UNIT",
+            description = "Unit of the trace time column when its header does not say: s or min.")
+    String timeUnit;
+
+    @Option(names = "--min-sn", paramLabel = "S/N",
+            description = "Smallest signal-to-noise ratio of a reported peak (default ${DEFAULT-VALUE}).")
+    double minSignalToNoise = PeakSettings.DEFAULT.minSignalToNoise();
+
+    @Option(names = "--threads", paramLabel = "N", description = "Runs processed at once (default: all cores).")
+    Integer threads;
+
+    @Option(names = "--debug", description = "Show the full error trace when something goes wrong.")
+    boolean debug;
+
+    TraceReadOptions readOptions() {
+        if (timeUnit == null) {
+            return TraceReadOptions.DEFAULT;
+        }
+        TimeScale scale;
+        switch (timeUnit.trim().toLowerCase(java.util.Locale.ROOT)) {
+            case "s":
+            case "sec":
+            case "seconds":
+                scale = TimeScale.SECONDS;
+                break;
+            case "min":
+            case "minutes":
+                scale = TimeScale.MINUTES;
+                break;
+            default:
+                throw new picocli.CommandLine.ParameterException(new picocli.CommandLine(new Object()),
+                        "--time-unit: expected s or min, got '" + timeUnit + "'");
+        }
+        return new TraceReadOptions(scale, null, null);
+    }
+
+    PeakSettings peakSettings() {
+        return PeakSettings.DEFAULT.withMinSignalToNoise(minSignalToNoise);
+    }
+}

@@ -1,0 +1,90 @@
+package org.mobident.cli;
+
+import org.mobident.InputException;
+import org.mobident.trace.Detection;
+import org.mobident.trace.RunConditions;
+import picocli.CommandLine.Option;
+
+/** Run conditions given on the command line; they fill what the run sheet leaves empty. */
+public final class ConditionOptions {
+    @Option(names = "--total-length-cm", paramLabel = "CM", description = "Capillary total length Lt in cm.")
+    Double totalLengthCm;
+
+    @Option(names = "--detector-length-cm", paramLabel = "CM", description = "Inlet-to-detector length Ld in cm.")
+    Double detectorLengthCm;
+
+    @Option(names = "--voltage-kv", paramLabel = "KV",
+            description = "Separation voltage in kV, signed: negative when the inlet is at the negative potential.")
+    Double voltageKv;
+
+    @Option(names = "--ramp-s", paramLabel = "S", description = "Duration of the linear voltage ramp in s (default 0).")
+    Double rampS;
+
+    @Option(names = "--temperature-c", paramLabel = "C", description = "Capillary temperature in °C.")
+    Double temperatureC;
+
+    @Option(names = "--buffer", paramLabel = "LABEL", description = "Buffer label.")
+    String buffer;
+
+    @Option(names = "--marker-window", paramLabel = "FROM:TO",
+            description = "Time window (s) holding the neutral marker, e.g. 180:240. Without it the marker is "
+                    + "chosen as the peak under which the library explains the run best.")
+    String markerWindow;
+
+    @Option(names = "--detection", paramLabel = "MODE",
+            description = "direct (peaks rise) or indirect (peaks dip). Default: direct.")
+    String detection;
+
+    @Option(names = "--ref-mobility", paramLabel = "MOB",
+            description = "Known effective mobility (1e-9 m²/(V s), signed) of a charged marker in every run.")
+    Double refMobility;
+
+    @Option(names = "--ref-window", paramLabel = "FROM:TO", description = "Time window (s) holding that charged marker.")
+    String refWindow;
+
+    /** The conditions given here; unset values stay unset. */
+    RunConditions toConditions() throws InputException {
+        double[] marker = window(markerWindow, "--marker-window");
+        double[] ref = window(refWindow, "--ref-window");
+        Detection det = null;
+        if (detection != null) {
+            det = Detection.parse(detection);
+            if (det == null) {
+                throw new InputException("command line", 0, "--detection",
+                        "expected 'direct' or 'indirect', got '" + detection + "'");
+            }
+        }
+        RunConditions c = new RunConditions(n(totalLengthCm), n(detectorLengthCm), n(voltageKv), n(rampS),
+                n(temperatureC), buffer, marker[0], marker[1], det, n(refMobility), ref[0], ref[1]);
+        String problem = c.geometryProblem();
+        if (problem != null) {
+            throw new InputException("command line", 0, "conditions", problem);
+        }
+        return c;
+    }
+
+    private static double n(Double d) {
+        return d == null ? Double.NaN : d;
+    }
+
+    private static double[] window(String text, String option) throws InputException {
+        if (text == null) {
+            return new double[] {Double.NaN, Double.NaN};
+        }
+        String[] parts = text.split(":");
+        if (parts.length != 2) {
+            throw new InputException("command line", 0, option, "expected FROM:TO in seconds, got '" + text + "'");
+        }
+        try {
+            double a = Double.parseDouble(parts[0].trim());
+            double b = Double.parseDouble(parts[1].trim());
+            if (!(Double.isFinite(a) && Double.isFinite(b) && a < b && a >= 0)) {
+                throw new InputException("command line", 0, option,
+                        "the window must satisfy 0 <= FROM < TO, got '" + text + "'");
+            }
+            return new double[] {a, b};
+        } catch (NumberFormatException e) {
+            throw new InputException("command line", 0, option, "expected FROM:TO in seconds, got '" + text + "'");
+        }
+    }
+}
