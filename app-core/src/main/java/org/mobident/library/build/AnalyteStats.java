@@ -1,0 +1,32 @@
+package org.mobident.library.build;
+
+import java.util.List;
+
+/**
+ * Replicate statistics of one analyte of a build.
+ *
+ * @param name         analyte name
+ * @param mixes        the mixes it was found in
+ * @param basis        how its peak group was named (in the first mix)
+ * @param measurements every replicate peak, outliers included, in run order
+ * @param n            number of values behind the statistics (outliers left out when so set)
+ * @param mean         mean mobility, 1e-9 m²/(V·s)
+ * @param sd           sample standard deviation (NaN when n &lt; 2)
+ * @param min          smallest value used
+ * @param max          largest value used
+ * @param rsdPercent   100·SD/|mean|, % (NaN when SD is)
+ * @param tolerance    match window half-width max(k·SD, floor)
+ * @param charge       charge number written to the library (sign only, ±1, when only the sign is known)
+ * @param runs         the runs the values came from, in run order
+ * @param outliers     replicates that failed the Grubbs test (empty when none, or when n &lt; 3)
+ */
+public record AnalyteStats(String name, List<String> mixes, NamingBasis basis, List<Measurement> measurements,
+                           int n, double mean, double sd, double min, double max, double rsdPercent,
+                           double tolerance, int charge, List<String> runs, List<Outlier> outliers) {
+    public AnalyteStats {
+        mixes = List.copyOf(mixes);
+        measurements = List.copyOf(measurements);
+        runs = List.copyOf(runs);
+        outliers = List.copyOf(outliers);
+    }
+}

@@ -1,0 +1,47 @@
+package org.mobident.library.build;
+
+/**
+ * Something an analyst should read before trusting a built or merged library.
+ *
+ * @param kind    what kind of problem
+ * @param mix     the mix concerned, or null
+ * @param analyte the analyte concerned, or null
+ * @param run     the run concerned, or null
+ * @param message a complete sentence for the analyst
+ */
+public record BuildWarning(Kind kind, String mix, String analyte, String run, String message) {
+
+    /** The kinds of warning. */
+    public enum Kind {
+        /** A run failed as a whole and was left out. */
+        RUN_FAILED,
+        /** A run has no mobility scale (no marker found) and was left out. */
+        NO_MOBILITY_SCALE,
+        /** A run names no mix, or one the standards sheet does not define, and was left out. */
+        RUN_WITHOUT_MIX,
+        /** A run's trace file could not be hashed for the provenance notes. */
+        TRACE_NOT_HASHED,
+        /** The runs differ in buffer, temperature, lengths or voltage. */
+        MIXED_CONDITIONS,
+        /** Fewer replicates than the settings ask for. */
+        FEW_REPLICATES,
+        /** Replicate RSD above the limit of the settings. */
+        HIGH_RSD,
+        /** A replicate failed the Grubbs test. */
+        OUTLIER,
+        /** Two analytes' tolerance windows overlap: they cannot be told apart by mobility in this buffer. */
+        OVERLAPPING_WINDOWS,
+        /** An analyte of a mix was found in none of its runs (or could not be named). */
+        ANALYTE_NOT_FOUND,
+        /** A peak, or a group of peaks, that fits no expected analyte (or is too small to be one). */
+        UNEXPECTED_PEAK,
+        /** A group that is probably one of the mix's analytes, but nothing tells which. */
+        UNNAMED_GROUP,
+        /** The data contradict the standards sheet (migration order, charge sign). */
+        NAMING_CONFLICT,
+        /** Merge: the fresh mean differs from the existing one by more than their combined uncertainty. */
+        MEANS_DIFFER,
+        /** Merge: the existing entry has no n or SD, so its value was replaced rather than pooled. */
+        NOT_POOLED
+    }
+}
