@@ -1,0 +1,62 @@
+package org.mobident.cli;
+
+import java.io.IOException;
+import java.io.PrintWriter;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.time.Instant;
+import java.time.temporal.ChronoUnit;
+import java.util.List;
+import org.mobident.io.SafeFiles;
+import org.mobident.pipeline.RunResult;
+
+/** Writing output files and reporting run problems, the same way for every command. */
+final class Outputs {
+    private Outputs() {
+    }
+
+    /** Refuses, before any work is done, to replace existing files unless asked to. */
+    static void checkFree(boolean overwrite, Path... targets) throws OutputException {
+        for (Path p : targets) {
+            if (p != null && !overwrite && Files.exists(p)) {
+                throw new OutputException(p + " already exists; add --overwrite to replace it", null);
+            }
+        }
+    }
+
+    /** Writes through a temp file and an atomic move. */
+    static void write(Path target, boolean overwrite, SafeFiles.ContentWriter content) throws OutputException {
+        try {
+            SafeFiles.write(target, overwrite, "add --overwrite to replace it", content);
+        } catch (IOException e) {
+            throw new OutputException(target + ": " + e.getMessage(), e);
+        }
+    }
+
+    /** The time stamp put in reports, to the second, UTC. */
+    static String timestamp() {
+        return Instant.now().truncatedTo(ChronoUnit.SECONDS).toString();
+    }
+
+    /** Options of an HTML report made now by this version. */
+    static org.mobident.report.html.HtmlReport.Options htmlOptions() {
+        return new org.mobident.report.html.HtmlReport.Options(null, "mobident " + VersionProvider.version(),
+                timestamp());
+    }
+
+    /** Prints one line per failed run or run without mobility scale; returns the exit code. */
+    static int reportRunProblems(List<RunResult> results, PrintWriter err) {
+        int problems = 0;
+        for (RunResult r : results) {
+            if (r.failed()) {
+                err.println("mobident: run " + r.spec().name() + " not processed: " + r.error().getMessage());
+                problems++;
+            } else if (!r.mobilityKnown()) {
+                err.println("mobident: run " + r.spec().name() + " has no mobility scale: " + r.scaleNote());
+                problems++;
+            }
+        }
+        err.flush();
+        return problems > 0 ? ExitCodes.SOME_RUNS_FAILED : ExitCodes.OK;
+    }
+}
