@@ -60,10 +60,11 @@ public final class RunSheetReader {
     static final String REF_TO = "ref_marker_to_s";
     static final String SAMPLE = "sample";
     static final String NOTE = "note";
+    static final String MIX = "mix";
 
     private static final String COLUMN_LIST = "file, total_length_cm, detector_length_cm, voltage_kv, ramp_s, "
             + "temperature_c, buffer, marker_from_s, marker_to_s, detection, ref_marker_mobility, "
-            + "ref_marker_from_s, ref_marker_to_s, sample, note";
+            + "ref_marker_from_s, ref_marker_to_s, sample, mix, note";
 
     /** The known columns, in documentation order. */
     public static final List<String> COLUMNS = List.of(COLUMN_LIST.split(", "));
@@ -201,6 +202,8 @@ public final class RunSheetReader {
         private List<String> columns;
         private int columnIndexOfFile;
         private final Map<String, Long> runNames = new HashMap<>();
+        private final Map<String, String> samples = new java.util.LinkedHashMap<>();
+        private final Map<String, String> mixes = new java.util.LinkedHashMap<>();
 
         SheetParse(Path sheet, String name, RunConditions defaults) {
             this.sheet = sheet;
@@ -239,7 +242,7 @@ public final class RunSheetReader {
             if (rows == 0) {
                 throw new InputException(name, 0, null, "the run sheet has a header but no runs");
             }
-            return new RunSheet(runs, problems);
+            return new RunSheet(runs, problems, samples, mixes);
         }
 
         private void readHeader(String line, long lineNo) throws InputException {
@@ -352,6 +355,14 @@ public final class RunSheetReader {
             String fileProblem = traceFileProblem(traceFile);
             if (fileProblem != null) {
                 throw new InputException(name, lineNo, FILE, fileProblem);
+            }
+            String sample = values.getOrDefault(SAMPLE, "");
+            if (!sample.isEmpty()) {
+                samples.put(runName, sample);
+            }
+            String mix = values.getOrDefault(MIX, "");
+            if (!mix.isEmpty()) {
+                mixes.put(runName, mix);
             }
             return new RunSpec(runName, traceFile, conditions, name, lineNo);
         }
