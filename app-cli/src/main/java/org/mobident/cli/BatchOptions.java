@@ -12,95 +12,60 @@ import org.mobident.matching.MatchSettings;
 import org.mobident.pipeline.IdentifySettings;
 import org.mobident.pipeline.Identifier;
 import org.mobident.pipeline.RunResult;
-import org.mobident.trace.RunConditions;
-import org.mobident.trace.RunSpec;
 import org.mobident.trace.Trace;
-import org.mobident.trace.io.RunSheet;
-import org.mobident.trace.io.RunSheetReader;
 import org.mobident.trace.io.TraceFiles;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
-import picocli.CommandLine.Parameters;
 
 /**
- * The inputs every command that identifies runs shares: runs (a run sheet or trace files), the
- * library, run conditions, match and detection settings. {@link #identify()} does the work.
+ * The inputs every command that identifies runs shares: the runs, the library and the match
+ * settings. {@link #identify()} does the work.
  */
 public final class BatchOptions {
 
-    @Option(names = {"-r", "--runs"}, paramLabel = "SHEET",
-            description = "Run sheet (CSV, one row per run; trace paths relative to the sheet).")
-    Path runSheet;
-
-    @Parameters(paramLabel = "TRACE", arity = "0..*", description = "Trace files to process without a run sheet.")
-    List<Path> traces = new ArrayList<>();
+    @Mixin
+    RunInputs inputs;
 
     @Option(names = {"-l", "--library"}, required = true, paramLabel = "FILE", description = "Mobility library (CSV).")
     Path libraryFile;
 
     @Mixin
-    ConditionOptions conditions;
-
-    @Mixin
     MatchOptions matching;
 
-    @Mixin
-    CommonOptions common;
-
     /** The loaded inputs and the results, in run order (rejected sheet rows last). */
-    record Batch(Library library, List<RunSpec> runs, List<RunResult> results, IdentifySettings settings) {
+    record Batch(Library library, List<RunResult> results, IdentifySettings settings) {
         /** Re-reads the traces of the runs that were processed, for plots; runs that fail are left out. */
         Map<String, Trace> traces() {
-            Map<String, Trace> out = new LinkedHashMap<>();
-            for (RunResult r : results) {
-                if (!r.failed() && r.spec().traceFile() != null) {
-                    try {
-                        out.put(r.spec().name(), TraceFiles.read(r.spec().traceFile(), settings.readOptions()));
-                    } catch (InputException e) {
-                        // the run was read once already; if it vanished since, its plot is left out
-                    }
-                }
-            }
-            return out;
+            return BatchOptions.traces(results, settings);
         }
     }
 
     /** True when exactly one of run sheet and trace files was given. */
     boolean runsGiven() {
-        return (runSheet == null) != traces.isEmpty();
+        return inputs.given();
     }
 
     Batch identify() throws InputException {
         Library library = LibraryCsv.read(libraryFile);
-        RunConditions defaults = conditions.toConditions();
-        List<RunSpec> runs = new ArrayList<>();
-        List<RunResult> rejected = new ArrayList<>();
-        if (runSheet != null) {
-            RunSheet sheet = RunSheetReader.read(runSheet, defaults);
-            runs.addAll(sheet.runs());
-            for (InputException problem : sheet.rowProblems()) {
-                rejected.add(RunResult.failure(new RunSpec("sheet line " + problem.line(), null,
-                        RunConditions.EMPTY, runSheet.toString(), problem.line()), problem));
-            }
-        } else {
-            for (Path t : traces) {
+        RunInputs.Loaded loaded = inputs.load();
+        IdentifySettings settings = inputs.settings(matching.toSettings(MatchSettings.DEFAULT));
+        List<RunResult> results = new ArrayList<>(new Identifier(library, settings).identifyAll(loaded.runs()));
+        results.addAll(loaded.rejected());
+        return new Batch(library, results, settings);
+    }
+
+    /** Re-reads the traces of processed runs, for plots; a trace that vanished meanwhile is left out. */
+    static Map<String, Trace> traces(List<RunResult> results, IdentifySettings settings) {
+        Map<String, Trace> out = new LinkedHashMap<>();
+        for (RunResult r : results) {
+            if (!r.failed() && r.spec().traceFile() != null) {
                 try {
-                    runs.add(RunSheetReader.single(t, defaults));
+                    out.put(r.spec().name(), TraceFiles.read(r.spec().traceFile(), settings.readOptions()));
                 } catch (InputException e) {
-                    rejected.add(RunResult.failure(new RunSpec(RunSpec.runNameOf(t), null, defaults,
-                            "command line", 0), e));
+                    // read once already; if it vanished since, its plot is left out
                 }
             }
         }
-        IdentifySettings settings = IdentifySettings.defaults()
-                .withMatchSettings(matching.toSettings(MatchSettings.DEFAULT))
-                .withPeakSettings(common.peakSettings())
-                .withReadOptions(common.readOptions());
-        if (common.threads != null) {
-            settings = settings.withThreads(common.threads);
-        }
-        List<RunResult> results = new ArrayList<>(new Identifier(library, settings).identifyAll(runs));
-        results.addAll(rejected);
-        return new Batch(library, runs, results, settings);
+        return out;
     }
 }

@@ -10,7 +10,7 @@ import picocli.CommandLine.Command;
             "Identifies capillary zone electrophoresis peaks by effective mobility.",
             "Identification by mobility is presumptive: confirm by an orthogonal method where results",
             "carry legal, clinical or safety weight, and follow your lab's validated procedures."},
-        subcommands = {IdentifyCommand.class, ReportCommand.class, PlotCommand.class,
+        subcommands = {IdentifyCommand.class, ReportCommand.class, PlotCommand.class, LibraryCommand.class,
             picocli.CommandLine.HelpCommand.class})
 public final class MobidentCommand implements Runnable {
     @picocli.CommandLine.Spec

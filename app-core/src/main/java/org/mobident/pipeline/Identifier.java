@@ -23,7 +23,7 @@ import org.mobident.signal.TraceAnalysis;
 import org.mobident.trace.RunConditions;
 import org.mobident.trace.RunSpec;
 import org.mobident.trace.Trace;
-import org.mobident.trace.io.DelimitedTraceReader;
+import org.mobident.trace.io.TraceFiles;
 
 /**
  * Identifies the peaks of runs against a library: trace → peaks → markers → mobilities →
@@ -101,7 +101,7 @@ public final class Identifier {
     /** Reads the run's trace and identifies its peaks; never throws for bad user data. */
     public RunResult identify(RunSpec run) {
         try {
-            Trace trace = DelimitedTraceReader.read(run.traceFile(), settings.readOptions());
+            Trace trace = TraceFiles.read(run.traceFile(), settings.readOptions());
             return identify(run, trace);
         } catch (InputException e) {
             return RunResult.failure(run, e);

@@ -219,7 +219,7 @@ public final class DemoDataGenerator {
             written.add(simulateAndWrite(stdDir, plan, truth));
         }
         Path stdRuns = stdDir.resolve("standards-runs.csv");
-        SafeFiles.write(stdRuns, true, w -> writeRunSheet(w, standards));
+        SafeFiles.write(stdRuns, true, w -> writeRunSheet(w, standards, true));
         written.add(stdRuns);
         Path mixes = stdDir.resolve("mixes.csv");
         SafeFiles.write(mixes, true, DemoDataGenerator::writeMixes);
@@ -326,13 +326,20 @@ public final class DemoDataGenerator {
     }
 
     private static void writeRunSheet(Writer w, List<RunPlan> plans) throws IOException {
+        writeRunSheet(w, plans, false);
+    }
+
+    /** With {@code withMix}, a {@code mix} column names the standards mix of each run (from its file name). */
+    private static void writeRunSheet(Writer w, List<RunPlan> plans, boolean withMix) throws IOException {
         w.write("file,total_length_cm,detector_length_cm,voltage_kv,ramp_s,temperature_c,buffer,marker_from_s,"
-                + "marker_to_s,detection,sample\n");
+                + "marker_to_s,detection," + (withMix ? "mix," : "") + "sample\n");
         for (RunPlan p : plans) {
             RunConditions c = conditions(p);
             w.write(String.join(",", p.file(), fmt(c.totalLengthCm()), fmt(c.detectorLengthCm()),
                     fmt(c.voltageKv()), fmt(c.rampS()), fmt(c.temperatureC()), c.buffer(), fmt(c.markerFromS()),
-                    fmt(c.markerToS()), c.detection().label(), quoteIfNeeded(p.sample())));
+                    fmt(c.markerToS()), c.detection().label()) + ","
+                    + (withMix ? (p.file().contains("mixA") ? "mixA," : "mixB,") : "")
+                    + quoteIfNeeded(p.sample()));
             w.write('\n');
         }
     }

@@ -1,0 +1,64 @@
+package org.mobident.cli;
+
+import java.nio.file.Path;
+import java.util.concurrent.Callable;
+import org.mobident.library.Library;
+import org.mobident.library.LibraryCsv;
+import org.mobident.library.build.BuildResult;
+import org.mobident.library.build.BuildText;
+import org.mobident.library.build.BuildWarning;
+import org.mobident.library.build.LibraryMerger;
+import org.mobident.library.build.MergeResult;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Spec;
+import picocli.CommandLine.Model.CommandSpec;
+
+/** {@code mobident library add}: pools new standards runs into an existing library. */
+@Command(name = "add",
+        mixinStandardHelpOptions = true,
+        versionProvider = VersionProvider.class,
+        sortOptions = false,
+        description = {
+            "Processes new standards runs like 'library build' and pools them into an existing library:",
+            "analytes in both get the mean and SD of all measurements together; new analytes are added.",
+            "The library is rewritten in place (atomically); its previous version is kept as FILE.prev."},
+        footer = {"", "Exit codes: 0 updated without warnings; 1 updated, with warnings; 2 bad command line; "
+                + "3 unusable input; 4 library not written."})
+public final class LibraryAddCommand implements Callable<Integer> {
+
+    @Spec
+    CommandSpec spec;
+
+    @Option(names = {"-l", "--library"}, required = true, paramLabel = "FILE", description = "The library to update.")
+    Path libraryFile;
+
+    @Mixin
+    StandardsOptions standards;
+
+    @Override
+    public Integer call() throws Exception {
+        var out = spec.commandLine().getOut();
+        var err = spec.commandLine().getErr();
+        if (!standards.inputs.given()) {
+            err.println("mobident library add: give the standards runs as a run sheet (--runs SHEET) or trace files.");
+            return ExitCodes.USAGE;
+        }
+        Library existing = LibraryCsv.read(libraryFile);
+        BuildResult fresh = standards.build();
+        BuildText.write(fresh, out);
+        MergeResult merged = LibraryMerger.merge(existing, fresh);
+        LibraryBuildCommand.writeLibrary(libraryFile, true, merged.library());
+        out.println("pooled: " + String.join(", ", merged.pooled()));
+        out.println("added: " + String.join(", ", merged.added()));
+        if (!merged.replaced().isEmpty()) {
+            out.println("replaced (had no spread): " + String.join(", ", merged.replaced()));
+        }
+        for (BuildWarning w : merged.warnings()) {
+            out.println("  - " + w.message());
+        }
+        out.println("library " + libraryFile + " updated; previous version kept as " + libraryFile + ".prev");
+        return fresh.warnings().isEmpty() && merged.warnings().isEmpty() ? ExitCodes.OK : ExitCodes.SOME_RUNS_FAILED;
+    }
+}

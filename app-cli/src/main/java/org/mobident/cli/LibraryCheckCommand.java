@@ -1,0 +1,41 @@
+package org.mobident.cli;
+
+import java.nio.file.Path;
+import java.util.List;
+import java.util.concurrent.Callable;
+import org.mobident.library.Library;
+import org.mobident.library.LibraryCsv;
+import org.mobident.library.build.BuildSettings;
+import org.mobident.library.build.BuildText;
+import org.mobident.library.build.BuildWarning;
+import org.mobident.library.build.LibraryCheck;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Parameters;
+import picocli.CommandLine.Spec;
+import picocli.CommandLine.Model.CommandSpec;
+
+/** {@code mobident library check}: reads a library, prints it and says what needs attention. */
+@Command(name = "check",
+        mixinStandardHelpOptions = true,
+        versionProvider = VersionProvider.class,
+        description = {
+            "Reads a library (any format error is reported with line and column), prints it readably, and",
+            "warns about entries with too few measurements or no spread, high RSD, and analytes whose match",
+            "windows overlap (they cannot be told apart by mobility alone)."},
+        footer = {"", "Exit codes: 0 no findings; 1 findings printed; 3 the file cannot be read as a library."})
+public final class LibraryCheckCommand implements Callable<Integer> {
+
+    @Spec
+    CommandSpec spec;
+
+    @Parameters(paramLabel = "LIBRARY", description = "The library file.")
+    Path libraryFile;
+
+    @Override
+    public Integer call() throws Exception {
+        Library library = LibraryCsv.read(libraryFile);
+        List<BuildWarning> findings = LibraryCheck.check(library, BuildSettings.defaults());
+        BuildText.write(library, findings, spec.commandLine().getOut());
+        return findings.isEmpty() ? ExitCodes.OK : ExitCodes.SOME_RUNS_FAILED;
+    }
+}

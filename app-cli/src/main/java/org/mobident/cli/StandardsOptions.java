@@ -1,0 +1,92 @@
+package org.mobident.cli;
+
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import org.mobident.InputException;
+import org.mobident.library.Library;
+import org.mobident.library.LibraryCsv;
+import org.mobident.library.build.BuildResult;
+import org.mobident.library.build.BuildSettings;
+import org.mobident.library.build.Grubbs;
+import org.mobident.library.build.LibraryBuilder;
+import org.mobident.library.build.StandardsSheet;
+import org.mobident.library.build.StandardsSheetReader;
+import org.mobident.matching.MatchSettings;
+import org.mobident.pipeline.IdentifySettings;
+import org.mobident.pipeline.Identifier;
+import org.mobident.pipeline.RunResult;
+import picocli.CommandLine.Mixin;
+import picocli.CommandLine.Option;
+
+/** Standards runs, the sheet saying what each mix holds, and the build settings. */
+public final class StandardsOptions {
+
+    @Mixin
+    RunInputs inputs;
+
+    @Option(names = {"-m", "--mixes"}, required = true, paramLabel = "FILE",
+            description = "Standards sheet: which analytes each mix holds (columns mix, analyte, and optionally "
+                    + "charge, approx_mobility, order). The run sheet's 'mix' column names each run's mix.")
+    Path mixesFile;
+
+    @Option(names = "--reference", paramLabel = "FILE",
+            description = "A reference library used to name peaks when the sheet gives no approximate mobility "
+                    + "or order (e.g. reference-libraries/ions-25C.csv).")
+    Path referenceFile;
+
+    @Option(names = "--rsd-limit", paramLabel = "PCT", description = "Warn above this RSD, % (default 2).")
+    Double rsdLimitPercent;
+
+    @Option(names = "--min-replicates", paramLabel = "N", description = "Warn below this many replicates (default 3).")
+    Integer minReplicates;
+
+    @Option(names = "--outlier-alpha", paramLabel = "A",
+            description = "Significance of the Grubbs outlier test (ASTM E178), two-sided (default 0.05).")
+    Double outlierAlpha;
+
+    @Option(names = "--drop-outliers", description = "Leave Grubbs outliers out of the statistics (they are always reported).")
+    boolean dropOutliers;
+
+    @Option(names = "--window-sd", paramLabel = "K", description = "Match window = K × SD (default 3) ...")
+    Double windowK;
+
+    @Option(names = "--window-min", paramLabel = "MOB", description = "... but at least this many mobility units (default 0.5).")
+    Double windowMin;
+
+    /** Processes the standards runs and builds a library from them. */
+    BuildResult build() throws InputException {
+        StandardsSheet sheet = StandardsSheetReader.read(mixesFile);
+        Library reference = referenceFile == null ? null : LibraryCsv.read(referenceFile);
+        RunInputs.Loaded loaded = inputs.load();
+        sheet.requireMixes(loaded.runs(), loaded.mixByRun());
+        IdentifySettings settings = inputs.settings(MatchSettings.DEFAULT);
+        Library empty = new Library(List.of(), "(none)", List.of());
+        List<RunResult> results = new ArrayList<>(new Identifier(empty, settings).identifyAll(loaded.runs()));
+        results.addAll(loaded.rejected());
+        return LibraryBuilder.build(results, loaded.mixByRun(), sheet, buildSettings(), reference);
+    }
+
+    BuildSettings buildSettings() {
+        BuildSettings s = BuildSettings.defaults();
+        try {
+            if (rsdLimitPercent != null) {
+                s = s.withRsdLimitPercent(rsdLimitPercent);
+            }
+            if (minReplicates != null) {
+                s = s.withMinReplicates(minReplicates);
+            }
+            if (outlierAlpha != null || dropOutliers) {
+                s = s.withOutlierTest(outlierAlpha != null ? outlierAlpha : s.outlierAlpha(),
+                        Grubbs.Alternative.TWO_SIDED, dropOutliers);
+            }
+            if (windowK != null || windowMin != null) {
+                s = s.withTolerance(windowK != null ? windowK : s.toleranceSdMultiple(),
+                        windowMin != null ? windowMin : s.toleranceFloor());
+            }
+        } catch (IllegalArgumentException e) {
+            throw new picocli.CommandLine.ParameterException(new picocli.CommandLine(this), e.getMessage());
+        }
+        return s;
+    }
+}
