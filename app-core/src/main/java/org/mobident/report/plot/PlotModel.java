@@ -197,7 +197,7 @@ public record PlotModel(Axis axis, String title, List<Series> series, List<PeakM
                 }
                 double[] mu = new double[t.length];
                 for (int i = 0; i < t.length; i++) {
-                    mu[i] = scale.mobility(t[i]);
+                    mu[i] = t[i] > 0 ? scale.mobility(t[i]) : Double.NaN;
                 }
                 int[] kept = monotoneFiniteTail(mu);
                 if (kept[1] - kept[0] < 1) {
