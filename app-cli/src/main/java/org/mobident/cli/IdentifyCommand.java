@@ -22,11 +22,7 @@ import picocli.CommandLine.Model.CommandSpec;
         mixinStandardHelpOptions = true,
         versionProvider = VersionProvider.class,
         sortOptions = false,
-        description = {
-            "Finds the peaks of each run, turns their migration times into effective mobilities with the",
-            "run's markers, and matches them to a mobility library with a confidence for each assignment.",
-            "Runs come from a run sheet (--runs) or as trace files with their conditions as options.",
-            "Identification by mobility is presumptive; confirm where results carry weight."},
+        description = "Finds the peaks of each run, turns their migration times into effective mobilities with the run's markers, and matches them to a mobility library with a confidence for each assignment. Runs come from a run sheet (--runs) or as trace files with their conditions as options. Identification by mobility is presumptive; confirm where results carry weight.",
         footer = {"", "Exit codes: 0 all runs processed; 1 some runs failed or got no mobility scale (the rest "
                 + "were written); 2 bad command line; 3 unusable library, run sheet or setting; "
                 + "4 an output could not be written; 5 internal error."})

@@ -20,10 +20,7 @@ import picocli.CommandLine.Model.CommandSpec;
         mixinStandardHelpOptions = true,
         versionProvider = VersionProvider.class,
         sortOptions = false,
-        description = {
-            "Processes new standards runs like 'library build' and pools them into an existing library:",
-            "analytes in both get the mean and SD of all measurements together; new analytes are added.",
-            "The library is rewritten in place (atomically); its previous version is kept as FILE.prev."},
+        description = "Processes new standards runs like 'library build' and pools them into an existing library: analytes in both get the mean and SD of all measurements together; new analytes are added. The library is rewritten in place (atomically); its previous version is kept as FILE.prev.",
         footer = {"", "Exit codes: 0 updated without warnings; 1 updated, with warnings; 2 bad command line; "
                 + "3 unusable input; 4 library not written."})
 public final class LibraryAddCommand implements Callable<Integer> {

@@ -19,10 +19,7 @@ import picocli.CommandLine.Model.CommandSpec;
         mixinStandardHelpOptions = true,
         versionProvider = VersionProvider.class,
         sortOptions = false,
-        description = {
-            "Processes replicate runs of standard mixes, groups each analyte's peaks across the runs, names",
-            "them from the standards sheet, and writes a library with mean, SD, n, window, conditions and",
-            "provenance (runs and their SHA-256). Outliers are tested (Grubbs) and reported."},
+        description = "Processes replicate runs of standard mixes, groups each analyte's peaks across the runs, names them from the standards sheet, and writes a library with mean, SD, n, window, conditions and provenance (runs and their SHA-256). Outliers are tested (Grubbs) and reported.",
         footer = {"", "Exit codes: 0 written without warnings; 1 written, with warnings or failed runs; 2 bad command "
                 + "line; 3 unusable input; 4 output not written (exists: add --overwrite, the old one is kept as .prev)."})
 public final class LibraryBuildCommand implements Callable<Integer> {

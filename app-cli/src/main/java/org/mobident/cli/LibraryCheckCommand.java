@@ -18,10 +18,7 @@ import picocli.CommandLine.Model.CommandSpec;
 @Command(name = "check",
         mixinStandardHelpOptions = true,
         versionProvider = VersionProvider.class,
-        description = {
-            "Reads a library (any format error is reported with line and column), prints it readably, and",
-            "warns about entries with too few measurements or no spread, high RSD, and analytes whose match",
-            "windows overlap (they cannot be told apart by mobility alone)."},
+        description = "Reads a library (any format error is reported with line and column), prints it readably, and warns about entries with too few measurements or no spread, high RSD, and analytes whose match windows overlap (they cannot be told apart by mobility alone).",
         footer = {"", "Exit codes: 0 no findings; 1 findings printed; 3 the file cannot be read as a library."})
 public final class LibraryCheckCommand implements Callable<Integer> {
 

@@ -25,10 +25,7 @@ import picocli.CommandLine.Model.CommandSpec;
         mixinStandardHelpOptions = true,
         versionProvider = VersionProvider.class,
         sortOptions = false,
-        description = {
-            "Identifies the runs and draws the chosen ones (default: all, overlaid) to a PNG or SVG file,",
-            "on the effective-mobility axis (runs line up whatever their EOF) or on the time axis.",
-            "Needs no display."},
+        description = "Identifies the runs and draws the chosen ones (default: all, overlaid) to a PNG or SVG file, on the effective-mobility axis (runs line up whatever their EOF) or on the time axis. Needs no display.",
         footer = {"", "Exit codes as for 'identify'."})
 public final class PlotCommand implements Callable<Integer> {
 

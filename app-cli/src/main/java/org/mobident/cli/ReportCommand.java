@@ -14,10 +14,7 @@ import picocli.CommandLine.Model.CommandSpec;
         mixinStandardHelpOptions = true,
         versionProvider = VersionProvider.class,
         sortOptions = false,
-        description = {
-            "Identifies the runs like 'identify' and writes one self-contained HTML file (inline plots,",
-            "no scripts, no network) with a batch summary and, per run, its plot on the mobility axis",
-            "and its peak table. The page carries the caution that identification by mobility is presumptive."},
+        description = "Identifies the runs like 'identify' and writes one self-contained HTML file (inline plots, no scripts, no network) with a batch summary and, per run, its plot on the mobility axis and its peak table. The page carries the caution that identification by mobility is presumptive.",
         footer = {"", "Exit codes as for 'identify'."})
 public final class ReportCommand implements Callable<Integer> {
 
