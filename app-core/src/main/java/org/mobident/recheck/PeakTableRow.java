@@ -1,0 +1,39 @@
+package org.mobident.recheck;
+
+/**
+ * The part of one row of Mobident's peak table that a recheck needs (see
+ * {@link org.mobident.report.PeakTableCsv} for the whole table).
+ *
+ * @param line                  1-based line of the row in its file (0 when built in code)
+ * @param run                   run name
+ * @param peak                  peak number within the run (0 for a run's single failed/no-peaks row)
+ * @param role                  role label as written ("analyte", "neutral marker", "mobility marker"; empty when none)
+ * @param mobility              effective mobility at the run temperature, 1e-9 m²/(V s), NaN when empty
+ * @param mobilitySd            its standard uncertainty, NaN when empty
+ * @param mobilityAtLibraryTemp the mobility converted to library A's temperature, NaN when empty
+ * @param assigned              assigned analyte, or null
+ * @param confidence            confidence of the assignment, NaN when empty
+ * @param status                identified, ambiguous, unassigned, marker, failed or no_peaks
+ */
+public record PeakTableRow(long line, String run, int peak, String role, double mobility, double mobilitySd,
+                           double mobilityAtLibraryTemp, String assigned, double confidence, String status) {
+
+    /** Role label of an analyte peak. */
+    public static final String ROLE_ANALYTE = "analyte";
+    /** Status of an identified analyte. */
+    public static final String STATUS_IDENTIFIED = "identified";
+    /** Status of an ambiguous analyte. */
+    public static final String STATUS_AMBIGUOUS = "ambiguous";
+
+    /** True for an analyte peak with an assignment (identified or ambiguous) and a known mobility. */
+    public boolean isAssignment() {
+        return ROLE_ANALYTE.equals(role) && assigned != null
+                && (STATUS_IDENTIFIED.equals(status) || STATUS_AMBIGUOUS.equals(status))
+                && Double.isFinite(comparedMobility());
+    }
+
+    /** The mobility that was compared with library A: at the library temperature when known, else as measured. */
+    public double comparedMobility() {
+        return Double.isFinite(mobilityAtLibraryTemp) ? mobilityAtLibraryTemp : mobility;
+    }
+}

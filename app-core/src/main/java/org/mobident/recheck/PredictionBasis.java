@@ -1,0 +1,28 @@
+package org.mobident.recheck;
+
+import java.util.Locale;
+
+/** Where the model data of a predicted mobility came from, in decreasing order of trust. */
+public enum PredictionBasis {
+    /** The library entry's own pKa values and limiting mobilities. */
+    ENTRY_MODEL,
+    /** Matched by name to the shipped reference library (handbook pKa and limiting mobilities). */
+    REFERENCE_MODEL,
+    /** Only the entry's charge number: treated as a strong ion, its measured mobility as the limiting one. */
+    CHARGE_ONLY,
+    /**
+     * No model data: only the viscosity (temperature) and a univalent ionic-strength transfer,
+     * with a larger uncertainty; a pH change is not accounted for.
+     */
+    NO_MODEL;
+
+    /** snake_case label for reports. */
+    public String label() {
+        return name().toLowerCase(Locale.ROOT);
+    }
+
+    /** True when the pH dependence was modelled (pKa values, or a strong ion known to have none). */
+    public boolean modelled() {
+        return this != NO_MODEL;
+    }
+}
