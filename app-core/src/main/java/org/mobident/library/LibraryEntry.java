@@ -9,7 +9,7 @@ import java.util.List;
  * @param mobility           effective mobility in 1e-9 m²/(V·s), signed
  * @param mobilitySd         standard deviation of the mobility between runs (NaN if unknown)
  * @param n                  number of measurements behind the mean (0 if unknown)
- * @param charge             charge number of the dominant form (signed; 0 when unknown or neutral)
+ * @param charge             charge number of the most highly charged form (signed; 0 when unknown)
  * @param tolerance          per-entry match window half-width in mobility units (NaN: use the rule)
  * @param pKa                acidity constants (may be empty)
  * @param limitingMobilities limiting mobilities of the ionic forms, 1e-9 m²/(V·s), signed (may be empty)
