@@ -75,6 +75,11 @@ final class ViewerFixtures {
 
     /** A ready run whose neutral marker passes at {@code eofTimeS}; {@code withScale} false drops its scale. */
     static ViewerRun run(String name, double eofTimeS, boolean withScale) {
+        return run(name, eofTimeS, withScale, 1.0);
+    }
+
+    /** As {@link #run(String, double, boolean)} with every peak height multiplied by {@code heightScale}. */
+    static ViewerRun run(String name, double eofTimeS, boolean withScale, double heightScale) {
         InverseTimeScale scale = scaleFor(eofTimeS);
         int n = (int) Math.round(END_S / DT_S) + 1;
         double[] t = new double[n];
@@ -88,7 +93,7 @@ final class ViewerFixtures {
             double v = BASELINE;
             for (int k = 0; k < apex.length; k++) {
                 double z = (t[i] - apex[k]) / SIGMA_S;
-                v += HEIGHTS[k] * Math.exp(-0.5 * z * z);
+                v += heightScale * HEIGHTS[k] * Math.exp(-0.5 * z * z);
             }
             s[i] = v;
         }
@@ -102,7 +107,7 @@ final class ViewerFixtures {
         PeakRole[] roles = {PeakRole.ANALYTE, PeakRole.NEUTRAL_MARKER, PeakRole.ANALYTE, PeakRole.ANALYTE};
         List<PeakResult> peaks = new ArrayList<>();
         for (int k = 0; k < apex.length; k++) {
-            peaks.add(new PeakResult(peak(apex[k], HEIGHTS[k]), roles[k], MOBILITIES[k], 0.05, MOBILITIES[k],
+            peaks.add(new PeakResult(peak(apex[k], heightScale * HEIGHTS[k]), roles[k], MOBILITIES[k], 0.05, MOBILITIES[k],
                     withScale ? matches[k] : PeakMatch.none()));
         }
         RunSpec spec = spec(name);
@@ -132,9 +137,12 @@ final class ViewerFixtures {
                 LibraryEntry.of("nitrate", -30.05, 0.3)), "test-library.csv", List.of());
     }
 
-    /** Two runs of the same sample with different EOF (marker at 200 s and 250 s) and one without a scale. */
+    /**
+     * Two runs of the same sample with different EOF (marker at 200 s and 250 s; the second at half
+     * the height) and one without a scale.
+     */
     static ViewerData data() {
         return new ViewerData(library(), ToleranceBand.defaultRule(),
-                List.of(run("early", 200, true), run("late", 250, true), run("unscaled", 220, false)));
+                List.of(run("early", 200, true), run("late", 250, true, 0.5), run("unscaled", 220, false)));
     }
 }

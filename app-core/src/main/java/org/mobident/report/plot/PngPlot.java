@@ -20,19 +20,34 @@ public final class PngPlot {
 
     /** The plot as an RGB image of {@code widthPx} × {@code heightPx}. */
     public static BufferedImage render(PlotModel model, int widthPx, int heightPx) {
-        PlotLayout layout = PlotLayout.of(model, widthPx, heightPx);
         BufferedImage image = new BufferedImage(widthPx, heightPx, BufferedImage.TYPE_INT_RGB);
         Graphics2D g = image.createGraphics();
         try {
-            g.setRenderingHint(RenderingHints.KEY_ANTIALIASING, RenderingHints.VALUE_ANTIALIAS_ON);
-            g.setRenderingHint(RenderingHints.KEY_TEXT_ANTIALIASING, RenderingHints.VALUE_TEXT_ANTIALIAS_ON);
-            g.setRenderingHint(RenderingHints.KEY_STROKE_CONTROL, RenderingHints.VALUE_STROKE_PURE);
-            g.setRenderingHint(RenderingHints.KEY_RENDERING, RenderingHints.VALUE_RENDER_QUALITY);
-            PlotPainter.paint(layout, new Java2dCanvas(g));
+            paint(g, model, widthPx, heightPx);
         } finally {
             g.dispose();
         }
         return image;
+    }
+
+    /**
+     * Paints the plot on a caller's graphics context (a Swing component, an image, a printer
+     * page) with the one drawing routine the PNG and SVG output use, in the context's current
+     * coordinate system from (0, 0) to ({@code widthPx}, {@code heightPx}). Rendering hints are
+     * set on {@code g} for smooth curves and text; its colour, stroke, font and composite are
+     * left changed, so pass a copy ({@code g.create()}) when that matters.
+     *
+     * @return the layout that was drawn, to map data values to pixels and back
+     * @throws IllegalArgumentException when the size is too small for the axes (see {@link PlotLayout#of})
+     */
+    public static PlotLayout paint(Graphics2D g, PlotModel model, int widthPx, int heightPx) {
+        PlotLayout layout = PlotLayout.of(model, widthPx, heightPx);
+        g.setRenderingHint(RenderingHints.KEY_ANTIALIASING, RenderingHints.VALUE_ANTIALIAS_ON);
+        g.setRenderingHint(RenderingHints.KEY_TEXT_ANTIALIASING, RenderingHints.VALUE_TEXT_ANTIALIAS_ON);
+        g.setRenderingHint(RenderingHints.KEY_STROKE_CONTROL, RenderingHints.VALUE_STROKE_PURE);
+        g.setRenderingHint(RenderingHints.KEY_RENDERING, RenderingHints.VALUE_RENDER_QUALITY);
+        PlotPainter.paint(layout, new Java2dCanvas(g));
+        return layout;
     }
 
     /**

@@ -1,0 +1,65 @@
+package org.mobident.cli;
+
+import org.mobident.InputException;
+import org.mobident.recheck.BufferSpec;
+import picocli.CommandLine.Option;
+
+/** The new buffer B, and optionally the old buffer A when the library does not state it. */
+public final class BufferOptions {
+
+    @Option(names = "--ph", paramLabel = "PH", description = "pH of the new buffer.")
+    Double ph;
+
+    @Option(names = "--ionic-strength-mm", paramLabel = "MM", description = "Ionic strength of the new buffer, mmol/L.")
+    Double ionicStrengthMm;
+
+    @Option(names = "--temperature-c", paramLabel = "C", description = "Temperature of the new method, °C (default 25).")
+    double temperatureC = 25.0;
+
+    @Option(names = "--buffer-label", paramLabel = "TEXT", description = "Label of the new buffer (default 'new buffer').")
+    String label = "new buffer";
+
+    @Option(names = "--old-ph", paramLabel = "PH", description = "pH of the library's buffer, where its entries do not state it.")
+    Double oldPh;
+
+    @Option(names = "--old-ionic-strength-mm", paramLabel = "MM",
+            description = "Ionic strength of the library's buffer (mmol/L), where its entries do not state it.")
+    Double oldIonicStrengthMm;
+
+    @Option(names = "--old-temperature-c", paramLabel = "C",
+            description = "Temperature of the library's values, where its entries do not state it (default 25).")
+    double oldTemperatureC = 25.0;
+
+    /** True when the new buffer's pH and ionic strength were both given. */
+    boolean newGiven() {
+        return ph != null && ionicStrengthMm != null;
+    }
+
+    BufferSpec newBuffer() throws InputException {
+        if (!newGiven()) {
+            throw new InputException("command line", 0, ph == null ? "--ph" : "--ionic-strength-mm",
+                    "the new buffer needs both --ph and --ionic-strength-mm");
+        }
+        return spec(label, ph, ionicStrengthMm, temperatureC, "--ph");
+    }
+
+    /** The old buffer when given on the command line, else null (each entry's own conditions are used). */
+    BufferSpec oldBuffer() throws InputException {
+        if (oldPh == null && oldIonicStrengthMm == null) {
+            return null;
+        }
+        if (oldPh == null || oldIonicStrengthMm == null) {
+            throw new InputException("command line", 0, oldPh == null ? "--old-ph" : "--old-ionic-strength-mm",
+                    "the library's buffer needs both --old-ph and --old-ionic-strength-mm");
+        }
+        return spec("library buffer", oldPh, oldIonicStrengthMm, oldTemperatureC, "--old-ph");
+    }
+
+    private static BufferSpec spec(String label, double ph, double mm, double t, String field) throws InputException {
+        try {
+            return BufferSpec.of(label, ph, mm, t);
+        } catch (IllegalArgumentException e) {
+            throw new InputException("command line", 0, field, e.getMessage());
+        }
+    }
+}

@@ -1,0 +1,145 @@
+package org.mobident.cli;
+
+import java.io.PrintWriter;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import java.util.concurrent.Callable;
+import org.mobident.InputException;
+import org.mobident.library.Library;
+import org.mobident.library.LibraryCsv;
+import org.mobident.recheck.PhScan;
+import org.mobident.recheck.PredictedMobility;
+import org.mobident.recheck.Predictor;
+import org.mobident.recheck.SeparationRule;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Spec;
+import picocli.CommandLine.Model.CommandSpec;
+
+/** {@code mobident predict}: effective mobilities of a library's analytes in another buffer. */
+@Command(name = "predict",
+        mixinStandardHelpOptions = true,
+        versionProvider = VersionProvider.class,
+        sortOptions = false,
+        description = "Predicts each analyte's effective mobility in a new buffer (pH, ionic strength, temperature) "
+                + "from its measured value and a physico-chemical model (ionic forms, Davies activities, an "
+                + "Onsager-type ionic-strength correction, water viscosity), with an uncertainty. With --scan it "
+                + "tabulates mobility against pH and lists the pH ranges where two analytes would co-migrate. "
+                + "Predictions guide method changes; they do not replace measuring standards in the new buffer.",
+        footer = {"", "Exit codes: 0 done; 2 bad command line; 3 unusable library or buffer; 4 output not written."})
+public final class PredictCommand implements Callable<Integer> {
+
+    @Spec
+    CommandSpec spec;
+
+    @Option(names = {"-l", "--library"}, required = true, paramLabel = "FILE", description = "The measured library.")
+    Path libraryFile;
+
+    @Option(names = "--reference", paramLabel = "FILE",
+            description = "Reference library with pKa values and limiting mobilities for analytes whose entries lack "
+                    + "them (e.g. reference-libraries/ions-25C.csv).")
+    Path referenceFile;
+
+    @Mixin
+    BufferOptions buffers;
+
+    @Option(names = "--scan", paramLabel = "FROM:TO:STEP",
+            description = "Tabulate mobility against pH over this range instead (at the new ionic strength and temperature).")
+    String scan;
+
+    @Option(names = "--analytes", paramLabel = "NAMES", split = ",", description = "Analytes to include (default all).")
+    List<String> analytes = new ArrayList<>();
+
+    @Option(names = {"-o", "--out"}, paramLabel = "FILE",
+            description = "Write the predicted library (or, with --scan, the pH table) as CSV.")
+    Path out;
+
+    @Option(names = "--overwrite", description = "Replace the output file if it exists.")
+    boolean overwrite;
+
+    @Override
+    public Integer call() throws Exception {
+        PrintWriter o = spec.commandLine().getOut();
+        Outputs.checkFree(overwrite, out);
+        Library library = LibraryCsv.read(libraryFile);
+        Predictor predictor = referenceFile == null ? Predictor.withoutReference()
+                : Predictor.withReference(LibraryCsv.read(referenceFile));
+        if (scan != null) {
+            return scan(library, predictor, o);
+        }
+        var bufferB = buffers.newBuffer();
+        List<PredictedMobility> predictions = predictor.predictAll(library, buffers.oldBuffer(), bufferB);
+        o.println("Predicted effective mobilities in " + bufferB.describe() + " (1e-9 m^2/(V s)).");
+        o.println(String.format(Locale.ROOT, "%-16s %9s %9s %7s  %-16s %s", "analyte", "measured", "predicted", "+/-",
+                "model data", "remark"));
+        for (PredictedMobility p : predictions) {
+            if (!analytes.isEmpty() && !analytes.contains(p.name())) {
+                continue;
+            }
+            o.println(String.format(Locale.ROOT, "%-16s %9.2f %9.2f %7.2f  %-16s %s", p.name(), p.measuredA(),
+                    p.predicted(), p.uncertainty(), p.basis().name().toLowerCase(Locale.ROOT).replace('_', ' '),
+                    p.note() == null ? "" : p.note()));
+        }
+        o.println("Predictions are estimates: measure standards in the new buffer before relying on them.");
+        if (out != null) {
+            Library predicted = Predictor.asLibrary(predictions, library, bufferB);
+            LibraryBuildCommand.writeLibrary(out, overwrite, predicted);
+            o.println("predicted library written to " + out);
+        }
+        return ExitCodes.OK;
+    }
+
+    private int scan(Library library, Predictor predictor, PrintWriter o) throws InputException, OutputException {
+        String[] p = scan.split(":");
+        double from;
+        double to;
+        double step;
+        try {
+            from = Double.parseDouble(p[0]);
+            to = Double.parseDouble(p[1]);
+            step = p.length > 2 ? Double.parseDouble(p[2]) : 0.1;
+        } catch (RuntimeException e) {
+            throw new InputException("command line", 0, "--scan", "expected FROM:TO:STEP, e.g. 3:10:0.1, got '" + scan + "'");
+        }
+        if (buffers.ionicStrengthMm == null) {
+            throw new InputException("command line", 0, "--ionic-strength-mm", "the scan needs the ionic strength");
+        }
+        PhScan.Result r;
+        try {
+            r = PhScan.scan(predictor, library, buffers.oldBuffer(), analytes, from, to, step,
+                    buffers.ionicStrengthMm / 1000.0, buffers.temperatureC, SeparationRule.DEFAULT);
+        } catch (IllegalArgumentException e) {
+            throw new InputException("command line", 0, "--scan", e.getMessage());
+        }
+        StringBuilder table = new StringBuilder("ph");
+        for (PhScan.Curve c : r.curves()) {
+            table.append(',').append(org.mobident.report.CsvCells.inert(c.name()));
+        }
+        table.append('\n');
+        for (int i = 0; i < r.pH().size(); i++) {
+            table.append(String.format(Locale.ROOT, "%.3f", r.pH().get(i)));
+            for (PhScan.Curve c : r.curves()) {
+                table.append(String.format(Locale.ROOT, ",%.3f", c.mobility().get(i)));
+            }
+            table.append('\n');
+        }
+        if (out != null) {
+            String text = table.toString();
+            Outputs.write(out, overwrite, w -> w.write(text));
+            o.println("mobility-vs-pH table written to " + out);
+        } else {
+            o.print(table);
+        }
+        if (r.comigrations().isEmpty()) {
+            o.println("No pair co-migrates anywhere in pH " + from + "–" + to + ".");
+        }
+        for (PhScan.Comigration c : r.comigrations()) {
+            o.println(String.format(Locale.ROOT, "co-migration: %s and %s between pH %.2f and %.2f (closest %.2f units)",
+                    c.first(), c.second(), c.interval().fromPh(), c.interval().toPh(), c.closestUnits()));
+        }
+        return ExitCodes.OK;
+    }
+}

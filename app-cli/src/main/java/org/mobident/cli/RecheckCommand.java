@@ -1,0 +1,96 @@
+package org.mobident.cli;
+
+import java.nio.file.Path;
+import java.util.List;
+import java.util.concurrent.Callable;
+import org.mobident.library.Library;
+import org.mobident.library.LibraryCsv;
+import org.mobident.recheck.PeakTableReader;
+import org.mobident.recheck.PeakTableRow;
+import org.mobident.recheck.Predictor;
+import org.mobident.recheck.RecheckReportCsv;
+import org.mobident.recheck.RecheckResult;
+import org.mobident.recheck.RecheckSettings;
+import org.mobident.recheck.RecheckSummaryText;
+import org.mobident.recheck.Rechecker;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Spec;
+import picocli.CommandLine.Model.CommandSpec;
+
+/** {@code mobident recheck}: which earlier assignments survive a buffer change. */
+@Command(name = "recheck",
+        mixinStandardHelpOptions = true,
+        versionProvider = VersionProvider.class,
+        sortOptions = false,
+        description = "Takes an earlier peak table (from 'identify --csv') with the library it was matched against, "
+                + "and either a library measured in the new buffer (--new-library) or only the new buffer's "
+                + "conditions (--ph, --ionic-strength-mm, --temperature-c; mobilities are then predicted). Says for "
+                + "each earlier assignment whether it still holds, moved but is still unique, is now ambiguous (and "
+                + "with what) or is lost, and which library pairs can no longer be told apart. With a measured new "
+                + "library it also reports how far the model's prediction was off.",
+        footer = {"", "Exit codes: 0 nothing needs attention; 1 something needs attention (see the summary); "
+                + "2 bad command line; 3 unusable input; 4 output not written."})
+public final class RecheckCommand implements Callable<Integer> {
+
+    @Spec
+    CommandSpec spec;
+
+    @Option(names = {"-t", "--table"}, required = true, paramLabel = "FILE", description = "Earlier peak table (CSV).")
+    Path tableFile;
+
+    @Option(names = {"-l", "--library"}, required = true, paramLabel = "FILE",
+            description = "The library the table was matched against (old buffer).")
+    Path libraryFile;
+
+    @Option(names = "--new-library", paramLabel = "FILE", description = "A library measured in the new buffer.")
+    Path newLibraryFile;
+
+    @Option(names = "--reference", paramLabel = "FILE",
+            description = "Reference library with pKa values and limiting mobilities (e.g. reference-libraries/ions-25C.csv).")
+    Path referenceFile;
+
+    @Mixin
+    BufferOptions buffers;
+
+    @Option(names = "--csv", paramLabel = "FILE", description = "Write the verdict per assignment as CSV.")
+    Path csvOut;
+
+    @Option(names = "--pairs-csv", paramLabel = "FILE", description = "Write the pair checks as CSV.")
+    Path pairsOut;
+
+    @Option(names = "--overwrite", description = "Replace output files that already exist.")
+    boolean overwrite;
+
+    @Override
+    public Integer call() throws Exception {
+        if (newLibraryFile == null && !buffers.newGiven()) {
+            spec.commandLine().getErr().println("mobident recheck: give --new-library, or the new buffer's --ph and "
+                    + "--ionic-strength-mm.");
+            return ExitCodes.USAGE;
+        }
+        Outputs.checkFree(overwrite, csvOut, pairsOut);
+        List<PeakTableRow> rows = PeakTableReader.read(tableFile);
+        Library libraryA = LibraryCsv.read(libraryFile);
+        Predictor predictor = referenceFile == null ? Predictor.withoutReference()
+                : Predictor.withReference(LibraryCsv.read(referenceFile));
+        RecheckResult result;
+        if (newLibraryFile != null) {
+            Library libraryB = LibraryCsv.read(newLibraryFile);
+            result = Rechecker.withMeasuredLibrary(rows, tableFile.toString(), libraryA, buffers.oldBuffer(), libraryB,
+                    buffers.newGiven() ? buffers.newBuffer() : null, predictor, RecheckSettings.DEFAULT);
+        } else {
+            result = Rechecker.withPredictedLibrary(rows, tableFile.toString(), libraryA, buffers.oldBuffer(),
+                    buffers.newBuffer(), predictor, RecheckSettings.DEFAULT);
+        }
+        RecheckSummaryText.write(result, spec.commandLine().getOut());
+        if (csvOut != null) {
+            Outputs.write(csvOut, overwrite, w -> RecheckReportCsv.writeAssignments(result, w));
+        }
+        if (pairsOut != null) {
+            Outputs.write(pairsOut, overwrite, w -> RecheckReportCsv.writePairs(result, w));
+        }
+        return result.needsAttention() ? ExitCodes.SOME_RUNS_FAILED : ExitCodes.OK;
+    }
+}

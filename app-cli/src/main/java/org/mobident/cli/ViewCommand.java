@@ -1,0 +1,144 @@
+package org.mobident.cli;
+
+import java.io.PrintWriter;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.concurrent.Callable;
+import java.util.concurrent.CountDownLatch;
+import org.mobident.InputException;
+import org.mobident.library.Library;
+import org.mobident.library.LibraryCsv;
+import org.mobident.matching.MatchSettings;
+import org.mobident.pipeline.IdentifySettings;
+import org.mobident.pipeline.RunResult;
+import org.mobident.report.plot.Axis;
+import org.mobident.trace.RunConditions;
+import org.mobident.trace.RunSpec;
+import org.mobident.trace.io.RunSheet;
+import org.mobident.trace.io.RunSheetReader;
+import org.mobident.trace.io.TraceFiles;
+import org.mobident.viewer.Viewer;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+import picocli.CommandLine.Spec;
+import picocli.CommandLine.Model.CommandSpec;
+
+/** {@code mobident view}: the runs in a window, on the time or the mobility axis. */
+@Command(name = "view",
+        mixinStandardHelpOptions = true,
+        versionProvider = VersionProvider.class,
+        sortOptions = false,
+        description = "Opens a window with the electropherograms of the runs, their peaks and assignments, and the library windows. Switch between the time and the effective-mobility axis; on the mobility axis ticked runs line up even when their electro-osmotic flow differed. Click a peak for its measures and candidate analytes; save the plot as PNG or SVG. Runs and options are those of 'identify'. Needs a display.",
+        footer = {"", "Exit codes: 0 the window was closed; 2 bad command line, or no display to open a window on; "
+                + "3 unusable library, run sheet or setting; 5 internal error."})
+public final class ViewCommand implements Callable<Integer> {
+
+    /** Exit code when no window can be opened (headless Java, no display). */
+    public static final int NO_DISPLAY = ExitCodes.USAGE;
+
+    @Spec
+    CommandSpec spec;
+
+    @Option(names = {"-r", "--runs"}, paramLabel = "SHEET",
+            description = "Run sheet (CSV, one row per run; trace paths relative to the sheet).")
+    Path runSheet;
+
+    @Parameters(paramLabel = "TRACE", arity = "0..*", description = "Trace files to show without a run sheet.")
+    List<Path> traces = new ArrayList<>();
+
+    @Option(names = {"-l", "--library"}, required = true, paramLabel = "FILE", description = "Mobility library (CSV).")
+    Path libraryFile;
+
+    @Option(names = "--axis", paramLabel = "AXIS",
+            description = "Axis shown first: ${COMPLETION-CANDIDATES} (default ${DEFAULT-VALUE}).")
+    Axis axis = Axis.MOBILITY;
+
+    @Option(names = "--show", paramLabel = "RUN", split = ",",
+            description = "Runs ticked when the window opens, by name (default: the first run).")
+    List<String> shown = new ArrayList<>();
+
+    @Mixin
+    ConditionOptions conditions;
+
+    @Mixin
+    MatchOptions matching;
+
+    @Mixin
+    CommonOptions common;
+
+    @Override
+    public Integer call() throws Exception {
+        PrintWriter err = spec.commandLine().getErr();
+        if (!Viewer.canShowWindow()) {
+            err.println("mobident view: no display to open a window on (Java runs headless here). "
+                    + "Run it in a desktop session, or under a virtual display such as Xvfb; "
+                    + "'mobident identify' gives the same results as tables.");
+            err.flush();
+            return NO_DISPLAY;
+        }
+        if ((runSheet == null) == traces.isEmpty()) {
+            err.println("mobident view: give either a run sheet (--runs SHEET) or trace files, not both or neither.");
+            return ExitCodes.USAGE;
+        }
+        Library library = LibraryCsv.read(libraryFile);
+        RunConditions defaults = conditions.toConditions();
+        List<RunSpec> runs = new ArrayList<>();
+        List<RunResult> rejected = new ArrayList<>();
+        if (runSheet != null) {
+            RunSheet sheet = RunSheetReader.read(runSheet, defaults);
+            runs.addAll(sheet.runs());
+            for (InputException problem : sheet.rowProblems()) {
+                rejected.add(RunResult.failure(new RunSpec("sheet line " + problem.line(), runSheet,
+                        RunConditions.EMPTY, runSheet.toString(), problem.line()), problem));
+            }
+        } else {
+            for (Path t : traces) {
+                try {
+                    runs.add(RunSheetReader.single(t, defaults));
+                } catch (InputException e) {
+                    rejected.add(RunResult.failure(new RunSpec(RunSpec.runNameOf(t), t, defaults,
+                            "command line", 0), e));
+                }
+            }
+        }
+        IdentifySettings settings = IdentifySettings.defaults()
+                .withMatchSettings(matching.toSettings(MatchSettings.DEFAULT))
+                .withPeakSettings(common.peakSettings())
+                .withReadOptions(common.readOptions());
+        if (common.threads != null) {
+            settings = settings.withThreads(common.threads);
+        }
+        List<Integer> ticked = tickedAtStart(runs, rejected);
+        String title = (runSheet != null ? runSheet.getFileName().toString()
+                : traces.size() == 1 ? traces.get(0).getFileName().toString() : traces.size() + " traces")
+                + " · " + libraryFile.getFileName();
+        CountDownLatch closed = Viewer.open(new Viewer.Setup(title, library, runs, rejected, settings,
+                TraceFiles::read, axis, ticked));
+        try {
+            closed.await();
+        } catch (InterruptedException e) {
+            Thread.currentThread().interrupt();
+        }
+        return ExitCodes.OK;
+    }
+
+    /** Indices of the runs named by --show, in the order the window lists runs. */
+    private List<Integer> tickedAtStart(List<RunSpec> runs, List<RunResult> rejected) throws InputException {
+        List<String> names = new ArrayList<>();
+        runs.forEach(r -> names.add(r.name()));
+        rejected.forEach(r -> names.add(r.spec().name()));
+        List<Integer> out = new ArrayList<>();
+        for (String s : shown) {
+            int i = names.indexOf(s.trim());
+            if (i < 0) {
+                throw new InputException("command line", 0, "--show",
+                        "no run is named '" + s.trim() + "'; the runs are: " + String.join(", ", names));
+            }
+            out.add(i);
+        }
+        return out;
+    }
+}

@@ -1,0 +1,172 @@
+package org.mobident.viewer;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import org.mobident.matching.Candidate;
+import org.mobident.matching.PeakMatch;
+import org.mobident.pipeline.PeakResult;
+import org.mobident.pipeline.PeakRole;
+import org.mobident.report.plot.Markup;
+import org.mobident.report.plot.PeakStatus;
+import org.mobident.signal.Peak;
+
+/** The words and numbers shown for a selected peak: its measures and its candidate analytes. */
+final class PeakDetails {
+
+    /** Shown where a number is unknown. */
+    static final String UNKNOWN = "–";
+
+    /** Mobility unit as written next to values. */
+    static final String MOBILITY_UNIT = "10⁻⁹ m²/(V s)";
+
+    /** Mobilities closer than this are shown once (run and library temperature agree), mobility units. */
+    private static final double SAME_MOBILITY = 1e-9;
+
+    private PeakDetails() {
+    }
+
+    /** Label and value rows naming the peak and its assignment (shown above the candidates). */
+    static List<String[]> summary(String runName, PeakResult pr) {
+        List<String[]> rows = new ArrayList<>();
+        Peak p = pr.peak();
+        PeakStatus status = PeakStatus.of(pr);
+        rows.add(row("Run", runName));
+        rows.add(row("Role", pr.role().label()));
+        rows.add(row("Status", status.label()));
+        if (pr.role() == PeakRole.ANALYTE) {
+            PeakMatch m = pr.match();
+            if (m != null && m.assigned() != null && status != PeakStatus.UNASSIGNED) {
+                rows.add(row("Assigned", m.assigned() + " (" + percent(m.confidence()) + ")"));
+            } else if (m != null) {
+                rows.add(row("Assigned", "none; not in the library: " + percent(m.confidence())));
+            }
+        }
+        rows.add(row("Mobility", withSd(pr.mobility(), 2, pr.mobilitySd(), 3) + " " + MOBILITY_UNIT));
+        if (Double.isFinite(pr.mobilityAtLibraryTemp())
+                && !(Math.abs(pr.mobilityAtLibraryTemp() - pr.mobility()) < SAME_MOBILITY)) {
+            rows.add(row("At library temperature", num(pr.mobilityAtLibraryTemp(), 2)));
+        }
+        if (p != null) {
+            rows.add(row("Apex time", withSd(p.apexTimeS(), 2, p.apexTimeSdS(), 3) + " s"));
+        }
+        return rows;
+    }
+
+    /** Label and value rows of the peak's shape and size (shown below the candidates). */
+    static List<String[]> shape(PeakResult pr) {
+        List<String[]> rows = new ArrayList<>();
+        Peak p = pr.peak();
+        if (p == null) {
+            return rows;
+        }
+        rows.add(row("Start – end", num(p.startTimeS(), 2) + " – " + num(p.endTimeS(), 2) + " s"));
+        rows.add(row("Direction", p.dip() ? "dip (below the baseline)" : "rise (above the baseline)"));
+        rows.add(row("Height", num(p.height(), 4)));
+        rows.add(row("Area", num(p.area(), 4)));
+        rows.add(row("Area / time", num(p.correctedArea(), 5)));
+        rows.add(row("Width at half height", num(p.widthHalfS(), 3) + " s"));
+        rows.add(row("Plates", num(p.plates(), 0)));
+        rows.add(row("Resolution", num(p.resolution(), 2)));
+        rows.add(row("Signal / noise", num(p.signalToNoise(), 1)));
+        return rows;
+    }
+
+    /** Every label and value row: {@link #summary} then {@link #shape}. */
+    static List<String[]> measures(String runName, PeakResult pr) {
+        List<String[]> rows = new ArrayList<>(summary(runName, pr));
+        rows.addAll(shape(pr));
+        return rows;
+    }
+
+    /** One row per candidate analyte: name, library mobility, residual, z, probability. */
+    static List<String[]> candidates(PeakMatch match) {
+        List<String[]> rows = new ArrayList<>();
+        if (match == null) {
+            return rows;
+        }
+        for (Candidate c : match.candidates()) {
+            rows.add(new String[] {c.name(), num(c.libraryMobility(), 2), signed(c.residual(), 2),
+                signed(c.z(), 2), percent(c.probability())});
+        }
+        return rows;
+    }
+
+    /** The whole description as simple HTML for a text pane: summary, candidates, shape. */
+    static String html(String runName, PeakResult pr) {
+        StringBuilder sb = new StringBuilder("<html><body>");
+        rows(sb, summary(runName, pr));
+        if (pr.role() == PeakRole.ANALYTE) {
+            List<String[]> cand = candidates(pr.match());
+            sb.append("<p><b>Candidates</b></p>");
+            if (cand.isEmpty()) {
+                sb.append("<p>No library analyte has this peak inside its window.</p>");
+            } else {
+                sb.append("<table cellspacing='0' cellpadding='3'><tr>");
+                for (String h : new String[] {"Analyte", "Library μ", "Residual", "z", "Probability"}) {
+                    sb.append("<th align='left'>").append(Markup.escape(h)).append("</th>");
+                }
+                sb.append("</tr>");
+                for (String[] r : cand) {
+                    sb.append("<tr>");
+                    for (int i = 0; i < r.length; i++) {
+                        sb.append(i == 0 ? "<td>" : "<td align='right'>").append(Markup.escape(r[i])).append("</td>");
+                    }
+                    sb.append("</tr>");
+                }
+                sb.append("</table>");
+            }
+        }
+        List<String[]> shape = shape(pr);
+        if (!shape.isEmpty()) {
+            sb.append("<p><b>Peak</b></p>");
+            rows(sb, shape);
+        }
+        sb.append("</body></html>");
+        return sb.toString();
+    }
+
+    private static void rows(StringBuilder sb, List<String[]> rows) {
+        sb.append("<table cellspacing='0' cellpadding='2'>");
+        for (String[] r : rows) {
+            sb.append("<tr><td><font color='#5a636c'>").append(Markup.escape(r[0]))
+                    .append("</font></td><td>").append(Markup.escape(r[1])).append("</td></tr>");
+        }
+        sb.append("</table>");
+    }
+
+    static String num(double v, int digits) {
+        if (!Double.isFinite(v)) {
+            return UNKNOWN;
+        }
+        String s = String.format(Locale.ROOT, "%." + digits + "f", v);
+        return s.matches("-0(\\.0*)?") ? s.substring(1) : s;
+    }
+
+    static String signed(double v, int digits) {
+        String s = num(v, digits);
+        return Double.isFinite(v) && !s.startsWith("-") && !s.matches("0(\\.0*)?") ? "+" + s : s;
+    }
+
+    static String percent(double p) {
+        if (!Double.isFinite(p)) {
+            return UNKNOWN;
+        }
+        double pct = 100 * p;
+        if (pct > 0 && pct < 1) {
+            return "<1 %";
+        }
+        return String.format(Locale.ROOT, "%d %%", Math.round(pct));
+    }
+
+    private static String withSd(double v, int digits, double sd, int sdDigits) {
+        if (!Double.isFinite(v)) {
+            return UNKNOWN;
+        }
+        return Double.isFinite(sd) ? num(v, digits) + " ± " + num(sd, sdDigits) : num(v, digits);
+    }
+
+    private static String[] row(String label, String value) {
+        return new String[] {label, value};
+    }
+}

@@ -1,0 +1,95 @@
+package org.mobident.viewer;
+
+import java.util.List;
+import javax.swing.table.AbstractTableModel;
+import org.mobident.pipeline.PeakResult;
+import org.mobident.pipeline.PeakRole;
+import org.mobident.report.plot.PeakStatus;
+
+/** The peaks of the ticked runs as table rows; refilled from the data, never edited. */
+final class PeakTableModel extends AbstractTableModel {
+    private static final long serialVersionUID = 1L;
+
+    static final String[] COLUMNS = {"Run", "Time (s)", "Mobility", "± SD", "Assigned", "Confidence", "Status"};
+
+    private transient ViewerData data;
+    private transient List<PeakRef> rows = List.of();
+
+    /** Shows the peaks of {@code tickedRuns}. */
+    void show(ViewerData newData, List<Integer> tickedRuns) {
+        this.data = newData;
+        this.rows = newData.peaksOf(tickedRuns);
+        fireTableDataChanged();
+    }
+
+    /** The peak of a model row. */
+    PeakRef refAt(int row) {
+        return rows.get(row);
+    }
+
+    /** The model row of {@code ref}, -1 when it is not listed. */
+    int rowOf(PeakRef ref) {
+        return ref == null ? -1 : rows.indexOf(ref);
+    }
+
+    @Override
+    public int getRowCount() {
+        return rows.size();
+    }
+
+    @Override
+    public int getColumnCount() {
+        return COLUMNS.length;
+    }
+
+    @Override
+    public String getColumnName(int column) {
+        return COLUMNS[column];
+    }
+
+    @Override
+    public Class<?> getColumnClass(int column) {
+        return column == 1 || column == 2 || column == 3 ? Double.class : String.class;
+    }
+
+    @Override
+    public Object getValueAt(int row, int column) {
+        PeakRef ref = rows.get(row);
+        PeakResult pr = data.peak(ref);
+        switch (column) {
+            case 0:
+                return data.runs().get(ref.run()).name();
+            case 1:
+                return pr.peak() == null ? null : pr.peak().apexTimeS();
+            case 2:
+                return finiteOrNull(pr.mobility());
+            case 3:
+                return finiteOrNull(pr.mobilitySd());
+            case 4:
+                return assigned(pr);
+            case 5:
+                return pr.role() == PeakRole.ANALYTE && pr.match() != null && pr.match().assigned() != null
+                        && PeakStatus.of(pr) != PeakStatus.UNASSIGNED
+                        ? PeakDetails.percent(pr.match().confidence()) : "";
+            default:
+                return PeakStatus.of(pr).label();
+        }
+    }
+
+    static String assigned(PeakResult pr) {
+        if (pr.role() == PeakRole.NEUTRAL_MARKER) {
+            return "EOF marker";
+        }
+        if (pr.role() == PeakRole.MOBILITY_MARKER) {
+            return "mobility marker";
+        }
+        if (pr.match() == null || pr.match().assigned() == null || PeakStatus.of(pr) == PeakStatus.UNASSIGNED) {
+            return "?";
+        }
+        return pr.match().assigned();
+    }
+
+    private static Double finiteOrNull(double v) {
+        return Double.isFinite(v) ? v : null;
+    }
+}

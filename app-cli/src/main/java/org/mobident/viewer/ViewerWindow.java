@@ -1,0 +1,473 @@
+package org.mobident.viewer;
+
+import java.awt.BorderLayout;
+import java.awt.Dimension;
+import java.awt.FlowLayout;
+import java.awt.GraphicsEnvironment;
+import java.awt.Rectangle;
+import java.awt.event.MouseEvent;
+import java.awt.event.WindowAdapter;
+import java.awt.event.WindowEvent;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import javax.swing.BorderFactory;
+import javax.swing.ButtonGroup;
+import javax.swing.JButton;
+import javax.swing.JCheckBox;
+import javax.swing.JComponent;
+import javax.swing.JEditorPane;
+import javax.swing.JFrame;
+import javax.swing.JLabel;
+import javax.swing.JPanel;
+import javax.swing.JRadioButton;
+import javax.swing.JScrollPane;
+import javax.swing.JSplitPane;
+import javax.swing.JTable;
+import javax.swing.ListSelectionModel;
+import javax.swing.UIManager;
+import javax.swing.table.AbstractTableModel;
+import org.mobident.pipeline.IdentifySettings;
+import org.mobident.pipeline.Identifier;
+import org.mobident.pipeline.PeakResult;
+import org.mobident.report.plot.Axis;
+import org.mobident.trace.RunSpec;
+
+/**
+ * The window: run list on the left, plot above, peak table and peak details below, a row of
+ * controls on top and a status line at the bottom. It keeps the current {@link ViewerData} and
+ * {@link ViewState}, replaces them on every change and redraws from them; it decides nothing
+ * that {@link ViewState} and {@link PlotScene} do not already compute.
+ */
+final class ViewerWindow implements PlotPanel.Gestures {
+
+    static final String HINT = "Wheel: zoom   Drag: zoom to range   Shift-drag: pan   Click: select a peak";
+
+    /** Share of the height the plot gets when the window opens. */
+    static final double PLOT_SHARE = 0.64;
+
+    private final JFrame frame;
+    private JSplitPane centreSplit;
+    private final PlotPanel plot = new PlotPanel();
+    private final RunListModel runModel = new RunListModel();
+    private final JTable runTable;
+    private final PeakTableModel peakModel = new PeakTableModel();
+    private final JTable peakTable = new JTable(peakModel);
+    private final JEditorPane details = new JEditorPane("text/html", "");
+    private final JLabel status = new JLabel(" ");
+    private final JLabel cursor = new JLabel(" ");
+    private final JRadioButton timeAxis = new JRadioButton("Time");
+    private final JRadioButton mobilityAxis = new JRadioButton("Mobility");
+    private final JCheckBox bandsBox = new JCheckBox("Library windows");
+
+    private ViewerData data;
+    private ViewState state;
+    private PlotScene scene;
+    private RunLoader loader;
+    private boolean loading;
+    /** True while the peak table's selection is being set from the state (not by the user). */
+    private boolean syncing;
+
+    private ViewerWindow(Viewer.Setup setup, Runnable onClosed) {
+        data = new ViewerData(setup.library(), MatchBands.rule(setup.settings().matchSettings()), setup.initialRuns());
+        List<Integer> ticked = new ArrayList<>();
+        for (int i : setup.tickedAtStart()) {
+            if (i >= 0 && i < data.runs().size()) {
+                ticked.add(i);
+            }
+        }
+        if (ticked.isEmpty() && !data.runs().isEmpty()) {
+            ticked.add(0);
+        }
+        state = ViewState.initial(setup.axis(), ticked);
+
+        frame = new JFrame(setup.title().isEmpty() ? "Mobident viewer" : "Mobident viewer – " + setup.title());
+        frame.setDefaultCloseOperation(JFrame.DISPOSE_ON_CLOSE);
+        frame.addWindowListener(new WindowAdapter() {
+            @Override
+            public void windowClosed(WindowEvent e) {
+                if (loader != null) {
+                    loader.cancel(true);
+                }
+                onClosed.run();
+            }
+        });
+
+        runTable = new JTable(runModel) {
+            private static final long serialVersionUID = 1L;
+
+            @Override
+            public String getToolTipText(MouseEvent e) {
+                int row = rowAtPoint(e.getPoint());
+                return row < 0 ? null : data.runs().get(row).statusDetail();
+            }
+        };
+        frame.setContentPane(layoutContent());
+        plot.setGestures(this);
+        refreshAll(true);
+
+        Rectangle screen = GraphicsEnvironment.getLocalGraphicsEnvironment().getMaximumWindowBounds();
+        frame.setSize(Math.min(1360, (int) (screen.width * 0.95)), Math.min(880, (int) (screen.height * 0.95)));
+        frame.setLocationRelativeTo(null);
+    }
+
+    /** Builds and shows the window, then starts processing the runs; call on the Event Dispatch Thread. */
+    static ViewerWindow show(Viewer.Setup setup, Runnable onClosed) {
+        UIManager.put("swing.boldMetal", Boolean.FALSE);
+        ViewerWindow w = new ViewerWindow(setup, onClosed);
+        w.frame.setVisible(true);
+        w.centreSplit.setDividerLocation(PLOT_SHARE);
+        w.startLoading(setup);
+        return w;
+    }
+
+    private void startLoading(Viewer.Setup setup) {
+        List<RunSpec> todo = setup.runs();
+        if (todo.isEmpty()) {
+            return;
+        }
+        IdentifySettings settings = setup.settings();
+        loading = true;
+        loader = new RunLoader(todo, new Identifier(setup.library(), settings), setup.loader(),
+                settings.readOptions(), settings.threads(), this::runFinished, this::loadingFinished);
+        loader.execute();
+        updateStatus();
+    }
+
+    private JComponent layoutContent() {
+        JPanel controls = new JPanel(new FlowLayout(FlowLayout.LEFT, 8, 4));
+        controls.add(new JLabel("Axis:"));
+        ButtonGroup axes = new ButtonGroup();
+        axes.add(timeAxis);
+        axes.add(mobilityAxis);
+        controls.add(timeAxis);
+        controls.add(mobilityAxis);
+        timeAxis.addActionListener(e -> apply(state.withAxis(Axis.TIME)));
+        mobilityAxis.addActionListener(e -> apply(state.withAxis(Axis.MOBILITY)));
+        timeAxis.setToolTipText("Migration time as recorded");
+        mobilityAxis.setToolTipText("Effective mobility: runs with different electro-osmotic flow line up");
+        controls.add(gap());
+        bandsBox.setToolTipText("Match windows of the library entries (mobility axis, or a single run on the time axis)");
+        bandsBox.addActionListener(e -> apply(state.withBands(bandsBox.isSelected())));
+        controls.add(bandsBox);
+        controls.add(gap());
+        controls.add(button("Zoom in", "Narrow the range about its centre",
+                () -> zoomAt(scene.current().centre(), ViewState.ZOOM_STEP)));
+        controls.add(button("Zoom out", "Widen the range about its centre",
+                () -> zoomAt(scene.current().centre(), 1 / ViewState.ZOOM_STEP)));
+        controls.add(button("Reset view", "Back to the range chosen from the peaks and data", () -> apply(state.reset())));
+        controls.add(gap());
+        controls.add(button("Save PNG…", "Save the plot as shown as a PNG image",
+                () -> Exporter.export(frame, scene.model(), plotSize(), Exporter.Format.PNG, suggestedName(), this::say)));
+        controls.add(button("Save SVG…", "Save the plot as shown as an SVG drawing",
+                () -> Exporter.export(frame, scene.model(), plotSize(), Exporter.Format.SVG, suggestedName(), this::say)));
+
+        runTable.setFillsViewportHeight(true);
+        runTable.setRowSelectionAllowed(false);
+        runTable.getColumnModel().getColumn(0).setMaxWidth(44);
+        runTable.getColumnModel().getColumn(1).setPreferredWidth(150);
+        runTable.getColumnModel().getColumn(2).setPreferredWidth(110);
+        JScrollPane runs = titled(new JScrollPane(runTable), "Runs");
+        runs.setPreferredSize(new Dimension(270, 400));
+
+        peakTable.setAutoCreateRowSorter(true);
+        int[] digits = {-1, 2, 2, 3};
+        int[] widths = {110, 70, 70, 55, 120, 80, 80};
+        for (int c = 0; c < widths.length; c++) {
+            peakTable.getColumnModel().getColumn(c).setPreferredWidth(widths[c]);
+            if (c < digits.length && digits[c] >= 0) {
+                peakTable.getColumnModel().getColumn(c).setCellRenderer(new FixedDigits(digits[c]));
+            }
+        }
+        peakTable.setFillsViewportHeight(true);
+        peakTable.setSelectionMode(ListSelectionModel.SINGLE_SELECTION);
+        peakTable.getSelectionModel().addListSelectionListener(e -> {
+            if (!e.getValueIsAdjusting() && !syncing) {
+                int row = peakTable.getSelectedRow();
+                if (row >= 0) {
+                    apply(state.withSelectedPeak(peakModel.refAt(peakTable.convertRowIndexToModel(row))));
+                }
+            }
+        });
+        details.setEditable(false);
+        details.putClientProperty(JEditorPane.HONOR_DISPLAY_PROPERTIES, Boolean.TRUE);
+        details.setFont(peakTable.getFont());
+        JScrollPane detailsPane = titled(new JScrollPane(details), "Selected peak");
+        detailsPane.setPreferredSize(new Dimension(420, 290));
+        JScrollPane peaksPane = titled(new JScrollPane(peakTable), "Peaks");
+        peaksPane.setPreferredSize(new Dimension(560, 290));
+        JSplitPane bottom = new JSplitPane(JSplitPane.HORIZONTAL_SPLIT, peaksPane, detailsPane);
+        bottom.setResizeWeight(0.6);
+        bottom.setBorder(null);
+
+        plot.setToolTipText(null);
+        JSplitPane centre = new JSplitPane(JSplitPane.VERTICAL_SPLIT, plot, bottom);
+        centreSplit = centre;
+        centre.setResizeWeight(0.6);
+        centre.setBorder(null);
+        JSplitPane main = new JSplitPane(JSplitPane.HORIZONTAL_SPLIT, runs, centre);
+        main.setResizeWeight(0);
+        main.setBorder(null);
+
+        JPanel statusBar = new JPanel(new BorderLayout(12, 0));
+        statusBar.setBorder(BorderFactory.createEmptyBorder(3, 8, 3, 8));
+        statusBar.add(status, BorderLayout.CENTER);
+        JLabel hint = new JLabel(HINT);
+        hint.setForeground(PlotPanel.MESSAGE);
+        JPanel right = new JPanel(new FlowLayout(FlowLayout.RIGHT, 16, 0));
+        right.add(hint);
+        cursor.setPreferredSize(new Dimension(170, cursor.getPreferredSize().height));
+        right.add(cursor);
+        statusBar.add(right, BorderLayout.EAST);
+
+        JPanel content = new JPanel(new BorderLayout());
+        content.add(controls, BorderLayout.NORTH);
+        content.add(main, BorderLayout.CENTER);
+        content.add(statusBar, BorderLayout.SOUTH);
+        return content;
+    }
+
+    // ---- state changes -------------------------------------------------------------------
+
+    /** Makes {@code next} the current state and redraws what depends on it. */
+    private void apply(ViewState next) {
+        boolean runsChanged = !next.tickedRuns().equals(state.tickedRuns());
+        state = next;
+        refreshAll(runsChanged);
+    }
+
+    private void refreshAll(boolean peakRowsChanged) {
+        scene = PlotScene.of(data, state);
+        plot.show(scene, emptyMessage());
+        if (peakRowsChanged) {
+            syncing = true;
+            try {
+                peakModel.show(data, state.tickedRuns());
+            } finally {
+                syncing = false;
+            }
+        }
+        syncPeakSelection();
+        showDetails();
+        timeAxis.setSelected(state.axis() == Axis.TIME);
+        mobilityAxis.setSelected(state.axis() == Axis.MOBILITY);
+        bandsBox.setSelected(state.bands());
+        updateStatus();
+    }
+
+    private void runFinished(int index, ViewerRun run) {
+        data = data.withRun(index, run);
+        runModel.fireTableRowsUpdated(index, index);
+        if (state.selectedPeak() != null && data.peak(state.selectedPeak()) == null) {
+            state = state.withSelectedPeak(null);
+        }
+        refreshAll(state.isTicked(index));
+    }
+
+    private void loadingFinished() {
+        loading = false;
+        updateStatus();
+    }
+
+    @Override
+    public void zoomAt(double anchorX, double factor) {
+        apply(state.zoomedAt(scene.current(), anchorX, factor, scene.limits()));
+    }
+
+    @Override
+    public void zoomTo(double x1, double x2) {
+        apply(state.zoomedTo(x1, x2, scene.limits()));
+    }
+
+    @Override
+    public void panBy(double dx) {
+        apply(state.pannedBy(scene.current(), dx, scene.limits()));
+    }
+
+    @Override
+    public void clicked(PeakRef picked) {
+        apply(state.withSelectedPeak(picked));
+    }
+
+    @Override
+    public void hover(double x) {
+        if (Double.isNaN(x)) {
+            cursor.setText(" ");
+        } else if (state.axis() == Axis.TIME) {
+            cursor.setText(String.format(Locale.ROOT, "t = %.2f s", x));
+        } else {
+            cursor.setText(String.format(Locale.ROOT, "μ = %.2f", x));
+        }
+    }
+
+    // ---- views of the state ------------------------------------------------------------
+
+    private void syncPeakSelection() {
+        int modelRow = peakModel.rowOf(state.selectedPeak());
+        syncing = true;
+        try {
+            if (modelRow < 0) {
+                peakTable.clearSelection();
+            } else {
+                int row = peakTable.convertRowIndexToView(modelRow);
+                if (row >= 0 && peakTable.getSelectedRow() != row) {
+                    peakTable.setRowSelectionInterval(row, row);
+                    peakTable.scrollRectToVisible(peakTable.getCellRect(row, 0, true));
+                }
+            }
+        } finally {
+            syncing = false;
+        }
+    }
+
+    private void showDetails() {
+        PeakRef ref = state.selectedPeak();
+        PeakResult pr = data.peak(ref);
+        String html = pr == null
+                ? "<html><body><p><font color='#66707a'>Click a peak in the plot, or pick one in the table, "
+                        + "to see its measures and candidate analytes.</font></p></body></html>"
+                : PeakDetails.html(data.runs().get(ref.run()).name(), pr);
+        details.setText(html);
+        details.setCaretPosition(0);
+    }
+
+    private String emptyMessage() {
+        if (state.tickedRuns().isEmpty()) {
+            return "Tick a run in the list to draw it.";
+        }
+        boolean waiting = false;
+        boolean drawable = false;
+        for (int i : state.tickedRuns()) {
+            waiting |= data.runs().get(i).isWaiting();
+            drawable |= data.runs().get(i).drawable();
+        }
+        if (waiting) {
+            return "Reading and identifying the runs…";
+        }
+        if (drawable && state.axis() == Axis.MOBILITY) {
+            return "The ticked runs have no mobility scale. Switch to the time axis to see them.";
+        }
+        return "The ticked runs could not be processed; point at a run to see why.";
+    }
+
+    private void updateStatus() {
+        int ready = 0;
+        for (ViewerRun r : data.runs()) {
+            ready += r.isWaiting() ? 0 : 1;
+        }
+        StringBuilder sb = new StringBuilder();
+        if (loading || ready < data.runs().size()) {
+            sb.append(String.format(Locale.ROOT, "Processing runs: %d of %d done.  ", ready, data.runs().size()));
+        }
+        int shown = scene.model().series().size();
+        sb.append(shown == 1 ? "1 run shown" : shown + " runs shown");
+        sb.append(", ").append(scene.spots().size()).append(" peaks");
+        if (!scene.omittedRuns().isEmpty()) {
+            sb.append(".  No mobility scale, so not on this axis: ").append(String.join(", ", scene.omittedRuns()));
+        }
+        status.setText(sb.toString());
+    }
+
+    private void say(String text) {
+        status.setText(text);
+    }
+
+    private Dimension plotSize() {
+        return plot.getSize();
+    }
+
+    private String suggestedName() {
+        List<String> names = new ArrayList<>();
+        for (int i : state.tickedRuns()) {
+            names.add(data.runs().get(i).name());
+        }
+        String base = names.size() == 1 ? names.get(0) : names.isEmpty() ? "plot" : names.size() + "-runs";
+        return base + (state.axis() == Axis.TIME ? "-time" : "-mobility");
+    }
+
+    private static JButton button(String text, String tip, Runnable action) {
+        JButton b = new JButton(text);
+        b.setToolTipText(tip);
+        b.addActionListener(e -> action.run());
+        return b;
+    }
+
+    private static JComponent gap() {
+        JPanel p = new JPanel();
+        p.setPreferredSize(new Dimension(10, 1));
+        return p;
+    }
+
+    private static <T extends JComponent> T titled(T c, String title) {
+        c.setBorder(BorderFactory.createTitledBorder(BorderFactory.createEmptyBorder(2, 2, 2, 2), title));
+        return c;
+    }
+
+    /** Right-aligned numbers with a fixed number of decimals; unknown values as a dash. */
+    private static final class FixedDigits extends javax.swing.table.DefaultTableCellRenderer {
+        private static final long serialVersionUID = 1L;
+        private final int digits;
+
+        FixedDigits(int digits) {
+            this.digits = digits;
+            setHorizontalAlignment(RIGHT);
+        }
+
+        @Override
+        protected void setValue(Object value) {
+            setText(value instanceof Double ? PeakDetails.num((Double) value, digits) : PeakDetails.UNKNOWN);
+        }
+    }
+
+    /** The run list: a tick to draw a run, its name and where it stands. */
+    private final class RunListModel extends AbstractTableModel {
+        private static final long serialVersionUID = 1L;
+        private final String[] columns = {"Show", "Run", "State"};
+
+        @Override
+        public int getRowCount() {
+            return data.runs().size();
+        }
+
+        @Override
+        public int getColumnCount() {
+            return columns.length;
+        }
+
+        @Override
+        public String getColumnName(int column) {
+            return columns[column];
+        }
+
+        @Override
+        public Class<?> getColumnClass(int column) {
+            return column == 0 ? Boolean.class : String.class;
+        }
+
+        @Override
+        public boolean isCellEditable(int row, int column) {
+            return column == 0;
+        }
+
+        @Override
+        public Object getValueAt(int row, int column) {
+            ViewerRun r = data.runs().get(row);
+            switch (column) {
+                case 0:
+                    return state.isTicked(row);
+                case 1:
+                    return r.name();
+                default:
+                    return r.statusText();
+            }
+        }
+
+        @Override
+        public void setValueAt(Object value, int row, int column) {
+            if (column == 0 && value instanceof Boolean) {
+                apply(state.withRunTicked(row, (Boolean) value));
+                fireTableRowsUpdated(row, row);
+            }
+        }
+    }
+}
