@@ -41,6 +41,13 @@ public final class DelimitedTraceReader {
     /** A rough lower bound of bytes per data row, to size the arrays once for typical files. */
     private static final int MIN_BYTES_PER_ROW = 8;
 
+    /**
+     * A time column without a stated unit that ends at or before this value is refused rather than
+     * read as seconds: no CZE separation is that short, so the numbers are almost surely minutes
+     * (`common practice`: runs last minutes, not seconds).
+     */
+    static final double UNITLESS_MINUTES_LIMIT = 60.0;
+
     private DelimitedTraceReader() {
     }
 
@@ -84,6 +91,10 @@ public final class DelimitedTraceReader {
         private int lineEnd;
 
         private byte delimiter;
+
+        /** True when neither the header nor the options said the time unit (seconds assumed). */
+
+        private boolean unitAssumed;
         private List<String> names;
         private int namedCount;
         private int[] fieldStart;
@@ -191,6 +202,12 @@ public final class DelimitedTraceReader {
                 throw new InputException(file, previousLine, null,
                         "the file has a single data point; a trace needs at least two");
             }
+            if (unitAssumed && times[count - 1] <= UNITLESS_MINUTES_LIMIT) {
+                throw new InputException(file, headerLine, timeName, "the time column states no unit and ends at "
+                        + shortNumber(times[count - 1]) + ", which looks like minutes rather than seconds; "
+                        + "name the unit in the header (e.g. time_min or time_s) or give it as an option "
+                        + "(--time-unit min or s)");
+            }
             return new Trace(traceName, file, Arrays.copyOf(times, count), Arrays.copyOf(signal, count));
         }
 
@@ -271,6 +288,7 @@ public final class DelimitedTraceReader {
             }
             String unit = ColumnNames.parse(names.get(timeIndex)).unit();
             if (unit.isEmpty()) {
+                unitAssumed = true;
                 return TimeScale.SECONDS;
             }
             TimeScale s = ColumnNames.scaleOf(unit);

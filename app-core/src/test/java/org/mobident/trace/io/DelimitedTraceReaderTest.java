@@ -85,9 +85,23 @@ class DelimitedTraceReaderTest {
             {"Time in min", "60"}, {"Zeit [min]", "60"}, {"TIME/S", "1"},
         };
         for (String[] h : headers) {
-            Path p = write("u.csv", h[0] + ",signal\n1,0\n2,0\n");
-            assertEquals(Double.parseDouble(h[1]), read(p).timeS(0), EXACT, h[0]);
+            Path p = write("u.csv", h[0] + ",signal\n100,0\n200,0\n");
+            assertEquals(100 * Double.parseDouble(h[1]), read(p).timeS(0), EXACT, h[0]);
         }
+    }
+
+    @Test
+    void unitlessShortTimeColumnIsRefusedAsProbablyMinutes() throws Exception {
+        // common practice: no CZE run lasts under a minute, so 0…12.5 without a unit is read as minutes
+        Path p = write("m.csv", "Time,Signal\n0,1\n6.25,2\n12.5,3\n");
+        InputException e = assertThrows(InputException.class, () -> read(p));
+        assertEquals(1, e.line());
+        assertEquals("Time", e.field());
+        assertTrue(e.problem().contains("minutes") && e.problem().contains("--time-unit"), e.problem());
+        Trace t = DelimitedTraceReader.read(p, TraceReadOptions.DEFAULT.withTimeScale(TimeScale.MINUTES));
+        assertEquals(750.0, t.endTimeS(), EXACT);
+        Path longer = write("l.csv", "Time,Signal\n0,1\n300,2\n720,3\n");
+        assertEquals(720.0, read(longer).endTimeS(), EXACT, "a long unitless column is read as seconds");
     }
 
     @Test
@@ -102,7 +116,7 @@ class DelimitedTraceReaderTest {
 
     @Test
     void bomCommentsBlankLinesAndIrregularSampling() throws Exception {
-        byte[] body = ("# exported 2024-05-01\n\n  # indented comment\ntime,signal\n\n0.00,1\n# mid comment\n"
+        byte[] body = ("# exported 2024-05-01\n\n  # indented comment\ntime_s,signal\n\n0.00,1\n# mid comment\n"
                 + "0.10,2\n   \n0.35,3\n1.00,4\n\n# trailing\n").getBytes(StandardCharsets.UTF_8);
         byte[] withBom = new byte[body.length + 3];
         withBom[0] = (byte) 0xEF;
@@ -116,22 +130,23 @@ class DelimitedTraceReaderTest {
 
     @Test
     void carriageReturnOnlyLineEnds() throws Exception {
-        Trace t = read(write("f.csv", "time,signal\r1,2\r3,4"));
+        Trace t = read(write("f.csv", "time_s,signal\r1,2\r3,4"));
         assertArrayEquals(new double[] {1, 3}, t.timesS(), EXACT);
     }
 
     @Test
     void columnOptionsAreCaseInsensitiveAndMayOmitTheUnit() throws Exception {
         Path p = write("g.csv", "X,Y1,Y2 (mAU)\n0,1,10\n1,2,20\n");
-        Trace t = DelimitedTraceReader.read(p, TraceReadOptions.DEFAULT.withColumns("x", "y2"));
+        Trace t = DelimitedTraceReader.read(p, TraceReadOptions.DEFAULT.withColumns("x", "y2")
+                .withTimeScale(TimeScale.SECONDS));
         assertArrayEquals(new double[] {10, 20}, t.signals(), EXACT);
     }
 
     @Test
     void signalRecognisedByNameElseFirstOtherColumn() throws Exception {
-        Path p = write("h.csv", "index,time,current_uA,Absorbance\n1,0,5,100\n2,1,5,200\n");
+        Path p = write("h.csv", "index,time_s,current_uA,Absorbance\n1,0,5,100\n2,1,5,200\n");
         assertArrayEquals(new double[] {100, 200}, read(p).signals(), EXACT);
-        Path q = write("i.csv", "Time,UV214\n0,7\n1,8\n");
+        Path q = write("i.csv", "Time (s),UV214\n0,7\n1,8\n");
         assertArrayEquals(new double[] {7, 8}, read(q).signals(), EXACT);
     }
 
@@ -170,7 +185,7 @@ class DelimitedTraceReaderTest {
         InputException e = assertThrows(InputException.class,
                 () -> DelimitedTraceReader.read(p, "day1/named.csv", TraceReadOptions.DEFAULT));
         assertEquals("day1/named.csv", e.file());
-        Path ok = write("ok.csv", "time,signal\n0,1\n1,2\n");
+        Path ok = write("ok.csv", "time_s,signal\n0,1\n1,2\n");
         assertEquals("shown", DelimitedTraceReader.read(ok, "shown", null).sourceFile());
     }
 
