@@ -37,7 +37,7 @@ public final class CommonOptions {
                 scale = TimeScale.MINUTES;
                 break;
             default:
-                throw new picocli.CommandLine.ParameterException(new picocli.CommandLine(new Object()),
+                throw new picocli.CommandLine.ParameterException(new picocli.CommandLine(this),
                         "--time-unit: expected s or min, got '" + timeUnit + "'");
         }
         return new TraceReadOptions(scale, null, null);

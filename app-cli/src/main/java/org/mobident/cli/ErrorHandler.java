@@ -11,8 +11,10 @@ import picocli.CommandLine;
 final class ErrorHandler implements CommandLine.IExecutionExceptionHandler {
     @Override
     public int handleExecutionException(Exception ex, CommandLine cl, CommandLine.ParseResult parsed) {
-        boolean debug = parsed.hasMatchedOption("--debug")
-                || (parsed.subcommand() != null && parsed.subcommand().hasMatchedOption("--debug"));
+        boolean debug = false;
+        for (CommandLine.ParseResult p = parsed; p != null; p = p.subcommand()) {
+            debug |= p.hasMatchedOption("--debug"); // at any depth, e.g. 'library build --debug'
+        }
         var err = cl.getErr();
         int code;
         if (ex instanceof InputException) {

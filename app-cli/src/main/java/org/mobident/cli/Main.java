@@ -20,7 +20,7 @@ public final class Main {
         cl.setCaseInsensitiveEnumValuesAllowed(true);
         cl.setExecutionExceptionHandler(new ErrorHandler());
         cl.setParameterExceptionHandler((ex, a) -> {
-            CommandLine c = ex.getCommandLine();
+            CommandLine c = commandOf(ex, cl);
             c.getErr().println("mobident: " + ex.getMessage());
             if (!CommandLine.UnmatchedArgumentException.printSuggestions(ex, c.getErr())) {
                 c.getErr().println("Try '" + c.getCommandSpec().qualifiedName() + " --help' for the options.");
@@ -31,5 +31,23 @@ public final class Main {
         out.flush();
         err.flush();
         return code;
+    }
+
+    /**
+     * The command a usage error belongs to. An option value refused after parsing is reported
+     * through a helper {@link CommandLine} around an options mixin, which has no command name; the
+     * innermost command the user typed is named instead.
+     */
+    private static CommandLine commandOf(CommandLine.ParameterException ex, CommandLine top) {
+        CommandLine c = ex.getCommandLine();
+        if (c.getCommandSpec().userObject().getClass().isAnnotationPresent(CommandLine.Command.class)) {
+            return c;
+        }
+        CommandLine deepest = top;
+        for (CommandLine.ParseResult p = top.getParseResult(); p != null; p = p.subcommand()) {
+            deepest = p.commandSpec().commandLine();
+        }
+        deepest.setErr(top.getErr());
+        return deepest;
     }
 }

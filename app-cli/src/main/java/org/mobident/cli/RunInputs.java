@@ -65,11 +65,18 @@ public final class RunInputs {
         return new Loaded(runs, rejected, Map.of(), Map.of());
     }
 
+    /** The settings from the options; an option value the engine refuses is a usage error, not an internal one. */
     IdentifySettings settings(MatchSettings matchSettings) {
-        IdentifySettings s = IdentifySettings.defaults()
-                .withMatchSettings(matchSettings)
-                .withPeakSettings(common.peakSettings())
-                .withReadOptions(common.readOptions());
-        return common.threads != null ? s.withThreads(common.threads) : s;
+        try {
+            IdentifySettings s = IdentifySettings.defaults()
+                    .withMatchSettings(matchSettings)
+                    .withPeakSettings(common.peakSettings())
+                    .withReadOptions(common.readOptions());
+            return common.threads != null ? s.withThreads(common.threads) : s;
+        } catch (IllegalArgumentException e) {
+            String option = common.threads != null && common.threads < 1 ? "--threads" : "--min-sn";
+            throw new picocli.CommandLine.ParameterException(new picocli.CommandLine(this),
+                    option + ": " + e.getMessage());
+        }
     }
 }

@@ -11,6 +11,7 @@ import java.nio.channels.FileChannel;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.AtomicMoveNotSupportedException;
 import java.nio.file.FileAlreadyExistsException;
+import java.nio.file.FileSystemException;
 import java.nio.file.Files;
 import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
@@ -131,6 +132,10 @@ public final class SafeFiles {
     public static Path writeKeepingPrevious(Path target, ContentWriter writer) throws IOException {
         Objects.requireNonNull(writer, "writer");
         Path absolute = target.toAbsolutePath();
+        if (Files.isDirectory(absolute)) {
+            // checked first: a folder would otherwise be "kept" as an empty <name>.prev folder
+            throw new FileSystemException(target.toString(), null, "is a folder, not a file");
+        }
         Path temp = writeTemp(absolute, textToBytes(writer));
         Path kept = null;
         try {

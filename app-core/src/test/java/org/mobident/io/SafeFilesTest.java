@@ -160,6 +160,20 @@ class SafeFilesTest {
     }
 
     @Test
+    void aFolderInTheWayIsNeitherReplacedNorKeptAsPrevious() throws IOException {
+        Path folder = Files.createDirectories(dir.resolve("library.csv").resolve("inside"));
+        IOException e = assertThrows(IOException.class,
+                () -> SafeFiles.writeKeepingPrevious(folder.getParent(), w -> w.write("v1")));
+        assertTrue(e.getMessage().contains("folder"), e.getMessage());
+        assertEquals(List.of("library.csv"), namesIn(dir), "no .prev copy of the folder, no temporary file");
+        assertEquals(List.of("inside"), namesIn(folder.getParent()));
+        IOException plain = assertThrows(IOException.class,
+                () -> SafeFiles.write(folder.getParent(), true, w -> w.write("v1")));
+        assertTrue(plain.getMessage().contains("library.csv"), plain.getMessage());
+        assertEquals(List.of("library.csv"), namesIn(dir), "the failed move leaves no temporary file");
+    }
+
+    @Test
     void newFilesGetDefaultPermissionsAndReplacementsKeepTheirs() throws IOException {
         assumeTrue(Files.getFileStore(dir).supportsFileAttributeView(PosixFileAttributeView.class), "POSIX only");
         Path plain = Files.createFile(dir.resolve("plain.txt"));

@@ -17,6 +17,7 @@ import org.apache.commons.csv.CSVFormat;
 import org.apache.commons.csv.CSVParser;
 import org.apache.commons.csv.CSVRecord;
 import org.mobident.InputException;
+import org.mobident.Units;
 import org.mobident.trace.Detection;
 import org.mobident.trace.RunConditions;
 import org.mobident.trace.RunSpec;
@@ -123,6 +124,11 @@ public final class RunSheetReader {
         if (g != null) {
             return g;
         }
+        if (fieldFactorOutOfRange(c)) {
+            return "lengths and voltage are out of range: 100·Ld·Lt/V (Ld " + c.detectorLengthCm() + " cm, Lt "
+                    + c.totalLengthCm() + " cm, V " + c.voltageKv() + " kV) is not a finite non-zero number;"
+                    + " give the lengths in cm and the voltage in kV";
+        }
         if (Double.isNaN(c.markerFromS()) != Double.isNaN(c.markerToS())) {
             return "the neutral marker window needs both " + MARKER_FROM + " and " + MARKER_TO;
         }
@@ -139,6 +145,19 @@ public final class RunSheetReader {
         return null;
     }
 
+    /**
+     * True when lengths and voltage are each valid but the factor 100·Ld·Lt/V that turns a time into a
+     * mobility ({@link Units#mobilityFromCmKvS}) overflows or underflows, so that every mobility of the
+     * run would be infinite, NaN or zero.
+     */
+    private static boolean fieldFactorOutOfRange(RunConditions c) {
+        if (!c.hasGeometry()) {
+            return false;
+        }
+        double factor = Units.mobilityFromCmKvS(c.detectorLengthCm(), c.totalLengthCm(), c.voltageKv(), 1.0);
+        return !Double.isFinite(factor) || factor == 0;
+    }
+
     /** The column to blame for {@link #conditionsProblem}: each value is checked alone, then in pairs. */
     private static String problemField(RunConditions c) {
         double x = Double.NaN;
@@ -151,6 +170,10 @@ public final class RunSheetReader {
         }
         if (cond(x, x, c.voltageKv(), x, x, x, x).geometryProblem() != null) {
             return VOLTAGE;
+        }
+        if (fieldFactorOutOfRange(c)) {
+            double lengths = 100.0 * c.detectorLengthCm() * c.totalLengthCm();
+            return Double.isFinite(lengths) && lengths != 0 ? VOLTAGE : TOTAL_LENGTH;
         }
         if (cond(x, x, x, c.rampS(), x, x, x).geometryProblem() != null) {
             return RAMP;

@@ -185,6 +185,24 @@ class RunSheetReaderTest {
     }
 
     @Test
+    void lengthsAndVoltageWhoseMobilityFactorOverflowsAreRejected() throws Exception {
+        // each value is finite and valid alone, but 100·Ld·Lt/V overflows (or underflows to 0)
+        InputException lengths = rowProblem("file,total_length_cm,detector_length_cm,voltage_kv\n"
+                + "traces/a.csv,1e308,1e307,-20\n");
+        assertWhere(lengths, 2, "total_length_cm");
+        assertTrue(lengths.problem().contains("out of range"), lengths::getMessage);
+        assertWhere(rowProblem("file,total_length_cm,detector_length_cm,voltage_kv\ntraces/a.csv,80,72,1e-307\n"),
+                2, "voltage_kv");
+        assertWhere(rowProblem("file,total_length_cm,detector_length_cm,voltage_kv\n"
+                + "traces/a.csv,1e-200,1e-201,25\n"), 2, "total_length_cm");
+        InputException single = assertThrows(InputException.class, () -> RunSheetReader.single(
+                dir.resolve("traces/a.csv"), new RunConditions(1e308, 1e307, 25, 0, 25, null, NaN, NaN, null,
+                        NaN, NaN, NaN)));
+        assertEquals(RunSheetReader.OPTIONS, single.file());
+        assertEquals("total_length_cm", single.field());
+    }
+
+    @Test
     void geometryIsCheckedAfterDefaults() throws Exception {
         // the row's detector length is fine alone but not against the default total length of 60 cm
         RunSheet s = RunSheetReader.read(sheet("file,detector_length_cm\ntraces/a.csv,70\n"), defaults());

@@ -2,28 +2,24 @@ package org.mobident.trace.io;
 
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Path;
-import java.util.ArrayList;
 import java.util.List;
 import java.util.Random;
 
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
+import org.mobident.testing.Mutation;
 
 /**
- * The robustness check of {@link TraceIoRobustnessProperties} as a plain seeded JUnit loop, so that
- * it also runs (reproducibly) where the property engine does not.
+ * Seeded random damage ({@link Mutation}) to valid traces and run sheets: each reads to a valid
+ * result or fails with an {@link org.mobident.InputException} naming the file, never another
+ * exception, never a hang ({@link RobustnessChecks}).
  */
 class TraceIoRobustnessTest {
 
     private static final int ROUNDS = 300;
 
     private static List<Mutation> edits(Random random) {
-        List<Mutation> edits = new ArrayList<>();
-        int n = 1 + random.nextInt(6);
-        for (int i = 0; i < n; i++) {
-            edits.add(Mutation.random(random));
-        }
-        return edits;
+        return Mutation.randomEdits(random, 6);
     }
 
     @Test

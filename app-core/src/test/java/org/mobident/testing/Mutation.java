@@ -1,4 +1,4 @@
-package org.mobident.trace.io;
+package org.mobident.testing;
 
 import java.nio.charset.StandardCharsets;
 import java.util.ArrayList;
@@ -15,9 +15,9 @@ import java.util.Random;
  * @param value  a byte value or seed, 0..255
  * @param length how many bytes or items, 1..20
  */
-record Mutation(Kind kind, double where, int value, int length) {
+public record Mutation(Kind kind, double where, int value, int length) {
 
-    enum Kind {
+    public enum Kind {
         FLIP_BYTE, TRUNCATE, SHUFFLE_LINES, INJECT_JUNK, DELETE_DELIMITERS, DUPLICATE_LINE, DELETE_LINE, INSERT_BYTE
     }
 
@@ -29,7 +29,7 @@ record Mutation(Kind kind, double where, int value, int length) {
     };
 
     /** Applies the edit to {@code in} (not modified). */
-    byte[] apply(byte[] in) {
+    public byte[] apply(byte[] in) {
         int n = in.length;
         int at = (int) (where * n);
         switch (kind) {
@@ -92,7 +92,7 @@ record Mutation(Kind kind, double where, int value, int length) {
     }
 
     /** Applies the edits in order. */
-    static byte[] applyAll(byte[] in, List<Mutation> edits) {
+    public static byte[] applyAll(byte[] in, List<Mutation> edits) {
         byte[] out = in;
         for (Mutation m : edits) {
             out = m.apply(out);
@@ -100,8 +100,18 @@ record Mutation(Kind kind, double where, int value, int length) {
         return out;
     }
 
+    /** Between 1 and {@code maxEdits} random edits drawn from {@code random}. */
+    public static List<Mutation> randomEdits(Random random, int maxEdits) {
+        List<Mutation> edits = new ArrayList<>();
+        int n = 1 + random.nextInt(maxEdits);
+        for (int i = 0; i < n; i++) {
+            edits.add(random(random));
+        }
+        return edits;
+    }
+
     /** A random edit drawn from {@code random}. */
-    static Mutation random(Random random) {
+    public static Mutation random(Random random) {
         Kind[] kinds = Kind.values();
         return new Mutation(kinds[random.nextInt(kinds.length)], random.nextDouble(), random.nextInt(256),
                 1 + random.nextInt(20));
