@@ -23,6 +23,24 @@ import org.mobident.trace.Trace;
  * <li>Segments ({@link PeakSegmenter}): the smoothed corrected signal leaves the baseline when it
  *     exceeds 1 smoothed-noise SD; maxima are split at the valley minimum when the signal falls
  *     and rises again by half the minimum reportable height (at least 4 smoothed-noise SDs).</li>
+ * <li>Clusters ({@link ShoulderFinder}, {@link GaussianClusterFit}): the segments that touch at
+ *     valleys form a region. A region is a cluster when the concavity −y″ (Savitzky–Golay
+ *     second derivative) shows more significant maxima than the region has signal maxima (a
+ *     zone hidden in a shoulder, no valley), or when a valley rises above
+ *     {@link SignalLimits#CLUSTER_VALLEY_FRACTION} of the lower neighbouring maximum (deep
+ *     overlap: the apex of the sum leans towards the other zone). A cluster is fitted by a sum of
+ *     Gaussians (Levenberg–Marquardt) started from the curvature maxima, and by one Gaussian per
+ *     segment; the extra zones stand when the extra-sum-of-squares F-test accepts them at
+ *     {@link SignalLimits#SHOULDER_F_TEST_ALPHA}, every zone reaches the minimum height and width,
+ *     and no two zones are closer than {@link SignalLimits#SHOULDER_MIN_SEPARATION_SIGMAS} σ. A
+ *     deeply overlapped region without extra zones keeps the one-per-segment fit on the same
+ *     checks. Every zone of an accepted fit is one peak: apex time, its standard error
+ *     (s²(JᵀJ)⁻¹) and height from the fit, area H σ √(2π) and width at half height 2.3548 σ
+ *     from the fitted Gaussian, start and end at the time where the neighbouring zone starts to
+ *     dominate (the outer ends of the cluster where the signal returns to the baseline). Plates,
+ *     S/N and resolution follow from these as for any peak. Otherwise (and for every other region)
+ *     the segments stand as they are. Only clusters are fitted, so the cost outside them stays
+ *     linear in the number of points.</li>
  * <li>Measures of each segment (below); a segment is reported when its S/N reaches
  *     {@link PeakSettings#minSignalToNoise()} and its width at half height on the raw corrected
  *     signal reaches {@link PeakSettings#minWidthS()} (by default the larger of 2 sampling
@@ -109,13 +127,39 @@ public final class PeakDetector {
                 : Math.max(SignalLimits.MIN_WIDTH_SAMPLES * sampling,
                         SignalLimits.MIN_WIDTH_FRACTION_OF_TYPICAL * typicalWidth);
 
+        int curvatureHalfWidth = ShoulderFinder.halfWidth(typicalWidth, sampling, n);
+        double[] concavity = ShoulderFinder.concavity(y, curvatureHalfWidth, sampling);
+        double concavitySd = ShoulderFinder.noiseSd(concavity, sigma, curvatureHalfWidth, sampling);
+        Cluster cluster = new Cluster(t, raw, smooth, concavity,
+                SignalLimits.SHOULDER_MIN_CONCAVITY_SIGMAS * concavitySd,
+                SignalLimits.SHOULDER_PROMINENCE_SIGMAS * concavitySd,
+                Math.max(1, (int) Math.round(SignalLimits.SHOULDER_REACH_IN_WIDTHS * typicalWidth / sampling)),
+                typicalWidth / GaussianClusterFit.HALF_WIDTH_PER_SIGMA, minHeight, minWidth);
+
+        List<int[]> segments = PeakSegmenter.segments(smooth, returnLevel, hysteresis);
         List<Measured> found = new ArrayList<>();
-        for (int[] segment : PeakSegmenter.segments(smooth, returnLevel, hysteresis)) {
-            Measured m = measure(t, raw, smooth, segment[0], segment[1], sigma, halfWidth,
-                    minHeight, minWidth);
-            if (m != null) {
-                found.add(m);
+        int s = 0;
+        while (s < segments.size()) {
+            // a region: segments that share a valley point above the return level
+            int e = s;
+            while (e + 1 < segments.size() && segments.get(e)[1] == segments.get(e + 1)[0]
+                    && smooth[segments.get(e)[1]] > returnLevel) {
+                e++;
             }
+            List<int[]> region = segments.subList(s, e + 1);
+            List<Measured> resolved = cluster.resolve(region);
+            if (resolved != null) {
+                found.addAll(resolved);
+            } else {
+                for (int[] segment : region) {
+                    Measured m = measure(t, raw, smooth, segment[0], segment[1], sigma, halfWidth,
+                            minHeight, minWidth);
+                    if (m != null) {
+                        found.add(m);
+                    }
+                }
+            }
+            s = e + 1;
         }
         List<Peak> peaks = new ArrayList<>(found.size());
         for (int k = 0; k < found.size(); k++) {
@@ -123,21 +167,131 @@ public final class PeakDetector {
             double resolution = Double.NaN;
             Measured neighbour = nearest(found, k);
             if (neighbour != null) {
-                resolution = RESOLUTION_FACTOR * Math.abs(neighbour.fit.apexTimeS() - m.fit.apexTimeS())
+                resolution = RESOLUTION_FACTOR * Math.abs(neighbour.apexTimeS - m.apexTimeS)
                         / (m.widthHalfS + neighbour.widthHalfS);
             }
-            double apexTime = m.fit.apexTimeS();
+            double apexTime = m.apexTimeS;
             double plates = PLATE_FACTOR * (apexTime / m.widthHalfS) * (apexTime / m.widthHalfS);
             double correctedArea = apexTime > 0 ? m.area / apexTime : Double.NaN;
-            peaks.add(new Peak(nearestIndex(t, apexTime), apexTime, m.fit.apexTimeSdS(),
-                    t[m.first], t[m.last], m.fit.height(), m.area, correctedArea, m.widthHalfS,
-                    plates, resolution, 2 * m.fit.height() / peakToPeak, dip));
+            peaks.add(new Peak(nearestIndex(t, apexTime), apexTime, m.apexTimeSdS,
+                    m.startTimeS, m.endTimeS, m.height, m.area, correctedArea, m.widthHalfS,
+                    plates, resolution, 2 * m.height / peakToPeak, dip));
         }
         return new TraceAnalysis(peaks, sigma, peakToPeak);
     }
 
-    /** A segment that passed the checks, before its neighbours are known. */
-    private record Measured(int first, int last, ApexFit fit, double area, double widthHalfS) {
+    /** A peak that passed the checks, before its neighbours are known. */
+    private record Measured(double apexTimeS, double apexTimeSdS, double height, double startTimeS,
+                            double endTimeS, double area, double widthHalfS) {
+    }
+
+    /**
+     * Resolution of one region (segments joined at valleys) into Gaussian zones by a
+     * least-squares fit, when the region is a cluster: its curvature shows more zones than it has
+     * maxima (a shoulder), or two of its maxima overlap so much that the valley rises above
+     * {@link SignalLimits#CLUSTER_VALLEY_FRACTION} of the lower one (their tops then lean towards
+     * each other and the apex of the sum is no longer the apex of either zone).
+     */
+    private record Cluster(double[] t, double[] raw, double[] smooth, double[] concavity,
+                           double level, double prominence, int reach, double typicalSigmaS,
+                           double minHeight, double minWidth) {
+
+        /** The measured zones of a confirmed cluster, or null to keep the valley segments. */
+        List<Measured> resolve(List<int[]> region) {
+            int first = region.get(0)[0];
+            int last = region.get(region.size() - 1)[1];
+            List<Integer> zones = ShoulderFinder.zones(concavity, first, last, level, prominence, reach);
+            // starting apexes: a maximum per segment (fewer zones); the curvature zones, plus the
+            // maximum of any segment without one (more zones)
+            int[] tops = new int[region.size()];
+            double[] fewerStart = new double[region.size()];
+            List<Double> moreStart = new ArrayList<>();
+            for (int k = 0; k < region.size(); k++) {
+                int[] segment = region.get(k);
+                int top = segment[0];
+                for (int i = segment[0] + 1; i <= segment[1]; i++) {
+                    if (smooth[i] > smooth[top]) {
+                        top = i;
+                    }
+                }
+                tops[k] = top;
+                fewerStart[k] = t[top];
+                boolean seen = false;
+                for (int z : zones) {
+                    if (z >= segment[0] && z <= segment[1]) {
+                        if (!moreStart.contains(t[z])) {
+                            moreStart.add(t[z]);
+                        }
+                        seen = true;
+                    }
+                }
+                if (!seen) {
+                    moreStart.add(t[top]);
+                }
+            }
+            boolean shoulder = moreStart.size() > region.size()
+                    && moreStart.size() <= SignalLimits.SHOULDER_MAX_ZONES;
+            boolean overlapped = false;
+            for (int k = 0; k + 1 < region.size(); k++) {
+                double lower = Math.min(smooth[tops[k]], smooth[tops[k + 1]]);
+                overlapped |= smooth[region.get(k)[1]] > SignalLimits.CLUSTER_VALLEY_FRACTION * lower;
+            }
+            overlapped &= region.size() <= SignalLimits.SHOULDER_MAX_ZONES;
+            if (!shoulder && !overlapped) {
+                return null;
+            }
+            double minSigma = SignalLimits.FIT_MIN_SIGMA_FACTOR * typicalSigmaS;
+            double maxSigma = SignalLimits.FIT_MAX_SIGMA_FACTOR * typicalSigmaS;
+            GaussianClusterFit.Result fewer = GaussianClusterFit.fit(t, raw, first, last, fewerStart,
+                    typicalSigmaS, minSigma, maxSigma);
+            GaussianClusterFit.Result chosen = null;
+            if (shoulder && fewer != null) {
+                double[] start = new double[moreStart.size()];
+                for (int k = 0; k < start.length; k++) {
+                    start[k] = moreStart.get(k);
+                }
+                java.util.Arrays.sort(start); // a handful of values, once per cluster
+                GaussianClusterFit.Result more = GaussianClusterFit.fit(t, raw, first, last, start,
+                        typicalSigmaS, minSigma, maxSigma);
+                if (more != null && plausible(more)
+                        && GaussianClusterFit.extraZonesPValue(fewer, more) <= SignalLimits.SHOULDER_F_TEST_ALPHA) {
+                    chosen = more;
+                }
+            }
+            if (chosen == null && overlapped && fewer != null && plausible(fewer)) {
+                chosen = fewer;
+            }
+            if (chosen == null) {
+                return null;
+            }
+            List<GaussianClusterFit.Component> c = chosen.components();
+            List<Measured> out = new ArrayList<>(c.size());
+            double start = t[first];
+            for (int k = 0; k < c.size(); k++) {
+                GaussianClusterFit.Component z = c.get(k);
+                double end = k + 1 < c.size() ? GaussianClusterFit.dominanceBoundaryS(z, c.get(k + 1)) : t[last];
+                out.add(new Measured(z.apexTimeS(), z.apexTimeSdS(), z.height(), start, end, z.area(),
+                        z.widthHalfS()));
+                start = end;
+            }
+            return out;
+        }
+
+        /** Every zone reportable (height and width) and no two closer than the minimum separation. */
+        private boolean plausible(GaussianClusterFit.Result fit) {
+            List<GaussianClusterFit.Component> c = fit.components();
+            for (int k = 0; k < c.size(); k++) {
+                GaussianClusterFit.Component z = c.get(k);
+                if (!(z.height() >= minHeight) || !(z.widthHalfS() >= minWidth)) {
+                    return false;
+                }
+                if (k > 0 && z.apexTimeS() - c.get(k - 1).apexTimeS()
+                        < SignalLimits.SHOULDER_MIN_SEPARATION_SIGMAS * Math.max(z.sigmaS(), c.get(k - 1).sigmaS())) {
+                    return false;
+                }
+            }
+            return true;
+        }
     }
 
     private static Measured measure(double[] t, double[] raw, double[] smooth, int first, int last,
@@ -162,7 +316,8 @@ public final class PeakDetector {
         if (!(width > 0)) {
             return null;
         }
-        return new Measured(first, last, fit, trapezoid(t, raw, first, last), width);
+        return new Measured(fit.apexTimeS(), fit.apexTimeSdS(), fit.height(), t[first], t[last],
+                trapezoid(t, raw, first, last), width);
     }
 
     /**
@@ -340,14 +495,14 @@ public final class PeakDetector {
     }
 
     private static Measured nearest(List<Measured> found, int k) {
-        double tk = found.get(k).fit.apexTimeS();
+        double tk = found.get(k).apexTimeS;
         Measured best = null;
         double bestGap = Double.POSITIVE_INFINITY;
         for (int j = Math.max(0, k - 1); j <= Math.min(found.size() - 1, k + 1); j++) {
             if (j == k) {
                 continue;
             }
-            double gap = Math.abs(found.get(j).fit.apexTimeS() - tk);
+            double gap = Math.abs(found.get(j).apexTimeS - tk);
             if (gap < bestGap) {
                 bestGap = gap;
                 best = found.get(j);

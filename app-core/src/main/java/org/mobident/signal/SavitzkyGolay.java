@@ -18,6 +18,10 @@ import org.apache.commons.math3.linear.RealMatrix;
  * off-centre rows of the same fit (the polynomial evaluated at the edge point), so the output
  * has the input's length and no edge is left unsmoothed.
  *
+ * <p>Derivatives come from the same fit: the d-th derivative of the fitted polynomial at the
+ * evaluation point ({@link #derivativeWeights}, {@link #derivative}), the "convolutes" for
+ * derivatives that Savitzky &amp; Golay tabulate beside the smoothing ones.
+ *
  * <p>The weights assume equally spaced points. On an irregular time axis the smoothing acts on
  * the sample index; the peak measures of this package are taken on times, not on indices.
  *
@@ -53,6 +57,127 @@ public final class SavitzkyGolay {
      */
     public static double[] weights(int halfWidth, int order, int position) {
         return projectionRows(halfWidth, order)[position + halfWidth];
+    }
+
+    /**
+     * Weights that give the {@code derivative}-th derivative, with respect to the sample index,
+     * of the fitted polynomial at offset {@code position} from the window centre. Derivative 0
+     * gives the smoothing weights of {@link #weights(int, int, int)}.
+     *
+     * <p>The fitted polynomial is {@code p(u) = Σ c_j u^j} with {@code u = k/m} and
+     * {@code c = (XᵀX)⁻¹ Xᵀ y}; its d-th derivative in k at {@code k = r} is
+     * {@code m^(−d) Σ_{j ≥ d} j!/(j − d)! c_j (r/m)^(j−d)}, so the weights are that combination
+     * of the rows of {@code (XᵀX)⁻¹ Xᵀ} (Savitzky &amp; Golay 1964 tabulate the central rows as
+     * "convolutes" for the first to fifth derivatives; Steinier et al. 1972 correct them).
+     * Divide the result by {@code Δt^d} for a derivative in time.
+     *
+     * @param halfWidth  m ≥ 1
+     * @param order      polynomial order, 0 ≤ order ≤ 2m
+     * @param position   offset of the evaluation point, −m…m
+     * @param derivative derivative order, 0 ≤ derivative ≤ order
+     * @return {@code 2m + 1} weights for the points at offsets −m…m
+     */
+    public static double[] derivativeWeights(int halfWidth, int order, int position, int derivative) {
+        return derivativeRow(coefficientRows(halfWidth, order), halfWidth, order, position, derivative);
+    }
+
+    /** One row of derivative weights from the coefficient rows {@code (XᵀX)⁻¹ Xᵀ}. */
+    private static double[] derivativeRow(double[][] coefficients, int halfWidth, int order, int position,
+                                          int derivative) {
+        if (derivative < 0 || derivative > order) {
+            throw new IllegalArgumentException("derivative order must be 0…" + order + ", got " + derivative);
+        }
+        if (position < -halfWidth || position > halfWidth) {
+            throw new IllegalArgumentException("position must be within ±" + halfWidth + ", got " + position);
+        }
+        int size = 2 * halfWidth + 1;
+        double u = (double) position / halfWidth;
+        double[] w = new double[size];
+        for (int j = derivative; j <= order; j++) {
+            double factor = 1.0;
+            for (int q = j - derivative + 1; q <= j; q++) {
+                factor *= q; // j!/(j − d)!
+            }
+            factor *= Math.pow(u, j - derivative);
+            for (int k = 0; k < size; k++) {
+                w[k] += factor * coefficients[j][k];
+            }
+        }
+        double scale = Math.pow(halfWidth, -derivative);
+        for (int k = 0; k < size; k++) {
+            w[k] *= scale;
+        }
+        return w;
+    }
+
+    /** The rows of {@code (XᵀX)⁻¹ Xᵀ}: row j gives the coefficient of {@code u^j} of the fit. */
+    private static double[][] coefficientRows(int halfWidth, int order) {
+        RealMatrix design = design(halfWidth, order);
+        RealMatrix gram = design.transpose().multiply(design);
+        RealMatrix inverse = new LUDecomposition(gram).getSolver().getInverse();
+        return inverse.multiply(design.transpose()).getData();
+    }
+
+    /** Design matrix of the powers u^j, u = k/m, k = −m…m, j = 0…order, after checking both. */
+    private static RealMatrix design(int halfWidth, int order) {
+        if (halfWidth < 1) {
+            throw new IllegalArgumentException("half-width must be at least 1, got " + halfWidth);
+        }
+        int size = 2 * halfWidth + 1;
+        if (order < 0 || order >= size) {
+            throw new IllegalArgumentException("polynomial order must be 0…" + (size - 1)
+                    + " for a window of " + size + " points, got " + order);
+        }
+        double[][] x = new double[size][order + 1];
+        for (int k = -halfWidth; k <= halfWidth; k++) {
+            double u = (double) k / halfWidth;
+            double p = 1.0;
+            for (int j = 0; j <= order; j++) {
+                x[k + halfWidth][j] = p;
+                p *= u;
+            }
+        }
+        return new Array2DRowRealMatrix(x, false);
+    }
+
+    /**
+     * The {@code derivative}-th derivative of {@code y} with respect to the sample index, from the
+     * least-squares polynomial of the {@code 2m + 1} points around each point (the first and last
+     * m points from the off-centre rows of the same fit). Divide by {@code Δt^d} for a derivative
+     * in time. Even derivatives with orders up to 3 use the running moments (O(n)); odd ones the
+     * plain convolution (O(n·m)).
+     *
+     * @param y          values on equally spaced points (not modified), at least 2m + 1 of them
+     * @param halfWidth  m ≥ 1
+     * @param order      polynomial order, derivative ≤ order ≤ 2m
+     * @param derivative derivative order ≥ 0
+     * @return a new array of the same length
+     */
+    public static double[] derivative(double[] y, int halfWidth, int order, int derivative) {
+        int n = y.length;
+        int size = 2 * halfWidth + 1;
+        if (n < size) {
+            throw new IllegalArgumentException("a window of " + size + " points needs at least as many values, got " + n);
+        }
+        double[][] coefficients = coefficientRows(halfWidth, order);
+        double[][] rows = new double[size][];
+        for (int r = -halfWidth; r <= halfWidth; r++) {
+            rows[r + halfWidth] = derivativeRow(coefficients, halfWidth, order, r, derivative);
+        }
+        double[] out = new double[n];
+        for (int i = 0; i < halfWidth; i++) {
+            out[i] = dot(rows[i], y, 0);
+            out[n - 1 - i] = dot(rows[size - 1 - i], y, n - size);
+        }
+        double[] central = rows[halfWidth];
+        if (order <= 3 && derivative % 2 == 0 && halfWidth >= SignalLimits.SMOOTHING_MOMENTS_MIN_HALF_WIDTH) {
+            smoothCentralByMoments(y, halfWidth, central, out);
+        } else {
+            for (int i = halfWidth; i < n - halfWidth; i++) {
+                out[i] = dot(central, y, i - halfWidth);
+            }
+        }
+        return out;
     }
 
     /**
@@ -126,7 +251,8 @@ public final class SavitzkyGolay {
         return s;
     }
 
-    /** Central points by running sums, valid when the central weights are α + β k². */
+    /** Central points by running sums, valid when the central weights are α + β k² (smoothing
+     *  and second derivative with orders up to 3: the odd powers drop out at the centre). */
     private static void smoothCentralByMoments(double[] y, int m, double[] central, double[] out) {
         int n = y.length;
         double alpha = central[m];

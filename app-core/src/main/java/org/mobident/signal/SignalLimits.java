@@ -86,6 +86,56 @@ final class SignalLimits {
     static final double FLANK_LOWER = 0.25;
     static final double FLANK_UPPER = 0.75;
 
+    /** Window of the Savitzky–Golay second derivative that looks for hidden zones, as a
+     *  fraction of the typical width at half height: narrow enough to keep the curvature minima
+     *  of two zones at Rs = 0.6 (heights 1:3) apart, wide enough to smooth the noise of the
+     *  derivative (checked numerically, see {@code ShoulderFinder}). */
+    static final double CURVATURE_WINDOW_FRACTION_OF_WIDTH = 0.75;
+
+    /** Smallest half-width of that window, samples (5 points: the shortest quadratic fit that
+     *  smooths at all). */
+    static final int CURVATURE_MIN_HALF_WIDTH = 2;
+
+    /** A maximum of the concavity −y″ marks a zone when it rises this many noise SDs of −y″
+     *  above the lowest concavity on each side (between it and its neighbours): a two-sided
+     *  5σ excursion of the noise alone is far rarer than the 3σ of a detection limit (common
+     *  practice); the false-shoulder tests check the choice. */
+    static final double SHOULDER_PROMINENCE_SIGMAS = 5.0;
+
+    /** ... and only when −y″ there is itself this many noise SDs above zero, i.e. the signal
+     *  is significantly concave (bends down) at the zone: in a tail, where −y″ climbs back
+     *  from the convex flank towards zero, the rise alone says nothing, and the oscillating noise
+     *  of a Savitzky–Golay derivative then supplies the fall (common practice: 3σ). */
+    static final double SHOULDER_MIN_CONCAVITY_SIGMAS = 3.0;
+
+    /** How far from a maximum of −y″ its rise and fall are looked for, in typical widths at
+     *  half height (see {@code ShoulderFinder}). */
+    static final double SHOULDER_REACH_IN_WIDTHS = 1.0;
+
+    /** Clusters with more zones than this are left as the valley split found them (the fit
+     *  grows as the cube of the parameter count). */
+    static final int SHOULDER_MAX_ZONES = 8;
+
+    /** Significance level of the extra-sum-of-squares F-test that accepts the extra zones
+     *  (common practice: a strict level, since the curvature has already flagged the cluster). */
+    static final double SHOULDER_F_TEST_ALPHA = 1e-3;
+
+    /** Fitted zones closer than this many SDs (the larger of the two) are one zone whose shape
+     *  the Gaussian does not fit, not two (two equal zones 1σ apart show no curvature minimum
+     *  of their own). */
+    static final double SHOULDER_MIN_SEPARATION_SIGMAS = 1.0;
+
+    /** Two maxima split at a valley are fitted as a cluster when the valley rises above this
+     *  fraction of the lower maximum. On a pair of Gaussians the apex of the sum then leans
+     *  more than about 0.02 σ towards the other zone (computed for heights 1:1, 1:3 and 1:0.7:
+     *  a valley at 0.4 of the lower maximum means Rs ≈ 0.9–1.0); below it the tops are
+     *  practically undisturbed and the valley split stands. */
+    static final double CLUSTER_VALLEY_FRACTION = 0.4;
+
+    /** Bounds of a fitted zone SD, as multiples of the typical SD (w½ / 2.3548). */
+    static final double FIT_MIN_SIGMA_FACTOR = 0.1;
+    static final double FIT_MAX_SIGMA_FACTOR = 10.0;
+
     /** Smallest trace that is analysed at all, points. */
     static final int MIN_POINTS = 7;
 

@@ -10,7 +10,9 @@
  * never indices, so irregular sampling is allowed (the smoothing alone works on the index).
  *
  * <p>Invariants: every step is linear in the number of points (selection instead of sorting,
- * running sums, monotone queues, a decimated baseline); nothing is printed; no state is kept
- * between calls. Named constants are in {@code SignalLimits}.
+ * running sums, monotone queues, a decimated baseline), except the least-squares fit of a
+ * sum of Gaussians, which runs only on the few clusters of overlapping zones and grows with
+ * their length; nothing is printed; no state is kept between calls. Named constants are in
+ * {@code SignalLimits}.
  */
 package org.mobident.signal;

@@ -137,4 +137,94 @@ class SavitzkyGolayTest {
         assertThrows(IllegalArgumentException.class, () -> SavitzkyGolay.weights(2, 5));
         assertThrows(IllegalArgumentException.class, () -> SavitzkyGolay.weights(2, -1));
     }
+
+    @Test
+    void fivePointQuadraticFirstDerivativeWeights() {
+        // Savitzky & Golay, Anal. Chem. 36 (1964) 1627, first-derivative convolutes, quadratic/cubic
+        // 5 points: (−2, −1, 0, 1, 2)/10 (from memory)
+        assertArrayEquals(scaled(10, -2, -1, 0, 1, 2), SavitzkyGolay.derivativeWeights(2, 2, 0, 1), EXACT);
+    }
+
+    @Test
+    void sevenPointQuadraticFirstDerivativeWeights() {
+        // Savitzky & Golay 1964, same table, 7 points: (−3, −2, −1, 0, 1, 2, 3)/28 (from memory)
+        assertArrayEquals(scaled(28, -3, -2, -1, 0, 1, 2, 3), SavitzkyGolay.derivativeWeights(3, 2, 0, 1), EXACT);
+    }
+
+    @Test
+    void fivePointQuarticFirstDerivativeWeights() {
+        // Savitzky & Golay 1964, first-derivative convolutes, cubic/quartic, 5 points:
+        // (1, −8, 0, 8, −1)/12 (from memory; also the five-point central difference)
+        assertArrayEquals(scaled(12, 1, -8, 0, 8, -1), SavitzkyGolay.derivativeWeights(2, 3, 0, 1), EXACT);
+    }
+
+    @Test
+    void quadraticSecondDerivativeWeights() {
+        // Savitzky & Golay 1964, second-derivative convolutes, quadratic/cubic (from memory):
+        // 5 points (2, −1, −2, −1, 2)/7; 7 points (5, 0, −3, −4, −3, 0, 5)/42
+        assertArrayEquals(scaled(7, 2, -1, -2, -1, 2), SavitzkyGolay.derivativeWeights(2, 2, 0, 2), EXACT);
+        assertArrayEquals(scaled(42, 5, 0, -3, -4, -3, 0, 5), SavitzkyGolay.derivativeWeights(3, 3, 0, 2), EXACT);
+    }
+
+    @Test
+    void derivativeZeroIsTheSmoothing() {
+        for (int position = -4; position <= 4; position++) {
+            assertArrayEquals(SavitzkyGolay.weights(4, 3, position),
+                    SavitzkyGolay.derivativeWeights(4, 3, position, 0), 1e-12, "position " + position);
+        }
+    }
+
+    @Test
+    void derivativesOfAPolynomialAreExactIncludingTheEdges() {
+        // definition: a cubic is reproduced by a cubic fit, so are its derivatives (per index step)
+        int n = 300;
+        double[] y = new double[n];
+        double[] d1 = new double[n];
+        double[] d2 = new double[n];
+        for (int i = 0; i < n; i++) {
+            double x = i - 120.0;
+            y[i] = 3 + 0.2 * x - 1e-3 * x * x + 2e-6 * x * x * x;
+            d1[i] = 0.2 - 2e-3 * x + 6e-6 * x * x;
+            d2[i] = -2e-3 + 12e-6 * x;
+        }
+        assertArrayEquals(d1, SavitzkyGolay.derivative(y, 5, 3, 1), 1e-9);   // convolution
+        assertArrayEquals(d2, SavitzkyGolay.derivative(y, 5, 3, 2), 1e-9);   // convolution (m < 8)
+        assertArrayEquals(d2, SavitzkyGolay.derivative(y, 20, 3, 2), 1e-9);  // running moments
+        // a quadratic fit gives the exact second derivative of a parabola everywhere
+        double[] parabola = new double[n];
+        for (int i = 0; i < n; i++) {
+            parabola[i] = 50 - 0.5 * (i - 100.0) * (i - 100.0) * 1e-2;
+        }
+        double[] curvature = SavitzkyGolay.derivative(parabola, 25, 2, 2);
+        for (double v : curvature) {
+            assertEquals(-1e-2, v, 1e-11);
+        }
+    }
+
+    @Test
+    void secondDerivativeByMomentsEqualsTheDirectConvolution() {
+        Random random = new Random(43);
+        int n = 5000;
+        int m = 17;
+        double[] y = new double[n];
+        for (int i = 0; i < n; i++) {
+            y[i] = 100 + random.nextGaussian() + 5 * Math.sin(i / 200.0);
+        }
+        double[] fast = SavitzkyGolay.derivative(y, m, 2, 2);
+        double[] w = SavitzkyGolay.derivativeWeights(m, 2, 0, 2);
+        for (int i = m; i < n - m; i++) {
+            double direct = 0;
+            for (int k = 0; k < w.length; k++) {
+                direct += w[k] * y[i - m + k];
+            }
+            assertEquals(direct, fast[i], 1e-9, "point " + i);
+        }
+    }
+
+    @Test
+    void rejectsImpossibleDerivatives() {
+        assertThrows(IllegalArgumentException.class, () -> SavitzkyGolay.derivativeWeights(2, 2, 0, 3));
+        assertThrows(IllegalArgumentException.class, () -> SavitzkyGolay.derivativeWeights(2, 2, 3, 1));
+        assertThrows(IllegalArgumentException.class, () -> SavitzkyGolay.derivative(new double[4], 2, 2, 2));
+    }
 }

@@ -37,6 +37,34 @@ final class Synthetic {
         }
     }
 
+    /**
+     * Adds a Gaussian (SD {@code sigmaS}, centre {@code centreS}) convolved with an exponential
+     * decay of time constant {@code tauS} (the exponentially modified Gaussian, Grushka, Anal.
+     * Chem. 44 (1972) 1733), scaled to the given apex height; the convolution is summed
+     * numerically over 12 τ in steps of τ/200.
+     */
+    static void addTailedZone(double[] t, double[] y, double centreS, double height, double sigmaS, double tauS) {
+        double step = tauS / 200;
+        double[] v = new double[t.length];
+        double max = 0;
+        for (int i = 0; i < t.length; i++) {
+            double x = t[i] - centreS;
+            if (x < -8 * sigmaS || x > 8 * sigmaS + 12 * tauS) {
+                continue;
+            }
+            double s = 0;
+            for (double u = 0; u < 12 * tauS; u += step) {
+                double z = (x - u) / sigmaS;
+                s += Math.exp(-0.5 * z * z - u / tauS);
+            }
+            v[i] = s;
+            max = Math.max(max, s);
+        }
+        for (int i = 0; i < t.length; i++) {
+            y[i] += height * v[i] / max;
+        }
+    }
+
     /** Adds white Gaussian noise of SD {@code sd}. */
     static void addNoise(double[] y, double sd, long seed) {
         Random random = new Random(seed);
