@@ -37,13 +37,18 @@ final class NoiseEstimator {
      * @param y values (not modified); at least 3
      */
     static double robustSd(double[] y) {
-        int count = y.length - 1;
-        if (count < 2) {
+        int all = y.length - 1;
+        if (all < 2) {
             return 0.0;
         }
+        // Long traces: an evenly strided subset of the differences estimates the same MAD to within
+        // about 1 % (its standard error for n = 16 384 normal values) at a fraction of the cost.
+        int stride = Math.max(1, all / SignalLimits.NOISE_SAMPLE_CAP);
+        int count = all / stride;
         double[] d = new double[count];
-        for (int i = 0; i < count; i++) {
-            d[i] = y[i + 1] - y[i];
+        for (int j = 0; j < count; j++) {
+            int i = j * stride;
+            d[j] = y[i + 1] - y[i];
         }
         double center = Selection.medianInPlace(d.clone(), count);
         for (int i = 0; i < count; i++) {
@@ -51,6 +56,26 @@ final class NoiseEstimator {
         }
         double mad = Selection.medianInPlace(d, count);
         return SignalLimits.MAD_TO_SD * mad / SQRT2;
+    }
+
+    /**
+     * The spread of the values between their 0.1 % and 99.9 % quantiles (from an evenly strided
+     * subset on long traces): the signal range without the pull of a few wild points.
+     *
+     * @param y values (not modified); at least 1
+     */
+    static double robustSpan(double[] y) {
+        int stride = Math.max(1, y.length / SignalLimits.NOISE_SAMPLE_CAP);
+        int count = y.length / stride;
+        double[] s = new double[count];
+        for (int j = 0; j < count; j++) {
+            s[j] = y[j * stride];
+        }
+        int lowRank = (int) Math.floor(SignalLimits.SPAN_TAIL_FRACTION * (count - 1));
+        int highRank = (count - 1) - lowRank;
+        double low = Selection.select(s, 0, count - 1, lowRank);
+        double high = Selection.select(s, 0, count - 1, highRank);
+        return high - low;
     }
 
     /**

@@ -536,13 +536,7 @@ public final class PeakDetector {
 
     /** Robust noise SD, never below a tiny fraction of the signal range (nor zero). */
     private static double flooredNoise(double[] y) {
-        double min = Double.POSITIVE_INFINITY;
-        double max = Double.NEGATIVE_INFINITY;
-        for (double v : y) {
-            min = Math.min(min, v);
-            max = Math.max(max, v);
-        }
-        double floor = SignalLimits.NOISE_FLOOR_RELATIVE * (max - min);
+        double floor = SignalLimits.NOISE_FLOOR_RELATIVE * NoiseEstimator.robustSpan(y);
         return Math.max(Math.max(NoiseEstimator.robustSd(y), floor), Double.MIN_NORMAL);
     }
 }

@@ -11,9 +11,16 @@ final class SignalLimits {
      *  (Rousseeuw &amp; Croux, J. Am. Stat. Assoc. 88 (1993) 1273). */
     static final double MAD_TO_SD = 1.482602218505602;
 
-    /** The noise SD is never taken below this fraction of the signal range, so that a perfect
+    /** The noise SD is never taken below this fraction of the (robust) signal range, so that a perfect
      *  synthetic trace still gets finite thresholds and a finite S/N (common practice). */
     static final double NOISE_FLOOR_RELATIVE = 1e-9;
+
+    /** The robust noise and span estimates use at most this many evenly strided samples. */
+    static final int NOISE_SAMPLE_CAP = 16_384;
+
+    /** The signal span for the noise floor leaves out this fraction of the values at each end, so
+     *  that one wild point (a spike of 1e100) cannot lift the floor above every peak. */
+    static final double SPAN_TAIL_FRACTION = 0.001;
 
     /** Automatic smoothing window, as a fraction of the typical full width at half height.
      *  A Savitzky–Golay window below the peak width keeps its height and width
