@@ -46,8 +46,8 @@ final class PeakWidthEstimator {
         // extended by odd reflection, so that a sloping background has no step at the ends
         int pad = Math.min(2 * radius, n - 1);
         double[] extended = SnipBaseline.reflect(light, pad);
-        double[] opening = movingExtreme(movingExtreme(extended, radius, false), radius, true);
-        double[] closing = movingExtreme(movingExtreme(extended, radius, true), radius, false);
+        double[] opening = morphological(extended, radius, false);
+        double[] closing = morphological(extended, radius, true);
         double[] rise = new double[n];
         double[] fall = new double[n];
         for (int i = 0; i < n; i++) {
@@ -66,6 +66,39 @@ final class PeakWidthEstimator {
             return SignalLimits.FALLBACK_WIDTH_SAMPLES * samplingS;
         }
         return Selection.medianInPlace(widths, found[0]);
+    }
+
+    /**
+     * Opening (minimum then maximum; {@code closing} false) or closing (maximum then minimum) over
+     * [i − r, i + r]. On long series the two passes run on block extremes of
+     * {@link SignalLimits#MORPHOLOGY_MAX_BLOCKS} blocks at most and the result is spread back over
+     * each block: the background it describes varies over 5 % of the run, so a block of a few
+     * samples changes it by nothing that matters, and the cost drops by the block length.
+     */
+    static double[] morphological(double[] x, int radius, boolean closing) {
+        int n = x.length;
+        int k = Math.max(1, n / SignalLimits.MORPHOLOGY_MAX_BLOCKS);
+        if (k == 1 || radius < 2 * k) {
+            return movingExtreme(movingExtreme(x, radius, closing), radius, !closing);
+        }
+        int blocks = (n + k - 1) / k;
+        double[] b = new double[blocks];
+        for (int j = 0; j < blocks; j++) {
+            int from = j * k;
+            int to = Math.min(n, from + k);
+            double e = x[from];
+            for (int i = from + 1; i < to; i++) {
+                e = closing ? Math.max(e, x[i]) : Math.min(e, x[i]);
+            }
+            b[j] = e;
+        }
+        int blockRadius = (radius + k - 1) / k;
+        double[] coarse = movingExtreme(movingExtreme(b, blockRadius, closing), blockRadius, !closing);
+        double[] out = new double[n];
+        for (int i = 0; i < n; i++) {
+            out[i] = coarse[i / k];
+        }
+        return out;
     }
 
     /** Appends the half-height widths of the excursions of {@code v} above the threshold. */
@@ -143,33 +176,41 @@ final class PeakWidthEstimator {
         }
         int w = 2 * radius + 1;
         int m = n + 2 * radius;
-        double fill = max ? Double.NEGATIVE_INFINITY : Double.POSITIVE_INFINITY;
-        double sign = max ? 1.0 : -1.0;
-        // padded copy, negated for the minimum so that one maximum routine serves both
-        double[] p = new double[m];
-        Arrays.fill(p, 0, radius, sign * fill);
-        for (int i = 0; i < n; i++) {
-            p[radius + i] = sign * x[i];
-        }
-        Arrays.fill(p, radius + n, m, sign * fill);
+        // g: running extreme from each block's start; h: from each block's end (padded index j ↔ x[j − r];
+        // the padding is neutral, so the window is clipped to the ends)
         double[] g = new double[m];
         double[] h = new double[m];
+        double neutral = max ? Double.NEGATIVE_INFINITY : Double.POSITIVE_INFINITY;
         for (int blockStart = 0; blockStart < m; blockStart += w) {
             int blockEnd = Math.min(m, blockStart + w);
-            double run = Double.NEGATIVE_INFINITY;
+            double run = neutral;
             for (int j = blockStart; j < blockEnd; j++) {
-                run = Math.max(run, p[j]);
+                int i = j - radius;
+                double v = i >= 0 && i < n ? x[i] : neutral;
+                run = max ? (v > run ? v : run) : (v < run ? v : run);
                 g[j] = run;
             }
-            run = Double.NEGATIVE_INFINITY;
+            run = neutral;
             for (int j = blockEnd - 1; j >= blockStart; j--) {
-                run = Math.max(run, p[j]);
+                int i = j - radius;
+                double v = i >= 0 && i < n ? x[i] : neutral;
+                run = max ? (v > run ? v : run) : (v < run ? v : run);
                 h[j] = run;
             }
         }
         double[] out = new double[n];
-        for (int i = 0; i < n; i++) {
-            out[i] = sign * Math.max(h[i], g[i + w - 1]);
+        if (max) {
+            for (int i = 0; i < n; i++) {
+                double a = h[i];
+                double b = g[i + w - 1];
+                out[i] = a > b ? a : b;
+            }
+        } else {
+            for (int i = 0; i < n; i++) {
+                double a = h[i];
+                double b = g[i + w - 1];
+                out[i] = a < b ? a : b;
+            }
         }
         return out;
     }

@@ -15,6 +15,9 @@ final class SignalLimits {
      *  synthetic trace still gets finite thresholds and a finite S/N (common practice). */
     static final double NOISE_FLOOR_RELATIVE = 1e-9;
 
+    /** The background opening/closing of long traces runs on at most about this many block extremes. */
+    static final int MORPHOLOGY_MAX_BLOCKS = 4_096;
+
     /** The robust noise and span estimates use at most this many evenly strided samples. */
     static final int NOISE_SAMPLE_CAP = 16_384;
 
