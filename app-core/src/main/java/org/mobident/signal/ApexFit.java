@@ -23,7 +23,9 @@ package org.mobident.signal;
  * The estimate thus grows with the noise SD, falls with the height, grows with the peak width
  * (a flatter top) and falls with the number of samples across the top (the sampling). It
  * assumes white noise and ignores the baseline error (a constant offset does not move a
- * symmetric apex). A Monte Carlo test checks its size against the scatter of repeated fits.
+ * symmetric apex). When the residuals show that the top is not the assumed shape, the result
+ * is scaled by √(χ²/ν) (see {@link #lackOfFit}). A Monte Carlo test checks its size against
+ * the scatter of repeated fits.
  *
  * @param apexTimeS   apex time, s
  * @param height      apex height above the baseline, signal units
@@ -128,8 +130,34 @@ record ApexFit(double apexTimeS, double height, double apexTimeSdS) {
         double gb = -1.0 / (2 * c);
         double gc = b / (2 * c * c);
         double varU0 = gb * gb * inv[1][1] + 2 * gb * gc * inv[1][2] + gc * gc * inv[2][2];
-        double sd = scale * Math.sqrt(Math.max(0.0, varU0));
+        double sd = scale * Math.sqrt(Math.max(0.0, varU0)) * lackOfFit(t, raw, smooth, lo, hi, ref, scale,
+                variance, logarithmic, a, b, c);
         return new ApexFit(ref + scale * u0, height, sd);
+    }
+
+    /**
+     * √(χ²/ν) of the fit when above 1, else 1: when the top is not the assumed shape (a tailing
+     * zone, an unresolved neighbour) the residuals exceed the noise and the parameter uncertainty
+     * is scaled up by the square root of the reduced chi-square (Bevington &amp; Robinson, Data
+     * Reduction and Error Analysis, 3rd ed. 2003, §8.1). A white-noise Gaussian top gives χ²/ν ≈ 1
+     * and keeps its noise-only uncertainty.
+     */
+    private static double lackOfFit(double[] t, double[] raw, double[] smooth, int lo, int hi, double ref,
+                                    double scale, double variance, boolean logarithmic, double a, double b,
+                                    double c) {
+        int dof = hi - lo + 1 - 3;
+        if (dof < 1) {
+            return 1.0;
+        }
+        double chi2 = 0;
+        for (int i = lo; i <= hi; i++) {
+            double u = (t[i] - ref) / scale;
+            double model = a + b * u + c * u * u;
+            double w = logarithmic ? smooth[i] * smooth[i] / variance : 1.0 / variance;
+            double z = logarithmic ? Math.log(raw[i]) : raw[i];
+            chi2 += w * (z - model) * (z - model);
+        }
+        return Math.max(1.0, Math.sqrt(chi2 / dof));
     }
 
     /** Inverse of [[s0,s1,s2],[s1,s2,s3],[s2,s3,s4]] by cofactors, or null when singular. */

@@ -107,19 +107,22 @@ public final class PeakDetector {
                 ? Math.sqrt(PeakWidthEstimator.sumOfSquares(SavitzkyGolay.weights(halfWidth, SMOOTHING_ORDER)))
                 : 1.0;
 
-        double[] baseline = SnipBaseline.estimate(t, smooth, typicalWidth, sampling);
-        double[] raw = new double[n];
-        for (int i = 0; i < n; i++) {
-            raw[i] = y[i] - baseline[i];
-            smooth[i] -= baseline[i];
-        }
-
         int windowPoints = (int) Math.round(SignalLimits.PEAK_TO_PEAK_WINDOW_WIDTHS * typicalWidth / sampling) + 1;
         windowPoints = Math.max(2, Math.min(n, windowPoints));
         double peakToPeak = NoiseEstimator.expectedNormalRange(windowPoints) * sigma;
         double minHeight = settings.minSignalToNoise() * peakToPeak / 2;
         double smoothSigma = sigma * smoothGain;
         double returnLevel = SignalLimits.RETURN_TO_BASELINE_SIGMAS * smoothSigma;
+
+        double[] baseline = SnipBaseline.estimate(t, smooth, typicalWidth, sampling);
+        ClusterBaseline.bridge(t, smooth, baseline, returnLevel, minHeight,
+                SignalLimits.GROUP_GAP_IN_WIDTHS * typicalWidth, SignalLimits.GROUP_EDGE_IN_WIDTHS * typicalWidth,
+                SignalLimits.GROUP_MAX_SPAN_IN_WIDTHS * typicalWidth);
+        double[] raw = new double[n];
+        for (int i = 0; i < n; i++) {
+            raw[i] = y[i] - baseline[i];
+            smooth[i] -= baseline[i];
+        }
         double hysteresis = Math.max(SignalLimits.SPLIT_FRACTION_OF_MIN_HEIGHT * minHeight,
                 SignalLimits.SPLIT_MIN_SIGMAS * smoothSigma);
         double minWidth = Double.isFinite(settings.minWidthS()) && settings.minWidthS() >= 0
@@ -173,7 +176,12 @@ public final class PeakDetector {
             double apexTime = m.apexTimeS;
             double plates = PLATE_FACTOR * (apexTime / m.widthHalfS) * (apexTime / m.widthHalfS);
             double correctedArea = apexTime > 0 ? m.area / apexTime : Double.NaN;
-            peaks.add(new Peak(nearestIndex(t, apexTime), apexTime, m.apexTimeSdS,
+            double apexSd = m.apexTimeSdS;
+            if (!m.fitted) {
+                double overlap = overlapShiftS(found, k);
+                apexSd = Math.sqrt(apexSd * apexSd + overlap * overlap);
+            }
+            peaks.add(new Peak(nearestIndex(t, apexTime), apexTime, apexSd,
                     m.startTimeS, m.endTimeS, m.height, m.area, correctedArea, m.widthHalfS,
                     plates, resolution, 2 * m.height / peakToPeak, dip));
         }
@@ -182,7 +190,35 @@ public final class PeakDetector {
 
     /** A peak that passed the checks, before its neighbours are known. */
     private record Measured(double apexTimeS, double apexTimeSdS, double height, double startTimeS,
-                            double endTimeS, double area, double widthHalfS) {
+                            double endTimeS, double area, double widthHalfS, boolean fitted) {
+    }
+
+    /**
+     * How far the tails of the neighbouring zones move the apex of a zone that was measured on its
+     * own (not resolved by a joint fit): for Gaussian zones the apex of f + g lies where
+     * f′ + g′ = 0, to first order δ = g′(t₀)/(−f″(t₀)) = (h/H)·(t_g − t₀)·(σ²/σ_g²)·exp(−d²/2) with
+     * d = (t₀ − t_g)/σ_g (derived from the definition of the apex; σ = w½/2.3548). The shifts of
+     * both neighbours are summed; the result is added in quadrature to the apex uncertainty, since
+     * the measured apex is not corrected for it.
+     */
+    private static double overlapShiftS(List<Measured> found, int k) {
+        Measured m = found.get(k);
+        double sigma = m.widthHalfS / GaussianClusterFit.HALF_WIDTH_PER_SIGMA;
+        double shift = 0;
+        for (int j = Math.max(0, k - 1); j <= Math.min(found.size() - 1, k + 1); j++) {
+            if (j == k) {
+                continue;
+            }
+            Measured g = found.get(j);
+            double sigmaG = g.widthHalfS / GaussianClusterFit.HALF_WIDTH_PER_SIGMA;
+            if (!(sigma > 0 && sigmaG > 0 && m.height > 0)) {
+                continue;
+            }
+            double d = (m.apexTimeS - g.apexTimeS) / sigmaG;
+            shift += (g.height / m.height) * (g.apexTimeS - m.apexTimeS) * (sigma * sigma) / (sigmaG * sigmaG)
+                    * Math.exp(-0.5 * d * d);
+        }
+        return shift;
     }
 
     /**
@@ -271,7 +307,7 @@ public final class PeakDetector {
                 GaussianClusterFit.Component z = c.get(k);
                 double end = k + 1 < c.size() ? GaussianClusterFit.dominanceBoundaryS(z, c.get(k + 1)) : t[last];
                 out.add(new Measured(z.apexTimeS(), z.apexTimeSdS(), z.height(), start, end, z.area(),
-                        z.widthHalfS()));
+                        z.widthHalfS(), true));
                 start = end;
             }
             return out;
@@ -317,7 +353,7 @@ public final class PeakDetector {
             return null;
         }
         return new Measured(fit.apexTimeS(), fit.apexTimeSdS(), fit.height(), t[first], t[last],
-                trapezoid(t, raw, first, last), width);
+                trapezoid(t, raw, first, last), width, false);
     }
 
     /**

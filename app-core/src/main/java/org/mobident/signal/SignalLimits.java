@@ -38,6 +38,18 @@ final class SignalLimits {
      *  half height: a Gaussian dip is about 1.7 w½ wide at its base (4σ). */
     static final double BASELINE_CLOSING_IN_WIDTHS = 1.0;
 
+    /** Zones closer than this (in typical widths at half height, gap between their feet) form one
+     *  group whose baseline is bridged: the clipping reach, within which the clipping rises into
+     *  a neighbour. */
+    static final double GROUP_GAP_IN_WIDTHS = BASELINE_REACH_IN_WIDTHS;
+
+    /** Width of the windows outside a group whose mean signal fixes the group's chord, in widths. */
+    static final double GROUP_EDGE_IN_WIDTHS = 0.5;
+
+    /** Longest group bridged by a chord, in widths (common practice: a chord much longer than the
+     *  clipping reach would cut across real baseline curvature). */
+    static final double GROUP_MAX_SPAN_IN_WIDTHS = 40.0;
+
     /** Time bins per typical width at half height in the decimated grid of the baseline. */
     static final double BASELINE_BINS_PER_WIDTH = 8.0;
 
