@@ -35,6 +35,13 @@ public final class StandardsOptions {
                     + "or order (e.g. reference-libraries/ions-25C.csv).")
     Path referenceFile;
 
+    @Option(names = "--ph", paramLabel = "PH", description = "pH of the standards' buffer, recorded in the library.")
+    Double ph;
+
+    @Option(names = "--ionic-strength-mm", paramLabel = "MM",
+            description = "Ionic strength of the standards' buffer (mmol/L), recorded in the library.")
+    Double ionicStrengthMm;
+
     @Option(names = "--rsd-limit", paramLabel = "PCT", description = "Warn above this RSD, % (default 2).")
     Double rsdLimitPercent;
 
@@ -64,7 +71,15 @@ public final class StandardsOptions {
         Library empty = new Library(List.of(), "(none)", List.of());
         List<RunResult> results = new ArrayList<>(new Identifier(empty, settings).identifyAll(loaded.runs()));
         results.addAll(loaded.rejected());
-        return LibraryBuilder.build(results, loaded.mixByRun(), sheet, buildSettings(), reference);
+        if ((ph != null && !(ph >= 0 && ph <= 14)) || (ionicStrengthMm != null && !(ionicStrengthMm >= 0))) {
+            throw new InputException("command line", 0, ph != null && !(ph >= 0 && ph <= 14) ? "--ph"
+                    : "--ionic-strength-mm", "pH must lie in 0–14 and the ionic strength must not be negative");
+        }
+        BuildResult built = LibraryBuilder.build(results, loaded.mixByRun(), sheet, buildSettings(), reference);
+        return new BuildResult(LibraryBuilder.withBufferChemistry(built.library(),
+                ph == null ? Double.NaN : ph, ionicStrengthMm == null ? Double.NaN : ionicStrengthMm),
+                built.analytes(), built.outliers(), built.unexpectedPeaks(), built.warnings(), built.usedRuns(),
+                built.settings(), built.stamp());
     }
 
     BuildSettings buildSettings() {

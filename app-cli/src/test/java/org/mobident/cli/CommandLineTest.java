@@ -155,9 +155,13 @@ class CommandLineTest {
     void libraryBuiltFromDemoStandardsIdentifiesTheAnionRunsLikeTheShippedOne() throws IOException {
         Path lib = dir.resolve("built.csv");
         Run build = run("library", "build", "--runs", demo("standards/standards-runs.csv"),
-                "--mixes", demo("standards/mixes.csv"), "--out", lib.toString());
+                "--mixes", demo("standards/mixes.csv"), "--out", lib.toString(), "--ph", "8.0",
+                "--ionic-strength-mm", "12");
         assertEquals(ExitCodes.OK, build.code(), build.out() + build.err());
-        assertTrue(Files.readString(lib).contains("sha256"));
+        String built = Files.readString(lib);
+        assertTrue(built.contains("sha256"));
+        // conditions recorded per entry: buffer label from the run sheet, pH and ionic strength as given
+        assertTrue(built.contains(",CHR-8,8,12,25,") || built.contains(",CHR-8,8.0,12.0,25"), built);
 
         Path withBuilt = dir.resolve("a.csv");
         Path withShipped = dir.resolve("b.csv");

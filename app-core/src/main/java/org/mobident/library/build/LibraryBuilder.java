@@ -74,6 +74,33 @@ public final class LibraryBuilder {
         return new Build(mixByRun, sheet, settings, reference, stamp).run(runs);
     }
 
+    /**
+     * The library with the buffer's pH and ionic strength recorded on every entry that states
+     * none, and a note saying so. The run sheet does not carry them, so the analyst gives them;
+     * the recheck of a later buffer change needs them.
+     *
+     * @param pH              buffer pH (NaN: not given)
+     * @param ionicStrengthMm buffer ionic strength in mmol/L (NaN: not given)
+     */
+    public static Library withBufferChemistry(Library library, double pH, double ionicStrengthMm) {
+        if (Double.isNaN(pH) && Double.isNaN(ionicStrengthMm)) {
+            return library;
+        }
+        java.util.List<org.mobident.library.LibraryEntry> entries = new java.util.ArrayList<>();
+        for (org.mobident.library.LibraryEntry e : library.entries()) {
+            entries.add(new org.mobident.library.LibraryEntry(e.name(), e.mobility(), e.mobilitySd(), e.n(),
+                    e.charge(), e.tolerance(), e.pKa(), e.limitingMobilities(), e.buffer(),
+                    Double.isNaN(e.pH()) ? pH : e.pH(),
+                    Double.isNaN(e.ionicStrengthMm()) ? ionicStrengthMm : e.ionicStrengthMm(),
+                    e.temperatureC(), e.source()));
+        }
+        java.util.List<String> notes = new java.util.ArrayList<>(library.notes());
+        notes.add(String.format(java.util.Locale.ROOT, "Buffer chemistry (as stated by the analyst): pH %s, ionic strength %s mmol/L",
+                Double.isNaN(pH) ? "not given" : Double.toString(pH),
+                Double.isNaN(ionicStrengthMm) ? "not given" : Double.toString(ionicStrengthMm)));
+        return new Library(entries, library.sourceFile(), notes);
+    }
+
     /** The state of one build; not shared. */
     private static final class Build {
         private final Map<String, String> mixByRun;
