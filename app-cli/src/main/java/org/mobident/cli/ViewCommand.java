@@ -13,16 +13,12 @@ import org.mobident.matching.MatchSettings;
 import org.mobident.pipeline.IdentifySettings;
 import org.mobident.pipeline.RunResult;
 import org.mobident.report.plot.Axis;
-import org.mobident.trace.RunConditions;
 import org.mobident.trace.RunSpec;
-import org.mobident.trace.io.RunSheet;
-import org.mobident.trace.io.RunSheetReader;
 import org.mobident.trace.io.TraceFiles;
 import org.mobident.viewer.Viewer;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
-import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
 import picocli.CommandLine.Model.CommandSpec;
 
@@ -42,12 +38,8 @@ public final class ViewCommand implements Callable<Integer> {
     @Spec
     CommandSpec spec;
 
-    @Option(names = {"-r", "--runs"}, paramLabel = "SHEET",
-            description = "Run sheet (CSV, one row per run; trace paths relative to the sheet).")
-    Path runSheet;
-
-    @Parameters(paramLabel = "TRACE", arity = "0..*", description = "Trace files to show without a run sheet.")
-    List<Path> traces = new ArrayList<>();
+    @Mixin
+    RunInputs inputs;
 
     @Option(names = {"-l", "--library"}, required = true, paramLabel = "FILE", description = "Mobility library (CSV).")
     Path libraryFile;
@@ -61,13 +53,7 @@ public final class ViewCommand implements Callable<Integer> {
     List<String> shown = new ArrayList<>();
 
     @Mixin
-    ConditionOptions conditions;
-
-    @Mixin
     MatchOptions matching;
-
-    @Mixin
-    CommonOptions common;
 
     @Override
     public Integer call() throws Exception {
@@ -79,41 +65,19 @@ public final class ViewCommand implements Callable<Integer> {
             err.flush();
             return NO_DISPLAY;
         }
-        if ((runSheet == null) == traces.isEmpty()) {
+        if (!inputs.given()) {
             err.println("mobident view: give either a run sheet (--runs SHEET) or trace files, not both or neither.");
             return ExitCodes.USAGE;
         }
         Library library = LibraryCsv.read(libraryFile);
-        RunConditions defaults = conditions.toConditions();
-        List<RunSpec> runs = new ArrayList<>();
-        List<RunResult> rejected = new ArrayList<>();
-        if (runSheet != null) {
-            RunSheet sheet = RunSheetReader.read(runSheet, defaults);
-            runs.addAll(sheet.runs());
-            for (InputException problem : sheet.rowProblems()) {
-                rejected.add(RunResult.failure(new RunSpec("sheet line " + problem.line(), runSheet,
-                        RunConditions.EMPTY, runSheet.toString(), problem.line()), problem));
-            }
-        } else {
-            for (Path t : traces) {
-                try {
-                    runs.add(RunSheetReader.single(t, defaults));
-                } catch (InputException e) {
-                    rejected.add(RunResult.failure(new RunSpec(RunSpec.runNameOf(t), t, defaults,
-                            "command line", 0), e));
-                }
-            }
-        }
-        IdentifySettings settings = IdentifySettings.defaults()
-                .withMatchSettings(matching.toSettings(MatchSettings.DEFAULT))
-                .withPeakSettings(common.peakSettings())
-                .withReadOptions(common.readOptions());
-        if (common.threads != null) {
-            settings = settings.withThreads(common.threads);
-        }
+        RunInputs.Loaded loaded = inputs.load();
+        List<RunSpec> runs = loaded.runs();
+        List<RunResult> rejected = loaded.rejected();
+        IdentifySettings settings = inputs.settings(matching.toSettings(MatchSettings.DEFAULT));
         List<Integer> ticked = tickedAtStart(runs, rejected);
-        String title = (runSheet != null ? runSheet.getFileName().toString()
-                : traces.size() == 1 ? traces.get(0).getFileName().toString() : traces.size() + " traces")
+        String title = (inputs.runSheet != null ? inputs.runSheet.getFileName().toString()
+                : inputs.traces.size() == 1 ? inputs.traces.get(0).getFileName().toString()
+                : inputs.traces.size() + " traces")
                 + " · " + libraryFile.getFileName();
         CountDownLatch closed = Viewer.open(new Viewer.Setup(title, library, runs, rejected, settings,
                 TraceFiles::read, axis, ticked));

@@ -8,9 +8,6 @@ import java.io.StringWriter;
 import java.io.UncheckedIOException;
 import java.io.Writer;
 import java.math.BigDecimal;
-import java.nio.ByteBuffer;
-import java.nio.charset.CharacterCodingException;
-import java.nio.charset.CodingErrorAction;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -93,22 +90,7 @@ public final class LibraryCsv {
      */
     public static Library read(Path file) throws InputException {
         String label = file.toString();
-        byte[] bytes;
-        try {
-            bytes = Files.readAllBytes(file);
-        } catch (IOException e) {
-            throw new InputException(label, 0, null, "cannot read the library file: " + e.getMessage(), e);
-        }
-        String text;
-        try {
-            text = StandardCharsets.UTF_8.newDecoder()
-                    .onMalformedInput(CodingErrorAction.REPORT)
-                    .onUnmappableCharacter(CodingErrorAction.REPORT)
-                    .decode(ByteBuffer.wrap(bytes))
-                    .toString();
-        } catch (CharacterCodingException e) {
-            throw new InputException(label, 0, null, "the library file is not valid UTF-8 text", e);
-        }
+        String text = org.mobident.io.TextFiles.readUtf8(file, "library file");
         return read(new StringReader(text), label);
     }
 

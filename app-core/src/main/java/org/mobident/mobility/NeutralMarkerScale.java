@@ -18,7 +18,7 @@ package org.mobident.mobility;
  * @param markerTimeSdS    standard uncertainty of that time, s, ≥ 0
  */
 public record NeutralMarkerScale(double detectorLengthCm, double totalLengthCm, double voltageKv, double rampS,
-                                 double markerTimeS, double markerTimeSdS) implements MobilityScale {
+                                 double markerTimeS, double markerTimeSdS) implements SpecialCaseScale {
 
     /** @throws IllegalArgumentException for an impossible geometry or time */
     public NeutralMarkerScale {
@@ -31,29 +31,9 @@ public record NeutralMarkerScale(double detectorLengthCm, double totalLengthCm, 
                 markerTimeSdS, 0.0);
     }
 
-    private ChargedMarkerScale general() {
+    @Override
+    public ChargedMarkerScale general() {
         return asCharged(detectorLengthCm, totalLengthCm, voltageKv, rampS, markerTimeS, markerTimeSdS);
-    }
-
-    @Override
-    public double mobility(double timeS) {
-        return general().mobility(timeS);
-    }
-
-    @Override
-    public double mobilitySd(double timeS, double timeSdS) {
-        return general().mobilitySd(timeS, timeSdS);
-    }
-
-    @Override
-    public double timeS(double mobility) {
-        return general().timeS(mobility);
-    }
-
-    /** μ_eof = Ld·Lt/(V·t'_marker), signed. */
-    @Override
-    public double eofMobility() {
-        return general().eofMobility();
     }
 
     @Override

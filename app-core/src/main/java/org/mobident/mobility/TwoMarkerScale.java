@@ -19,7 +19,7 @@ package org.mobident.mobility;
  * @param markerMobility known effective mobility of the charged marker, 1e-9 m²/(V·s), non-zero
  */
 public record TwoMarkerScale(double rampS, double neutralTimeS, double neutralSdS, double markerTimeS,
-                             double markerSdS, double markerMobility) implements MobilityScale {
+                             double markerSdS, double markerMobility) implements SpecialCaseScale {
 
     /** @throws IllegalArgumentException for invalid values, a zero marker mobility or coinciding markers */
     public TwoMarkerScale {
@@ -32,28 +32,9 @@ public record TwoMarkerScale(double rampS, double neutralTimeS, double neutralSd
                 markerMobility);
     }
 
-    private TwoChargedMarkerScale general() {
+    @Override
+    public TwoChargedMarkerScale general() {
         return asGeneral(rampS, neutralTimeS, neutralSdS, markerTimeS, markerSdS, markerMobility);
-    }
-
-    @Override
-    public double mobility(double timeS) {
-        return general().mobility(timeS);
-    }
-
-    @Override
-    public double mobilitySd(double timeS, double timeSdS) {
-        return general().mobilitySd(timeS, timeSdS);
-    }
-
-    @Override
-    public double timeS(double mobility) {
-        return general().timeS(mobility);
-    }
-
-    @Override
-    public double eofMobility() {
-        return general().eofMobility();
     }
 
     @Override

@@ -3,11 +3,6 @@ package org.mobident.library.build;
 import java.io.IOException;
 import java.io.StringReader;
 import java.io.UncheckedIOException;
-import java.nio.ByteBuffer;
-import java.nio.charset.CharacterCodingException;
-import java.nio.charset.CodingErrorAction;
-import java.nio.charset.StandardCharsets;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.HashMap;
@@ -76,22 +71,7 @@ public final class StandardsSheetReader {
      */
     public static StandardsSheet read(Path file) throws InputException {
         String label = file.toString();
-        byte[] bytes;
-        try {
-            bytes = Files.readAllBytes(file);
-        } catch (IOException e) {
-            throw new InputException(label, 0, null, "cannot read the standards sheet: " + e.getMessage(), e);
-        }
-        String text;
-        try {
-            text = StandardCharsets.UTF_8.newDecoder()
-                    .onMalformedInput(CodingErrorAction.REPORT)
-                    .onUnmappableCharacter(CodingErrorAction.REPORT)
-                    .decode(ByteBuffer.wrap(bytes))
-                    .toString();
-        } catch (CharacterCodingException e) {
-            throw new InputException(label, 0, null, "the standards sheet is not valid UTF-8 text", e);
-        }
+        String text = org.mobident.io.TextFiles.readUtf8(file, "standards sheet");
         return read(text, label);
     }
 
