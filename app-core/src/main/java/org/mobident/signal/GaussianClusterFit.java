@@ -27,8 +27,8 @@ import org.apache.commons.math3.util.Pair;
  * zone (height, apex time, standard deviation), fitted to the raw corrected samples by the
  * Levenberg–Marquardt method (Levenberg, Q. Appl. Math. 2 (1944) 164; Marquardt, J. Soc. Ind.
  * Appl. Math. 11 (1963) 431) as implemented by Apache Commons Math
- * ({@link LevenbergMarquardtOptimizer}, a translation of MINPACK's lmder: Moré, Lecture Notes in
- * Mathematics 630 (1978) 105). Times are taken relative to the first sample of the cluster so the
+ * ({@link LevenbergMarquardtOptimizer}, a translation of MINPACK's lmder: Moré, in Numerical
+ * Analysis, ed. G. A. Watson, Springer LNM 630 (1978) 105). Times are taken relative to the first sample of the cluster so the
  * parameters have comparable sizes. A parameter validator keeps every height positive, every
  * apex inside the cluster and every SD inside the given bounds. The starting heights are the
  * linear least-squares heights for the starting apexes and SD (the model is linear in the
