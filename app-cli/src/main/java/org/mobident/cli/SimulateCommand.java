@@ -17,7 +17,7 @@ import picocli.CommandLine.Model.CommandSpec;
         versionProvider = VersionProvider.class,
         sortOptions = false,
         description = "Writes synthetic anion runs drawn from a library (reversed polarity, EOF drifting "
-                + "±15 %, indirect detection, noise and drift) plus their run sheet, to try the tool or time it. "
+                + "±15 %%, indirect detection, noise and drift) plus their run sheet, to try the tool or time it. "
                 + "The data are invented; never mix them with real records.")
 public final class SimulateCommand implements Callable<Integer> {
 

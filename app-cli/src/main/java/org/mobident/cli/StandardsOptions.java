@@ -42,7 +42,7 @@ public final class StandardsOptions {
             description = "Ionic strength of the standards' buffer (mmol/L), recorded in the library.")
     Double ionicStrengthMm;
 
-    @Option(names = "--rsd-limit", paramLabel = "PCT", description = "Warn above this RSD, % (default 2).")
+    @Option(names = "--rsd-limit", paramLabel = "PCT", description = "Warn above this RSD in %% (default 2).")
     Double rsdLimitPercent;
 
     @Option(names = "--min-replicates", paramLabel = "N", description = "Warn below this many replicates (default 3).")

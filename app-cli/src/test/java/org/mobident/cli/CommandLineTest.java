@@ -59,6 +59,27 @@ class CommandLineTest {
         Run version = run("--version");
         assertEquals(ExitCodes.OK, version.code());
         assertTrue(version.out().startsWith("mobident "), version.out());
+        for (String[] cmd : List.of(new String[] {"identify"}, new String[] {"report"}, new String[] {"plot"},
+                new String[] {"view"}, new String[] {"library", "build"}, new String[] {"library", "add"},
+                new String[] {"library", "check"}, new String[] {"predict"}, new String[] {"recheck"},
+                new String[] {"simulate"})) {
+            String[] args = java.util.Arrays.copyOf(cmd, cmd.length + 1);
+            args[cmd.length] = "--help";
+            // picocli reports a badly formatted help text (e.g. a lone '%') on System.err
+            java.io.PrintStream systemErr = System.err;
+            java.io.ByteArrayOutputStream stray = new java.io.ByteArrayOutputStream();
+            Run h;
+            try {
+                System.setErr(new java.io.PrintStream(stray, true, StandardCharsets.UTF_8));
+                h = run(args);
+            } finally {
+                System.setErr(systemErr);
+            }
+            assertEquals(ExitCodes.OK, h.code(), String.join(" ", cmd));
+            String complaints = h.err() + stray.toString(StandardCharsets.UTF_8);
+            assertTrue(complaints.isEmpty(), () -> String.join(" ", cmd) + " help complains: " + complaints);
+            assertTrue(h.out().contains("Usage: mobident " + String.join(" ", cmd)), h.out());
+        }
         Run sub = run("identify", "--help");
         assertEquals(ExitCodes.OK, sub.code());
         assertTrue(sub.out().contains("--marker-window") && sub.out().contains("Exit codes"), sub.out());
