@@ -66,7 +66,8 @@ public final class StandardsOptions {
         StandardsSheet sheet = StandardsSheetReader.read(mixesFile);
         Library reference = referenceFile == null ? null : LibraryCsv.read(referenceFile);
         RunInputs.Loaded loaded = inputs.load();
-        sheet.requireMixes(loaded.runs(), loaded.mixByRun());
+        var mixByRun = sheet.resolveMixes(loaded.runs(), loaded.mixByRun(), loaded.sampleByRun());
+        sheet.requireMixes(loaded.runs(), mixByRun);
         IdentifySettings settings = inputs.settings(MatchSettings.DEFAULT);
         Library empty = new Library(List.of(), "(none)", List.of());
         List<RunResult> results = new ArrayList<>(new Identifier(empty, settings).identifyAll(loaded.runs()));
@@ -75,7 +76,7 @@ public final class StandardsOptions {
             throw new InputException("command line", 0, ph != null && !(ph >= 0 && ph <= 14) ? "--ph"
                     : "--ionic-strength-mm", "pH must lie in 0–14 and the ionic strength must not be negative");
         }
-        BuildResult built = LibraryBuilder.build(results, loaded.mixByRun(), sheet, buildSettings(), reference);
+        BuildResult built = LibraryBuilder.build(results, mixByRun, sheet, buildSettings(), reference);
         return new BuildResult(LibraryBuilder.withBufferChemistry(built.library(),
                 ph == null ? Double.NaN : ph, ionicStrengthMm == null ? Double.NaN : ionicStrengthMm),
                 built.analytes(), built.outliers(), built.unexpectedPeaks(), built.warnings(), built.usedRuns(),

@@ -19,6 +19,9 @@ import org.mobident.trace.RunSpec;
 public record StandardsSheet(String sourceFile, List<StandardsMix> mixes) {
 
     /** Name of the run sheet column that names a run's mix. */
+    public static final String MIX_COLUMN = "mix";
+
+    /** Name of the run sheet's free-text column, searched for a mix name when there is no mix column. */
     public static final String SAMPLE_COLUMN = "sample";
 
     public StandardsSheet {
@@ -58,15 +61,87 @@ public record StandardsSheet(String sourceFile, List<StandardsMix> mixes) {
         for (RunSpec r : runs) {
             String mix = mixByRun.get(r.name());
             if (mix == null || mix.isBlank()) {
-                throw new InputException(r.origin(), r.originLine(), SAMPLE_COLUMN, "run '" + r.name()
-                        + "' names no standard mix; the standards sheet " + sourceFile + " defines: " + mixNames());
+                throw new InputException(r.origin(), r.originLine(), MIX_COLUMN, "run '" + r.name()
+                        + "' names no standard mix (give it in a 'mix' column); the standards sheet " + sourceFile
+                        + " defines: " + mixNames());
             }
             if (mix(mix).isEmpty()) {
-                throw new InputException(r.origin(), r.originLine(), SAMPLE_COLUMN, "unknown mix '" + mix.strip()
+                throw new InputException(r.origin(), r.originLine(), MIX_COLUMN, "unknown mix '" + mix.strip()
                         + "' for run '" + r.name() + "'; the standards sheet " + sourceFile + " defines: "
                         + mixNames());
             }
         }
+    }
+
+    /**
+     * Which mix each run holds: the run sheet's {@code mix} cell; else its {@code sample} cell when
+     * that is, or contains as a separate word, exactly one mix name (e.g. "standard mix B, replicate
+     * 2" for mix "B"); else the run name when it contains exactly one mix name as a word (e.g.
+     * {@code std-mixA-1} for mix "mixA"); else the only mix when the sheet has one. A run left
+     * without a mix is reported by {@link #requireMixes}.
+     *
+     * @param runs         the standards runs
+     * @param mixColumn    run name → {@code mix} cell
+     * @param sampleColumn run name → {@code sample} cell
+     * @return run name → mix name (the sheet's spelling where recognised)
+     */
+    public Map<String, String> resolveMixes(List<RunSpec> runs, Map<String, String> mixColumn,
+                                            Map<String, String> sampleColumn) {
+        Map<String, String> out = new java.util.LinkedHashMap<>();
+        for (RunSpec r : runs) {
+            String given = mixColumn.get(r.name());
+            String m = given != null && !given.isBlank() ? given : null;
+            if (m == null) {
+                m = named(sampleColumn.get(r.name()));
+            }
+            if (m == null) {
+                m = named(r.name());
+            }
+            if (m == null && mixes.size() == 1) {
+                m = mixes.get(0).name();
+            }
+            if (m != null) {
+                out.put(r.name(), m);
+            }
+        }
+        return out;
+    }
+
+    /** The single mix that the text names or contains as a word, else null. */
+    private String named(String text) {
+        if (text == null || text.isBlank()) {
+            return null;
+        }
+        Optional<StandardsMix> exact = mix(text);
+        if (exact.isPresent()) {
+            return exact.get().name();
+        }
+        String lower = key(text);
+        String found = null;
+        for (StandardsMix m : mixes) {
+            if (containsWord(lower, key(m.name()))) {
+                if (found != null) {
+                    return null;
+                }
+                found = m.name();
+            }
+        }
+        return found;
+    }
+
+    private static boolean containsWord(String text, String word) {
+        if (word.isEmpty()) {
+            return false;
+        }
+        for (int from = text.indexOf(word); from >= 0; from = text.indexOf(word, from + 1)) {
+            int end = from + word.length();
+            boolean before = from == 0 || !Character.isLetterOrDigit(text.charAt(from - 1));
+            boolean after = end == text.length() || !Character.isLetterOrDigit(text.charAt(end));
+            if (before && after) {
+                return true;
+            }
+        }
+        return false;
     }
 
     static String key(String name) {
