@@ -161,7 +161,7 @@ class StandardsSheetReaderTest {
                 () -> s.requireMixes(List.of(ok, bad), Map.of("r1", "cations", "r2", "catoins")));
         assertEquals("runs.csv", e.file());
         assertEquals(3, e.line());
-        assertEquals("sample", e.field());
+        assertEquals("mix", e.field());
         assertTrue(e.problem().contains("unknown mix 'catoins'"), e.getMessage());
         InputException none = assertThrows(InputException.class,
                 () -> s.requireMixes(List.of(bad), Map.of()));
