@@ -22,6 +22,12 @@ import picocli.CommandLine.Option;
 /** Standards runs, the sheet saying what each mix holds, and the build settings. */
 public final class StandardsOptions {
 
+    /** Spread given to a sheet's approximate mobility when it guides the marker choice, mobility units. */
+    static final double GUIDE_APPROX_SPREAD = 1.5;
+
+    /** Relative spread given to a reference (limiting) mobility when it guides the marker choice. */
+    static final double GUIDE_REFERENCE_RELATIVE_SPREAD = 0.05;
+
     @Mixin
     RunInputs inputs;
 
@@ -69,8 +75,9 @@ public final class StandardsOptions {
         var mixByRun = sheet.resolveMixes(loaded.runs(), loaded.mixByRun(), loaded.sampleByRun());
         sheet.requireMixes(loaded.runs(), mixByRun);
         IdentifySettings settings = inputs.settings(MatchSettings.DEFAULT);
-        Library empty = new Library(List.of(), "(none)", List.of());
-        List<RunResult> results = new ArrayList<>(new Identifier(empty, settings).identifyAll(loaded.runs()));
+        // without marker windows, the neutral marker is the peak under which the expected analytes fit best
+        Library guide = sheet.guideLibrary(reference, GUIDE_APPROX_SPREAD, GUIDE_REFERENCE_RELATIVE_SPREAD);
+        List<RunResult> results = new ArrayList<>(new Identifier(guide, settings).identifyAll(loaded.runs()));
         results.addAll(loaded.rejected());
         if ((ph != null && !(ph >= 0 && ph <= 14)) || (ionicStrengthMm != null && !(ionicStrengthMm >= 0))) {
             throw new InputException("command line", 0, ph != null && !(ph >= 0 && ph <= 14) ? "--ph"

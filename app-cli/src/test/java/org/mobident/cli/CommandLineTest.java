@@ -217,6 +217,47 @@ class CommandLineTest {
     }
 
     @Test
+    void standardsWithoutMarkerWindowsBuildTheSameLibrary() throws IOException {
+        // the same standards run sheet with its marker windows blanked: the marker must then be found
+        // from the standards sheet's approximate mobilities
+        Path std = DEMO.resolve("standards");
+        for (String f : List.of("std-mixA-1", "std-mixA-2", "std-mixA-3", "std-mixA-4", "std-mixB-1", "std-mixB-2",
+                "std-mixB-3", "std-mixB-4")) {
+            Files.copy(std.resolve(f + ".csv"), dir.resolve(f + ".csv"));
+        }
+        List<String> lines = Files.readAllLines(std.resolve("standards-runs.csv"));
+        StringBuilder blanked = new StringBuilder(lines.get(0)).append('\n');
+        for (String line : lines.subList(1, lines.size())) {
+            blanked.append(line.replace(",450,700,", ",,,")).append('\n');
+        }
+        Path sheet = dir.resolve("standards-runs.csv");
+        Files.writeString(sheet, blanked.toString());
+        assertFalse(Files.readString(sheet).contains(",450,700,"));
+        Path windowed = dir.resolve("windowed.csv");
+        Path guessed = dir.resolve("guessed.csv");
+        assertEquals(ExitCodes.OK, run("library", "build", "--runs", demo("standards/standards-runs.csv"),
+                "--mixes", demo("standards/mixes.csv"), "--out", windowed.toString()).code());
+        Run r = run("library", "build", "--runs", sheet.toString(), "--mixes", demo("standards/mixes.csv"),
+                "--out", guessed.toString());
+        assertEquals(ExitCodes.OK, r.code(), r.out() + r.err());
+        Map<String, Double> a = means(windowed);
+        Map<String, Double> b = means(guessed);
+        assertEquals(a.keySet(), b.keySet());
+        for (String name : a.keySet()) {
+            assertEquals(a.get(name), b.get(name), 1e-6, name);
+        }
+    }
+
+    private static Map<String, Double> means(Path library) throws IOException {
+        Map<String, Double> out = new LinkedHashMap<>();
+        for (CSVRecord row : CSVFormat.DEFAULT.builder().setHeader().setSkipHeaderRecord(true).setCommentMarker('#')
+                .get().parse(Files.newBufferedReader(library)).getRecords()) {
+            out.put(row.get("name"), Double.parseDouble(row.get("mobility")));
+        }
+        return out;
+    }
+
+    @Test
     void reportAndPlotAreWritten() throws IOException {
         Path html = dir.resolve("r.html");
         Run r = run("report", "--runs", demo("runs.csv"), "--library", demo("library.csv"), "--out", html.toString());

@@ -7,6 +7,8 @@ import java.util.Map;
 import java.util.Optional;
 import java.util.stream.Collectors;
 import org.mobident.InputException;
+import org.mobident.library.Library;
+import org.mobident.library.LibraryEntry;
 import org.mobident.trace.RunSpec;
 
 /**
@@ -105,6 +107,34 @@ public record StandardsSheet(String sourceFile, List<StandardsMix> mixes) {
             }
         }
         return out;
+    }
+
+    /**
+     * A rough library of the analytes the mixes should show, to choose each standards run's
+     * neutral marker when the run sheet gives no marker window (the marker is then the peak under
+     * which the expected analytes are explained best). An analyte's approximate mobility from the
+     * sheet is used with a spread of {@code approxSpread}; otherwise a reference entry of the same
+     * name with a spread of {@code referenceRelativeSpread} × |μ| (reference values are limiting
+     * mobilities, higher than those in a real buffer); analytes with neither are left out.
+     *
+     * @param reference reference library (may be null)
+     */
+    public Library guideLibrary(Library reference, double approxSpread, double referenceRelativeSpread) {
+        Map<String, LibraryEntry> entries = new java.util.LinkedHashMap<>();
+        for (StandardsMix m : mixes) {
+            for (StandardAnalyte a : m.analytes()) {
+                if (entries.containsKey(a.name())) {
+                    continue;
+                }
+                if (a.hasApproxMobility()) {
+                    entries.put(a.name(), LibraryEntry.of(a.name(), a.approxMobility(), approxSpread));
+                } else if (reference != null) {
+                    reference.find(a.name()).ifPresent(e -> entries.put(a.name(), LibraryEntry.of(a.name(),
+                            e.mobility(), referenceRelativeSpread * Math.abs(e.mobility()))));
+                }
+            }
+        }
+        return new Library(List.copyOf(entries.values()), "expected analytes of " + sourceFile, List.of());
     }
 
     /** The single mix that the text names or contains as a word, else null. */
