@@ -40,7 +40,7 @@ final class Outputs {
 
     /** Options of an HTML report made now by this version. */
     static org.mobident.report.html.HtmlReport.Options htmlOptions() {
-        return new org.mobident.report.html.HtmlReport.Options(null, "mobident " + VersionProvider.version(),
+        return new org.mobident.report.html.HtmlReport.Options(null, VersionProvider.version(),
                 timestamp());
     }
 
