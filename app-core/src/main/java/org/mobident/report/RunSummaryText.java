@@ -45,9 +45,13 @@ public final class RunSummaryText {
 
     /** Writes the summary of {@code runs} to {@code out} (flushed, not closed). */
     public static void write(List<RunResult> runs, PrintWriter out) {
-        out.println("Mobilities in 1e-9 m^2/(V s), effective, at the run temperature.");
+        out.println("Effective mobilities in 1e-9 m^2/(V s), as compared with the library (converted to its "
+                + "temperature where the run's differs); +/- is the standard uncertainty from the apex and marker "
+                + "times only (run-to-run spread enters the match through the library).");
         int ok = 0;
         int failed = 0;
+        int withoutScale = 0;
+        int noMobility = 0;
         int identified = 0;
         int ambiguous = 0;
         int unassigned = 0;
@@ -59,6 +63,9 @@ public final class RunSummaryText {
                 continue;
             }
             ok++;
+            if (!run.mobilityKnown()) {
+                withoutScale++;
+            }
             out.println(heading(run));
             List<String[]> rows = new ArrayList<>();
             int number = 0;
@@ -68,7 +75,9 @@ public final class RunSummaryText {
                     continue;
                 }
                 MatchStatus status = pr.match().status();
-                if (status == MatchStatus.IDENTIFIED) {
+                if (!Double.isFinite(pr.mobility())) {
+                    noMobility++;
+                } else if (status == MatchStatus.IDENTIFIED) {
                     identified++;
                 } else if (status == MatchStatus.AMBIGUOUS) {
                     ambiguous++;
@@ -88,8 +97,10 @@ public final class RunSummaryText {
         }
         out.println();
         out.println(String.format(Locale.ROOT,
-                "%d run%s: %d ok, %d failed. Analyte peaks: %d identified, %d ambiguous, %d unassigned.",
-                runs.size(), runs.size() == 1 ? "" : "s", ok, failed, identified, ambiguous, unassigned));
+                "%d run%s: %d ok%s, %d failed. Analyte peaks: %d identified, %d ambiguous, %d unassigned%s.",
+                runs.size(), runs.size() == 1 ? "" : "s", ok,
+                withoutScale > 0 ? " (" + withoutScale + " without mobility scale)" : "", failed,
+                identified, ambiguous, unassigned, noMobility > 0 ? ", " + noMobility + " without mobility" : ""));
         out.println(CAUTION);
         out.flush();
     }
@@ -111,12 +122,15 @@ public final class RunSummaryText {
         if (!known) {
             mobility = "n/a";
         } else {
-            String sd = Numbers.fixed(pr.mobilitySd(), SD_DECIMALS);
-            mobility = Numbers.fixed(pr.mobility(), MOBILITY_DECIMALS) + " +/- " + (sd == null ? "?" : sd);
+            double compared = Double.isFinite(pr.mobilityAtLibraryTemp()) ? pr.mobilityAtLibraryTemp() : pr.mobility();
+            double sdCompared = pr.mobilitySd() * (pr.mobility() != 0 ? Math.abs(compared / pr.mobility()) : 1.0);
+            String sd = Numbers.fixed(sdCompared, SD_DECIMALS);
+            mobility = Numbers.fixed(compared, MOBILITY_DECIMALS) + " +/- " + (sd == null ? "?" : sd);
         }
         boolean assigned = known && m.assigned() != null;
         String confidence = assigned ? percent(m.confidence()) : NONE;
-        String status = m.status() == null ? MatchStatus.UNASSIGNED.label() : m.status().label();
+        String status = !known ? "no mobility"
+                : m.status() == null ? MatchStatus.UNASSIGNED.label() : m.status().label();
         if (m.status() == MatchStatus.AMBIGUOUS && m.runnerUp() != null) {
             status += " (or " + m.runnerUp() + " " + percent(m.runnerUpProbability()) + ")";
         }

@@ -1,6 +1,7 @@
 package org.mobident.report;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.io.PrintWriter;
@@ -8,6 +9,8 @@ import java.io.StringWriter;
 import java.util.Arrays;
 import java.util.List;
 import org.junit.jupiter.api.Test;
+import org.mobident.pipeline.PeakResult;
+import org.mobident.pipeline.RunResult;
 import org.mobident.pipeline.RunResult;
 
 class RunSummaryTextTest {
@@ -30,11 +33,30 @@ class RunSummaryTextTest {
         assertTrue(text.contains("note: run at 30.0 C"), text);
         assertTrue(text.contains("Run well-09: FAILED - samples/well-09.csv, line 3"), text);
         assertTrue(text.contains("Run spring-02: no neutral marker found; EOF mobility unknown"), text);
-        assertTrue(text.contains("3 runs: 2 ok, 1 failed. Analyte peaks: 1 identified, 1 ambiguous, 2 unassigned."), text);
+        assertTrue(text.contains("3 runs: 2 ok (1 without mobility scale), 1 failed. Analyte peaks: 1 identified, "
+                + "1 ambiguous, 1 unassigned, 1 without mobility."), text);
+        assertTrue(text.contains("no mobility"), text);
         assertTrue(text.contains("presumptive"), text);
         assertTrue(text.contains("orthogonal method"), text);
         assertTrue(text.contains("validated procedures"), text);
         assertTrue(text.trim().endsWith(RunSummaryText.CAUTION), "caution closes the summary");
+    }
+
+    @Test
+    void showsTheMobilityComparedWithTheLibrary() {
+        // a run at 30 °C: the table shows the value converted to the library temperature, the one matched
+        RunResult warm = ReportFixtures.okRun();
+        List<PeakResult> peaks = new java.util.ArrayList<>();
+        for (PeakResult p : warm.peaks()) {
+            peaks.add(new PeakResult(p.peak(), p.role(), p.mobility(), p.mobilitySd(), p.mobility() * 0.8957,
+                    p.match()));
+        }
+        RunResult converted = new RunResult(warm.spec(), null, warm.scaleNote(), warm.eofMobility(), warm.scale(),
+                peaks, warm.notes(), warm.noiseSd());
+        String text = summary(List.of(converted));
+        // -71.52 × 0.8957 = -64.06; the SD scales with it: 0.21 × 0.8957 = 0.188
+        assertTrue(text.contains("-64.06 +/- 0.188"), text);
+        assertFalse(text.contains("-71.52"), text);
     }
 
     @Test

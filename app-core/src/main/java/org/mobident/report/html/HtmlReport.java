@@ -36,6 +36,9 @@ public final class HtmlReport {
     /** Name of the tool, as the page states it. */
     public static final String TOOL_NAME = "Mobident";
 
+    /** Probabilities below this are shown as "&lt;1%" rather than rounded to 0 %. */
+    private static final double LESS_THAN_ONE_PERCENT = 0.005;
+
     /** Shown where a number is unknown. */
     static final String MISSING = "–";
 
@@ -190,7 +193,7 @@ public final class HtmlReport {
             sb.append("<p>No runs.</p>\n</section>\n");
             return;
         }
-        sb.append("<table class=\"summary\">\n<thead><tr><th>Run</th><th>Sample file</th><th>Buffer</th>"
+        sb.append("<table class=\"summary\">\n<thead><tr><th>Run</th><th>Trace file</th><th>Buffer</th>"
                 + "<th>How mobilities were set</th><th>EOF mobility (10⁻⁹ m² V⁻¹ s⁻¹)</th>"
                 + "<th>Analyte peaks</th><th>Identified</th><th>Ambiguous</th><th>Unassigned</th>"
                 + "<th>Outcome</th></tr></thead>\n<tbody>\n");
@@ -273,7 +276,7 @@ public final class HtmlReport {
         sb.append("<section class=\"run\" id=\"run-").append(index).append("\">\n");
         sb.append("<h2>Run ").append(index).append(": ").append(esc(runName(r))).append("</h2>\n");
         sb.append("<dl class=\"facts\">");
-        fact(sb, "Sample file", esc(sampleFile(r)));
+        fact(sb, "Trace file", esc(sampleFile(r)));
         fact(sb, "Declared in", esc(origin(r)));
         fact(sb, "Buffer", esc(buffer(r)));
         fact(sb, "How mobilities were set", esc(r.scaleNote()));
@@ -333,7 +336,7 @@ public final class HtmlReport {
             return;
         }
         sb.append("<table class=\"peaks\">\n<thead><tr><th>#</th><th>Apex time (s)</th>"
-                + "<th>Mobility ± SD (10⁻⁹ m² V⁻¹ s⁻¹)</th><th>Assigned</th><th>Confidence</th>"
+                + "<th>Mobility ± SD (10⁻⁹ m² V⁻¹ s⁻¹, as compared with the library)</th><th>Assigned</th><th>Confidence</th>"
                 + "<th>Status</th><th>Runner-up</th><th>S/N</th><th>Plates</th><th>Resolution</th>"
                 + "</tr></thead>\n<tbody>\n");
         int n = 0;
@@ -345,14 +348,17 @@ public final class HtmlReport {
             boolean marker = status == PeakStatus.MARKER;
             sb.append("<tr><td class=\"num\">").append(n).append("</td>");
             sb.append("<td class=\"num\">").append(fixed(p.apexTimeS(), 2)).append("</td>");
-            sb.append("<td class=\"num\">").append(fixed(pr.mobility(), 2));
+            // the value compared with the library: converted to its temperature when the run's differs
+            double compared = Double.isFinite(pr.mobilityAtLibraryTemp()) ? pr.mobilityAtLibraryTemp() : pr.mobility();
+            sb.append("<td class=\"num\">").append(fixed(compared, 2));
             if (Double.isFinite(pr.mobilitySd())) {
-                sb.append(" ± ").append(fixed(pr.mobilitySd(), 2));
+                double scale = pr.mobility() != 0 && Double.isFinite(compared) ? Math.abs(compared / pr.mobility()) : 1.0;
+                sb.append(" ± ").append(fixed(pr.mobilitySd() * scale, 3));
             }
             sb.append("</td>");
             sb.append("<td>").append(marker || m.assigned() == null ? MISSING : esc(m.assigned())).append("</td>");
             sb.append("<td class=\"num\">");
-            if (marker) {
+            if (marker || !Double.isFinite(pr.mobility())) {
                 sb.append(MISSING);
             } else if (status == PeakStatus.UNASSIGNED) {
                 sb.append(percent(m.confidence())).append(" none");
@@ -361,7 +367,8 @@ public final class HtmlReport {
             }
             sb.append("</td>");
             sb.append("<td class=\"status\">").append(SvgPlot.statusIcon(status, ICON_SIZE))
-                    .append(marker ? esc(pr.role().label()) : status.label()).append("</td>");
+                    .append(marker ? esc(pr.role().label()) : !Double.isFinite(pr.mobility()) ? "no mobility"
+                            : status.label()).append("</td>");
             sb.append("<td>");
             if (!marker && m.runnerUp() != null) {
                 sb.append(esc(m.runnerUp())).append(" (").append(percent(m.runnerUpProbability())).append(')');
@@ -423,6 +430,9 @@ public final class HtmlReport {
     static String percent(double p) {
         if (!Double.isFinite(p)) {
             return MISSING;
+        }
+        if (p > 0 && p < LESS_THAN_ONE_PERCENT) {
+            return "&lt;1%"; // inserted into the page as markup
         }
         return Math.round(100 * p) + "%";
     }

@@ -168,4 +168,11 @@ class HtmlReportTest {
         assertEquals("97%", HtmlReport.percent(0.971));
         assertEquals(HtmlReport.MISSING, HtmlReport.percent(Double.NaN));
     }
+
+    @Test
+    void smallProbabilitiesAreNotShownAsZero() {
+        assertEquals("&lt;1%", HtmlReport.percent(0.002));
+        assertEquals("0%", HtmlReport.percent(0.0));
+        assertEquals("50%", HtmlReport.percent(0.5));
+    }
 }
