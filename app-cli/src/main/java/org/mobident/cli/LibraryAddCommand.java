@@ -20,7 +20,7 @@ import picocli.CommandLine.Model.CommandSpec;
         mixinStandardHelpOptions = true,
         versionProvider = VersionProvider.class,
         sortOptions = false,
-        description = "Processes new standards runs like 'library build' and pools them into an existing library: analytes in both get the mean and SD of all measurements together; new analytes are added. The library is rewritten in place (atomically); its previous version is kept as FILE.prev.",
+        description = "Processes new standards runs like 'library build' and pools them into an existing library: analytes in both get the mean and SD of all measurements together; new analytes are added. Runs the library already holds (same trace SHA-256 in its notes) are refused, exit 3, library unchanged. The library is rewritten in place (atomically); its previous version is kept as FILE.prev.",
         footer = {"", "Exit codes: 0 updated without warnings; 1 updated, with warnings; 2 bad command line; "
                 + "3 unusable input; 4 library not written."})
 public final class LibraryAddCommand implements Callable<Integer> {
@@ -44,11 +44,16 @@ public final class LibraryAddCommand implements Callable<Integer> {
         }
         Library existing = LibraryCsv.read(libraryFile);
         BuildResult fresh = standards.build();
-        BuildText.write(fresh, out);
+        // refuses runs already pooled (same trace SHA-256 in the library's notes) before anything is written
         MergeResult merged = LibraryMerger.merge(existing, fresh);
+        BuildText.write(fresh, out);
         LibraryBuildCommand.writeLibrary(libraryFile, true, merged.library());
-        out.println("pooled: " + String.join(", ", merged.pooled()));
-        out.println("added: " + String.join(", ", merged.added()));
+        if (!merged.pooled().isEmpty()) {
+            out.println("pooled: " + String.join(", ", merged.pooled()));
+        }
+        if (!merged.added().isEmpty()) {
+            out.println("added: " + String.join(", ", merged.added()));
+        }
         if (!merged.replaced().isEmpty()) {
             out.println("replaced (had no spread): " + String.join(", ", merged.replaced()));
         }

@@ -18,7 +18,7 @@ import picocli.CommandLine.Model.CommandSpec;
 @Command(name = "check",
         mixinStandardHelpOptions = true,
         versionProvider = VersionProvider.class,
-        description = "Reads a library (any format error is reported with line and column), prints it readably, and warns about entries with too few measurements or no spread, high RSD, and analytes whose match windows overlap (they cannot be told apart by mobility alone).",
+        description = "Reads a library (any format error is reported with line and column), prints it readably, and warns about impossible entries (mobility sign against the charge, magnitudes beyond any common ion), entries with too few measurements or no spread, high RSD, analytes whose match windows overlap (a peak between them may be ambiguous) and analytes too close to be told apart by mobility alone.",
         footer = {"", "Exit codes: 0 no findings; 1 findings printed; 3 the file cannot be read as a library."})
 public final class LibraryCheckCommand implements Callable<Integer> {
 
@@ -32,7 +32,7 @@ public final class LibraryCheckCommand implements Callable<Integer> {
     public Integer call() throws Exception {
         Library library = LibraryCsv.read(libraryFile);
         List<BuildWarning> findings = LibraryCheck.check(library, BuildSettings.defaults());
-        BuildText.write(library, findings, spec.commandLine().getOut());
+        BuildText.write(library, findings, BuildSettings.defaults(), spec.commandLine().getOut());
         return findings.isEmpty() ? ExitCodes.OK : ExitCodes.SOME_RUNS_FAILED;
     }
 }

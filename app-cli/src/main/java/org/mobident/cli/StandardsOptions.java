@@ -38,14 +38,18 @@ public final class StandardsOptions {
 
     @Option(names = "--reference", paramLabel = "FILE",
             description = "A reference library used to name peaks when the sheet gives no approximate mobility "
-                    + "or order (e.g. reference-libraries/ions-25C.csv).")
+                    + "or order (e.g. reference-libraries/ions-25C.csv). With --ph and --ionic-strength-mm its "
+                    + "limiting mobilities are first predicted for the buffer; without them only clear pairings "
+                    + "are named.")
     Path referenceFile;
 
-    @Option(names = "--ph", paramLabel = "PH", description = "pH of the standards' buffer, recorded in the library.")
+    @Option(names = "--ph", paramLabel = "PH", description = "pH of the standards' buffer, recorded in the library and used to predict the reference's "
+                    + "effective mobilities.")
     Double ph;
 
     @Option(names = "--ionic-strength-mm", paramLabel = "MM",
-            description = "Ionic strength of the standards' buffer (mmol/L), recorded in the library.")
+            description = "Ionic strength of the standards' buffer (mmol/L), recorded in the library and used to "
+                    + "predict the reference's effective mobilities.")
     Double ionicStrengthMm;
 
     @Option(names = "--rsd-limit", paramLabel = "PCT", description = "Warn above this RSD in %% (default 2).")
@@ -61,11 +65,13 @@ public final class StandardsOptions {
     @Option(names = "--drop-outliers", description = "Leave Grubbs outliers out of the statistics (they are always reported).")
     boolean dropOutliers;
 
-    @Option(names = "--window-sd", paramLabel = "K", description = "Match window = K × SD (default 3) ...")
+    @Option(names = "--window-k", paramLabel = "K",
+            description = "Match window written to the library: ± K replicate standard deviations (default 3).")
     Double windowK;
 
-    @Option(names = "--window-min", paramLabel = "MOB", description = "... but at least this many mobility units (default 0.5).")
-    Double windowMin;
+    @Option(names = "--window-floor", paramLabel = "MOB",
+            description = "Smallest half-width of that window, mobility units (default 0.5).")
+    Double windowFloor;
 
     /** Processes the standards runs and builds a library from them. */
     BuildResult build() throws InputException {
@@ -83,11 +89,9 @@ public final class StandardsOptions {
             throw new InputException("command line", 0, ph != null && !(ph >= 0 && ph <= 14) ? "--ph"
                     : "--ionic-strength-mm", "pH must lie in 0–14 and the ionic strength must not be negative");
         }
-        BuildResult built = LibraryBuilder.build(results, mixByRun, sheet, buildSettings(), reference);
-        return new BuildResult(LibraryBuilder.withBufferChemistry(built.library(),
-                ph == null ? Double.NaN : ph, ionicStrengthMm == null ? Double.NaN : ionicStrengthMm),
-                built.analytes(), built.outliers(), built.unexpectedPeaks(), built.warnings(), built.usedRuns(),
-                built.settings(), built.stamp());
+        // with pH and ionic strength, the reference's limiting mobilities are first predicted for the buffer
+        return LibraryBuilder.build(results, mixByRun, sheet, buildSettings(), reference,
+                ph == null ? Double.NaN : ph, ionicStrengthMm == null ? Double.NaN : ionicStrengthMm);
     }
 
     BuildSettings buildSettings() {
@@ -103,9 +107,9 @@ public final class StandardsOptions {
                 s = s.withOutlierTest(outlierAlpha != null ? outlierAlpha : s.outlierAlpha(),
                         Grubbs.Alternative.TWO_SIDED, dropOutliers);
             }
-            if (windowK != null || windowMin != null) {
+            if (windowK != null || windowFloor != null) {
                 s = s.withTolerance(windowK != null ? windowK : s.toleranceSdMultiple(),
-                        windowMin != null ? windowMin : s.toleranceFloor());
+                        windowFloor != null ? windowFloor : s.toleranceFloor());
             }
         } catch (IllegalArgumentException e) {
             throw new picocli.CommandLine.ParameterException(new picocli.CommandLine(this), e.getMessage());

@@ -97,6 +97,54 @@ public final class ReferenceIons {
     }
 
     /**
+     * The reference library with each entry's mobility replaced by its predicted effective mobility
+     * in the given buffer ({@link MobilityPredictor#predict}), so that peaks measured in that buffer
+     * can be compared with it. An entry is predicted when it can be modelled ({@link #model}: a
+     * non-zero charge and consistent pKa and mobility lists) and its {@code mobility} may be read
+     * as a limiting value: it carries {@code limiting_mobility} values, or its stated ionic strength
+     * is 0 or not given. Every other entry (no charge, inconsistent lists, or a value measured at a
+     * positive ionic strength) is kept exactly as it is.
+     *
+     * <p>A predicted entry keeps name and charge; its mobility is the prediction, its
+     * {@code mobility_sd} the prediction's standard uncertainty (n = 0: not measured), its pH,
+     * ionic strength and temperature those of the buffer, its buffer label says "predicted", and its
+     * pKa and limiting-mobility lists are left empty so that it is never modelled a second time.
+     *
+     * @param reference a library of limiting mobilities (for example {@link #SHIPPED_LIBRARY})
+     * @param buffer    the buffer the comparison is for
+     * @return a library of the same entries in the same order, with the same notes plus one saying so
+     */
+    public static Library effectiveAt(Library reference, BufferConditions buffer) {
+        List<LibraryEntry> out = new ArrayList<>(reference.size());
+        int predicted = 0;
+        for (LibraryEntry e : reference.entries()) {
+            boolean limiting = !e.limitingMobilities().isEmpty() || !(e.ionicStrengthMm() > 0.0);
+            if (e.charge() == 0 || !limiting) {
+                out.add(e);
+                continue;
+            }
+            SpeciesModel m;
+            try {
+                m = model(e, reference.sourceFile());
+            } catch (InputException ex) {
+                out.add(e);
+                continue;
+            }
+            MobilityPrediction p = MobilityPredictor.predict(m, buffer);
+            out.add(new LibraryEntry(e.name(), p.mobility(), p.standardUncertainty(), 0, e.charge(), Double.NaN,
+                    List.of(), List.of(), "predicted for pH " + buffer.pH() + ", I " + 1000.0 * buffer.ionicStrengthMolar()
+                    + " mM", buffer.pH(), 1000.0 * buffer.ionicStrengthMolar(), buffer.temperatureC(),
+                    "predicted by the mobility model from: " + (e.source() == null ? "(no source)" : e.source())));
+            predicted++;
+        }
+        List<String> notes = new ArrayList<>(reference.notes());
+        notes.add(predicted + " of " + reference.size() + " entries predicted as effective mobilities for pH "
+                + buffer.pH() + ", ionic strength " + 1000.0 * buffer.ionicStrengthMolar() + " mmol/L, "
+                + buffer.temperatureC() + " °C; the rest kept as stated");
+        return new Library(out, reference.sourceFile(), notes);
+    }
+
+    /**
      * Reads a library file and models its entries.
      *
      * @param file a library CSV (for example {@link #SHIPPED_LIBRARY})

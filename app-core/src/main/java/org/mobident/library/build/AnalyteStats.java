@@ -16,7 +16,8 @@ import java.util.List;
  * @param max          largest value used
  * @param rsdPercent   100·SD/|mean|, % (NaN when SD is)
  * @param tolerance    match window half-width max(k·SD, floor)
- * @param charge       charge number written to the library (sign only, ±1, when only the sign is known)
+ * @param charge       charge number written to the library: the standards sheet's, 0 when it gives none
+ *                     or only a sign (LibraryEntry's "0 when unknown")
  * @param runs         the runs the values came from, in run order
  * @param outliers     replicates that failed the Grubbs test (empty when none, or when n &lt; 3)
  */

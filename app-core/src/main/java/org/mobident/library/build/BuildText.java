@@ -35,19 +35,42 @@ public final class BuildText {
         out.flush();
     }
 
-    /** A library, one entry per line, then the findings of a check. */
+    /** A library, one entry per line, then the findings of a check (windows by the default rule). */
     public static void write(Library library, List<BuildWarning> findings, PrintWriter out) {
+        write(library, findings, BuildSettings.defaults(), out);
+    }
+
+    /**
+     * A library, one entry per line, then the findings of a check. An entry without its own
+     * tolerance shows the window matching would use ({@link LibraryCheck#window}), marked with '*'.
+     */
+    public static void write(Library library, List<BuildWarning> findings, BuildSettings settings, PrintWriter out) {
         out.println("Library " + library.sourceFile() + ": " + library.size() + " analytes. Mobilities in 1e-9 m^2/(V s).");
         for (String note : library.notes()) {
             out.println("  # " + note);
         }
-        out.println(String.format(Locale.ROOT, "%-18s %9s %7s %3s %6s %7s %6s  %s",
+        out.println(String.format(Locale.ROOT, "%-18s %9s %7s %3s %6s %8s %6s  %s",
                 "analyte", "mobility", "sd", "n", "charge", "window", "temp", "source"));
+        boolean computed = false;
         for (LibraryEntry e : library.entries()) {
-            out.println(String.format(Locale.ROOT, "%-18s %9.3f %7s %3s %6s %7s %6.1f  %s",
+            String window;
+            if (Double.isFinite(e.tolerance())) {
+                window = num(e.tolerance()) + " ";
+            } else {
+                window = num(LibraryCheck.window(e, settings)) + "*";
+                computed = true;
+            }
+            out.println(String.format(Locale.ROOT, "%-18s %9.3f %7s %3s %6s %8s %6.1f  %s",
                     e.name(), e.mobility(), num(e.mobilitySd()), e.n() > 0 ? Integer.toString(e.n()) : "-",
                     e.charge() != 0 ? String.format(Locale.ROOT, "%+d", e.charge()) : "-",
-                    num(e.tolerance()), e.temperatureOrDefaultC(), e.source() == null ? "" : e.source()));
+                    window, e.temperatureOrDefaultC(), e.source() == null ? "" : e.source()));
+        }
+        if (computed) {
+            out.println(String.format(Locale.ROOT, "* window computed, as matching does, by the rule max(%s x SD, %s)"
+                            + " (SD %s assumed where none is given); identification widens it by the peak's own"
+                            + " uncertainty.", LibraryBuilder.plain(settings.toleranceSdMultiple()),
+                    LibraryBuilder.plain(settings.toleranceFloor()),
+                    LibraryBuilder.plain(org.mobident.matching.MatchSettings.DEFAULT_ASSUMED_ENTRY_SD)));
         }
         warnings(findings, out);
         out.flush();

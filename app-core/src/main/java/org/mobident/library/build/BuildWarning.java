@@ -29,8 +29,16 @@ public record BuildWarning(Kind kind, String mix, String analyte, String run, St
         HIGH_RSD,
         /** A replicate failed the Grubbs test. */
         OUTLIER,
-        /** Two analytes' tolerance windows overlap: they cannot be told apart by mobility in this buffer. */
+        /**
+         * Two analytes' match windows overlap: a peak between them may be ambiguous (identification
+         * still tells apart peaks that lie near one of them).
+         */
         OVERLAPPING_WINDOWS,
+        /**
+         * Two analytes lie closer than twice the SD of their difference, √(s₁² + s₂²), or closer than
+         * 1 mobility unit: they cannot be told apart by mobility alone.
+         */
+        INDISTINGUISHABLE,
         /** An analyte of a mix was found in none of its runs (or could not be named). */
         ANALYTE_NOT_FOUND,
         /** A peak, or a group of peaks, that fits no expected analyte (or is too small to be one). */
@@ -39,6 +47,17 @@ public record BuildWarning(Kind kind, String mix, String analyte, String run, St
         UNNAMED_GROUP,
         /** The data contradict the standards sheet (migration order, charge sign). */
         NAMING_CONFLICT,
+        /** A group's nearest reference value was not clearly nearer than a rival's: left unnamed. */
+        DOUBTFUL_REFERENCE_NAME,
+        /**
+         * Reference values were compared as stated (limiting, infinite-dilution values, or values of an
+         * unknown buffer) rather than predicted for the standards' buffer.
+         */
+        REFERENCE_AS_STATED,
+        /** Check: an entry's mobility sign contradicts its charge (cations +, anions −). */
+        SIGN_CONTRADICTS_CHARGE,
+        /** Check: a mobility faster than any common ion but H⁺ and OH⁻ (probably a unit or typing error). */
+        IMPLAUSIBLE_MOBILITY,
         /** Merge: the fresh mean differs from the existing one by more than their combined uncertainty. */
         MEANS_DIFFER,
         /** Merge: the existing entry has no n or SD, so its value was replaced rather than pooled. */

@@ -21,11 +21,29 @@ import org.mobident.library.LibraryEntry;
  *       when it holds fewer, nothing in it is named (which analyte is missing cannot be told);</li>
  *   <li>the reference library: an analyte whose name the reference holds takes the nearest group of
  *       the same charge sign within max({@link BuildSettings#referenceWindow()}, entry tolerance),
- *       one-to-one;</li>
+ *       one-to-one, but only when that pairing is clear (see below);</li>
  *   <li>a mix of one analyte that gave exactly one group.</li>
  * </ol>
  * A name from steps 2 or 4 whose group has the wrong mobility sign for the analyte's charge is
  * withdrawn with a {@link BuildWarning.Kind#NAMING_CONFLICT} warning.
+ *
+ * <p><b>Clear reference pairings.</b> A reference value is only an estimate of the mobility in the
+ * standards' buffer: a predicted effective mobility is off by about a unit, a limiting
+ * (infinite-dilution) value by several units, differently for each ion (multivalent ions and weak
+ * acids near their pKa most). A pairing of analyte A (reference value r_A) with group G (mean μ_G),
+ * d = |μ_G − r_A|, is kept only when every rival is clearly farther: every other analyte B of the
+ * mix still to be named from the reference, of the group's sign, has |μ_G − r_B| ≥ max(2·d, d + m),
+ * and every other unnamed group H of A's sign has |μ_H − r_A| ≥ max(2·d, d + m). The margin m is
+ * {@value #PREDICTED_MARGIN} unit when the values compared were predicted for the buffer, and half
+ * the reference window ({@link BuildSettings#referenceWindow()}) when any of them is a value taken
+ * as stated (a limiting value, or one whose buffer is unknown). A value taken as stated is moreover
+ * a rival wherever the buffer could have moved it: a group within max(reference window,
+ * {@value #AS_STATED_SHIFT} × |r|) of a stated value r is a rival for it (at 10–50 mM ionic strength,
+ * effective mobilities of divalent ions lie 10–25 % below their limiting values, and weak acids near
+ * their pKa even lower; common practice). A pairing that fails is not made: the group stays unnamed
+ * and a {@link BuildWarning.Kind#DOUBTFUL_REFERENCE_NAME} warning names the rival. (The factor 2,
+ * the margins and the shift are this program's rule, chosen so that a wrong name needs a reference
+ * error larger than they allow; not from a publication.)
  */
 final class GroupNamer {
 
@@ -47,25 +65,38 @@ final class GroupNamer {
      * @param basisOfGroup    per group, how it was named, or null
      * @param notFoundReasons for analytes left unnamed because naming was ambiguous, why
      * @param warnings        conflicts found while naming
+     * @param comparedAsStated analytes whose reference value was compared as stated (not predicted)
      */
     record Naming(StandardAnalyte[] analyteOfGroup, NamingBasis[] basisOfGroup,
-                  Map<StandardAnalyte, String> notFoundReasons, List<BuildWarning> warnings) {
+                  Map<StandardAnalyte, String> notFoundReasons, List<BuildWarning> warnings,
+                  List<String> comparedAsStated) {
     }
+
+    /** Rival clearance when the compared reference values were predicted for the buffer, mobility units. */
+    static final double PREDICTED_MARGIN = 1.0;
+    /** Fraction of a stated (limiting) value by which a buffer may move an effective mobility. */
+    static final double AS_STATED_SHIFT = 0.20;
+    /** A rival must be at least this many times as far as the chosen pairing. */
+    static final double CLEAR_RATIO = 2.0;
 
     private final StandardsMix mix;
     private final List<GroupInfo> groups;
     private final Library reference;
+    private final java.util.Set<String> predicted;
     private final BuildSettings settings;
     private final StandardAnalyte[] analyteOf;
     private final NamingBasis[] basisOf;
     private final Map<StandardAnalyte, Integer> groupOf = new HashMap<>();
     private final Map<StandardAnalyte, String> reasons = new HashMap<>();
     private final List<BuildWarning> warnings = new ArrayList<>();
+    private final List<String> asStated = new ArrayList<>();
 
-    private GroupNamer(StandardsMix mix, List<GroupInfo> groups, Library reference, BuildSettings settings) {
+    private GroupNamer(StandardsMix mix, List<GroupInfo> groups, Library reference, java.util.Set<String> predicted,
+                       BuildSettings settings) {
         this.mix = mix;
         this.groups = groups;
         this.reference = reference;
+        this.predicted = predicted;
         this.settings = settings;
         this.analyteOf = new StandardAnalyte[groups.size()];
         this.basisOf = new NamingBasis[groups.size()];
@@ -74,16 +105,20 @@ final class GroupNamer {
     /**
      * @param mix       the mix
      * @param groups    its groups, ordered by mean mobility
-     * @param reference reference library for naming, or null
+     * @param reference reference library for naming (its values predicted for the buffer where
+     *                  possible), or null
+     * @param predicted lower-case names of the reference entries whose values were predicted for the
+     *                  standards' buffer; the others are compared as stated, with the wider margin
      * @param settings  windows
      */
-    static Naming name(StandardsMix mix, List<GroupInfo> groups, Library reference, BuildSettings settings) {
-        GroupNamer n = new GroupNamer(mix, groups, reference, settings);
+    static Naming name(StandardsMix mix, List<GroupInfo> groups, Library reference, java.util.Set<String> predicted,
+                       BuildSettings settings) {
+        GroupNamer n = new GroupNamer(mix, groups, reference, predicted, settings);
         n.byApproxMobility();
         n.byOrder();
         n.byReference();
         n.onlyAnalyte();
-        return new Naming(n.analyteOf, n.basisOf, n.reasons, n.warnings);
+        return new Naming(n.analyteOf, n.basisOf, n.reasons, n.warnings, n.asStated);
     }
 
     private void assign(StandardAnalyte a, int group, NamingBasis basis) {
@@ -237,6 +272,7 @@ final class GroupNamer {
         List<Double> target = new ArrayList<>();
         List<Double> window = new ArrayList<>();
         List<Integer> sign = new ArrayList<>();
+        List<Boolean> wasPredicted = new ArrayList<>();
         for (StandardAnalyte a : mix.analytes()) {
             if (groupOf.containsKey(a)) {
                 continue;
@@ -254,14 +290,91 @@ final class GroupNamer {
             double tol = Double.isFinite(e.tolerance()) ? e.tolerance() : 0.0;
             window.add(Math.max(settings.referenceWindow(), tol));
             sign.add(a.expectedSign() != 0 ? a.expectedSign() : entrySign);
+            boolean p = predicted.contains(LibraryBuilder.key(e.name()));
+            wasPredicted.add(p);
+            if (!p) {
+                asStated.add(a.name());
+            }
         }
+        List<Integer> free = freeGroupsByMobility();
         nearest(as, target, window, sign, NamingBasis.REFERENCE_LIBRARY);
+        for (int i = 0; i < as.size(); i++) {
+            StandardAnalyte a = as.get(i);
+            Integer g = groupOf.get(a);
+            if (g == null || basisOf[g] != NamingBasis.REFERENCE_LIBRARY) {
+                continue;
+            }
+            String rival = rival(i, g, as, target, sign, wasPredicted, free);
+            if (rival != null) {
+                double mu = groups.get(g).mean();
+                warnings.add(new BuildWarning(BuildWarning.Kind.DOUBTFUL_REFERENCE_NAME, mix.name(), a.name(), null,
+                        String.format(Locale.ROOT, "In mix %s, the group at %.3f is nearest to the %s value of %s"
+                                        + " (%.3f), but %s; the name would be doubtful, so the group was left unnamed.",
+                                mix.name(), mu, wasPredicted.get(i) ? "predicted" : "reference", a.name(),
+                                target.get(i), rival)));
+                analyteOf[g] = null;
+                basisOf[g] = null;
+                groupOf.remove(a);
+                reasons.put(a, "its reference value does not point clearly to one peak group (" + rival + ")");
+            }
+        }
         for (StandardAnalyte a : as) {
             if (!groupOf.containsKey(a)) {
                 reasons.putIfAbsent(a, "no peak group of the same charge sign within the window around its"
                         + " reference mobility");
             }
         }
+    }
+
+    /**
+     * The first rival that is not clearly farther than the pairing of analyte {@code i} with group
+     * {@code g} (see the class comment), described for the analyst; null when the pairing is clear.
+     */
+    private String rival(int i, int g, List<StandardAnalyte> as, List<Double> target, List<Integer> sign,
+                         List<Boolean> wasPredicted, List<Integer> free) {
+        double mu = groups.get(g).mean();
+        double d = Math.abs(mu - target.get(i));
+        for (int b = 0; b < as.size(); b++) {
+            if (b == i || !signAgrees(sign.get(b), mu)) {
+                continue;
+            }
+            double m = margin(wasPredicted.get(i) && wasPredicted.get(b));
+            double d2 = Math.abs(mu - target.get(b));
+            if (!wasPredicted.get(b) && d2 <= reach(target.get(b))) {
+                return String.format(Locale.ROOT, "the reference value of %s (%.3f) is taken as stated and the"
+                        + " buffer may shift it as far as this group (%.3f away)", as.get(b).name(), target.get(b), d2);
+            }
+            if (d2 < Math.max(CLEAR_RATIO * d, d + m)) {
+                return String.format(Locale.ROOT, "that of %s (%.3f) is only %.3f farther (a clear name needs"
+                        + " %.3f more)", as.get(b).name(), target.get(b), d2 - d, Math.max(CLEAR_RATIO * d, d + m) - d);
+            }
+        }
+        double m = margin(wasPredicted.get(i));
+        for (int h : free) {
+            if (h == g || !signAgrees(sign.get(i), groups.get(h).mean())) {
+                continue;
+            }
+            double d2 = Math.abs(groups.get(h).mean() - target.get(i));
+            if (!wasPredicted.get(i) && d2 <= reach(target.get(i))) {
+                return String.format(Locale.ROOT, "the value is taken as stated and the buffer may shift it as far as"
+                        + " the group at %.3f (%.3f away)", groups.get(h).mean(), d2);
+            }
+            if (d2 < Math.max(CLEAR_RATIO * d, d + m)) {
+                return String.format(Locale.ROOT, "the group at %.3f is only %.3f farther from it (a clear name"
+                        + " needs %.3f more)", groups.get(h).mean(), d2 - d, Math.max(CLEAR_RATIO * d, d + m) - d);
+            }
+        }
+        return null;
+    }
+
+    /** How far the buffer may move a value taken as stated. */
+    private double reach(double statedValue) {
+        return Math.max(settings.referenceWindow(), AS_STATED_SHIFT * Math.abs(statedValue));
+    }
+
+    /** How much farther a rival must be: small for values predicted for the buffer, wide otherwise. */
+    private double margin(boolean predictedValues) {
+        return predictedValues ? PREDICTED_MARGIN : settings.referenceWindow() / 2.0;
     }
 
     private void onlyAnalyte() {

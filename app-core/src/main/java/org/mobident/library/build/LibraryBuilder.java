@@ -12,6 +12,8 @@ import java.util.Locale;
 import java.util.Map;
 import java.util.Set;
 import java.util.function.Function;
+import org.mobident.chem.BufferConditions;
+import org.mobident.chem.ReferenceIons;
 import org.mobident.library.Library;
 import org.mobident.library.LibraryEntry;
 import org.mobident.pipeline.PeakResult;
@@ -71,7 +73,36 @@ public final class LibraryBuilder {
      */
     public static BuildResult build(List<RunResult> runs, Map<String, String> mixByRun, StandardsSheet sheet,
                                     BuildSettings settings, Library reference, BuildStamp stamp) {
-        return new Build(mixByRun, sheet, settings, reference, stamp).run(runs);
+        return new Build(mixByRun, sheet, settings, reference, Double.NaN, Double.NaN, stamp).run(runs);
+    }
+
+    /**
+     * Builds a library from standards run in a buffer of known pH and ionic strength. The reference
+     * library (limiting mobilities) is first turned into the effective mobilities predicted for that
+     * buffer at the runs' temperature ({@link ReferenceIons#effectiveAt}), and groups are named against
+     * those; entries that cannot be modelled are compared as stated, with the stricter rule of
+     * {@link GroupNamer}. The pH and ionic strength are recorded on every entry
+     * ({@link #withBufferChemistry}). With either unknown (NaN), reference values are compared as
+     * stated and a {@link BuildWarning.Kind#REFERENCE_AS_STATED} warning says so.
+     *
+     * @param pH              buffer pH (NaN: not given)
+     * @param ionicStrengthMm buffer ionic strength in mmol/L (NaN: not given)
+     * @see #build(List, Map, StandardsSheet, BuildSettings, Library, BuildStamp)
+     */
+    public static BuildResult build(List<RunResult> runs, Map<String, String> mixByRun, StandardsSheet sheet,
+                                    BuildSettings settings, Library reference, double pH, double ionicStrengthMm,
+                                    BuildStamp stamp) {
+        BuildResult b = new Build(mixByRun, sheet, settings, reference, pH, ionicStrengthMm, stamp).run(runs);
+        return new BuildResult(withBufferChemistry(b.library(), pH, ionicStrengthMm), b.analytes(), b.outliers(),
+                b.unexpectedPeaks(), b.warnings(), b.usedRuns(), b.settings(), b.stamp());
+    }
+
+    /** As {@link #build(List, Map, StandardsSheet, BuildSettings, Library, double, double, BuildStamp)}, stamped now. */
+    public static BuildResult build(List<RunResult> runs, Map<String, String> mixByRun, StandardsSheet sheet,
+                                    BuildSettings settings, Library reference, double pH, double ionicStrengthMm) {
+        String version = LibraryBuilder.class.getPackage().getImplementationVersion();
+        return build(runs, mixByRun, sheet, settings, reference, pH, ionicStrengthMm,
+                new BuildStamp(Instant.now(), "mobident " + (version == null ? "(development build)" : version)));
     }
 
     /**
@@ -107,6 +138,16 @@ public final class LibraryBuilder {
         private final StandardsSheet sheet;
         private final BuildSettings settings;
         private final Library reference;
+        private final double pH;
+        private final double ionicStrengthMm;
+        /** The reference as compared: predicted for the buffer where possible; null without reference. */
+        private Library namingReference;
+        /** Lower-case names of the entries of {@link #namingReference} predicted for the buffer. */
+        private final Set<String> predicted = new java.util.HashSet<>();
+        /** Why the reference could not be predicted for the buffer (null when it was). */
+        private String notPredictedWhy;
+        /** Analytes whose reference value was compared as stated, in first-seen order. */
+        private final Set<String> comparedAsStated = new LinkedHashSet<>();
         private final BuildStamp stamp;
         private final List<BuildWarning> warnings = new ArrayList<>();
         private final List<UnexpectedPeak> unexpected = new ArrayList<>();
@@ -132,11 +173,13 @@ public final class LibraryBuilder {
         }
 
         Build(Map<String, String> mixByRun, StandardsSheet sheet, BuildSettings settings, Library reference,
-              BuildStamp stamp) {
+              double pH, double ionicStrengthMm, BuildStamp stamp) {
             this.mixByRun = mixByRun;
             this.sheet = sheet;
             this.settings = settings;
             this.reference = reference;
+            this.pH = pH;
+            this.ionicStrengthMm = ionicStrengthMm;
             this.stamp = stamp;
         }
 
@@ -150,6 +193,7 @@ public final class LibraryBuilder {
             for (RunResult r : runs) {
                 admit(r);
             }
+            prepareReference();
             Map<String, Integer> runOrder = new LinkedHashMap<>();
             for (RunResult r : used) {
                 runOrder.put(r.spec().name(), runOrder.size());
@@ -158,6 +202,7 @@ public final class LibraryBuilder {
                 buildMix(m, runsByMix.get(m.name()));
             }
             conditionWarnings();
+            referenceWarning();
             List<AnalyteStats> stats = new ArrayList<>();
             List<LibraryEntry> entries = new ArrayList<>();
             for (Pool p : pools.values()) {
@@ -173,6 +218,58 @@ public final class LibraryBuilder {
             Library library = new Library(entries, SOURCE_LABEL + sheet.sourceFile(), notes());
             List<String> usedNames = used.stream().map(r -> r.spec().name()).toList();
             return new BuildResult(library, stats, outliers, unexpected, warnings, usedNames, settings, stamp);
+        }
+
+        /**
+         * The reference as groups are compared with it: with pH and ionic strength known, each
+         * modellable entry is replaced by its effective mobility predicted for the buffer at the runs'
+         * (mean) temperature, 25 °C when the runs state none.
+         */
+        private void prepareReference() {
+            namingReference = reference;
+            if (reference == null) {
+                return;
+            }
+            if (Double.isNaN(pH) || Double.isNaN(ionicStrengthMm)) {
+                notPredictedWhy = "the buffer's " + (Double.isNaN(pH) && Double.isNaN(ionicStrengthMm)
+                        ? "pH and ionic strength were" : Double.isNaN(pH) ? "pH was" : "ionic strength was")
+                        + " not given (options --ph and --ionic-strength-mm)";
+                return;
+            }
+            List<Double> temps = distinct(used.stream().map(r -> r.spec().conditions()).toList(),
+                    RunConditions::temperatureC);
+            double t = temps.isEmpty() ? BufferConditions.REFERENCE_TEMPERATURE_C
+                    : temps.stream().mapToDouble(Double::doubleValue).average().orElseThrow();
+            BufferConditions buffer;
+            try {
+                buffer = new BufferConditions(pH, ionicStrengthMm / 1000.0, t);
+            } catch (IllegalArgumentException e) {
+                notPredictedWhy = "the buffer is outside the range of the mobility model (" + e.getMessage() + ")";
+                return;
+            }
+            namingReference = ReferenceIons.effectiveAt(reference, buffer);
+            for (int i = 0; i < reference.size(); i++) {
+                if (!namingReference.entries().get(i).equals(reference.entries().get(i))) {
+                    predicted.add(key(reference.entries().get(i).name()));
+                }
+            }
+            notPredictedWhy = "the mobility model cannot describe them (no charge, inconsistent pKa or mobility"
+                    + " lists, or a value measured at a stated ionic strength)";
+        }
+
+        /** One warning listing the analytes whose reference value was compared as stated. */
+        private void referenceWarning() {
+            if (comparedAsStated.isEmpty()) {
+                return;
+            }
+            warnings.add(new BuildWarning(BuildWarning.Kind.REFERENCE_AS_STATED, null,
+                    String.join(", ", comparedAsStated), null, "The reference values of "
+                    + String.join(", ", comparedAsStated) + " were compared as stated (limiting, infinite-dilution"
+                    + " mobilities in a reference such as ions-25C.csv), not predicted for the standards' buffer,"
+                    + " because " + notPredictedWhy + "; effective mobilities in a buffer are several units"
+                    + " smaller, so only clear pairings were named (" + LibraryBuilder.plain(
+                    settings.referenceWindow() / 2.0) + " units of clearance). Give the buffer's pH and ionic"
+                    + " strength, or approx_mobility or order in the standards sheet, to name the rest."));
         }
 
         private void admit(RunResult r) {
@@ -233,8 +330,9 @@ public final class LibraryBuilder {
                 }
                 infos.add(new GroupNamer.GroupInfo(PeakAligner.meanOf(ms), ms.size(), h / ms.size(), rank[g]));
             }
-            GroupNamer.Naming naming = GroupNamer.name(mix, infos, reference, settings);
+            GroupNamer.Naming naming = GroupNamer.name(mix, infos, namingReference, predicted, settings);
             warnings.addAll(naming.warnings());
+            comparedAsStated.addAll(naming.comparedAsStated());
             Set<StandardAnalyte> found = new LinkedHashSet<>();
             for (int g = 0; g < groups.size(); g++) {
                 StandardAnalyte a = naming.analyteOfGroup()[g];
@@ -319,8 +417,8 @@ public final class LibraryBuilder {
                     : "fits no expected analyte and was not entered");
             LibraryEntry near = nearestReference(info.mean());
             if (near != null) {
-                msg.append(String.format(Locale.ROOT, "; nearest reference entry: %s (%.3f)", near.name(),
-                        near.mobility()));
+                msg.append(String.format(Locale.ROOT, "; nearest reference entry: %s (%.3f%s)", near.name(),
+                        near.mobility(), predicted.contains(key(near.name())) ? ", predicted for the buffer" : ""));
             }
             msg.append('.');
             warnings.add(new BuildWarning(analytesLeft ? BuildWarning.Kind.UNNAMED_GROUP
@@ -329,11 +427,11 @@ public final class LibraryBuilder {
 
         /** The reference entry nearest to a mobility, of the same sign and within the window, or null. */
         private LibraryEntry nearestReference(double mobility) {
-            if (reference == null) {
+            if (namingReference == null) {
                 return null;
             }
             LibraryEntry best = null;
-            for (LibraryEntry e : reference.entries()) {
+            for (LibraryEntry e : namingReference.entries()) {
                 double d = Math.abs(e.mobility() - mobility);
                 double window = Math.max(settings.referenceWindow(), Double.isFinite(e.tolerance()) ? e.tolerance() : 0);
                 if (Math.signum(e.mobility()) == Math.signum(mobility) && d <= window
@@ -430,8 +528,8 @@ public final class LibraryBuilder {
                         String.format(Locale.ROOT, "%s: replicate RSD %.2f %% is above the limit of %s %%.", p.name,
                                 rsd, plain(settings.rsdLimitPercent()))));
             }
-            int sign = p.chargeSign != 0 ? p.chargeSign : (int) Math.signum(s.mean());
-            int charge = p.chargeNumber != 0 ? p.chargeNumber : sign;
+            // the sheet's charge number, or 0 (unknown): a sign alone is no charge number
+            int charge = p.chargeNumber;
             if (p.chargeSign != 0 && Math.signum(s.mean()) != 0 && Math.signum(s.mean()) != p.chargeSign) {
                 warnings.add(new BuildWarning(BuildWarning.Kind.NAMING_CONFLICT, mixes, p.name, null,
                         String.format(Locale.ROOT, "%s: the measured mobility %.3f has the opposite sign to its"

@@ -5,22 +5,57 @@ import java.util.List;
 import java.util.Locale;
 import org.mobident.library.Library;
 import org.mobident.library.LibraryEntry;
+import org.mobident.matching.MatchSettings;
 
 /**
- * Checks an existing library for what an analyst should know before trusting it: entries
- * measured too few times, entries without a spread, spreads above the RSD limit, and analytes
- * whose match windows overlap (they cannot be told apart by mobility alone).
+ * Checks an existing library for what an analyst should know before trusting it: impossible
+ * entries (a mobility whose sign contradicts the charge, or faster than any common ion but H⁺ and
+ * OH⁻), entries measured too few times, entries without a spread, spreads above the RSD limit, and
+ * analytes that lie close together (see {@link WindowOverlaps}: overlapping windows, or too close to
+ * be told apart by mobility alone).
  */
 public final class LibraryCheck {
+
+    /**
+     * Largest plausible |mobility|, 1e-9 m²/(V·s). The fastest common ions apart from H⁺ (limiting
+     * mobility ≈ 362) and OH⁻ (≈ 205) reach about 115 (¼[Fe(CN)₆]⁴⁻, λ ≈ 110 S cm²/mol per charge);
+     * sulfate is 83 (limiting molar conductivities: CRC Handbook of Chemistry and Physics, table "Ionic
+     * conductivity and diffusion at infinite dilution", from memory). Effective mobilities are smaller
+     * still, so anything beyond this bound is almost surely a unit or typing error.
+     */
+    public static final double MAX_PLAUSIBLE_MOBILITY = 130.0;
 
     private LibraryCheck() {
     }
 
-    /** The findings, in entry order, then the overlapping pairs. */
+    /** The findings, in entry order, then the pairs that lie close together. */
     public static List<BuildWarning> check(Library library, BuildSettings settings) {
         List<BuildWarning> out = new ArrayList<>();
         List<LibraryEntry> windowed = new ArrayList<>();
         for (LibraryEntry e : library.entries()) {
+            if (e.charge() != 0 && e.mobility() != 0 && Math.signum(e.mobility()) != Integer.signum(e.charge())) {
+                out.add(new BuildWarning(BuildWarning.Kind.SIGN_CONTRADICTS_CHARGE, null, e.name(), null,
+                        String.format(Locale.ROOT, "%s: mobility %.3f has the wrong sign for charge %+d (mobilities"
+                                + " are signed: cations positive, anions negative)", e.name(), e.mobility(),
+                                e.charge())));
+            }
+            if (Math.abs(e.mobility()) > MAX_PLAUSIBLE_MOBILITY) {
+                out.add(new BuildWarning(BuildWarning.Kind.IMPLAUSIBLE_MOBILITY, null, e.name(), null,
+                        String.format(Locale.ROOT, "%s: mobility %.3f is beyond ±%s, faster than any common ion but"
+                                        + " H+ (about 362) and OH- (about 205); probably a unit or typing error"
+                                        + " (mobilities are in 1e-9 m^2/(V s))", e.name(), e.mobility(),
+                                LibraryBuilder.plain(MAX_PLAUSIBLE_MOBILITY))));
+            } else {
+                for (double mu : e.limitingMobilities()) {
+                    if (Math.abs(mu) > MAX_PLAUSIBLE_MOBILITY) {
+                        out.add(new BuildWarning(BuildWarning.Kind.IMPLAUSIBLE_MOBILITY, null, e.name(), null,
+                                String.format(Locale.ROOT, "%s: limiting mobility %.3f is beyond ±%s, faster than"
+                                                + " any common ion but H+ and OH-; probably a unit or typing error",
+                                        e.name(), mu, LibraryBuilder.plain(MAX_PLAUSIBLE_MOBILITY))));
+                        break;
+                    }
+                }
+            }
             if (Double.isNaN(e.mobilitySd())) {
                 out.add(new BuildWarning(BuildWarning.Kind.FEW_REPLICATES, null, e.name(), null,
                         e.name() + ": no spread (mobility_sd) given; matching assumes a default spread"));
@@ -40,13 +75,27 @@ public final class LibraryCheck {
         return out;
     }
 
-    /** The entry with its match window made explicit (its own tolerance, or the rule on its spread). */
+    /**
+     * The match window half-width identification would use for an entry: its own tolerance, or else
+     * the rule max(k·SD, floor) of the settings on its SD, with the SD matching assumes when the entry
+     * gives none ({@link MatchSettings#DEFAULT_ASSUMED_ENTRY_SD}). (Identification widens it further by
+     * the peak's own uncertainty.)
+     */
+    public static double window(LibraryEntry e, BuildSettings settings) {
+        if (Double.isFinite(e.tolerance())) {
+            return e.tolerance();
+        }
+        return settings.toleranceFor(Double.isFinite(e.mobilitySd()) ? e.mobilitySd()
+                : MatchSettings.DEFAULT_ASSUMED_ENTRY_SD);
+    }
+
+    /** The entry with its match window made explicit ({@link #window}). */
     static LibraryEntry withWindow(LibraryEntry e, BuildSettings settings) {
         if (Double.isFinite(e.tolerance())) {
             return e;
         }
-        double w = Double.isFinite(e.mobilitySd()) ? settings.toleranceFor(e.mobilitySd()) : Double.NaN;
-        return new LibraryEntry(e.name(), e.mobility(), e.mobilitySd(), e.n(), e.charge(), w, e.pKa(),
-                e.limitingMobilities(), e.buffer(), e.pH(), e.ionicStrengthMm(), e.temperatureC(), e.source());
+        return new LibraryEntry(e.name(), e.mobility(), e.mobilitySd(), e.n(), e.charge(), window(e, settings),
+                e.pKa(), e.limitingMobilities(), e.buffer(), e.pH(), e.ionicStrengthMm(), e.temperatureC(),
+                e.source());
     }
 }

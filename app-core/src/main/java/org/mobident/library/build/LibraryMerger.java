@@ -6,6 +6,9 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 import java.util.Objects;
+import java.util.regex.Matcher;
+import java.util.regex.Pattern;
+import org.mobident.InputException;
 import org.mobident.library.Library;
 import org.mobident.library.LibraryEntry;
 
@@ -25,18 +28,61 @@ import org.mobident.library.LibraryEntry;
  *       kept unchanged.</li>
  *   <li>Notes: the existing notes, a line marking the merge, then the fresh notes.</li>
  * </ul>
+ *
+ * <p>Runs are pooled once only: a fresh run whose trace file has a SHA-256 that the existing
+ * library's notes already record ("Run NAME: file FILE, sha256 HEX", as every build writes them)
+ * is refused, since pooling it again would count the same measurement twice, raise n and shrink the
+ * SD. There is deliberately no way round this; to redo a library, build it afresh.
  */
 public final class LibraryMerger {
 
     private LibraryMerger() {
     }
 
+    /** A run's provenance note as a build writes it: name, file, SHA-256. */
+    private static final Pattern RUN_NOTE = Pattern.compile("^\\s*Run (.+): file (.+), sha256 ([0-9a-fA-F]{64})\\s*$");
+
+    /**
+     * The fresh runs already pooled into the existing library: those whose trace SHA-256 the
+     * existing notes record. Each is described as "fresh run (file) = run NAME already in the library".
+     */
+    public static List<String> alreadyPooled(Library existing, BuildResult fresh) {
+        Map<String, String> known = new LinkedHashMap<>();
+        for (String note : existing.notes()) {
+            Matcher m = RUN_NOTE.matcher(note);
+            if (m.matches()) {
+                known.putIfAbsent(m.group(3).toLowerCase(Locale.ROOT), m.group(1));
+            }
+        }
+        List<String> out = new ArrayList<>();
+        for (String note : fresh.library().notes()) {
+            Matcher m = RUN_NOTE.matcher(note);
+            if (m.matches()) {
+                String earlier = known.get(m.group(3).toLowerCase(Locale.ROOT));
+                if (earlier != null) {
+                    out.add(m.group(1) + " (" + m.group(2) + ")" + (earlier.equals(m.group(1)) ? ""
+                            : " = run " + earlier));
+                }
+            }
+        }
+        return out;
+    }
+
     /**
      * @param existing the library to update
      * @param fresh    a fresh build
      * @return the merged library with what was added, pooled and replaced, and warnings
+     * @throws InputException when a fresh run is already pooled in the library ({@link #alreadyPooled});
+     *                        nothing is merged then
      */
-    public static MergeResult merge(Library existing, BuildResult fresh) {
+    public static MergeResult merge(Library existing, BuildResult fresh) throws InputException {
+        List<String> twice = alreadyPooled(existing, fresh);
+        if (!twice.isEmpty()) {
+            throw new InputException(existing.sourceFile(), 0, "sha256", twice.size() + " of the new run(s) are"
+                    + " already pooled in this library (same trace SHA-256 in its notes): " + String.join(", ", twice)
+                    + ". Pooling them again would count the same measurements twice; leave them out of the run"
+                    + " sheet (the library was not changed).");
+        }
         BuildSettings settings = fresh.settings();
         Map<String, LibraryEntry> merged = new LinkedHashMap<>();
         for (LibraryEntry e : existing.entries()) {

@@ -128,7 +128,8 @@ class LibraryBuilderTest {
         assertEquals(s.mean(), e.mobility());
         assertEquals(s.sd(), e.mobilitySd());
         assertEquals(3, e.n());
-        assertEquals(1, e.charge(), "sign of the mobility when the sheet gives no charge");
+        // LibraryEntry.charge is the charge number, 0 when unknown: no charge column, no invented ±1
+        assertEquals(0, e.charge(), "the sheet gives no charge, so the charge is unknown");
         assertEquals(StandardsRuns.BUFFER, e.buffer());
         assertEquals(25.0, e.temperatureC());
         assertEquals("standards: cat1, cat2, cat3", e.source());
@@ -209,12 +210,23 @@ class LibraryBuilderTest {
                 LibraryEntry.of("magnesium", 53.0, Double.NaN), LibraryEntry.of("sodium", 50.1, Double.NaN),
                 LibraryEntry.of("lithium", 38.7, Double.NaN), LibraryEntry.of("fluoride", -40.0, Double.NaN)),
                 "reference.csv", List.of());
+        // Two well-separated cations: each reference value points to one group only, so both are named.
+        List<RunResult> two = List.of(run("k1", 50, 76.2, 40.1), run("k2", 47, 76.1, 40.15),
+                run("k3", 44, 76.25, 40.05));
+        BuildResult sparse = build(two, sheet("cations", StandardAnalyte.named("potassium"),
+                StandardAnalyte.named("lithium")), DEFAULTS, ref);
+        assertEquals(NamingBasis.REFERENCE_LIBRARY, sparse.analyte("potassium").orElseThrow().basis());
+        assertEquals(76.18, sparse.analyte("potassium").orElseThrow().mean(), 0.01);
+        assertEquals(40.1, sparse.analyte("lithium").orElseThrow().mean(), 0.01);
+        // ... but the values were compared as stated (no buffer pH / ionic strength): said so.
+        assertEquals(1, sparse.warnings(BuildWarning.Kind.REFERENCE_AS_STATED).size(), sparse.warnings().toString());
+
+        // Five cations 3–15 units apart: a stated reference value (its buffer unknown) could have been
+        // moved onto a neighbouring group, so no name is clear; none is given, each with a warning.
         BuildResult b = build(cationRuns(), sheet("cations", as), DEFAULTS, ref);
-        for (int i = 0; i < 5; i++) {
-            AnalyteStats a = b.analyte(NAMES[i]).orElseThrow();
-            assertEquals(TRUE_MU[i], a.mean(), 0.1, NAMES[i]);
-            assertEquals(NamingBasis.REFERENCE_LIBRARY, a.basis());
-        }
+        assertEquals(0, b.library().size(), b.library().entries().toString());
+        assertEquals(5, b.warnings(BuildWarning.Kind.UNNAMED_GROUP).size(), b.warnings().toString());
+        assertFalse(b.warnings(BuildWarning.Kind.DOUBTFUL_REFERENCE_NAME).isEmpty(), b.warnings().toString());
         // Without a reference nothing can be named: five unnamed groups, five analytes not found.
         BuildResult none = build(cationRuns(), sheet("cations", as), DEFAULTS, null);
         assertEquals(0, none.library().size());
@@ -328,7 +340,7 @@ class LibraryBuilderTest {
     }
 
     @Test
-    void everyWarningKindIsTriggered() {
+    void everyWarningKindIsTriggered() throws Exception {
         Set<BuildWarning.Kind> seen = EnumSet.noneOf(BuildWarning.Kind.class);
 
         // Runs that cannot be used: failed, no scale, no mix; and trace files that do not exist (not hashed).
@@ -358,7 +370,8 @@ class LibraryBuilderTest {
         BuildResult b2 = build(two, s2, DEFAULTS, null);
         assertEquals(4, b2.warnings(BuildWarning.Kind.FEW_REPLICATES).size());
         assertEquals("sodium", b2.warnings(BuildWarning.Kind.HIGH_RSD).get(0).analyte());
-        assertEquals("lithium, x", b2.warnings(BuildWarning.Kind.OVERLAPPING_WINDOWS).get(0).analyte());
+        // 0.8 apart: closer than 1 unit, so not only overlapping but indistinguishable
+        assertEquals("lithium, x", b2.warnings(BuildWarning.Kind.INDISTINGUISHABLE).get(0).analyte());
         assertEquals("cesium", b2.warnings(BuildWarning.Kind.ANALYTE_NOT_FOUND).get(0).analyte());
         assertTrue(b2.warnings(BuildWarning.Kind.UNNAMED_GROUP).get(0).message().contains("30.000"));
         assertEquals(1, b2.warnings(BuildWarning.Kind.MIXED_CONDITIONS).size());
@@ -391,6 +404,27 @@ class LibraryBuilderTest {
         assertEquals(1, m.warnings(BuildWarning.Kind.MEANS_DIFFER).size());
         assertEquals(1, m.warnings(BuildWarning.Kind.NOT_POOLED).size());
         m.warnings().forEach(w -> seen.add(w.kind()));
+
+        // A stated reference whose values could be shifted onto the wrong group: doubtful, compared as stated.
+        Library ref = new Library(List.of(LibraryEntry.of("magnesium", 53.0, Double.NaN),
+                LibraryEntry.of("sodium", 50.1, Double.NaN)), "reference.csv", List.of());
+        BuildResult b5 = build(cationRuns(), sheet("cations", StandardAnalyte.named("magnesium"),
+                StandardAnalyte.named("sodium")), DEFAULTS, ref);
+        assertFalse(b5.warnings(BuildWarning.Kind.DOUBTFUL_REFERENCE_NAME).isEmpty(), b5.warnings().toString());
+        assertEquals(1, b5.warnings(BuildWarning.Kind.REFERENCE_AS_STATED).size());
+        seen.addAll(kinds(b5));
+
+        // Checking a library: wrong sign for the charge, absurd magnitude, windows that merely overlap.
+        Library bad = new Library(List.of(
+                new LibraryEntry("sodium", -46.4, 0.2, 5, 1, Double.NaN, List.of(), List.of(), null, Double.NaN,
+                        Double.NaN, 25.0, null),
+                new LibraryEntry("chloride", -7630, 0.2, 5, -1, Double.NaN, List.of(), List.of(), null, Double.NaN,
+                        Double.NaN, 25.0, null),
+                new LibraryEntry("a", 30.0, 0.3, 5, 0, Double.NaN, List.of(), List.of(), null, Double.NaN,
+                        Double.NaN, 25.0, null),
+                new LibraryEntry("b", 31.5, 0.3, 5, 0, Double.NaN, List.of(), List.of(), null, Double.NaN,
+                        Double.NaN, 25.0, null)), "bad.csv", List.of());
+        LibraryCheck.check(bad, DEFAULTS).forEach(w -> seen.add(w.kind()));
 
         assertEquals(EnumSet.allOf(BuildWarning.Kind.class), seen);
     }

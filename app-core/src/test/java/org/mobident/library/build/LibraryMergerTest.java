@@ -32,7 +32,7 @@ class LibraryMergerTest {
     }
 
     @Test
-    void pooledMeanAndSdEqualThoseOfAllValuesAtOnce() {
+    void pooledMeanAndSdEqualThoseOfAllValuesAtOnce() throws Exception {
         double[] day1 = {51.91, 51.95, 51.87, 51.99, 51.93};
         double[] day2 = {51.92, 51.97, 51.89, 51.96};
         double[] all = new double[day1.length + day2.length];
@@ -88,7 +88,7 @@ class LibraryMergerTest {
     }
 
     @Test
-    void newAnalytesAreAddedAndOthersKept() {
+    void newAnalytesAreAddedAndOthersKept() throws Exception {
         LibraryEntry handbook = new LibraryEntry("phosphate", -33.0, Double.NaN, 0, -2, Double.NaN, List.of(2.15, 7.2,
                 12.35), List.of(), null, Double.NaN, Double.NaN, 25.0, "handbook");
         Library existing = new Library(List.of(measured("sodium", new double[] {51.9, 52.0, 51.95}, "d1"), handbook),
@@ -108,7 +108,7 @@ class LibraryMergerTest {
     }
 
     @Test
-    void differingMeansAreWarnedAbout() {
+    void differingMeansAreWarnedAbout() throws Exception {
         // 0.5 units apart with SDs of a few hundredths: far beyond 2·√(s₁²/n₁ + s₂²/n₂).
         Library existing = new Library(List.of(measured("sodium", new double[] {51.9, 51.95, 51.85}, "d1")),
                 "lib.csv", List.of());
@@ -119,7 +119,7 @@ class LibraryMergerTest {
     }
 
     @Test
-    void handbookValueIsReplacedNotPooledKeepingItsChemistry() {
+    void handbookValueIsReplacedNotPooledKeepingItsChemistry() throws Exception {
         LibraryEntry handbook = new LibraryEntry("phosphate", -33.0, Double.NaN, 0, -2, Double.NaN,
                 List.of(2.15, 7.2, 12.35), List.of(-35.0, -61.0), null, Double.NaN, Double.NaN, 25.0, "handbook");
         Library existing = new Library(List.of(handbook), "lib.csv", List.of());
