@@ -28,7 +28,8 @@ public final class ConditionOptions {
 
     @Option(names = "--marker-window", paramLabel = "FROM:TO",
             description = "Time window (s) holding the neutral marker, e.g. 180:240. Without it the marker is "
-                    + "chosen as the peak under which the library explains the run best.")
+                    + "chosen as the peak under which the expected analytes (the library; for standards, the mixes) "
+                    + "fit best.")
     String markerWindow;
 
     @Option(names = "--detection", paramLabel = "MODE",
@@ -58,9 +59,33 @@ public final class ConditionOptions {
                 n(temperatureC), buffer, marker[0], marker[1], det, n(refMobility), ref[0], ref[1]);
         String problem = c.geometryProblem();
         if (problem != null) {
-            throw new InputException("command line", 0, "conditions", problem);
+            throw new InputException("command line", 0, culprit(c), problem);
         }
         return c;
+    }
+
+    /** The option to blame for an impossible set of conditions: the first value wrong on its own. */
+    private static String culprit(RunConditions c) {
+        RunConditions e = RunConditions.EMPTY;
+        String[] names = {"--total-length-cm", "--detector-length-cm", "--voltage-kv", "--ramp-s", "--temperature-c"};
+        RunConditions[] alone = {
+            new RunConditions(c.totalLengthCm(), e.detectorLengthCm(), e.voltageKv(), e.rampS(), e.temperatureC(),
+                    null, Double.NaN, Double.NaN, null, Double.NaN, Double.NaN, Double.NaN),
+            new RunConditions(e.totalLengthCm(), c.detectorLengthCm(), e.voltageKv(), e.rampS(), e.temperatureC(),
+                    null, Double.NaN, Double.NaN, null, Double.NaN, Double.NaN, Double.NaN),
+            new RunConditions(e.totalLengthCm(), e.detectorLengthCm(), c.voltageKv(), e.rampS(), e.temperatureC(),
+                    null, Double.NaN, Double.NaN, null, Double.NaN, Double.NaN, Double.NaN),
+            new RunConditions(e.totalLengthCm(), e.detectorLengthCm(), e.voltageKv(), c.rampS(), e.temperatureC(),
+                    null, Double.NaN, Double.NaN, null, Double.NaN, Double.NaN, Double.NaN),
+            new RunConditions(e.totalLengthCm(), e.detectorLengthCm(), e.voltageKv(), e.rampS(), c.temperatureC(),
+                    null, Double.NaN, Double.NaN, null, Double.NaN, Double.NaN, Double.NaN)};
+        for (int i = 0; i < names.length; i++) {
+            if (alone[i].geometryProblem() != null) {
+                return names[i];
+            }
+        }
+        // each value is fine alone: the detector length does not fit the total length
+        return "--detector-length-cm";
     }
 
     private static double n(Double d) {

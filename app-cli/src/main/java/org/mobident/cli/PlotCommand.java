@@ -116,6 +116,8 @@ public final class PlotCommand implements Callable<Integer> {
         if (!noBands) {
             b.library(done.library());
         }
+        // labels of many overlaid runs would pile up: markers alone then, the status in their shape
+        b.peakLabels(drawn <= 2);
         if (drawn == 1) {
             b.title(runNames.isEmpty() ? done.results().get(0).spec().name() : runNames.get(0));
         } else {

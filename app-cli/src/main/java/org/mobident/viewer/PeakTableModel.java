@@ -78,7 +78,7 @@ final class PeakTableModel extends AbstractTableModel {
 
     static String assigned(PeakResult pr) {
         if (pr.role() == PeakRole.NEUTRAL_MARKER) {
-            return "EOF marker";
+            return "neutral marker";
         }
         if (pr.role() == PeakRole.MOBILITY_MARKER) {
             return "mobility marker";

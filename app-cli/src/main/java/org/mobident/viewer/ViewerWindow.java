@@ -422,7 +422,7 @@ final class ViewerWindow implements PlotPanel.Gestures {
     /** The run list: a tick to draw a run, its name and where it stands. */
     private final class RunListModel extends AbstractTableModel {
         private static final long serialVersionUID = 1L;
-        private final String[] columns = {"Show", "Run", "State"};
+        private final String[] columns = {"Show", "Run", "Status"};
 
         @Override
         public int getRowCount() {

@@ -172,4 +172,30 @@ class PlotModelTest {
         assertThrows(IllegalArgumentException.class,
                 () -> PlotModel.builder(Axis.TIME).run(run.trace(), run.result()).xRange(5, 5));
     }
+
+    @Test
+    void aRunAtAnotherTemperatureIsDrawnAtTheMobilitiesComparedWithTheLibrary() {
+        // the run's mobilities were compared with the library after a viscosity factor of 0.9
+        PlotFixtures.SyntheticRun warm = PlotFixtures.run("warm", 400, 1.0);
+        java.util.List<org.mobident.pipeline.PeakResult> peaks = new java.util.ArrayList<>();
+        for (org.mobident.pipeline.PeakResult p : warm.result().peaks()) {
+            peaks.add(new org.mobident.pipeline.PeakResult(p.peak(), p.role(), p.mobility(), p.mobilitySd(),
+                    0.9 * p.mobility(), p.match()));
+        }
+        org.mobident.pipeline.RunResult r = warm.result();
+        org.mobident.pipeline.RunResult converted = new org.mobident.pipeline.RunResult(r.spec(), null, r.scaleNote(),
+                r.eofMobility(), r.scale(), peaks, r.notes(), r.noiseSd());
+        PlotModel model = PlotModel.of(warm.trace(), converted, null, Axis.MOBILITY);
+        for (PlotModel.PeakMark m : model.peaks()) {
+            if (m.status() != PeakStatus.MARKER) {
+                boolean found = false;
+                for (org.mobident.pipeline.PeakResult p : peaks) {
+                    found |= Math.abs(m.x() - p.mobilityAtLibraryTemp()) < 1e-9;
+                }
+                assertTrue(found, "mark at " + m.x() + " is a compared mobility");
+            }
+        }
+        assertEquals(0.9, PlotModel.libraryTemperatureFactor(converted), 1e-12);
+        assertEquals(1.0, PlotModel.libraryTemperatureFactor(r), 1e-12);
+    }
 }
