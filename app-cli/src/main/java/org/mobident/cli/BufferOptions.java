@@ -4,7 +4,7 @@ import org.mobident.InputException;
 import org.mobident.recheck.BufferSpec;
 import picocli.CommandLine.Option;
 
-/** The new buffer B, and optionally the old buffer A when the library does not state it. */
+/** The new buffer, and optionally the old buffer (the library's) when the library does not state it. */
 public final class BufferOptions {
 
     @Option(names = "--ph", paramLabel = "PH", description = "pH of the new buffer.")
@@ -16,8 +16,10 @@ public final class BufferOptions {
     @Option(names = "--temperature-c", paramLabel = "C", description = "Temperature of the new method, °C (default 25).")
     double temperatureC = 25.0;
 
-    @Option(names = "--buffer-label", paramLabel = "TEXT", description = "Label of the new buffer (default 'new buffer').")
-    String label = "new buffer";
+    @Option(names = "--buffer-label", paramLabel = "TEXT",
+            description = "Label of the new buffer, written into the predicted library's buffer column "
+                    + "(default: its conditions, e.g. 'predicted: pH 7.00, I 20 mM, 25 °C').")
+    String label;
 
     @Option(names = "--old-ph", paramLabel = "PH", description = "pH of the library's buffer, where its entries do not state it.")
     Double oldPh;
@@ -41,6 +43,30 @@ public final class BufferOptions {
                     "the new buffer needs both --ph and --ionic-strength-mm");
         }
         return spec(label, ph, ionicStrengthMm, temperatureC, "--ph");
+    }
+
+    /** True when --buffer-label was given (not blank). */
+    boolean labelGiven() {
+        return label != null && !label.isBlank();
+    }
+
+    /**
+     * The new buffer for writing into a library's {@code buffer} column: labelled with
+     * --buffer-label, or else with its conditions, e.g. {@code "predicted: pH 7.00, I 20 mM, 25 °C"}.
+     */
+    BufferSpec newBufferForLibrary() throws InputException {
+        BufferSpec b = newBuffer();
+        if (labelGiven()) {
+            return b;
+        }
+        return spec(String.format(java.util.Locale.ROOT, "predicted: pH %.2f, I %s mM, %s °C", ph,
+                plain(ionicStrengthMm), plain(temperatureC)), ph, ionicStrengthMm, temperatureC, "--ph");
+    }
+
+    /** A number without trailing zeros, at most three decimals. */
+    private static String plain(double v) {
+        return new java.math.BigDecimal(String.format(java.util.Locale.ROOT, "%.3f", v)).stripTrailingZeros()
+                .toPlainString();
     }
 
     /** The old buffer when given on the command line, else null (each entry's own conditions are used). */

@@ -32,6 +32,9 @@ import picocli.CommandLine.Model.CommandSpec;
         footer = {"", "Exit codes: 0 done; 2 bad command line; 3 unusable library or buffer; 4 output not written."})
 public final class PredictCommand implements Callable<Integer> {
 
+    /** A smallest |Δμ| below this (half the printed 0.01) is reported as a crossing of the curves. */
+    static final double CROSSING_UNITS = 0.005;
+
     @Spec
     CommandSpec spec;
 
@@ -73,23 +76,63 @@ public final class PredictCommand implements Callable<Integer> {
         var bufferB = buffers.newBuffer();
         List<PredictedMobility> predictions = predictor.predictAll(library, buffers.oldBuffer(), bufferB);
         o.println("Predicted effective mobilities in " + bufferB.describe() + " (1e-9 m^2/(V s)).");
-        o.println(String.format(Locale.ROOT, "%-16s %9s %9s %7s  %-16s %s", "analyte", "measured", "predicted", "+/-",
-                "model data", "remark"));
+        List<PredictedMobility> shown = new ArrayList<>();
         for (PredictedMobility p : predictions) {
-            if (!analytes.isEmpty() && !analytes.contains(p.name())) {
-                continue;
+            if (analytes.isEmpty() || analytes.contains(p.name())) {
+                shown.add(p);
             }
-            o.println(String.format(Locale.ROOT, "%-16s %9.2f %9.2f %7.2f  %-16s %s", p.name(), p.measuredA(),
-                    p.predicted(), p.uncertainty(), p.basis().name().toLowerCase(Locale.ROOT).replace('_', ' '),
-                    p.note() == null ? "" : p.note()));
         }
+        boolean remarks = shown.stream().anyMatch(p -> p.note() != null && !p.note().isBlank());
+        int basisWidth = shown.stream().mapToInt(p -> p.basis().description().length()).max().orElse(5);
+        String layout = "%-16s %9s %9s %7s  " + (remarks ? "%-" + basisWidth + "s  %s" : "%s");
+        o.println(String.format(Locale.ROOT, layout, "analyte", "measured", "predicted", "+/-", "basis", "remark")
+                .stripTrailing());
+        for (PredictedMobility p : shown) {
+            o.println(String.format(Locale.ROOT, layout, p.name(), num(p.measuredA()), num(p.predicted()),
+                    num(p.uncertainty()), p.basis().description(), p.note() == null ? "" : p.note()).stripTrailing());
+        }
+        o.println("basis: own pKa data = the library entry's pKa and limiting mobilities; reference pKa data = "
+                + "taken from --reference by name; charge only = a strong ion; no model = the pH change is not "
+                + "accounted for.");
         o.println("Predictions are estimates: measure standards in the new buffer before relying on them.");
         if (out != null) {
-            Library predicted = Predictor.asLibrary(predictions, library, bufferB);
+            Library predicted = Predictor.asLibrary(predictions, library, buffers.newBufferForLibrary());
             LibraryBuildCommand.writeLibrary(out, overwrite, predicted);
             o.println("predicted library written to " + out);
         }
         return ExitCodes.OK;
+    }
+
+    private static String num(double v) {
+        return String.format(Locale.ROOT, "%.2f", v);
+    }
+
+    /**
+     * One line per interval: "co-migration" when the smallest predicted |Δμ| is below the rule's
+     * floor (the zones overlap), else "not reliably resolved" (apart, but within the prediction
+     * uncertainty); the pH ends are printed with as many decimals as needed to tell them apart.
+     */
+    static String describe(PhScan.Comigration c, SeparationRule rule) {
+        double from = c.interval().fromPh();
+        double to = c.interval().toPh();
+        int decimals = 2;
+        while (decimals < 4 && String.format(Locale.ROOT, "%." + decimals + "f", from)
+                .equals(String.format(Locale.ROOT, "%." + decimals + "f", to))) {
+            decimals++;
+        }
+        String f = "%." + decimals + "f";
+        String range = String.format(Locale.ROOT, "pH " + f + (c.fromScanStart() ? " (scan start, may extend below)" : "")
+                + " to " + f + (c.toScanEnd() ? " (scan end, may extend above)" : ""), from, to);
+        String closest = c.closestUnits() < CROSSING_UNITS
+                ? String.format(Locale.ROOT, "the curves cross at pH %.2f", c.closestPh())
+                : String.format(Locale.ROOT, "closest %.2f units at pH %.2f", c.closestUnits(), c.closestPh());
+        if (c.overlapping(rule)) {
+            return String.format(Locale.ROOT, "co-migration: %s and %s, %s (%s%s)", c.first(), c.second(), range,
+                    closest, c.closestUnits() < CROSSING_UNITS ? ""
+                            : String.format(Locale.ROOT, ", under the %.2f-unit minimum", rule.minimumUnits()));
+        }
+        return String.format(Locale.ROOT, "not reliably resolved: %s and %s, %s (%s; the prediction uncertainty "
+                + "asks for %.2f)", c.first(), c.second(), range, closest, c.thresholdUnits());
     }
 
     private int scan(Library library, Predictor predictor, PrintWriter o) throws InputException, OutputException {
@@ -134,11 +177,10 @@ public final class PredictCommand implements Callable<Integer> {
             o.print(table);
         }
         if (r.comigrations().isEmpty()) {
-            o.println("No pair co-migrates anywhere in pH " + from + "–" + to + ".");
+            o.println("No pair comes closer than the separation rule allows anywhere in pH " + from + "–" + to + ".");
         }
         for (PhScan.Comigration c : r.comigrations()) {
-            o.println(String.format(Locale.ROOT, "co-migration: %s and %s between pH %.2f and %.2f (closest %.2f units)",
-                    c.first(), c.second(), c.interval().fromPh(), c.interval().toPh(), c.closestUnits()));
+            o.println(describe(c, r.rule()));
         }
         return ExitCodes.OK;
     }

@@ -26,9 +26,13 @@ import picocli.CommandLine.Model.CommandSpec;
         sortOptions = false,
         description = "Takes an earlier peak table (from 'identify --csv') with the library it was matched against, "
                 + "and either a library measured in the new buffer (--new-library) or only the new buffer's "
-                + "conditions (--ph, --ionic-strength-mm, --temperature-c; mobilities are then predicted). Says for "
-                + "each earlier assignment whether it still holds, moved but is still unique, is now ambiguous (and "
-                + "with what) or is lost, and which library pairs can no longer be told apart. With a measured new "
+                + "conditions (--ph, --ionic-strength-mm, --temperature-c; mobilities are then predicted). Each peak "
+                + "is moved by its analyte's shift and re-matched; the verdict per earlier assignment is: still holds "
+                + "(still the only match, and the moved peak stays inside the analyte's window of the old library), "
+                + "moved but still unique (the only match, but outside its old window: the window must move), now "
+                + "ambiguous (and with what), reassigned (would now be taken for another analyte) or lost. It also "
+                + "lists which library pairs can no longer be told apart and, with a measured new library, which "
+                + "old analytes it lacks. With a measured new "
                 + "library it also reports how far the model's prediction was off.",
         footer = {"", "Exit codes: 0 nothing needs attention; 1 something needs attention (see the summary); "
                 + "2 bad command line; 3 unusable input; 4 output not written."})

@@ -80,9 +80,13 @@ public record BufferSpec(String label, double pH, double ionicStrengthMolar, dou
 
     /** Short description, e.g. {@code "CHR-8 (pH 8.00, I 12.0 mmol/L, 25.0 °C)"}. */
     public String describe() {
-        String numbers = String.format(Locale.ROOT, "pH %.2f, I %.1f mmol/L, %.1f °C", pH, ionicStrengthMm(),
-                temperatureC);
+        String numbers = describeConditions();
         return label.isEmpty() ? numbers : label + " (" + numbers + ")";
+    }
+
+    /** The conditions without the label, e.g. {@code "pH 8.00, I 12.0 mmol/L, 25.0 °C"}. */
+    public String describeConditions() {
+        return String.format(Locale.ROOT, "pH %.2f, I %.1f mmol/L, %.1f °C", pH, ionicStrengthMm(), temperatureC);
     }
 
     /**

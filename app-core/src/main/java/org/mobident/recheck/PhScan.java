@@ -2,6 +2,7 @@ package org.mobident.recheck;
 
 import java.util.ArrayList;
 import java.util.List;
+import java.util.function.DoubleFunction;
 import java.util.function.DoubleUnaryOperator;
 import org.mobident.InputException;
 import org.mobident.chem.BufferConditions;
@@ -15,12 +16,24 @@ import org.mobident.library.LibraryEntry;
  *
  * <p>Each point is a {@link Predictor} transfer of the measured library value to a buffer of that
  * pH at the given ionic strength and temperature, so the curves pass through the measured values
- * and carry the prediction uncertainty. Two analytes comigrate at a pH when their predicted
- * mobilities are not resolved by the {@link SeparationRule} (|Δμ| &lt; max(floor, k·u_c), u_c from the
- * comparison uncertainties, {@link PredictedMobility#comparisonUncertainty()}). The
- * intervals are found on the table and each end is refined by bisection between the two grid
- * points around it to {@value #PH_RESOLUTION} pH; an interval narrower than the step can be missed
- * (the same limitation as {@link org.mobident.chem.MobilityPredictor#comigrationRanges}).
+ * and carry the prediction uncertainty. Two analytes are <em>not resolved</em> at a pH when their
+ * predicted mobilities are closer than the {@link SeparationRule} asks (|Δμ| &lt; max(floor, k·u_c),
+ * u_c from the comparison uncertainties, {@link PredictedMobility#comparisonUncertainty()}).
+ *
+ * <h2>How the intervals are found</h2>
+ * <ol>
+ *   <li>every run of table points that are not resolved gives one interval; each end is refined by
+ *       bisection between the two table points around it to {@value #PH_RESOLUTION} pH;</li>
+ *   <li>where Δμ changes sign between two neighbouring table points that are both resolved, the
+ *       curves cross between them: the crossing is located by bisection and the interval around
+ *       it refined in the same way (so a crossing is never lost to a coarse step);</li>
+ *   <li>inside each interval the smallest |Δμ| is searched on the interval itself, not on the table:
+ *       a crossing gives (nearly) 0, otherwise the minimum is refined by golden-section search. An
+ *       interval is reported only when |Δμ| there is below the threshold there.</li>
+ * </ol>
+ * An interval that touches the first or last pH of the scan is marked as such: it may go on
+ * beyond the scanned range. A dip of |Δμ| below the threshold that lies entirely between two
+ * table points without a crossing can still be missed; a smaller step finds it.
  */
 public final class PhScan {
 
@@ -28,6 +41,10 @@ public final class PhScan {
     public static final double PH_RESOLUTION = 1e-4;
     /** Largest number of pH points of one scan. */
     public static final int MAX_POINTS = 10_001;
+    /** Even steps on which the smallest |Δμ| of an interval is first looked for. */
+    static final int CLOSEST_SAMPLES = 32;
+    /** (√5 − 1)/2, the golden-section ratio. */
+    private static final double GOLDEN = 0.5 * (Math.sqrt(5.0) - 1.0);
     /** Slack for counting steps, so that a range that is a whole number of steps is not padded. */
     private static final double STEP_COUNT_SLACK = 1e-9;
 
@@ -54,14 +71,30 @@ public final class PhScan {
     }
 
     /**
-     * A pH interval in which two analytes comigrate.
+     * A pH interval in which two analytes are not resolved.
      *
-     * @param first            one analyte
-     * @param second           the other (later in library order)
-     * @param interval         the pH interval
-     * @param closestUnits     smallest |Δμ| at the scanned points inside it (NaN when none lies inside)
+     * @param first          one analyte
+     * @param second         the other (later in library order)
+     * @param interval       the pH interval
+     * @param closestUnits   smallest |Δμ| inside the interval (searched on the interval, not only at
+     *                       the table points; 0 where the curves cross), always below {@code thresholdUnits}
+     * @param closestPh      the pH where it occurs
+     * @param thresholdUnits the |Δμ| the separation rule asks for at {@code closestPh}
+     * @param fromScanStart  the interval begins at the first scanned pH (it may extend below it)
+     * @param toScanEnd      the interval ends at the last scanned pH (it may extend above it)
      */
-    public record Comigration(String first, String second, PhInterval interval, double closestUnits) {
+    public record Comigration(String first, String second, PhInterval interval, double closestUnits, double closestPh,
+                              double thresholdUnits, boolean fromScanStart, boolean toScanEnd) {
+
+        /**
+         * True when the zones would overlap even if the predictions were exact: the smallest
+         * |Δμ| is below the rule's floor ({@link SeparationRule#minimumUnits()}). Otherwise the
+         * two are predicted apart, but not by enough to be sure of it given the prediction
+         * uncertainty.
+         */
+        public boolean overlapping(SeparationRule rule) {
+            return closestUnits < rule.minimumUnits();
+        }
     }
 
     /**
@@ -142,14 +175,15 @@ public final class PhScan {
             for (int j = i + 1; j < entries.size(); j++) {
                 int fi = i;
                 int fj = j;
-                DoubleUnaryOperator excess = pH -> {
+                DoubleFunction<PairAt> at = pH -> {
                     PredictedMobility a = predictor.predict(entries.get(fi), buffersA.get(fi), base.withPh(pH),
                             libraryA.sourceFile());
                     PredictedMobility b = predictor.predict(entries.get(fj), buffersA.get(fj), base.withPh(pH),
                             libraryA.sourceFile());
-                    return Math.abs(a.predicted() - b.predicted()) - rule.threshold(a.comparisonUncertainty(), b.comparisonUncertainty());
+                    return new PairAt(a.predicted() - b.predicted(),
+                            rule.threshold(a.comparisonUncertainty(), b.comparisonUncertainty()));
                 };
-                found.addAll(intervals(curves.get(i), curves.get(j), grid, rule, excess));
+                found.addAll(intervals(curves.get(i), curves.get(j), grid, rule, at));
             }
         }
         return new Result(grid, curves, found, rule);
@@ -172,38 +206,147 @@ public final class PhScan {
         return out;
     }
 
-    private static List<Comigration> intervals(Curve a, Curve b, List<Double> grid, SeparationRule rule,
-                                               DoubleUnaryOperator excess) {
-        List<Comigration> out = new ArrayList<>();
-        double start = Double.NaN;
-        double closest = Double.NaN;
-        boolean prevInside = false;
-        for (int k = 0; k < grid.size(); k++) {
-            double delta = Math.abs(a.mobility().get(k) - b.mobility().get(k));
-            boolean inside = delta < rule.threshold(a.comparisonUncertainty().get(k),
-                    b.comparisonUncertainty().get(k));
-            if (k == 0) {
-                if (inside) {
-                    start = grid.get(0);
-                }
-            } else if (inside != prevInside) {
-                double edge = bisect(excess, grid.get(k - 1), grid.get(k), prevInside);
-                if (inside) {
-                    start = edge;
-                } else {
-                    out.add(new Comigration(a.name(), b.name(), new PhInterval(start, edge), closest));
-                    closest = Double.NaN;
-                }
-            }
-            if (inside) {
-                closest = Double.isNaN(closest) ? delta : Math.min(closest, delta);
-            }
-            prevInside = inside;
+    /** The signed difference μ_first − μ_second and the separation threshold at one pH. */
+    private record PairAt(double delta, double threshold) {
+        double excess() {
+            return Math.abs(delta) - threshold;
         }
-        if (prevInside) {
-            out.add(new Comigration(a.name(), b.name(), new PhInterval(start, grid.get(grid.size() - 1)), closest));
+    }
+
+    private static List<Comigration> intervals(Curve a, Curve b, List<Double> grid, SeparationRule rule,
+                                               DoubleFunction<PairAt> at) {
+        int n = grid.size();
+        double[] delta = new double[n];
+        boolean[] inside = new boolean[n];
+        for (int k = 0; k < n; k++) {
+            delta[k] = a.mobility().get(k) - b.mobility().get(k);
+            inside[k] = Math.abs(delta[k]) < rule.threshold(a.comparisonUncertainty().get(k),
+                    b.comparisonUncertainty().get(k));
+        }
+        DoubleUnaryOperator excess = pH -> at.apply(pH).excess();
+        List<double[]> spans = new ArrayList<>();
+        // runs of grid points inside, ends refined between the grid points around them
+        int k = 0;
+        while (k < n) {
+            if (!inside[k]) {
+                k++;
+                continue;
+            }
+            int first = k;
+            while (k + 1 < n && inside[k + 1]) {
+                k++;
+            }
+            double from = first == 0 ? grid.get(0) : bisect(excess, grid.get(first - 1), grid.get(first), false);
+            double to = k == n - 1 ? grid.get(n - 1) : bisect(excess, grid.get(k), grid.get(k + 1), true);
+            spans.add(new double[] {from, to});
+            k++;
+        }
+        // curves that cross between two grid points both outside: the crossing itself is inside
+        for (int j = 1; j < n; j++) {
+            if (!inside[j - 1] && !inside[j] && Math.signum(delta[j - 1]) * Math.signum(delta[j]) < 0) {
+                double root = root(pH -> at.apply(pH).delta(), grid.get(j - 1), grid.get(j));
+                if (excess.applyAsDouble(root) < 0.0) {
+                    spans.add(new double[] {bisect(excess, grid.get(j - 1), root, false),
+                            bisect(excess, root, grid.get(j), true)});
+                }
+            }
+        }
+        spans.sort((x, y) -> Double.compare(x[0], y[0]));
+        List<Comigration> out = new ArrayList<>();
+        double first = grid.get(0);
+        double last = grid.get(n - 1);
+        for (double[] span : spans) {
+            double pH = closest(at, span[0], span[1])[0];
+            PairAt there = at.apply(pH);
+            if (!(there.excess() < 0.0)) {
+                // the threshold moves with pH: fall back to the sampled point deepest below it
+                pH = deepest(at, span[0], span[1]);
+                there = at.apply(pH);
+            }
+            if (!(there.excess() < 0.0)) {
+                continue; // no point of the span is below the threshold: not an interval
+            }
+            out.add(new Comigration(a.name(), b.name(), new PhInterval(span[0], span[1]), Math.abs(there.delta()),
+                    pH, there.threshold(), span[0] <= first, span[1] >= last));
         }
         return out;
+    }
+
+    /**
+     * The pH of smallest |Δμ| in [lo, hi] and nothing else ({pH}): a sign change of Δμ on
+     * {@value #CLOSEST_SAMPLES} even steps is refined by bisection to the crossing (|Δμ| ≈ 0);
+     * otherwise the smallest sampled |Δμ| is refined by golden-section search between its two
+     * neighbours (Kiefer, Proc. AMS 4 (1953) 502), both to {@value #PH_RESOLUTION} pH.
+     */
+    private static double[] closest(DoubleFunction<PairAt> at, double lo, double hi) {
+        if (hi - lo <= PH_RESOLUTION) {
+            return new double[] {0.5 * (lo + hi)};
+        }
+        double[] x = new double[CLOSEST_SAMPLES + 1];
+        double[] d = new double[CLOSEST_SAMPLES + 1];
+        int best = 0;
+        for (int i = 0; i <= CLOSEST_SAMPLES; i++) {
+            x[i] = i == CLOSEST_SAMPLES ? hi : lo + (hi - lo) * i / CLOSEST_SAMPLES;
+            d[i] = at.apply(x[i]).delta();
+            if (i > 0 && Math.signum(d[i - 1]) * Math.signum(d[i]) < 0) {
+                return new double[] {root(pH -> at.apply(pH).delta(), x[i - 1], x[i])};
+            }
+            if (d[i] == 0.0) {
+                return new double[] {x[i]};
+            }
+            if (Math.abs(d[i]) < Math.abs(d[best])) {
+                best = i;
+            }
+        }
+        double a = x[Math.max(0, best - 1)];
+        double b = x[Math.min(CLOSEST_SAMPLES, best + 1)];
+        double c = b - GOLDEN * (b - a);
+        double e = a + GOLDEN * (b - a);
+        while (b - a > PH_RESOLUTION) {
+            if (Math.abs(at.apply(c).delta()) < Math.abs(at.apply(e).delta())) {
+                b = e;
+            } else {
+                a = c;
+            }
+            c = b - GOLDEN * (b - a);
+            e = a + GOLDEN * (b - a);
+        }
+        double m = 0.5 * (a + b);
+        return new double[] {Math.abs(at.apply(m).delta()) < Math.abs(d[best]) ? m : x[best]};
+    }
+
+    /** The sampled pH of [lo, hi] where |Δμ| lies furthest below the threshold. */
+    private static double deepest(DoubleFunction<PairAt> at, double lo, double hi) {
+        double best = lo;
+        double bestExcess = Double.POSITIVE_INFINITY;
+        for (int i = 0; i <= CLOSEST_SAMPLES; i++) {
+            double x = i == CLOSEST_SAMPLES ? hi : lo + (hi - lo) * i / CLOSEST_SAMPLES;
+            double e = at.apply(x).excess();
+            if (e < bestExcess) {
+                bestExcess = e;
+                best = x;
+            }
+        }
+        return best;
+    }
+
+    /** A zero of f between lo and hi, where f changes sign, by bisection. */
+    private static double root(DoubleUnaryOperator f, double lo, double hi) {
+        double fLo = f.applyAsDouble(lo);
+        while (hi - lo > PH_RESOLUTION) {
+            double mid = 0.5 * (lo + hi);
+            double fMid = f.applyAsDouble(mid);
+            if (fMid == 0.0) {
+                return mid;
+            }
+            if (Math.signum(fMid) == Math.signum(fLo)) {
+                lo = mid;
+                fLo = fMid;
+            } else {
+                hi = mid;
+            }
+        }
+        return 0.5 * (lo + hi);
     }
 
     /** The boundary between lo (inside = loInside) and hi (the other state). */

@@ -21,6 +21,16 @@ public enum PredictionBasis {
         return name().toLowerCase(Locale.ROOT);
     }
 
+    /** What the prediction rests on, in words for a table column. */
+    public String description() {
+        return switch (this) {
+            case ENTRY_MODEL -> "own pKa data";
+            case REFERENCE_MODEL -> "reference pKa data";
+            case CHARGE_ONLY -> "charge only";
+            case NO_MODEL -> "no model: temperature and ionic strength only";
+        };
+    }
+
     /** True when the pH dependence was modelled (pKa values, or a strong ion known to have none). */
     public boolean modelled() {
         return this != NO_MODEL;

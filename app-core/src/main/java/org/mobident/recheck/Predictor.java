@@ -193,15 +193,15 @@ public final class Predictor {
         List<LibraryEntry> entries = new ArrayList<>(predictions.size());
         for (PredictedMobility p : predictions) {
             LibraryEntry a = libraryA.find(p.name()).orElseThrow(() ->
-                    new IllegalArgumentException("prediction for '" + p.name() + "' has no entry in library A"));
+                    new IllegalArgumentException("prediction for '" + p.name() + "' has no entry in the old library"));
             entries.add(new LibraryEntry(p.name(), p.predicted(), p.comparisonUncertainty(), 0, a.charge(), Double.NaN,
                     a.pKa(), a.limitingMobilities(), bufferB.label().isEmpty() ? null : bufferB.label(),
                     bufferB.pH(), bufferB.ionicStrengthMm(), bufferB.temperatureC(),
                     "predicted from " + libraryA.sourceFile() + " (" + p.method().label() + ", " + p.basis().label()
                             + ")"));
         }
-        return new Library(entries, libraryA.sourceFile() + " predicted for " + bufferB.describe(),
-                List.of("Predicted for " + bufferB.describe() + " from " + libraryA.sourceFile()
+        return new Library(entries, libraryA.sourceFile() + " predicted for " + bufferB.describeConditions(),
+                List.of("Predicted for " + bufferB.describeConditions() + " from " + libraryA.sourceFile()
                         + "; presumptive, confirm with standards"));
     }
 
@@ -233,8 +233,8 @@ public final class Predictor {
                 ? PredictedMobility.Method.RATIO : PredictedMobility.Method.DIFFERENCE;
         if (method == PredictedMobility.Method.DIFFERENCE) {
             notes.add(Math.signum(gA) != Math.signum(mu) && gA != 0 && mu != 0
-                    ? "model and measurement disagree in sign in buffer A; the model's change was added"
-                    : "barely ionised in buffer A; the model's change was added instead of scaled");
+                    ? "model and measurement disagree in sign in the old buffer; the model's change was added"
+                    : "barely ionised in the old buffer; the model's change was added instead of scaled");
         }
         double predicted = transfer(method, mu, gA, gB);
         double slope = method == PredictedMobility.Method.RATIO ? gB / gA : 1.0;

@@ -14,8 +14,11 @@ import org.mobident.report.CsvCells;
 
 /**
  * A recheck as three CSV tables: assignments (one row per earlier assignment), pairs (analyte
- * pairs not resolved before or after) and analytes (the mobility each analyte has in buffer B,
- * predicted and, where library B was measured, how far the model was off).
+ * pairs not resolved before or after) and analytes (the mobility each analyte has in the new
+ * buffer, predicted and, where the new library was measured, how far the model was off). Column
+ * names say "old" for the buffer and library the table was matched with (library A) and "new" for
+ * the new buffer and its library (library B). The verdict column holds {@link Verdict#label()}:
+ * still_holds, moved_but_still_unique, now_ambiguous, reassigned or lost.
  *
  * <p>Mobilities in 1e-9 m²/(V s) with 3 decimals, ratios (·_in_sd) and probabilities with 3
  * decimals, mean charge with 3 decimals; unknown values are empty cells; booleans are
@@ -26,16 +29,16 @@ public final class RecheckReportCsv {
 
     /** Columns of the assignments table. */
     public static final List<String> ASSIGNMENT_COLUMNS = List.of("run", "peak", "analyte", "old_status",
-            "old_confidence", "old_mobility", "old_mobility_sd", "library_a_mobility", "library_b_mobility", "shift",
+            "old_confidence", "old_mobility", "old_mobility_sd", "old_library_mobility", "new_library_mobility", "shift",
             "shift_sd", "shift_in_sd", "new_mobility", "new_confidence", "verdict", "collides_with",
             "prediction_basis", "reason");
     /** Columns of the pairs table. */
-    public static final List<String> PAIR_COLUMNS = List.of("first", "second", "delta_a", "threshold_a",
-            "resolved_a", "delta_b", "delta_b_sd", "threshold_b", "resolved_b", "became_unresolvable");
+    public static final List<String> PAIR_COLUMNS = List.of("first", "second", "delta_old", "threshold_old",
+            "resolved_old", "delta_new", "delta_new_sd", "threshold_new", "resolved_new", "became_unresolvable");
     /** Columns of the analytes table. */
-    public static final List<String> ANALYTE_COLUMNS = List.of("analyte", "buffer_a", "mobility_a", "spread_a",
-            "predicted_b", "predicted_b_sd", "model_sd", "predicted_shift", "method", "prediction_basis",
-            "mean_charge_b", "measured_b", "prediction_error", "prediction_error_in_sd", "note");
+    public static final List<String> ANALYTE_COLUMNS = List.of("analyte", "old_buffer", "old_library_mobility",
+            "old_library_spread", "predicted_new", "predicted_new_sd", "model_sd", "predicted_shift", "method", "prediction_basis",
+            "mean_charge_new", "measured_new", "prediction_error", "prediction_error_in_sd", "note");
 
     private static final int DECIMALS = 3;
     private static final CSVFormat FORMAT = CSVFormat.DEFAULT.builder().setRecordSeparator("\n")

@@ -20,11 +20,17 @@ public record RecheckResult(String libraryA, String libraryB, BufferSpec bufferB
                             List<PredictedMobility> predictions, List<PredictionError> predictionErrors,
                             List<String> notes) {
 
-    /** The caution every report ends with. */
+    /** The caution a report ends with when the new library was predicted ({@link #caution()}). */
     public static final String CAUTION = "Identification by effective mobility is presumptive, and so is this "
             + "recheck, which rests on a model of the buffer change. Confirm with standards run in the new buffer "
             + "and, where results carry legal, clinical or safety weight, by an orthogonal method and the "
             + "laboratory's validated procedures.";
+
+    /** The caution a report ends with when a library measured in the new buffer was given ({@link #caution()}). */
+    public static final String CAUTION_MEASURED = "Identification by effective mobility is presumptive, and so is "
+            + "this recheck, which rests on the measured new library (the model is only used to check its "
+            + "predictions against it). Confirm doubtful peaks with standards and, where results carry legal, "
+            + "clinical or safety weight, by an orthogonal method and the laboratory's validated procedures.";
 
     public RecheckResult {
         assignments = List.copyOf(assignments);
@@ -32,6 +38,11 @@ public record RecheckResult(String libraryA, String libraryB, BufferSpec bufferB
         predictions = List.copyOf(predictions);
         predictionErrors = List.copyOf(predictionErrors);
         notes = List.copyOf(notes);
+    }
+
+    /** The closing caution: {@link #CAUTION} for a predicted new library, {@link #CAUTION_MEASURED} for a measured one. */
+    public String caution() {
+        return predicted ? CAUTION : CAUTION_MEASURED;
     }
 
     /** True when any assignment does not simply hold, or any pair became unresolvable. */

@@ -16,22 +16,29 @@ public final class RecheckSummaryText {
 
     /** Writes the summary; the writer is flushed, not closed. */
     public static void write(RecheckResult r, PrintWriter out) {
-        out.println("Recheck of assignments made with " + r.libraryA());
-        out.println("  against " + (r.predicted() ? "a library predicted for " : "the measured library ")
-                + (r.predicted() && r.bufferB() != null ? r.bufferB().describe() : r.libraryB()));
-        if (!r.predicted() && r.bufferB() != null) {
-            out.println("  buffer B: " + r.bufferB().describe());
+        out.println("Recheck of assignments made with " + r.libraryA() + " (the old buffer's library)");
+        if (r.predicted()) {
+            out.println("  against a library predicted for the new buffer"
+                    + (r.bufferB() != null ? ": " + r.bufferB().describe() : ""));
+        } else {
+            out.println("  against the library measured in the new buffer: " + r.libraryB());
+            if (r.bufferB() != null) {
+                out.println("  new buffer: " + r.bufferB().describe());
+            }
         }
         out.println();
-        out.printf(Locale.ROOT, "Assignments: %d checked; %d still hold, %d moved but unique, %d now ambiguous, %d lost%n",
-                r.assignments().size(), r.count(Verdict.STILL_HOLDS), r.count(Verdict.MOVED_STILL_UNIQUE),
-                r.count(Verdict.NOW_AMBIGUOUS), r.count(Verdict.LOST));
+        out.printf(Locale.ROOT, "Assignments: %d checked; %d still hold, %d moved but still unique, %d now ambiguous, "
+                        + "%d reassigned, %d lost%n",
+                r.assignments().size(), r.count(Verdict.STILL_HOLDS), r.count(Verdict.MOVED_BUT_STILL_UNIQUE),
+                r.count(Verdict.NOW_AMBIGUOUS), r.count(Verdict.REASSIGNED), r.count(Verdict.LOST));
+        out.println("  (the moved peak is the old peak plus its analyte's shift; \"still hold\" means it stays inside "
+                + "the analyte's window of the old library)");
         for (AssignmentCheck a : r.assignments()) {
             if (a.verdict() == Verdict.STILL_HOLDS) {
                 continue;
             }
             out.printf(Locale.ROOT, "  %s peak %d, %s: %s (%.2f -> %.2f)%s — %s%n", a.run(), a.peak(), a.analyte(),
-                    a.verdict().label().replace('_', ' '), a.oldMobility(), a.newMobility(),
+                    a.verdict().text(), a.oldMobility(), a.newMobility(),
                     a.collidesWith().isEmpty() ? "" : ", with " + String.join(", ", a.collidesWith()), a.reason());
         }
         out.println();
@@ -46,10 +53,10 @@ public final class RecheckSummaryText {
         }
         if (!r.predictionErrors().isEmpty()) {
             out.println();
-            out.println("How far the model was off (measured in B − predicted from A):");
+            out.println("How far the model was off (measured in the new buffer − predicted from the old library):");
             for (PredictionError e : r.predictionErrors()) {
                 out.printf(Locale.ROOT, "  %s: %+.2f (%+.1f × its uncertainty %.2f; %s)%n", e.analyte(), e.error(),
-                        e.errorInSd(), e.uncertainty(), e.basis().label().replace('_', ' '));
+                        e.errorInSd(), e.uncertainty(), e.basis().description());
             }
         }
         if (!r.notes().isEmpty()) {
@@ -62,7 +69,7 @@ public final class RecheckSummaryText {
         out.println();
         out.println(r.needsAttention() ? "Attention needed: some assignments or pairs change in the new buffer."
                 : "All assignments still hold in the new buffer.");
-        out.println(RecheckResult.CAUTION);
+        out.println(r.caution());
         out.flush();
     }
 }

@@ -31,13 +31,19 @@ import org.mobident.matching.PeakMatch;
  *       analytes, {@link PredictedMobility#comparisonModelUncertainty()}), and every moved peak of the run is
  *       re-matched together against library B with the same {@link Matcher} that made the
  *       original assignments (one-to-one, with probabilities). This is the honest test: it asks
- *       "if this run were made in B, would the peak be recognised as X, and as X alone?";</li>
- *   <li>{@link Verdict#NOW_AMBIGUOUS} when the re-match does not identify X (X is ambiguous,
- *       another analyte wins, or X is taken by another peak); the other analytes within the
- *       moved peak's windows are listed;</li>
- *   <li>otherwise {@link Verdict#STILL_HOLDS} when X would also be a candidate for the
- *       <em>unmoved</em> peak in library B (the shift stays within X's window), else
- *       {@link Verdict#MOVED_STILL_UNIQUE} (the old window must be moved).</li>
+ *       "if this run were made in the new buffer, would the peak be recognised as X, and as X alone?";</li>
+ *   <li>{@link Verdict#LOST} also when no window of the new library reaches the moved peak;</li>
+ *   <li>{@link Verdict#REASSIGNED} when the re-match gives the moved peak to another analyte
+ *       ("would now be taken for Y"), whatever its status;</li>
+ *   <li>{@link Verdict#NOW_AMBIGUOUS} when the re-match does not identify X uniquely otherwise (X is
+ *       ambiguous, or X is taken by another peak); the other analytes within the moved peak's
+ *       windows are listed;</li>
+ *   <li>otherwise X is still the only match, and the verdict says whether the analyst's old window
+ *       still catches the peak: {@link Verdict#STILL_HOLDS} when the <em>moved</em> peak (with the
+ *       peak's own uncertainty) falls inside X's candidate window of <em>library A</em> (the old
+ *       buffer's library, the window the table was matched with), else
+ *       {@link Verdict#MOVED_BUT_STILL_UNIQUE} (the window must move). Both reasons state this
+ *       comparison with the moved mobility and X's old library value.</li>
  * </ol>
  * The candidate windows are those of the {@link org.mobident.matching.MatchSettings} in the
  * settings; a predicted library B carries each analyte's prediction uncertainty as its spread, so
@@ -91,7 +97,7 @@ public final class Rechecker {
             try {
                 specB = BufferSpec.fromLibrary(libraryB).build();
             } catch (InputException | IllegalArgumentException e) {
-                notes.add("model check skipped: buffer B's conditions are not known (" + e.getMessage() + ")");
+                notes.add("model check skipped: the new buffer's conditions are not known (" + e.getMessage() + ")");
             }
         }
         List<PredictedMobility> predictions = new ArrayList<>();
@@ -119,8 +125,18 @@ public final class Rechecker {
         }
         for (LibraryEntry b : libraryB.entries()) {
             if (libraryA.find(b.name()).isEmpty()) {
-                notes.add("'" + b.name() + "' is new in library B (not in library A)");
+                notes.add("'" + b.name() + "' is new in the new library (not in the old one)");
             }
+        }
+        List<String> missing = new ArrayList<>();
+        for (LibraryEntry a : libraryA.entries()) {
+            if (libraryB.find(a.name()).isEmpty()) {
+                missing.add(a.name());
+            }
+        }
+        if (!missing.isEmpty()) {
+            notes.add(missing.size() + " analyte(s) of the old library are missing from the new library and cannot "
+                    + "be identified with it: " + String.join(", ", missing));
         }
         return check(rows, tableLabel, libraryA, libraryB, specB, false, transfers, predictions, errors, notes,
                 predictor, settings);
@@ -207,7 +223,6 @@ public final class Rechecker {
         int n = run.size();
         double[] moved = new double[n];
         double[] movedSd = new double[n];
-        double[] unmoved = new double[n];
         double[] unmovedSd = new double[n];
         String[] lostReason = new String[n];
         for (int i = 0; i < n; i++) {
@@ -215,37 +230,37 @@ public final class Rechecker {
             double muA = libraryA.find(r.assigned()).orElseThrow().mobility();
             Transfer t = transfers.get(r.assigned());
             moved[i] = Double.NaN;
-            unmoved[i] = Double.NaN;
             double sd = Double.isFinite(r.mobilitySd()) ? r.mobilitySd() : 0.0;
             if (t == null) {
-                lostReason[i] = "not in library B";
+                lostReason[i] = "not in the new library";
                 continue;
             }
             if (Math.abs(t.mobilityB()) < s.lostBelowUnits()) {
                 lostReason[i] = String.format(Locale.ROOT,
-                        "its mobility in B, %.2f, is within %.2f of zero: it would migrate with the EOF",
+                        "its mobility in the new buffer, %.2f, is within %.2f of zero: it would migrate with the EOF",
                         t.mobilityB(), s.lostBelowUnits());
                 continue;
             }
             if (Math.signum(t.mobilityB()) != Math.signum(muA)) {
                 lostReason[i] = String.format(Locale.ROOT,
-                        "its charge changes sign (%.2f in A, %.2f in B): it would migrate the other way", muA,
+                        "its charge changes sign (%.2f in the old buffer, %.2f in the new): it would migrate the "
+                                + "other way", muA,
                         t.mobilityB());
                 continue;
             }
             if (!s.observable(t.mobilityB())) {
-                lostReason[i] = String.format(Locale.ROOT, "its mobility in B, %.2f, is outside the observable range",
+                lostReason[i] = String.format(Locale.ROOT,
+                        "its mobility in the new buffer, %.2f, is outside the observable range",
                         t.mobilityB());
                 continue;
             }
             moved[i] = r.comparedMobility() + (t.mobilityB() - muA);
             movedSd[i] = Math.hypot(sd, t.moveSd());
-            unmoved[i] = r.comparedMobility();
             unmovedSd[i] = sd;
         }
         List<PeakMatch> movedMatch = Matcher.match(moved, movedSd, libraryB, s.match(), MobilityAdjuster.IDENTITY);
-        List<PeakMatch> unmovedMatch = Matcher.match(unmoved, unmovedSd, libraryB, s.match(),
-                MobilityAdjuster.IDENTITY);
+        // the old window: the moved peak, with its own uncertainty, against library A as first matched
+        List<PeakMatch> oldWindow = Matcher.match(moved, unmovedSd, libraryA, s.match(), MobilityAdjuster.IDENTITY);
         for (int i = 0; i < n; i++) {
             PeakTableRow r = run.get(i);
             String x = r.assigned();
@@ -272,19 +287,29 @@ public final class Rechecker {
                 }
             }
             boolean unique = x.equals(m.assigned()) && m.status() == MatchStatus.IDENTIFIED;
-            boolean inOldWindow = unmovedMatch.get(i).candidates().stream().anyMatch(c -> c.name().equals(x));
+            boolean inOldWindow = oldWindow.get(i).candidates().stream().anyMatch(c -> c.name().equals(x));
             Verdict verdict;
             String reason;
             String shiftText = String.format(Locale.ROOT, "shift %+.2f ± %.2f", shift, shiftSd);
+            double halfWidth = oldWindowHalfWidth(libraryA.find(x).orElseThrow(), unmovedSd[i], s);
+            String where = String.format(Locale.ROOT, "the moved peak (%.2f) %s the window of %s in the old "
+                    + "library (%.2f ± %.2f)", moved[i], inOldWindow ? "stays inside" : "falls outside", x, muA,
+                    halfWidth);
             if (own == null && others.isEmpty()) {
                 verdict = Verdict.LOST;
-                reason = shiftText + "; the moved peak falls outside the window of " + x + " in library B";
+                reason = shiftText + String.format(Locale.ROOT, "; the moved peak (%.2f) falls outside the window of %s "
+                        + "in the new library (centred on %.2f) and of every other analyte", moved[i], x, muB);
+            } else if (m.assigned() != null && !x.equals(m.assigned())) {
+                verdict = Verdict.REASSIGNED;
+                reason = shiftText + String.format(Locale.ROOT, "; would now be taken for %s (%.2f likely)",
+                        m.assigned(), m.confidence());
+                reason += own == null ? "; the moved peak is outside the window of " + x + " in the new library"
+                        : String.format(Locale.ROOT, " rather than %s (%.2f likely)", x, own.probability());
             } else if (!unique) {
                 verdict = Verdict.NOW_AMBIGUOUS;
-                if (m.assigned() != null && !x.equals(m.assigned())) {
-                    reason = shiftText + "; re-matched to " + m.assigned() + " instead";
-                } else if (own == null) {
-                    reason = shiftText + "; outside its own window, within that of " + String.join(", ", others);
+                if (own == null) {
+                    reason = shiftText + "; outside its own window in the new library, within that of "
+                            + String.join(", ", others);
                 } else if (!x.equals(m.assigned())) {
                     reason = shiftText + "; " + x + " is better explained by another peak of the run";
                 } else {
@@ -295,15 +320,51 @@ public final class Rechecker {
                 }
             } else if (inOldWindow) {
                 verdict = Verdict.STILL_HOLDS;
-                reason = shiftText + "; still within its window and unique";
+                reason = shiftText + "; " + where + ", and " + x + " is still the only match";
             } else {
-                verdict = Verdict.MOVED_STILL_UNIQUE;
-                reason = shiftText + "; outside its old window, but no other analyte within reach";
+                verdict = Verdict.MOVED_BUT_STILL_UNIQUE;
+                reason = shiftText + "; " + where + ": the window must move, but " + x
+                        + " is still the only match in the new library";
             }
             out.put(r, new AssignmentCheck(r.run(), r.peak(), x, r.status(), r.confidence(), r.comparedMobility(),
                     r.mobilitySd(), muA, muB, shift, shiftSd, moved[i], own == null ? Double.NaN : own.probability(),
-                    verdict, verdict == Verdict.NOW_AMBIGUOUS ? others : List.of(), basis, reason));
+                    verdict, verdict == Verdict.NOW_AMBIGUOUS || verdict == Verdict.REASSIGNED ? others : List.of(), basis,
+                    reason));
         }
+    }
+
+    /**
+     * Half-width of an entry's candidate window for a peak of standard uncertainty {@code peakSd},
+     * as the {@link Matcher} applies it (found by bisection on the matcher itself, so that the
+     * number printed in a reason is the one the verdict used), to {@value #WINDOW_RESOLUTION_UNITS} units.
+     */
+    static double oldWindowHalfWidth(LibraryEntry entry, double peakSd, RecheckSettings s) {
+        Library single = new Library(List.of(entry), "window", List.of());
+        double lo = 0.0;
+        double hi = 1.0;
+        while (inWindow(single, entry.mobility() + hi, peakSd, s) && hi < MAX_WINDOW_UNITS) {
+            lo = hi;
+            hi *= 2.0;
+        }
+        while (hi - lo > WINDOW_RESOLUTION_UNITS) {
+            double mid = 0.5 * (lo + hi);
+            if (inWindow(single, entry.mobility() + mid, peakSd, s)) {
+                lo = mid;
+            } else {
+                hi = mid;
+            }
+        }
+        return 0.5 * (lo + hi);
+    }
+
+    /** Resolution of the printed window half-width, mobility units. */
+    static final double WINDOW_RESOLUTION_UNITS = 1e-4;
+    /** Search limit of the window half-width, mobility units. */
+    static final double MAX_WINDOW_UNITS = 1024.0;
+
+    private static boolean inWindow(Library single, double mu, double peakSd, RecheckSettings s) {
+        return !Matcher.match(new double[] {mu}, new double[] {peakSd}, single, s.match(), MobilityAdjuster.IDENTITY)
+                .get(0).candidates().isEmpty();
     }
 
     private static List<PairCheck> pairs(Library libraryA, Map<String, Transfer> transfers, Predictor predictor,

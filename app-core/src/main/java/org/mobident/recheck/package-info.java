@@ -9,7 +9,12 @@
  * the operational (activity) scale. The physico-chemical model is {@link org.mobident.chem};
  * this package anchors it on measured library values ({@link org.mobident.recheck.Predictor}).
  *
+ * <p>In the API, "A" is the old buffer and the library the earlier results were matched with,
+ * "B" the new buffer and its library (measured, or predicted from A); text written for users
+ * says "old" and "new" instead. The verdicts ({@link org.mobident.recheck.Verdict}): still holds,
+ * moved but still unique, now ambiguous, reassigned, lost.
+ *
  * <p>Identification by mobility is presumptive; so is every verdict of this package, which
- * rests on a model of the buffer change. All types are immutable; nothing here prints.
+ * rests on the new library: a model of the buffer change, or a library measured in it. All types are immutable; nothing here prints.
  */
 package org.mobident.recheck;

@@ -1,6 +1,7 @@
 package org.mobident.recheck;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
@@ -69,5 +70,56 @@ class PhScanTest {
         InputException ex = assertThrows(InputException.class,
                 () -> PhScan.scan(p, library(), null, List.of("nitrate"), 2, 8, 0.5, 0, 25, SeparationRule.DEFAULT));
         assertEquals("name", ex.field());
+    }
+
+    /**
+     * The curves cross at α = 2/3, pH 4 + log10(2) (Henderson–Hasselbalch, written out). With a
+     * 3-unit floor the interval is α in (17/30, 23/30); on a 0.5 step only pH 4.5 lies inside it,
+     * where |Δμ| is 2.8 — the closest value must still be the crossing, not that grid point.
+     */
+    @Test
+    void closestIsFoundOnTheIntervalNotOnTheGrid() throws InputException {
+        PhScan.Result r = PhScan.scan(Predictor.withoutReference(), library(), null, List.of(), 2.0, 8.0, 0.5, 0.0,
+                25.0, new SeparationRule(3.0, 0.0));
+        assertEquals(1, r.comigrations().size(), r.comigrations().toString());
+        PhScan.Comigration c = r.comigrations().get(0);
+        assertEquals(0.0, c.closestUnits(), 1e-3);
+        assertEquals(4 + Math.log10(2.0), c.closestPh(), 2e-4);
+        assertEquals(4 + Math.log10(17.0 / 13.0), c.interval().fromPh(), 2e-4);
+        assertEquals(4 + Math.log10(23.0 / 7.0), c.interval().toPh(), 2e-4);
+        assertTrue(c.overlapping(new SeparationRule(3.0, 0.0)) && c.closestUnits() < c.thresholdUnits());
+        assertFalse(c.fromScanStart() || c.toScanEnd());
+    }
+
+    /** A crossing between two grid points that are both resolved is still found (1-unit floor, step 0.5). */
+    @Test
+    void aCrossingBetweenResolvedGridPointsIsFound() throws InputException {
+        PhScan.Result r = PhScan.scan(Predictor.withoutReference(), library(), null, List.of(), 2.0, 8.0, 0.5, 0.0,
+                25.0, new SeparationRule(1.0, 0.0));
+        assertEquals(1, r.comigrations().size(), r.comigrations().toString());
+        PhScan.Comigration c = r.comigrations().get(0);
+        assertEquals(4 + Math.log10(19.0 / 11.0), c.interval().fromPh(), 2e-4);
+        assertEquals(4 + Math.log10(21.0 / 9.0), c.interval().toPh(), 2e-4);
+        assertEquals(0.0, c.closestUnits(), 1e-3);
+    }
+
+    /** Every reported interval has its closest value below the threshold; a clipped one says so. */
+    @Test
+    void intervalsTouchingTheScanEndsAreMarked() throws InputException {
+        PhScan.Result r = PhScan.scan(Predictor.withoutReference(), library(), null, List.of(), 4.3, 8.0, 0.1, 0.0,
+                25.0, new SeparationRule(1.0, 0.0));
+        assertEquals(1, r.comigrations().size(), r.comigrations().toString());
+        PhScan.Comigration c = r.comigrations().get(0);
+        assertTrue(c.fromScanStart());
+        assertEquals(4.3, c.interval().fromPh(), 0.0);
+        assertEquals(4 + Math.log10(21.0 / 9.0), c.interval().toPh(), 2e-4);
+        assertFalse(c.toScanEnd());
+        for (SeparationRule rule : List.of(SeparationRule.DEFAULT, new SeparationRule(1.0, 0.0))) {
+            for (PhScan.Comigration x : PhScan.scan(Predictor.withoutReference(), library(), null, List.of(), 2.0,
+                    8.0, 0.37, 0.0, 25.0, rule).comigrations()) {
+                assertTrue(x.closestUnits() < x.thresholdUnits(), x.toString());
+                assertTrue(x.interval().width() > 0, x.toString());
+            }
+        }
     }
 }

@@ -88,7 +88,7 @@ class RecheckerTest {
         assertEquals(0.0, chloride.shift(), 1e-9);
 
         AssignmentCheck formate = c.get("formate");
-        assertEquals(Verdict.MOVED_STILL_UNIQUE, formate.verdict(), formate.reason());
+        assertEquals(Verdict.MOVED_BUT_STILL_UNIQUE, formate.verdict(), formate.reason());
         // written out: α = 1/(1 + 10^(3.75 − 4.76)) at pH 4.76
         double formateB = -56.59 / (1 + Math.pow(10, 3.75 - 4.76));
         assertEquals(formateB - at(FORMATE, A), formate.shift(), 1e-9);
@@ -96,7 +96,9 @@ class RecheckerTest {
         assertTrue(formate.shiftUncertainty() > 0 && formate.shiftUncertainty() < 1.0, "" + formate.shiftUncertainty());
 
         AssignmentCheck acetate = c.get("acetate");
-        assertEquals(Verdict.NOW_AMBIGUOUS, acetate.verdict(), acetate.reason());
+        // the moved peak now favours strong21: a changed assignment, not an "ambiguous" one
+        assertEquals(Verdict.REASSIGNED, acetate.verdict(), acetate.reason());
+        assertTrue(acetate.reason().contains("would now be taken for strong21"), acetate.reason());
         assertEquals(List.of("strong21"), acetate.collidesWith());
         assertEquals(-42.39 / 2, acetate.libraryMobilityB(), 1e-9, "half the anion mobility at the pKa");
 
@@ -158,11 +160,19 @@ class RecheckerTest {
         assertEquals(B, r.bufferB(), "buffer B read from library B");
         Map<String, AssignmentCheck> c = byAnalyte(r);
         assertEquals(Verdict.LOST, c.get("weak7").verdict());
-        assertEquals("not in library B", c.get("weak7").reason());
+        assertEquals("not in the new library", c.get("weak7").reason());
+        assertTrue(r.notes().stream().anyMatch(n -> n.contains("missing from the new library") && n.endsWith(": weak7")),
+                r.notes().toString());
+        StringWriter text = new StringWriter();
+        RecheckSummaryText.write(r, new PrintWriter(text));
+        String summary = text.toString();
+        assertTrue(summary.contains("missing from the new library and cannot be identified with it: weak7"), summary);
+        assertTrue(summary.strip().endsWith(RecheckResult.CAUTION_MEASURED), summary);
+        assertFalse(summary.contains("rests on a model"), "a measured new library was given: " + summary);
         assertEquals(Verdict.STILL_HOLDS, c.get("chloride").verdict());
         assertNull(c.get("chloride").basis(), "measured, not predicted");
-        assertEquals(Verdict.MOVED_STILL_UNIQUE, c.get("formate").verdict());
-        assertEquals(Verdict.NOW_AMBIGUOUS, c.get("acetate").verdict());
+        assertEquals(Verdict.MOVED_BUT_STILL_UNIQUE, c.get("formate").verdict());
+        assertEquals(Verdict.NOW_AMBIGUOUS, c.get("acetate").verdict(), "acetate measured 0.5 off: still favoured, not uniquely");
 
         assertEquals(4, r.predictionErrors().size());
         PredictionError acetate = r.predictionErrors().stream().filter(e -> e.analyte().equals("acetate"))
@@ -216,7 +226,7 @@ class RecheckerTest {
         assertEquals(5, lines.length);
         assertTrue(lines[1].startsWith("'=r1,1,chloride,identified,0.950,-79.000,0.100,-79.090,-79.090,0.000,"),
                 lines[1]);
-        assertTrue(lines[3].contains(",now_ambiguous,strong21,entry_model,"), lines[3]);
+        assertTrue(lines[3].contains(",reassigned,strong21,entry_model,"), lines[3]);
 
         StringWriter pairs = new StringWriter();
         RecheckReportCsv.writePairs(r, pairs);
@@ -232,8 +242,82 @@ class RecheckerTest {
         StringWriter text = new StringWriter();
         RecheckSummaryText.write(r, new PrintWriter(text));
         String s = text.toString();
-        assertTrue(s.contains("1 still hold, 1 moved but unique, 1 now ambiguous, 1 lost"), s);
+        assertTrue(s.contains("1 still hold, 1 moved but still unique, 0 now ambiguous, 1 reassigned, 1 lost"), s);
+        assertTrue(s.contains("formate: moved but still unique ("), s);
+        assertFalse(s.contains("moved still unique"), s);
+        assertFalse(s.matches("(?s).*\\b(library|buffer) [AB]\\b.*"), "no bare A/B: " + s);
         assertTrue(s.contains("acetate / strong21"), s);
         assertTrue(s.strip().endsWith(RecheckResult.CAUTION), s);
+    }
+
+    private static LibraryEntry entry(String name, double mu, String buffer) {
+        return new LibraryEntry(name, mu, 0.3, 10, -1, Double.NaN, List.of(), List.of(mu), buffer, 8.0, 0, 25,
+                "invented");
+    }
+
+    /**
+     * The rule for "still holds": the moved peak (old peak + the analyte's shift) is compared with
+     * the analyte's window in the OLD library. Both nitrate peaks get the same shift +1.14; with a
+     * fixed ±1.0 window around −69.50 the first (−69.35 → −68.21) leaves it, the second
+     * (−69.87 → −68.73) stays in it. (Comparing the unmoved peak with the new library's window
+     * gave the opposite answers.) Values invented.
+     */
+    @Test
+    void stillHoldsMeansTheMovedPeakStaysInTheOldWindow() throws InputException {
+        Library a = new Library(List.of(entry("nitrate", -69.50, "A"), entry("chloride", -79.0, "A")), "a.csv",
+                List.of());
+        Library b = new Library(List.of(entry("nitrate", -68.36, "B"), entry("chloride", -79.0, "B")), "b.csv",
+                List.of());
+        List<PeakTableRow> rows = List.of(
+                new PeakTableRow(2, "spring", 1, "analyte", -69.35, 0.001, -69.35, "nitrate", 0.96, "identified"),
+                new PeakTableRow(3, "well", 1, "analyte", -69.87, 0.001, -69.87, "nitrate", 0.97, "identified"));
+        RecheckSettings settings = RecheckSettings.DEFAULT.withMatch(org.mobident.matching.MatchSettings.ABSOLUTE);
+        RecheckResult r = Rechecker.withMeasuredLibrary(rows, "peaks.csv", a, null, b, null,
+                Predictor.withoutReference(), settings);
+        AssignmentCheck spring = r.assignments().get(0);
+        AssignmentCheck well = r.assignments().get(1);
+        assertEquals(1.14, spring.shift(), 1e-9);
+        assertEquals(1.14, well.shift(), 1e-9);
+        assertEquals(-68.21, spring.newMobility(), 1e-9);
+        assertEquals(Verdict.MOVED_BUT_STILL_UNIQUE, spring.verdict(), spring.reason());
+        assertTrue(spring.reason().contains("(-68.21) falls outside the window of nitrate in the old library (-69.50 ± 1.00)"),
+                spring.reason());
+        assertEquals(Verdict.STILL_HOLDS, well.verdict(), well.reason());
+        assertTrue(well.reason().contains("(-68.73) stays inside the window of nitrate in the old library (-69.50 ± 1.00)"),
+                well.reason());
+    }
+
+    /** A moved peak that lands on another analyte is REASSIGNED, not "ambiguous". Values invented. */
+    @Test
+    void aPeakTakenForAnotherAnalyteIsReassigned() throws Exception {
+        Library a = new Library(List.of(entry("x1", -30.0, "A"), entry("y", -50.0, "A")), "a.csv", List.of());
+        Library b = new Library(List.of(entry("x1", -35.0, "B"), entry("y", -36.0, "B")), "b.csv", List.of());
+        List<PeakTableRow> rows = List.of(
+                new PeakTableRow(2, "r1", 1, "analyte", -30.9, 0.05, -30.9, "x1", 0.9, "identified"));
+        RecheckResult r = Rechecker.withMeasuredLibrary(rows, "peaks.csv", a, null, b, null,
+                Predictor.withoutReference(),
+                RecheckSettings.DEFAULT.withMatch(org.mobident.matching.MatchSettings.ABSOLUTE));
+        AssignmentCheck x = r.assignments().get(0);
+        assertEquals(-35.9, x.newMobility(), 1e-9);
+        assertEquals(Verdict.REASSIGNED, x.verdict(), x.reason());
+        assertTrue(x.reason().contains("would now be taken for y"), x.reason());
+        assertFalse(x.reason().contains("ambiguous"), x.reason());
+        assertTrue(r.needsAttention());
+        StringWriter csv = new StringWriter();
+        RecheckReportCsv.writeAssignments(r, csv);
+        assertTrue(csv.toString().contains(",reassigned,"), csv.toString());
+        StringWriter text = new StringWriter();
+        RecheckSummaryText.write(r, new PrintWriter(text));
+        assertTrue(text.toString().contains("1 reassigned"), text.toString());
+        assertTrue(text.toString().contains("r1 peak 1, x1: reassigned"), text.toString());
+
+        // nearer to x1 (residual 0.4) than to y (0.6) in the new library: still x1, but not uniquely
+        List<PeakTableRow> near = List.of(
+                new PeakTableRow(2, "r1", 1, "analyte", -30.4, 0.05, -30.4, "x1", 0.9, "identified"));
+        AssignmentCheck amb = Rechecker.withMeasuredLibrary(near, "peaks.csv", a, null, b, null,
+                Predictor.withoutReference(),
+                RecheckSettings.DEFAULT.withMatch(org.mobident.matching.MatchSettings.ABSOLUTE)).assignments().get(0);
+        assertEquals(Verdict.NOW_AMBIGUOUS, amb.verdict(), amb.reason());
+        assertEquals(List.of("y"), amb.collidesWith());
     }
 }
