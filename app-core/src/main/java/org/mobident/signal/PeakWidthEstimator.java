@@ -47,20 +47,22 @@ final class PeakWidthEstimator {
         int pad = Math.min(2 * radius, n - 1);
         double[] extended = SnipBaseline.reflect(light, pad);
         double[] opening = morphological(extended, radius, false);
-        double[] closing = morphological(extended, radius, true);
-        double[] rise = new double[n];
-        double[] fall = new double[n];
+        double[] excursion = new double[n];
         for (int i = 0; i < n; i++) {
-            rise[i] = light[i] - opening[i + pad];
-            fall[i] = closing[i + pad] - light[i];
+            excursion[i] = light[i] - opening[i + pad]; // rise above the background
         }
         double threshold = SignalLimits.WIDTH_ESTIMATE_MIN_SIGMAS * noiseSd * gain;
         double minWidth = SignalLimits.WIDTH_ESTIMATE_MIN_SAMPLES * samplingS;
         double[] widths = new double[16];
         int[] found = {0};
-        widths = collectWidths(timeS, rise, threshold, minWidth, widths, found);
+        widths = collectWidths(timeS, excursion, threshold, minWidth, widths, found);
         if (found[0] == 0) {
-            widths = collectWidths(timeS, fall, threshold, minWidth, widths, found);
+            // the closing is only needed for the fallback, so it is only computed then
+            double[] closing = morphological(extended, radius, true);
+            for (int i = 0; i < n; i++) {
+                excursion[i] = closing[i + pad] - light[i]; // fall below the background
+            }
+            widths = collectWidths(timeS, excursion, threshold, minWidth, widths, found);
         }
         if (found[0] == 0) {
             return SignalLimits.FALLBACK_WIDTH_SAMPLES * samplingS;

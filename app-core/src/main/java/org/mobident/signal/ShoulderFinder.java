@@ -53,6 +53,13 @@ import java.util.List;
  */
 final class ShoulderFinder {
 
+    /**
+     * Candidate maxima that are scanned directly for their one-sided minima, as long as the scans
+     * cost at most this many times the length of the region (beyond it the moving minima of the
+     * whole region, linear whatever the count, are cheaper).
+     */
+    private static final int DIRECT_SCAN_FACTOR = 4;
+
     private ShoulderFinder() {
     }
 
@@ -119,7 +126,9 @@ final class ShoulderFinder {
      * concavity within {@code reach} samples on its left and, again, on its right (both windows
      * clipped to [first, last]); two significant maxima are distinct when the concavity between
      * them falls by at least {@code prominence} below each, otherwise the higher one stands for
-     * both. Linear in last − first (moving minima by monotone queues, one merging pass).
+     * both. Linear in last − first: the one-sided minima are scanned directly at the candidate
+     * maxima when they are few, else taken from moving minima over the whole region
+     * ({@link PeakWidthEstimator#movingExtreme}); then one merging pass.
      *
      * @param concavity  c = −y″ (not modified)
      * @param first      first index (inclusive)
@@ -132,9 +141,26 @@ final class ShoulderFinder {
     static List<Integer> zones(double[] concavity, int first, int last, double level, double prominence,
                                int reach) {
         int n = last - first + 1;
-        double[] c = java.util.Arrays.copyOfRange(concavity, first, last + 1);
         // the minimum over [i − 2r, i] is the centred minimum at i − r, that over [i, i + 2r] the one at i + r
         int r = Math.max(1, reach / 2);
+        // Most regions are short noise excursions with few or no local maxima above the level: the
+        // one-sided minima are then scanned directly at those maxima (the same minima, so the same
+        // result) instead of being computed for every point, which keeps the cost and the
+        // allocation of a region proportional to its length.
+        int candidates = 0;
+        for (int i = 1; i < n - 1; i++) {
+            int g = first + i;
+            if (isLocalMaximum(concavity, g, level)) {
+                candidates++;
+            }
+        }
+        if (candidates == 0) {
+            return new ArrayList<>(0);
+        }
+        if ((long) candidates * (2L * r + 1) <= DIRECT_SCAN_FACTOR * (long) n) {
+            return select(concavity, first, n, level, prominence, r, null, null, null);
+        }
+        double[] c = java.util.Arrays.copyOfRange(concavity, first, last + 1);
         double[] centred = PeakWidthEstimator.movingExtreme(c, r, false);
         // within r of an end the one-sided window is clipped there: running minima from each end
         double[] fromStart = new double[n];
@@ -144,24 +170,53 @@ final class ShoulderFinder {
             int j = n - 1 - i;
             fromEnd[j] = i == 0 ? c[j] : Math.min(fromEnd[j + 1], c[j]);
         }
+        return select(concavity, first, n, level, prominence, r, centred, fromStart, fromEnd);
+    }
+
+    /** A local maximum of c at {@code g} (flat on its left allowed) that reaches {@code level}. */
+    private static boolean isLocalMaximum(double[] c, int g, double level) {
+        double v = c[g];
+        return v >= c[g - 1] && v > c[g + 1] && v >= level;
+    }
+
+    /** Lowest of c[from..to] (inclusive). */
+    private static double minimum(double[] c, int from, int to) {
+        double m = c[from];
+        for (int i = from + 1; i <= to; i++) {
+            double v = c[i];
+            m = v < m ? v : m;
+        }
+        return m;
+    }
+
+    /**
+     * The merging pass of {@link #zones}; region-local index i is {@code concavity[first + i]}. With
+     * {@code centred} null the one-sided minima are scanned directly, else taken from the moving
+     * minima ({@code centred}, {@code fromStart}, {@code fromEnd} over the region).
+     */
+    private static List<Integer> select(double[] concavity, int first, int n, double level, double prominence,
+                                        int r, double[] centred, double[] fromStart, double[] fromEnd) {
         List<Integer> kept = new ArrayList<>();
         double between = Double.POSITIVE_INFINITY; // lowest c after the last kept maximum
         for (int i = 1; i < n - 1; i++) {
-            boolean significant = c[i] >= c[i - 1] && c[i] > c[i + 1] && c[i] >= level
-                    && c[i] - (i >= r ? centred[i - r] : fromStart[i]) >= prominence
-                    && c[i] - (i + r <= n - 1 ? centred[i + r] : fromEnd[i]) >= prominence;
+            int g = first + i;
+            double ci = concavity[g];
+            boolean significant = isLocalMaximum(concavity, g, level)
+                    && ci - leftMinimum(concavity, first, i, r, centred, fromStart) >= prominence
+                    && ci - rightMinimum(concavity, first, n, i, r, centred, fromEnd) >= prominence;
             if (!significant) {
-                between = Math.min(between, c[i]);
+                between = Math.min(between, ci);
                 continue;
             }
             if (!kept.isEmpty()) {
                 int k = kept.get(kept.size() - 1);
-                if (c[k] - between < prominence || c[i] - between < prominence) {
-                    if (c[i] > c[k]) {
+                double ck = concavity[first + k];
+                if (ck - between < prominence || ci - between < prominence) {
+                    if (ci > ck) {
                         kept.set(kept.size() - 1, i); // the higher stands for both
                         between = Double.POSITIVE_INFINITY;
                     } else {
-                        between = Math.min(between, c[i]);
+                        between = Math.min(between, ci);
                     }
                     continue;
                 }
@@ -174,5 +229,23 @@ final class ShoulderFinder {
             out.add(first + i);
         }
         return out;
+    }
+
+    /** Lowest concavity over region indices [i − 2r, i], clipped to the region. */
+    private static double leftMinimum(double[] concavity, int first, int i, int r, double[] centred,
+                                      double[] fromStart) {
+        if (centred == null) {
+            return minimum(concavity, first + Math.max(0, i - 2 * r), first + i);
+        }
+        return i >= r ? centred[i - r] : fromStart[i];
+    }
+
+    /** Lowest concavity over region indices [i, i + 2r], clipped to the region. */
+    private static double rightMinimum(double[] concavity, int first, int n, int i, int r, double[] centred,
+                                       double[] fromEnd) {
+        if (centred == null) {
+            return minimum(concavity, first + i, first + Math.min(n - 1, i + 2 * r));
+        }
+        return i + r <= n - 1 ? centred[i + r] : fromEnd[i];
     }
 }

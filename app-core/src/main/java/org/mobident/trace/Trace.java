@@ -5,7 +5,8 @@ import java.util.Objects;
 
 /**
  * One detector trace: strictly increasing times in seconds and the signal at each time.
- * Immutable: the arrays are copied in and copied out. Sampling may be irregular.
+ * Immutable: the arrays are copied in (except by {@link #adopting}, whose caller hands them over)
+ * and copied out. Sampling may be irregular.
  */
 public final class Trace {
     private final String name;
@@ -20,6 +21,10 @@ public final class Trace {
      * @param signal     finite signal values, same length (copied, not modified)
      */
     public Trace(String name, String sourceFile, double[] timeS, double[] signal) {
+        this(name, sourceFile, timeS, signal, true);
+    }
+
+    private Trace(String name, String sourceFile, double[] timeS, double[] signal, boolean copy) {
         this.name = Objects.requireNonNull(name, "name");
         this.sourceFile = Objects.requireNonNull(sourceFile, "sourceFile");
         if (timeS.length != signal.length) {
@@ -37,8 +42,25 @@ public final class Trace {
                 throw new IllegalArgumentException("time not strictly increasing at point " + i);
             }
         }
-        this.timeS = timeS.clone();
-        this.signal = signal.clone();
+        this.timeS = copy ? timeS.clone() : timeS;
+        this.signal = copy ? signal.clone() : signal;
+    }
+
+    /**
+     * A trace that takes over {@code timeS} and {@code signal} instead of copying them, for code
+     * that has just filled fresh arrays (a file reader) and would otherwise copy them once more.
+     * The checks are those of the constructor. The caller hands the arrays over: it must neither
+     * keep nor change them afterwards, nor pass them to anyone else; the trace itself never
+     * changes them and still hands out copies only, so it is as immutable as one built by the
+     * constructor.
+     *
+     * @param name       run name (trace file name without extension)
+     * @param sourceFile file the trace came from, as named by the user (for messages)
+     * @param timeS      strictly increasing finite times in s (taken over, not copied)
+     * @param signal     finite signal values, same length (taken over, not copied)
+     */
+    public static Trace adopting(String name, String sourceFile, double[] timeS, double[] signal) {
+        return new Trace(name, sourceFile, timeS, signal, false);
     }
 
     public String name() {

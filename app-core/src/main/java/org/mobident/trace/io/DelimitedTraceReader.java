@@ -38,8 +38,21 @@ public final class DelimitedTraceReader {
     private static final int MAX_QUOTED_CHARS = 40;
     /** Arrays start at this many points and grow by half. */
     private static final int INITIAL_CAPACITY = 1024;
-    /** A rough lower bound of bytes per data row, to size the arrays once for typical files. */
-    private static final int MIN_BYTES_PER_ROW = 8;
+    /**
+     * After this many data rows the arrays are sized once for the whole file from the mean bytes
+     * per row so far, so that a long file is neither grown step by step nor over-allocated.
+     */
+    private static final int ROWS_BEFORE_ESTIMATE = 256;
+    /** Outcomes of {@code Parse.simpleRow}. */
+    private static final int SIMPLE_ROW = 1;
+    private static final int GENERAL_ROW = 0;
+    private static final int END_OF_BYTES = -1;
+    /** Largest array length the JVM allows, with a margin (the bytes of one file bound the rows anyway). */
+    private static final int MAX_ROWS = Integer.MAX_VALUE - 8;
+    /** Headroom of that estimate: later rows are usually a little longer (times gain digits). */
+    private static final double ESTIMATE_HEADROOM = 1.02;
+    /** Extra rows on top of the estimate (short files, rounding). */
+    private static final int ESTIMATE_SLACK_ROWS = 64;
 
     /**
      * A time column without a stated unit that ends at or before this value is refused rather than
@@ -126,6 +139,69 @@ public final class DelimitedTraceReader {
             return true;
         }
 
+        /**
+         * The common row in one pass: finds the end of the next line and its field bounds together
+         * ({@link #nextLine} then {@link #splitRow} would scan it twice). Only a plain row is taken:
+         * it starts with neither a blank, a tab, {@code #}, a quote nor a line end, holds no quote,
+         * and has at least the named and at most the header's number of fields. Anything else is
+         * left untouched for the general path, which gives the same fields or the same error.
+         *
+         * @return {@link #SIMPLE_ROW} when the row was read and split, {@link #GENERAL_ROW} when the
+         *         line must go the general way, {@link #END_OF_BYTES} when no bytes are left
+         */
+        private int simpleRow() {
+            if (pos >= n) {
+                return END_OF_BYTES;
+            }
+            int i = pos;
+            byte first = b[i];
+            if (first == ' ' || first == '\t' || first == '#' || first == '"' || first == '\n' || first == '\r') {
+                return GENERAL_ROW;
+            }
+            byte d = delimiter;
+            int capacity = fieldStart.length;
+            int count = 0;
+            int start = i;
+            while (i < n) {
+                byte c = b[i];
+                if (c == d) {
+                    if (count == capacity) {
+                        return GENERAL_ROW;
+                    }
+                    fieldStart[count] = start;
+                    fieldEnd[count] = i;
+                    count++;
+                    start = i + 1;
+                } else if (c == '\n' || c == '\r') {
+                    break;
+                } else if (c == '"') {
+                    return GENERAL_ROW;
+                }
+                i++;
+            }
+            if (count == capacity) {
+                return GENERAL_ROW;
+            }
+            fieldStart[count] = start;
+            fieldEnd[count] = i;
+            count++;
+            if (count < namedCount) {
+                return GENERAL_ROW;
+            }
+            line++;
+            lineStart = pos;
+            lineEnd = i;
+            if (i < n && b[i] == '\r' && i + 1 < n && b[i + 1] == '\n') {
+                i++;
+            }
+            pos = i < n ? i + 1 : n;
+            for (int k = count; k < capacity; k++) {
+                fieldStart[k] = lineStart;
+                fieldEnd[k] = lineStart;
+            }
+            return SIMPLE_ROW;
+        }
+
         /** True for a line of spaces and tabs only, or a comment line. */
         private boolean skippable() {
             int i = lineStart;
@@ -160,17 +236,24 @@ public final class DelimitedTraceReader {
             String signalName = names.get(signalIndex);
             boolean decimalComma = delimiter != ',';
 
-            int capacity = (int) Math.max(INITIAL_CAPACITY, Math.min(n / MIN_BYTES_PER_ROW, 1 << 20));
-            double[] times = new double[capacity];
-            double[] signal = new double[capacity];
+            double[] times = new double[INITIAL_CAPACITY];
+            double[] signal = new double[INITIAL_CAPACITY];
             int count = 0;
+            int dataStart = pos;
             double previousRaw = Double.NaN;
             long previousLine = 0;
-            while (nextLine()) {
-                if (skippable()) {
-                    continue;
+            while (true) {
+                int fast = simpleRow();
+                if (fast == END_OF_BYTES) {
+                    break;
                 }
-                splitRow();
+                if (fast == GENERAL_ROW) {
+                    nextLine(); // there are bytes left, so there is a line
+                    if (skippable()) {
+                        continue;
+                    }
+                    splitRow();
+                }
                 double t = value(timeIndex, timeName, decimalComma);
                 double y = value(signalIndex, signalName, decimalComma);
                 double tS = scale.toSeconds(t);
@@ -184,8 +267,18 @@ public final class DelimitedTraceReader {
                             + " the previous time " + shortNumber(previousRaw) + " (line " + previousLine
                             + "); times must strictly increase");
                 }
+                if (count == ROWS_BEFORE_ESTIMATE && pos < n) {
+                    double bytesPerRow = (double) (pos - dataStart) / (count + 1); // this row included
+                    long estimate = count + (long) Math.ceil(ESTIMATE_HEADROOM * (n - pos) / bytesPerRow)
+                            + ESTIMATE_SLACK_ROWS;
+                    int sized = (int) Math.min(estimate, MAX_ROWS);
+                    if (sized > times.length) {
+                        times = Arrays.copyOf(times, sized);
+                        signal = Arrays.copyOf(signal, sized);
+                    }
+                }
                 if (count == times.length) {
-                    int grown = count + (count >> 1) + 1;
+                    int grown = (int) Math.min(MAX_ROWS, count + (long) (count >> 1) + 1);
                     times = Arrays.copyOf(times, grown);
                     signal = Arrays.copyOf(signal, grown);
                 }
@@ -208,7 +301,12 @@ public final class DelimitedTraceReader {
                         + "name the unit in the header (e.g. time_min or time_s) or give it as an option "
                         + "(--time-unit min or s)");
             }
-            return new Trace(traceName, file, Arrays.copyOf(times, count), Arrays.copyOf(signal, count));
+            if (count < times.length) {
+                times = Arrays.copyOf(times, count);
+                signal = Arrays.copyOf(signal, count);
+            }
+            // the arrays are ours alone: hand them over rather than have the trace copy them again
+            return Trace.adopting(traceName, file, times, signal);
         }
 
         // ---- header ----

@@ -176,7 +176,7 @@ class PlotModelTest {
     @Test
     void aRunAtAnotherTemperatureIsDrawnAtTheMobilitiesComparedWithTheLibrary() {
         // the run's mobilities were compared with the library after a viscosity factor of 0.9
-        PlotFixtures.SyntheticRun warm = PlotFixtures.run("warm", 400, 1.0);
+        PlotFixtures.SyntheticRun warm = PlotFixtures.run("warm", 200, 1.0);
         java.util.List<org.mobident.pipeline.PeakResult> peaks = new java.util.ArrayList<>();
         for (org.mobident.pipeline.PeakResult p : warm.result().peaks()) {
             peaks.add(new org.mobident.pipeline.PeakResult(p.peak(), p.role(), p.mobility(), p.mobilitySd(),
