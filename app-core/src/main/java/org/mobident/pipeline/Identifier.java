@@ -127,7 +127,9 @@ public final class Identifier {
                     "a charged marker of known mobility needs a window ref_marker_from_s < ref_marker_to_s"));
         }
         if (!c.hasGeometry() && !c.hasRefMarker()) {
-            return RunResult.failure(run, new InputException(run.origin(), run.originLine(), "total_length_cm",
+            String missing = Double.isNaN(c.totalLengthCm()) ? "total_length_cm"
+                    : Double.isNaN(c.detectorLengthCm()) ? "detector_length_cm" : "voltage_kv";
+            return RunResult.failure(run, new InputException(run.origin(), run.originLine(), missing,
                     "lengths and voltage are needed unless a charged marker of known mobility is given"));
         }
         TraceAnalysis analysis = PeakDetector.analyse(trace, c.detectionOrDirect(), settings.peakSettings());

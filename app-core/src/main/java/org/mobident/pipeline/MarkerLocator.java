@@ -55,7 +55,8 @@ final class MarkerLocator {
     Choice locate(RunSpec run, List<Peak> peaks, MobilityAdjuster adjuster) {
         RunConditions c = run.conditions();
         if (peaks.isEmpty()) {
-            return new Choice(null, -1, -1, "no peaks found: no mobility scale");
+            return new Choice(null, -1, -1, "no peaks found above the S/N threshold: no mobility scale (if the "
+                    + "peaks dip below the baseline, the detection mode should be 'indirect'; if they rise, 'direct')");
         }
         int ref = -1;
         if (c.hasRefMarker()) {

@@ -219,4 +219,18 @@ class IdentifierEndToEndTest {
         assertTrue(out.get(0).failed());
         assertTrue(out.get(0).error().getMessage().contains("does-not-exist.csv"), out.get(0).error().getMessage());
     }
+
+    @Test
+    void aMissingVoltageIsNamedAsSuch() {
+        RunConditions full = conditions(80, 72, -20, 0, Detection.INDIRECT, 380, 800);
+        Trace t = TraceSimulator.simulate("v", SimulationSpec.builder(full).eofMobility(-50).neutralMarker(1.0)
+                .samplingHz(20).durationS(900).zone("chloride", -76.2, 0.8, 120_000).build());
+        RunConditions noVoltage = new RunConditions(80, 72, Double.NaN, 0, 25.0, "b", 380, 800, Detection.INDIRECT,
+                Double.NaN, Double.NaN, Double.NaN);
+        RunResult r = new Identifier(ANIONS, IdentifySettings.defaults().withThreads(1))
+                .identify(new RunSpec("v", Path.of("v.csv"), noVoltage, "runs.csv", 7), t);
+        assertTrue(r.failed());
+        assertEquals("voltage_kv", r.error().field());
+        assertEquals(7, r.error().line());
+    }
 }
