@@ -360,7 +360,9 @@ public final class LibraryCsv {
                 String hint = cell.indexOf(';') >= 0 || cell.indexOf('\t') >= 0
                         ? " (library files are comma-delimited)" : "";
                 LibraryColumn c = LibraryColumn.fromHeader(cell).orElseThrow(() -> new InputException(file, line, cell,
-                        "unknown column '" + cell + "'; known columns are: " + LibraryColumn.knownHeaders() + hint));
+                        "unknown column '" + cell + "'" + org.mobident.io.Suggestions.didYouMean(cell,
+                                java.util.Arrays.asList(LibraryColumn.knownHeaders().split(",\\s*")))
+                                + "; known columns are: " + LibraryColumn.knownHeaders() + hint));
                 if (seen.containsKey(c)) {
                     throw new InputException(file, line, c.header(), "column '" + c.header() + "' appears twice (columns "
                             + (seen.get(c) + 1) + " and " + (i + 1) + ")");

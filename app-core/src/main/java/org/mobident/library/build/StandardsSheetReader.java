@@ -143,7 +143,8 @@ public final class StandardsSheetReader {
             for (String raw : cells(line, lineNo)) {
                 String c = raw.strip().toLowerCase(Locale.ROOT).replace(' ', '_').replace('-', '_');
                 if (!c.isEmpty() && !COLUMNS.contains(c)) {
-                    throw new InputException(file, lineNo, raw, "unknown column '" + raw + "'; known columns: "
+                    throw new InputException(file, lineNo, raw, "unknown column '" + raw + "'"
+                            + org.mobident.io.Suggestions.didYouMean(c, COLUMNS) + "; known columns: "
                             + String.join(", ", COLUMNS));
                 }
                 if (!c.isEmpty() && columns.contains(c)) {

@@ -281,8 +281,8 @@ public final class RunSheetReader {
             for (String r : raw) {
                 String c = r.strip().toLowerCase(Locale.ROOT).replace(' ', '_').replace('-', '_');
                 if (!c.isEmpty() && !COLUMNS.contains(c)) {
-                    throw new InputException(name, lineNo, r, "unknown column '" + r + "'; known columns: "
-                            + COLUMN_LIST);
+                    throw new InputException(name, lineNo, r, "unknown column '" + r + "'"
+                            + org.mobident.io.Suggestions.didYouMean(c, COLUMNS) + "; known columns: " + COLUMN_LIST);
                 }
                 if (!c.isEmpty() && columns.contains(c)) {
                     throw new InputException(name, lineNo, r, "column '" + r + "' appears twice");
