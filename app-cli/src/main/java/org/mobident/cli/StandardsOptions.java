@@ -80,15 +80,24 @@ public final class StandardsOptions {
         RunInputs.Loaded loaded = inputs.load();
         var mixByRun = sheet.resolveMixes(loaded.runs(), loaded.mixByRun(), loaded.sampleByRun());
         sheet.requireMixes(loaded.runs(), mixByRun);
-        IdentifySettings settings = inputs.settings(MatchSettings.DEFAULT);
-        // without marker windows, the neutral marker is the peak under which the expected analytes fit best
-        Library guide = sheet.guideLibrary(reference, GUIDE_APPROX_SPREAD, GUIDE_REFERENCE_RELATIVE_SPREAD);
-        List<RunResult> results = new ArrayList<>(new Identifier(guide, settings).identifyAll(loaded.runs()));
-        results.addAll(loaded.rejected());
         if ((ph != null && !(ph >= 0 && ph <= 14)) || (ionicStrengthMm != null && !(ionicStrengthMm >= 0))) {
             throw new InputException("command line", 0, ph != null && !(ph >= 0 && ph <= 14) ? "--ph"
                     : "--ionic-strength-mm", "pH must lie in 0–14 and the ionic strength must not be negative");
         }
+        IdentifySettings settings = inputs.settings(MatchSettings.DEFAULT);
+        // without marker windows, the neutral marker is the peak under which the expected analytes fit best;
+        // reference (limiting) mobilities are first carried to the buffer when its pH and ionic strength are known
+        Library guideReference = reference;
+        if (reference != null && ph != null && ionicStrengthMm != null) {
+            double t = loaded.runs().isEmpty() || Double.isNaN(loaded.runs().get(0).conditions().temperatureC())
+                    ? org.mobident.library.LibraryEntry.DEFAULT_TEMPERATURE_C
+                    : loaded.runs().get(0).conditions().temperatureC();
+            guideReference = org.mobident.chem.ReferenceIons.effectiveAt(reference,
+                    new org.mobident.chem.BufferConditions(ph, ionicStrengthMm / 1000.0, t));
+        }
+        Library guide = sheet.guideLibrary(guideReference, GUIDE_APPROX_SPREAD, GUIDE_REFERENCE_RELATIVE_SPREAD);
+        List<RunResult> results = new ArrayList<>(new Identifier(guide, settings).identifyAll(loaded.runs()));
+        results.addAll(loaded.rejected());
         // with pH and ionic strength, the reference's limiting mobilities are first predicted for the buffer
         return LibraryBuilder.build(results, mixByRun, sheet, buildSettings(), reference,
                 ph == null ? Double.NaN : ph, ionicStrengthMm == null ? Double.NaN : ionicStrengthMm);
