@@ -23,7 +23,7 @@ final class PeakRows {
 
     /** Column names in output order. */
     static final List<String> COLUMNS = List.of(
-            "run", "peak", "role", "apex_time_s", "apex_time_sd_s", "start_s", "end_s",
+            "run", "sample", "peak", "role", "apex_time_s", "apex_time_sd_s", "start_s", "end_s",
             "height", "area", "corrected_area", "width_half_s", "plates", "resolution",
             "signal_to_noise", "direction", "mobility", "mobility_sd", "mobility_at_library_temp",
             "assigned", "confidence", "status", "runner_up", "runner_up_probability", "candidates",
@@ -75,11 +75,11 @@ final class PeakRows {
         List<List<Cell>> rows = new ArrayList<>();
         String name = run.spec().name();
         if (run.failed()) {
-            rows.add(emptyRow(name, STATUS_FAILED, run.error().getMessage()));
+            rows.add(emptyRow(name, run.spec().sample(), STATUS_FAILED, run.error().getMessage()));
             return rows;
         }
         if (run.peaks().isEmpty()) {
-            rows.add(emptyRow(name, STATUS_NO_PEAKS, "no peaks detected"));
+            rows.add(emptyRow(name, run.spec().sample(), STATUS_NO_PEAKS, "no peaks detected"));
             return rows;
         }
         int number = 0;
@@ -90,12 +90,15 @@ final class PeakRows {
         return rows;
     }
 
-    private static List<Cell> emptyRow(String run, String status, String note) {
+    private static List<Cell> emptyRow(String run, String sample, String status, String note) {
         List<Cell> row = new ArrayList<>(COLUMNS.size());
         for (String column : COLUMNS) {
             switch (column) {
                 case "run":
                     row.add(Cell.text(run));
+                    break;
+                case "sample":
+                    row.add(Cell.text(sample));
                     break;
                 case "status":
                     row.add(Cell.text(status));
@@ -118,6 +121,7 @@ final class PeakRows {
         boolean matched = analyte && Double.isFinite(pr.mobility());
         List<Cell> row = new ArrayList<>(COLUMNS.size());
         row.add(Cell.text(name));
+        row.add(Cell.text(run.spec().sample()));
         row.add(Cell.number(Integer.toString(number)));
         row.add(Cell.text(pr.role().label()));
         row.add(time(p.apexTimeS()));

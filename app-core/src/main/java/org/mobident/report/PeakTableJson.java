@@ -13,7 +13,7 @@ import org.mobident.pipeline.RunResult;
  *
  * <pre>
  * {"runs": [
- *   {"run": "...", "file": "...", "status": "ok" | "failed", "error": null | "...",
+ *   {"run": "...", "sample": "..." | null, "file": "...", "status": "ok" | "failed", "error": null | "...",
  *    "scale": "...", "eof_mobility": number | null, "mobility_known": true | false,
  *    "noise_sd": number | null, "notes": ["..."],
  *    "peaks": [{"peak": 1, "role": "analyte", "apex_time_s": ..., ..., "candidates": [
@@ -54,6 +54,7 @@ public final class PeakTableJson {
         String in2 = in + INDENT;
         sb.append(in).append("{\n");
         field(sb, in2, "run", Json.quote(run.spec().name()));
+        field(sb, in2, "sample", Json.quote(run.spec().sample()));
         field(sb, in2, "file", Json.quote(run.spec().traceFile() == null ? null
                 : run.spec().traceFile().toString()));
         field(sb, in2, "status", Json.quote(run.failed() ? "failed" : "ok"));
@@ -89,8 +90,8 @@ public final class PeakTableJson {
         boolean first = true;
         for (int c = 0; c < PeakRows.COLUMNS.size(); c++) {
             String column = PeakRows.COLUMNS.get(c);
-            if (column.equals("run")) {
-                continue;
+            if (column.equals("run") || column.equals("sample")) {
+                continue; // stated once for the run
             }
             String value;
             if (column.equals("candidates")) {

@@ -106,8 +106,11 @@ public final class RunSummaryText {
     }
 
     private static String heading(RunResult run) {
-        StringBuilder sb = new StringBuilder("Run ").append(run.spec().name()).append(": ")
-                .append(oneLine(run.scaleNote()));
+        StringBuilder sb = new StringBuilder("Run ").append(run.spec().name());
+        if (run.spec().sample() != null && !run.spec().sample().isBlank()) {
+            sb.append(" [").append(oneLine(run.spec().sample())).append(']');
+        }
+        sb.append(": ").append(oneLine(run.scaleNote()));
         if (!run.scaleNote().contains("EOF")) {
             String eof = Numbers.fixed(run.eofMobility(), MOBILITY_DECIMALS);
             sb.append("; EOF mobility ").append(eof == null ? "unknown" : eof);

@@ -10,8 +10,15 @@ import java.nio.file.Path;
  * @param conditions the run's conditions after defaults were applied
  * @param origin     where the run was declared (the run sheet path, or "command line")
  * @param originLine 1-based line of the run sheet, or 0
+ * @param sample     the run sheet's free-text sample description, or null
  */
-public record RunSpec(String name, Path traceFile, RunConditions conditions, String origin, long originLine) {
+public record RunSpec(String name, Path traceFile, RunConditions conditions, String origin, long originLine,
+                      String sample) {
+
+    /** A run without a sample description. */
+    public RunSpec(String name, Path traceFile, RunConditions conditions, String origin, long originLine) {
+        this(name, traceFile, conditions, origin, originLine, null);
+    }
 
     /** The run name for a trace file: its file name without the last extension. */
     public static String runNameOf(Path file) {

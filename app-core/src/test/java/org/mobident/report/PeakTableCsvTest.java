@@ -36,7 +36,7 @@ class PeakTableCsvTest {
     @Test
     void headerHasTheColumnsInOrder() throws IOException {
         String first = csv(List.of()).split("\n")[0];
-        assertEquals("run,peak,role,apex_time_s,apex_time_sd_s,start_s,end_s,height,area,corrected_area,"
+        assertEquals("run,sample,peak,role,apex_time_s,apex_time_sd_s,start_s,end_s,height,area,corrected_area,"
                 + "width_half_s,plates,resolution,signal_to_noise,direction,mobility,mobility_sd,"
                 + "mobility_at_library_temp,assigned,confidence,status,runner_up,runner_up_probability,"
                 + "candidates,note", first);

@@ -45,6 +45,7 @@ class PeakTableJsonTest {
                 + "  \"runs\": [\n"
                 + "    {\n"
                 + "      \"run\": \"well-09\",\n"
+                + "      \"sample\": null,\n"
                 + "      \"file\": \"" + Path.of("samples", "well-09.csv").toString().replace("\\", "\\\\") + "\",\n"
                 + "      \"status\": \"failed\",\n"
                 + "      \"error\": \"samples/well-09.csv, line 3, field 'signal': not a number: 'abc'\",\n"

@@ -193,7 +193,7 @@ public final class HtmlReport {
             sb.append("<p>No runs.</p>\n</section>\n");
             return;
         }
-        sb.append("<table class=\"summary\">\n<thead><tr><th>Run</th><th>Trace file</th><th>Buffer</th>"
+        sb.append("<table class=\"summary\">\n<thead><tr><th>Run</th><th>Sample</th><th>Trace file</th><th>Buffer</th>"
                 + "<th>How mobilities were set</th><th>EOF mobility (10⁻⁹ m² V⁻¹ s⁻¹)</th>"
                 + "<th>Analyte peaks</th><th>Identified</th><th>Ambiguous</th><th>Unassigned</th>"
                 + "<th>Outcome</th></tr></thead>\n<tbody>\n");
@@ -202,6 +202,7 @@ public final class HtmlReport {
             int[] counts = counts(r);
             sb.append(r.failed() ? "<tr class=\"failed\">" : "<tr>");
             sb.append("<td><a href=\"#run-").append(i + 1).append("\">").append(esc(runName(r))).append("</a></td>");
+            sb.append("<td>").append(esc(sampleText(r))).append("</td>");
             sb.append("<td>").append(esc(sampleFile(r))).append("</td>");
             sb.append("<td>").append(esc(buffer(r))).append("</td>");
             sb.append("<td>").append(esc(r.scaleNote())).append("</td>");
@@ -276,6 +277,7 @@ public final class HtmlReport {
         sb.append("<section class=\"run\" id=\"run-").append(index).append("\">\n");
         sb.append("<h2>Run ").append(index).append(": ").append(esc(runName(r))).append("</h2>\n");
         sb.append("<dl class=\"facts\">");
+        fact(sb, "Sample", esc(sampleText(r)));
         fact(sb, "Trace file", esc(sampleFile(r)));
         fact(sb, "Declared in", esc(origin(r)));
         fact(sb, "Buffer", esc(buffer(r)));
@@ -385,6 +387,11 @@ public final class HtmlReport {
 
     private static String runName(RunResult r) {
         return r.spec() == null ? "(unnamed run)" : r.spec().name();
+    }
+
+    /** The run sheet's sample description, or a dash. */
+    private static String sampleText(RunResult r) {
+        return r.spec() == null || r.spec().sample() == null || r.spec().sample().isBlank() ? "–" : r.spec().sample();
     }
 
     private static String sampleFile(RunResult r) {

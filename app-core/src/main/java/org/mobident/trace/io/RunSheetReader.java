@@ -387,7 +387,7 @@ public final class RunSheetReader {
             if (!mix.isEmpty()) {
                 mixes.put(runName, mix);
             }
-            return new RunSpec(runName, traceFile, conditions, name, lineNo);
+            return new RunSpec(runName, traceFile, conditions, name, lineNo, sample.isEmpty() ? null : sample);
         }
 
         /** An empty cell is NaN (unset); anything else must be a finite number. */
