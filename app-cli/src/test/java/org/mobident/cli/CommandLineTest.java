@@ -107,8 +107,9 @@ class CommandLineTest {
         }
         assertEquals(List.of("chloride", "sulfate", "nitrite", "nitrate", "chlorate", "(none)"), well01);
         // the run sheet's sample text travels with every row of its run
-        assertTrue(rows.stream().filter(r -> r.get("run").equals("well-01"))
-                .allMatch(r -> r.get("sample").equals("Well W1 (farmyard borehole), diluted 1:5")), "sample column");
+        assertTrue(rows.stream().filter(row -> row.get("run").equals("well-01"))
+                .allMatch(row -> row.get("sample").equals("Well W1 (farmyard borehole), diluted 1:5")),
+                "sample column");
         assertTrue(r.out().contains("Run well-01 [Well W1 (farmyard borehole), diluted 1:5]"), r.out());
         String text = Files.readString(json);
         assertTrue(text.startsWith("{") && text.contains("\"well-04-cations\""), text.substring(0, 80));
