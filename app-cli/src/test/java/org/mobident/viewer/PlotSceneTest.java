@@ -9,6 +9,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import java.util.List;
 import org.junit.jupiter.api.Test;
 import org.mobident.report.plot.Axis;
+import org.mobident.report.plot.ToleranceBand;
 import org.mobident.report.plot.PlotLayout;
 
 class PlotSceneTest {
@@ -117,4 +118,21 @@ class PlotSceneTest {
 
     /** Beyond the largest mobility the plot shows ({@code PlotModel.MAX_DISPLAY_MOBILITY}). */
     private static final double MAX_SHOWN = 401;
+
+    @Test
+    void aWarmRunsPeaksSitWhereTheyAreDrawnAtTheLibraryTemperature() {
+        ViewerRun early = ViewerFixtures.run("early", 200, true);
+        java.util.List<org.mobident.pipeline.PeakResult> peaks = new java.util.ArrayList<>();
+        for (org.mobident.pipeline.PeakResult p : early.result().peaks()) {
+            peaks.add(new org.mobident.pipeline.PeakResult(p.peak(), p.role(), p.mobility(), p.mobilitySd(),
+                    0.9 * p.mobility(), p.match()));
+        }
+        org.mobident.pipeline.RunResult r = early.result();
+        ViewerRun warm = new ViewerRun(early.spec(), early.trace(), new org.mobident.pipeline.RunResult(r.spec(), null,
+                r.scaleNote(), r.eofMobility(), r.scale(), peaks, r.notes(), r.noiseSd()));
+        ViewerData data = new ViewerData(ViewerFixtures.library(), ToleranceBand.defaultRule(), List.of(warm));
+        PlotScene mob = PlotScene.of(data, ViewState.initial(Axis.MOBILITY, List.of(0)));
+        // nitrate: −30 at the run temperature, compared with the library as 0.9 × −30 = −27
+        assertEquals(-27, mob.spotOf(new PeakRef(0, ViewerFixtures.NITRATE)).x(), 1e-6);
+    }
 }

@@ -372,7 +372,7 @@ public record PlotModel(Axis axis, String title, List<Series> series, List<PeakM
      * results; 1 when there is nothing to read. The mobility axis shows compared mobilities, so
      * that a warm run lines up with the library's windows and with runs at the library temperature.
      */
-    static double libraryTemperatureFactor(RunResult result) {
+    public static double libraryTemperatureFactor(RunResult result) {
         if (result == null) {
             return 1.0;
         }
