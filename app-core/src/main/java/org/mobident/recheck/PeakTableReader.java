@@ -98,6 +98,10 @@ public final class PeakTableReader {
         if (!text.isEmpty() && text.charAt(0) == BYTE_ORDER_MARK) {
             text = " " + text.substring(1);
         }
+        if (text.strip().startsWith("{")) {
+            throw new InputException(label, 1, null, "this looks like the JSON peak table; recheck reads the CSV "
+                    + "peak table (write it with 'identify --csv')");
+        }
         int[] lineStarts = lineStarts(text);
         List<PeakTableRow> rows = new ArrayList<>();
         Map<String, Long> seen = new HashMap<>();

@@ -105,4 +105,12 @@ class PeakTableReaderTest {
         InputException ex = assertThrows(InputException.class, () -> PeakTableReader.read(dir.resolve("none.csv")));
         assertTrue(ex.getMessage().contains("cannot read"));
     }
+
+    @Test
+    void theJsonTableIsRecognisedAndRefusedWithAHint() {
+        org.mobident.InputException e = org.junit.jupiter.api.Assertions.assertThrows(org.mobident.InputException.class,
+                () -> PeakTableReader.read(new java.io.StringReader("{\n  \"runs\": []\n}\n"), "peaks.json"));
+        org.junit.jupiter.api.Assertions.assertEquals(1, e.line());
+        org.junit.jupiter.api.Assertions.assertTrue(e.problem().contains("identify --csv"), e.problem());
+    }
 }
