@@ -262,8 +262,30 @@ public record PlotModel(Axis axis, String title, List<Series> series, List<PeakM
             List<Band> bands = bands();
             double[] xr = Double.isNaN(xLo) ? chooseXRange(bands) : new double[] {xLo, xHi};
             double[] yr = yRange(xr[0], xr[1]);
-            return new PlotModel(axis, title, series, peaks, bands, xr[0], xr[1], yr[0], yr[1],
+            return new PlotModel(axis, title, series, withOneMarkerLabel(peaks), bands, xr[0], xr[1], yr[0], yr[1],
                     peakLabels, bandLabels, omitted);
+        }
+
+        /**
+         * On the mobility axis the markers of overlaid runs coincide, so only the first run's marker
+         * keeps its label; the others keep their shape. On the time axis every label stays.
+         */
+        private List<PeakMark> withOneMarkerLabel(List<PeakMark> marks) {
+            if (axis != Axis.MOBILITY || series.size() < 2) {
+                return marks;
+            }
+            List<PeakMark> out = new ArrayList<>(marks.size());
+            boolean labelled = false;
+            for (PeakMark m : marks) {
+                if (m.status() == PeakStatus.MARKER && !m.label().isEmpty()) {
+                    if (labelled) {
+                        m = new PeakMark(m.series(), m.x(), m.y(), m.dip(), "", m.status());
+                    }
+                    labelled = true;
+                }
+                out.add(m);
+            }
+            return out;
         }
 
         private List<Band> bands() {

@@ -198,4 +198,19 @@ class PlotModelTest {
         assertEquals(0.9, PlotModel.libraryTemperatureFactor(converted), 1e-12);
         assertEquals(1.0, PlotModel.libraryTemperatureFactor(r), 1e-12);
     }
+
+    @Test
+    void overlaidRunsLabelTheCoincidingMarkersOnce() {
+        PlotFixtures.SyntheticRun a = PlotFixtures.run("a", 200, 1.0);
+        PlotFixtures.SyntheticRun b = PlotFixtures.run("b", 250, 0.5);
+        PlotModel model = PlotModel.builder(Axis.MOBILITY).run(a.trace(), a.result()).run(b.trace(), b.result()).build();
+        long markers = model.peaks().stream().filter(m -> m.status() == PeakStatus.MARKER).count();
+        long labelled = model.peaks().stream().filter(m -> m.status() == PeakStatus.MARKER && !m.label().isEmpty())
+                .count();
+        assertEquals(2, markers);
+        assertEquals(1, labelled);
+        PlotModel time = PlotModel.builder(Axis.TIME).run(a.trace(), a.result()).run(b.trace(), b.result()).build();
+        assertEquals(2, time.peaks().stream().filter(m -> m.status() == PeakStatus.MARKER && !m.label().isEmpty())
+                .count(), "on the time axis the markers are apart and keep their labels");
+    }
 }
