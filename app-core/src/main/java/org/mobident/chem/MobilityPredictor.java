@@ -23,7 +23,8 @@ import org.mobident.mobility.MobilityMath;
  *
  * <p>Uncertainty: every pKa and every non-zero limiting mobility is treated as an independent
  * input with the standard uncertainty of {@link PredictionUncertainty}; sensitivities are central
- * differences (step {@value #PKA_STEP} pKa units, relative step {@value #RELATIVE_MOBILITY_STEP}
+ * differences ({@link InputPropagation}: step {@value InputPropagation#PKA_STEP} pKa units, relative step
+ * {@value InputPropagation#RELATIVE_MOBILITY_STEP}
  * for mobilities) and combined in quadrature (JCGM 100:2008, GUM, law of propagation of
  * uncertainty, eq. 10).
  *
@@ -32,10 +33,6 @@ import org.mobident.mobility.MobilityMath;
  */
 public final class MobilityPredictor {
 
-    /** Central-difference step for pKa sensitivities, pKa units. */
-    static final double PKA_STEP = 1e-3;
-    /** Central-difference step for mobility sensitivities, relative. */
-    static final double RELATIVE_MOBILITY_STEP = 1e-3;
     /** Grid step of the comigration scan, pH units; intervals narrower than this may be missed. */
     public static final double COMIGRATION_SCAN_STEP_PH = 0.01;
     /** pH resolution to which comigration interval ends are refined by bisection. */
@@ -88,35 +85,8 @@ public final class MobilityPredictor {
         double[] mu = model.limitingMobilityArray();
         int h = model.highestCharge();
         double central = mobility(pKa, mu, h, conditions);
-        double variance = 0.0;
-        if (uncertainty.pKaSd() > 0.0) {
-            for (int k = 0; k < pKa.length; k++) {
-                double keep = pKa[k];
-                pKa[k] = keep + PKA_STEP;
-                double up = mobility(pKa, mu, h, conditions);
-                pKa[k] = keep - PKA_STEP;
-                double down = mobility(pKa, mu, h, conditions);
-                pKa[k] = keep;
-                double slope = (up - down) / (2.0 * PKA_STEP);
-                variance += square(slope * uncertainty.pKaSd());
-            }
-        }
-        if (uncertainty.relativeMobilitySd() > 0.0) {
-            for (int i = 0; i < mu.length; i++) {
-                double keep = mu[i];
-                if (keep == 0.0) {
-                    continue;
-                }
-                double step = Math.abs(keep) * RELATIVE_MOBILITY_STEP;
-                mu[i] = keep + step;
-                double up = mobility(pKa, mu, h, conditions);
-                mu[i] = keep - step;
-                double down = mobility(pKa, mu, h, conditions);
-                mu[i] = keep;
-                double slope = (up - down) / (2.0 * step);
-                variance += square(slope * Math.abs(keep) * uncertainty.relativeMobilitySd());
-            }
-        }
+        double variance = InputPropagation.variance((p, m) -> mobility(p, m, h, conditions), pKa, mu,
+                uncertainty.pKaSd(), uncertainty.relativeMobilitySd());
         return new MobilityPrediction(central, Math.sqrt(variance), meanCharge(model, conditions));
     }
 

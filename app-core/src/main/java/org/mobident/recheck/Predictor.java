@@ -6,6 +6,7 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 import org.mobident.InputException;
+import org.mobident.chem.InputPropagation;
 import org.mobident.chem.BufferConditions;
 import org.mobident.chem.IonicStrengthCorrection;
 import org.mobident.chem.MobilityPredictor;
@@ -91,8 +92,6 @@ public final class Predictor {
     /** Extra relative uncertainty without model data (modelling choice). */
     public static final double NO_MODEL_RELATIVE_SD = 0.05;
 
-    static final double PKA_STEP = 1e-3;
-    static final double RELATIVE_MOBILITY_STEP = 1e-3;
     private static final double REFERENCE_C = BufferConditions.REFERENCE_TEMPERATURE_C;
 
     private final Map<String, SpeciesModel> reference;
@@ -324,36 +323,8 @@ public final class Predictor {
     /** Variance of the transfer from the pKa and limiting-mobility inputs, by central differences. */
     private double inputVariance(SpeciesModel m, BufferConditions a, BufferConditions b, double measured,
                                  PredictedMobility.Method method, double pKaSd) {
-        double variance = 0.0;
-        double[] pKa = m.pKaArray();
-        double[] mu = m.limitingMobilityArray();
-        if (pKaSd > 0.0) {
-            for (int k = 0; k < pKa.length; k++) {
-                double keep = pKa[k];
-                pKa[k] = keep + PKA_STEP;
-                double up = transferOf(m, pKa, mu, a, b, measured, method);
-                pKa[k] = keep - PKA_STEP;
-                double down = transferOf(m, pKa, mu, a, b, measured, method);
-                pKa[k] = keep;
-                variance += square((up - down) / (2.0 * PKA_STEP) * pKaSd);
-            }
-        }
-        if (inputs.relativeMobilitySd() > 0.0) {
-            for (int i = 0; i < mu.length; i++) {
-                double keep = mu[i];
-                if (keep == 0.0) {
-                    continue;
-                }
-                double step = Math.abs(keep) * RELATIVE_MOBILITY_STEP;
-                mu[i] = keep + step;
-                double up = transferOf(m, pKa, mu, a, b, measured, method);
-                mu[i] = keep - step;
-                double down = transferOf(m, pKa, mu, a, b, measured, method);
-                mu[i] = keep;
-                variance += square((up - down) / (2.0 * step) * Math.abs(keep) * inputs.relativeMobilitySd());
-            }
-        }
-        return variance;
+        return InputPropagation.variance((p, mu) -> transferOf(m, p, mu, a, b, measured, method),
+                m.pKaArray(), m.limitingMobilityArray(), pKaSd, inputs.relativeMobilitySd());
     }
 
     private static double transferOf(SpeciesModel m, double[] pKa, double[] mu, BufferConditions a,

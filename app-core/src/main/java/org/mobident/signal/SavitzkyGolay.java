@@ -185,24 +185,7 @@ public final class SavitzkyGolay {
      * the fit at offset {@code r}.
      */
     static double[][] projectionRows(int halfWidth, int order) {
-        if (halfWidth < 1) {
-            throw new IllegalArgumentException("half-width must be at least 1, got " + halfWidth);
-        }
-        int size = 2 * halfWidth + 1;
-        if (order < 0 || order >= size) {
-            throw new IllegalArgumentException("polynomial order must be 0…" + (size - 1)
-                    + " for a window of " + size + " points, got " + order);
-        }
-        double[][] x = new double[size][order + 1];
-        for (int k = -halfWidth; k <= halfWidth; k++) {
-            double u = (double) k / halfWidth;
-            double p = 1.0;
-            for (int j = 0; j <= order; j++) {
-                x[k + halfWidth][j] = p;
-                p *= u;
-            }
-        }
-        RealMatrix design = new Array2DRowRealMatrix(x, false);
+        RealMatrix design = design(halfWidth, order);
         RealMatrix gram = design.transpose().multiply(design);
         RealMatrix inverse = new LUDecomposition(gram).getSolver().getInverse();
         RealMatrix hat = design.multiply(inverse).multiply(design.transpose());

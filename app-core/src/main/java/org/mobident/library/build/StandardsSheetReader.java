@@ -1,8 +1,5 @@
 package org.mobident.library.build;
 
-import java.io.IOException;
-import java.io.StringReader;
-import java.io.UncheckedIOException;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.HashMap;
@@ -13,8 +10,6 @@ import java.util.Map;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
 import org.apache.commons.csv.CSVFormat;
-import org.apache.commons.csv.CSVParser;
-import org.apache.commons.csv.CSVRecord;
 import org.mobident.InputException;
 
 /**
@@ -161,13 +156,7 @@ public final class StandardsSheetReader {
         }
 
         private List<String> cells(String line, long lineNo) throws InputException {
-            try (CSVParser parser = CSVParser.builder().setReader(new StringReader(line)).setFormat(format).get()) {
-                List<CSVRecord> records = parser.getRecords();
-                return records.isEmpty() ? List.of() : records.get(0).toList();
-            } catch (IOException | UncheckedIOException | IllegalStateException e) {
-                throw new InputException(file, lineNo, null, "cannot split the line into cells (check the quotes): "
-                        + e.getMessage(), e);
-            }
+            return org.mobident.io.CsvLines.cells(line, format, file, lineNo);
         }
 
         private void row(String line, long lineNo) throws InputException {

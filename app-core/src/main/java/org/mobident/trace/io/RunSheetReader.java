@@ -1,8 +1,5 @@
 package org.mobident.trace.io;
 
-import java.io.IOException;
-import java.io.StringReader;
-import java.io.UncheckedIOException;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.InvalidPathException;
@@ -14,8 +11,6 @@ import java.util.Locale;
 import java.util.Map;
 
 import org.apache.commons.csv.CSVFormat;
-import org.apache.commons.csv.CSVParser;
-import org.apache.commons.csv.CSVRecord;
 import org.mobident.InputException;
 import org.mobident.Units;
 import org.mobident.trace.Detection;
@@ -296,15 +291,8 @@ public final class RunSheetReader {
             }
         }
 
-        /** The cells of one line, parsed by Commons CSV. */
         private List<String> cells(String line, long lineNo) throws InputException {
-            try (CSVParser parser = CSVParser.builder().setReader(new StringReader(line)).setFormat(format).get()) {
-                List<CSVRecord> records = parser.getRecords();
-                return records.isEmpty() ? List.of() : records.get(0).toList();
-            } catch (IOException | UncheckedIOException | IllegalStateException e) {
-                throw new InputException(name, lineNo, null, "cannot split the line into cells: "
-                        + e.getMessage(), e);
-            }
+            return org.mobident.io.CsvLines.cells(line, format, name, lineNo);
         }
 
         private RunSpec row(String line, long lineNo) throws InputException {
