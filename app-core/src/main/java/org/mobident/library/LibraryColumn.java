@@ -22,7 +22,9 @@ enum LibraryColumn {
     PH("ph"),
     IONIC_STRENGTH_MM("ionic_strength_mm"),
     TEMPERATURE_C("temperature_c"),
-    SOURCE("source");
+    SOURCE("source"),
+    INTERNAL_STANDARD("internal_standard"),
+    SESSION_SD("session_sd");
 
     private final String header;
 

@@ -39,8 +39,13 @@ import org.mobident.InputException;
  *   <li>The first other line is the header. Column names are matched without regard to case or
  *       surrounding spaces and may come in any order; only {@code name} and {@code mobility} are
  *       required. Known columns: {@code name, mobility, mobility_sd, n, charge, tolerance, pka,
- *       limiting_mobility, buffer, ph, ionic_strength_mm, temperature_c, source}. Any other
- *       column is an error.</li>
+ *       limiting_mobility, buffer, ph, ionic_strength_mm, temperature_c, source,
+ *       internal_standard, session_sd}. Any other column is an error.</li>
+ *   <li>{@code internal_standard} is {@code yes} (or {@code true}, {@code 1}) for an analyte the
+ *       lab adds to every run so that it pins the run's mobility scale; empty or {@code no}
+ *       otherwise. {@code session_sd} is the spread between measuring sessions, in mobility units.</li>
+ *   <li>An analyte name may appear once per buffer label; a second row with the same name and
+ *       the same (or no) buffer is an error.</li>
  *   <li>Mobilities (and {@code mobility_sd}, {@code tolerance}, {@code limiting_mobility}) are in
  *       1e-9 m²/(V·s), signed: cations positive, anions negative. {@code pka} and
  *       {@code limiting_mobility} hold several numbers separated by spaces, e.g.
@@ -238,6 +243,8 @@ public final class LibraryCsv {
             case IONIC_STRENGTH_MM -> formatNumber(e.ionicStrengthMm());
             case TEMPERATURE_C -> formatNumber(e.temperatureC());
             case SOURCE -> text(e.source());
+            case INTERNAL_STANDARD -> e.internalStandard() ? "yes" : "";
+            case SESSION_SD -> formatNumber(e.sessionSd());
         };
     }
 
@@ -259,6 +266,7 @@ public final class LibraryCsv {
         private final String file;
         private final List<String> notes = new ArrayList<>();
         private final List<LibraryEntry> entries = new ArrayList<>();
+        private final List<Long> lines = new ArrayList<>();
         private final Map<String, Long> lineOfName = new HashMap<>();
         /** Column index in the file → library column (null: an unnamed column that must stay empty). */
         private final Map<Integer, LibraryColumn> columnAt = new HashMap<>();
@@ -296,6 +304,7 @@ public final class LibraryCsv {
                         sawHeader = true;
                     } else {
                         entries.add(entry(rec));
+                        lines.add(line);
                     }
                 }
                 if (parser.hasTrailerComment()) {
@@ -308,7 +317,7 @@ public final class LibraryCsv {
             if (entries.isEmpty()) {
                 throw new InputException(file, 0, null, "the library has a header but no analytes");
             }
-            return new Library(entries, file, notes);
+            return new Library(entries, file, notes, lines);
         }
 
         private static String rootMessage(Throwable e) {
@@ -395,11 +404,6 @@ public final class LibraryCsv {
             if (name.isEmpty()) {
                 throw new InputException(file, line, LibraryColumn.NAME.header(), "the analyte name is empty");
             }
-            Long earlier = lineOfName.putIfAbsent(name, line);
-            if (earlier != null) {
-                throw new InputException(file, line, LibraryColumn.NAME.header(),
-                        "duplicate analyte name '" + name + "' (lines " + earlier + " and " + line + ")");
-            }
             String mob = v.getOrDefault(LibraryColumn.MOBILITY, "");
             if (mob.isEmpty()) {
                 throw new InputException(file, line, LibraryColumn.MOBILITY.header(),
@@ -427,8 +431,28 @@ public final class LibraryCsv {
             requireNotNegative(LibraryColumn.IONIC_STRENGTH_MM, ionic);
             double temperature = optionalNumber(v, LibraryColumn.TEMPERATURE_C);
             String source = optionalText(v, LibraryColumn.SOURCE);
-            return new LibraryEntry(name, mobility, sd, n, charge, tolerance, pKa, limiting, buffer, pH, ionic,
-                    temperature, source);
+            boolean internalStandard = yesNo(v, LibraryColumn.INTERNAL_STANDARD);
+            double sessionSd = optionalNumber(v, LibraryColumn.SESSION_SD);
+            requireNotNegative(LibraryColumn.SESSION_SD, sessionSd);
+            LibraryEntry entry = new LibraryEntry(name, mobility, sd, n, charge, tolerance, pKa, limiting, buffer, pH,
+                    ionic, temperature, source, internalStandard, sessionSd);
+            Long earlier = lineOfName.putIfAbsent(Library.key(entry), line);
+            if (earlier != null) {
+                throw new InputException(file, line, LibraryColumn.NAME.header(),
+                        "duplicate analyte name '" + name + "'" + (buffer == null ? "" : " in buffer " + buffer)
+                                + " (lines " + earlier + " and " + line + "); the same name may appear once per buffer");
+            }
+            return entry;
+        }
+
+        private boolean yesNo(Map<LibraryColumn, String> v, LibraryColumn c) throws InputException {
+            String s = v.getOrDefault(c, "").toLowerCase(java.util.Locale.ROOT);
+            return switch (s) {
+                case "", "no", "false", "0" -> false;
+                case "yes", "true", "1" -> true;
+                default -> throw new InputException(file, line, c.header(),
+                        "expected yes or no (or empty), got '" + v.get(c) + "'");
+            };
         }
 
         private void requireNotNegative(LibraryColumn c, double value) throws InputException {

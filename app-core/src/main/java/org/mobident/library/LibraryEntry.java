@@ -18,6 +18,11 @@ import java.util.List;
  * @param ionicStrengthMm    buffer ionic strength in mmol/L (NaN if unknown)
  * @param temperatureC       temperature the mobility applies to, °C (NaN: 25 °C assumed)
  * @param source             where the value came from (free text, may be null)
+ * @param internalStandard   true when the lab adds this analyte to every run on purpose, so
+ *                           that its peak pins the run's mobility scale
+ * @param sessionSd          spread between measuring sessions (days, capillaries) beyond the
+ *                           replicate spread, 1e-9 m²/(V·s); NaN when unknown (learned when
+ *                           runs of another session are pooled into the library)
  */
 public record LibraryEntry(
         String name,
@@ -32,7 +37,9 @@ public record LibraryEntry(
         double pH,
         double ionicStrengthMm,
         double temperatureC,
-        String source) {
+        String source,
+        boolean internalStandard,
+        double sessionSd) {
 
     /** Reference temperature assumed when an entry states none. */
     public static final double DEFAULT_TEMPERATURE_C = 25.0;
@@ -42,10 +49,40 @@ public record LibraryEntry(
         limitingMobilities = List.copyOf(limitingMobilities);
     }
 
+    /** An entry that is no internal standard and has no known between-session spread. */
+    public LibraryEntry(String name, double mobility, double mobilitySd, int n, int charge, double tolerance,
+                        List<Double> pKa, List<Double> limitingMobilities, String buffer, double pH,
+                        double ionicStrengthMm, double temperatureC, String source) {
+        this(name, mobility, mobilitySd, n, charge, tolerance, pKa, limitingMobilities, buffer, pH, ionicStrengthMm,
+                temperatureC, source, false, Double.NaN);
+    }
+
     /** A minimal entry: name, mobility and spread, everything else unknown. */
     public static LibraryEntry of(String name, double mobility, double mobilitySd) {
         return new LibraryEntry(name, mobility, mobilitySd, 0, 0, Double.NaN, List.of(), List.of(),
                 null, Double.NaN, Double.NaN, Double.NaN, null);
+    }
+
+    /** This entry with another per-entry window (NaN: the matching rule applies). */
+    public LibraryEntry withTolerance(double halfWidth) {
+        return new LibraryEntry(name, mobility, mobilitySd, n, charge, halfWidth, pKa, limitingMobilities, buffer, pH,
+                ionicStrengthMm, temperatureC, source, internalStandard, sessionSd);
+    }
+
+    /** This entry with another between-session spread. */
+    public LibraryEntry withSessionSd(double sd) {
+        return new LibraryEntry(name, mobility, mobilitySd, n, charge, tolerance, pKa, limitingMobilities, buffer, pH,
+                ionicStrengthMm, temperatureC, source, internalStandard, sd);
+    }
+
+    /** True when this entry applies to runs in {@code runBuffer}: it names no buffer, or the same one. */
+    public boolean appliesToBuffer(String runBuffer) {
+        return buffer == null || runBuffer == null || sameBuffer(buffer, runBuffer);
+    }
+
+    /** Buffer labels are compared without regard to case or surrounding spaces. */
+    public static boolean sameBuffer(String a, String b) {
+        return a != null && b != null && a.trim().equalsIgnoreCase(b.trim());
     }
 
     /** The temperature this entry's mobility applies to, 25 °C when none is stated. */

@@ -32,7 +32,24 @@ final class AssignmentMarginals {
      * @return per peak, {@code [P(none), P(candidate 0), P(candidate 1), …]}, or null when too large
      */
     static double[][] compute(int[][] entryOf, double[][] logWeight, int maxStates) {
+        Result r = computeWithNormaliser(entryOf, logWeight, maxStates);
+        return r == null ? null : r.marginals();
+    }
+
+    /**
+     * The marginals and ln Z, Z = the sum over every valid assignment of the product of its option
+     * weights (the normaliser of the joint posterior; 1 for "every peak none").
+     *
+     * @param marginals      as {@link #compute}
+     * @param logNormaliser  ln Z
+     */
+    record Result(double[][] marginals, double logNormaliser) {
+    }
+
+    /** As {@link #compute}, with ln Z; null when too large. */
+    static Result computeWithNormaliser(int[][] entryOf, double[][] logWeight, int maxStates) {
         int peaks = entryOf.length;
+        double logZ = 0.0;
         // Entries wanted by two or more peaks get a bit; remember the last peak that wants each.
         Map<Integer, Integer> firstUser = new HashMap<>();
         Map<Integer, Integer> bitOf = new HashMap<>();
@@ -62,6 +79,7 @@ final class AssignmentMarginals {
                 maxLog = Math.max(maxLog, lw);
             }
             noneWeight[t] = Math.exp(-maxLog);
+            logZ += maxLog;
             weight[t] = new double[entryOf[t].length];
             bit[t] = new int[entryOf[t].length];
             for (int k = 0; k < entryOf[t].length; k++) {
@@ -93,6 +111,7 @@ final class AssignmentMarginals {
                 return null;
             }
             if (total > 0) {
+                logZ += Math.log(total);
                 for (Map.Entry<BitSet, Double> s : next.entrySet()) {
                     s.setValue(s.getValue() / total);
                 }
@@ -141,7 +160,7 @@ final class AssignmentMarginals {
             }
             after = here;
         }
-        return marginal;
+        return new Result(marginal, logZ);
     }
 
     private static double accumulate(Map<BitSet, Double> layer, BitSet state, double value) {

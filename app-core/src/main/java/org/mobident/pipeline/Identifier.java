@@ -2,8 +2,10 @@ package org.mobident.pipeline;
 
 import java.util.ArrayList;
 import java.util.Comparator;
+import java.util.HashMap;
 import java.util.List;
 import java.util.Locale;
+import java.util.Map;
 import java.util.Objects;
 import java.util.concurrent.ExecutionException;
 import java.util.concurrent.ExecutorService;
@@ -12,9 +14,13 @@ import java.util.concurrent.Future;
 import org.mobident.InputException;
 import org.mobident.library.Library;
 import org.mobident.library.LibraryEntry;
-import org.mobident.matching.Matcher;
+import org.mobident.matching.LibraryMatcher;
+import org.mobident.matching.MatchSettings;
 import org.mobident.matching.MobilityAdjuster;
 import org.mobident.matching.PeakMatch;
+import org.mobident.matching.RunMatch;
+import org.mobident.matching.RunScale;
+import org.mobident.matching.SpreadModel;
 import org.mobident.mobility.MobilityMath;
 import org.mobident.mobility.MobilityScale;
 import org.mobident.signal.Peak;
@@ -37,12 +43,38 @@ public final class Identifier {
 
     private final Library library;
     private final IdentifySettings settings;
-    private final MarkerLocator markers;
+    /** The entries and spread model for each buffer label of the library (lower case; "" for runs without one). */
+    private final Map<String, Prepared> byBuffer;
+
+    /** A run's share of the library: the entries of its buffer and their spreads. */
+    record Prepared(Library library, SpreadModel spread) {
+    }
 
     public Identifier(Library library, IdentifySettings settings) {
         this.library = Objects.requireNonNull(library, "library");
         this.settings = Objects.requireNonNull(settings, "settings");
-        this.markers = new MarkerLocator(library, settings.matchSettings());
+        Map<String, Prepared> map = new HashMap<>();
+        map.put("", prepare(library, settings.matchSettings()));
+        for (String label : library.bufferLabels()) {
+            map.put(bufferKey(label), prepare(library.forBuffer(label), settings.matchSettings()));
+        }
+        this.byBuffer = Map.copyOf(map);
+    }
+
+    private static Prepared prepare(Library lib, MatchSettings s) {
+        return new Prepared(lib, SpreadModel.of(lib, s));
+    }
+
+    /**
+     * The key under which a run's buffer finds its entries: "" for a run without a label or a
+     * library without labels (every entry applies); the label itself otherwise, so that an
+     * unknown label finds nothing.
+     */
+    private String bufferKey(String runBuffer) {
+        if (runBuffer == null || runBuffer.isBlank() || library.bufferLabels().isEmpty()) {
+            return "";
+        }
+        return runBuffer.trim().toLowerCase(Locale.ROOT);
     }
 
     /**
@@ -132,36 +164,51 @@ public final class Identifier {
             return RunResult.failure(run, new InputException(run.origin(), run.originLine(), missing,
                     "lengths and voltage are needed unless a charged marker of known mobility is given"));
         }
+        Prepared prepared = byBuffer.get(bufferKey(c.buffer()));
+        if (prepared == null) {
+            return RunResult.failure(run, new InputException(run.origin(), run.originLine(), "buffer",
+                    String.format(Locale.ROOT, "the run's buffer '%s' has no entries in the library %s, whose "
+                                    + "entries are for %s; give the buffer label the library uses, or a library "
+                                    + "built in this buffer", c.buffer().trim(), library.sourceFile(),
+                            String.join(", ", library.bufferLabels()))));
+        }
         TraceAnalysis analysis = PeakDetector.analyse(trace, c.detectionOrDirect(), settings.peakSettings());
         List<Peak> peaks = analysis.peaks();
         List<String> notes = new ArrayList<>();
-        MarkerLocator.Choice choice = markers.locate(run, peaks, adjusterFor(c, notes));
-        if (choice.scale() == null) {
+        MobilityAdjuster adjuster = adjusterFor(c);
+        MatchSettings ms = settings.matchSettings();
+        MarkerLocator.Evaluator evaluator = prepared.library().size() == 0 ? null
+                : (mob, sd) -> LibraryMatcher.matchRun(mob, sd, prepared.library(), prepared.spread(), ms, adjuster);
+        MarkerLocator.Choice choice = new MarkerLocator(prepared.library().size() == 0).locate(c, peaks, evaluator);
+        double libraryTempC = libraryTemperatureC();
+        double runTempC = c.temperatureC();
+        double temperatureFactor = Double.isNaN(runTempC) || Math.abs(runTempC - libraryTempC) < SAME_TEMPERATURE_K
+                ? 1.0 : MobilityMath.atTemperature(1.0, runTempC, libraryTempC);
+        if (choice.best() == null) {
             List<PeakResult> rows = new ArrayList<>();
             for (Peak p : peaks) {
                 rows.add(new PeakResult(p, PeakRole.ANALYTE, Double.NaN, Double.NaN, Double.NaN, PeakMatch.none()));
             }
             notes.add(choice.note());
-            return new RunResult(run, null, choice.note(), Double.NaN, null, rows, notes, analysis.noiseSd());
+            return new RunResult(run, null, choice.note(), Double.NaN, null, rows, notes, analysis.noiseSd(),
+                    RunScale.OFF, temperatureFactor);
         }
-        MobilityScale scale = choice.scale();
-        MobilityAdjuster adjuster = adjusterFor(c, notes);
-        List<Integer> analyteIdx = new ArrayList<>();
-        for (int i = 0; i < peaks.size(); i++) {
-            if (i != choice.neutralIndex() && i != choice.refIndex()) {
-                analyteIdx.add(i);
-            }
+        MarkerLocator.Hypothesis best = choice.best();
+        MobilityScale scale = best.scale();
+        int analyteCount = best.analytes().length;
+        int beyond = 0;
+        for (double mu : best.mobility()) {
+            beyond += PlausibleMobility.plausible(mu) ? 0 : 1;
         }
-        double[] mob = new double[analyteIdx.size()];
-        double[] sd = new double[analyteIdx.size()];
-        for (int k = 0; k < mob.length; k++) {
-            Peak p = peaks.get(analyteIdx.get(k));
-            mob[k] = scale.mobility(p.apexTimeS());
-            sd[k] = scale.mobilitySd(p.apexTimeS(), p.apexTimeSdS());
+        if (analyteCount > 0 && 2 * beyond > analyteCount) {
+            return RunResult.failure(run, new InputException(run.origin(), run.originLine(), "conditions",
+                    String.format(Locale.ROOT, "%d of %d peaks come out with mobilities beyond ±%.0f units "
+                                    + "(1e-9 m²/(V s)): check the time unit of the trace (minutes read as seconds?), "
+                                    + "the voltage and the capillary lengths", beyond, analyteCount,
+                            PlausibleMobility.LIMIT)));
         }
-        List<PeakMatch> matches = Matcher.match(mob, sd, library, settings.matchSettings(), adjuster);
-        double libraryTempC = libraryTemperatureC();
-        double runTempC = c.temperatureC();
+        RunMatch match = best.match();
+        RunScale runScale = match == null ? RunScale.OFF : match.scale();
         List<PeakResult> rows = new ArrayList<>(peaks.size());
         int k = 0;
         for (int i = 0; i < peaks.size(); i++) {
@@ -169,27 +216,64 @@ public final class Identifier {
             double m = scale.mobility(p.apexTimeS());
             double s = scale.mobilitySd(p.apexTimeS(), p.apexTimeSdS());
             double atLib = convert(m, runTempC, libraryTempC);
-            if (i == choice.neutralIndex()) {
-                rows.add(new PeakResult(p, PeakRole.NEUTRAL_MARKER, m, s, atLib, PeakMatch.none()));
-            } else if (i == choice.refIndex()) {
-                rows.add(new PeakResult(p, PeakRole.MOBILITY_MARKER, m, s, atLib, PeakMatch.none()));
+            if (i == best.neutralIndex()) {
+                rows.add(new PeakResult(p, PeakRole.NEUTRAL_MARKER, m, s, atLib, PeakMatch.none(), atLib));
+            } else if (i == best.refIndex()) {
+                rows.add(new PeakResult(p, PeakRole.MOBILITY_MARKER, m, s, atLib, PeakMatch.none(), atLib));
             } else {
-                rows.add(new PeakResult(p, PeakRole.ANALYTE, m, s, atLib, matches.get(k)));
+                PeakMatch pm = match == null ? PeakMatch.none() : mixed(choice, i, k, ms);
+                rows.add(new PeakResult(p, PeakRole.ANALYTE, m, s, atLib, pm, runScale.corrected(atLib)));
                 k++;
             }
         }
-        if (!Double.isNaN(runTempC) && Math.abs(runTempC - libraryTempC) >= SAME_TEMPERATURE_K) {
+        if (beyond > 0) {
+            notes.add(String.format(Locale.ROOT, "%d peak(s) with a mobility beyond ±%.0f units cannot be an ion in "
+                    + "water and were not matched", beyond, PlausibleMobility.LIMIT));
+        }
+        if (temperatureFactor != 1.0) {
             notes.add(String.format(Locale.ROOT,
                     "run at %.1f °C, library at %.1f °C: mobilities compared at the library temperature "
                             + "(scaled by the viscosity of water, IAPWS 2008; factor %.4f)",
-                    runTempC, libraryTempC, MobilityMath.atTemperature(1.0, runTempC, libraryTempC)));
+                    runTempC, libraryTempC, temperatureFactor));
         } else if (Double.isNaN(runTempC)) {
             notes.add("run temperature not given: assumed equal to the library temperature");
+        }
+        if (match != null) {
+            notes.add(ScaleNotes.describe(runScale, match.modes(), libraryTempC, ms));
+            String sign = ScaleNotes.voltageSignHint(best, match, evaluator);
+            if (sign != null) {
+                notes.add(sign);
+            }
         }
         if (choice.note() != null && !choice.note().isEmpty()) {
             notes.add(0, choice.note());
         }
-        return new RunResult(run, null, scale.describe(), scale.eofMobility(), scale, rows, notes, analysis.noiseSd());
+        return new RunResult(run, null, scale.describe(), scale.eofMobility(), scale, rows, notes, analysis.noiseSd(),
+                runScale, temperatureFactor);
+    }
+
+    /**
+     * Peak {@code index} (the {@code k}-th analyte peak of the chosen reading) with its probabilities
+     * averaged over every marker choice that carries weight; where the peak is itself the marker, its
+     * share counts as "none of the library analytes".
+     */
+    private static PeakMatch mixed(MarkerLocator.Choice choice, int index, int k, MatchSettings ms) {
+        MarkerLocator.Hypothesis best = choice.best();
+        PeakMatch own = best.match().matches().get(k);
+        if (choice.others().size() <= 1) {
+            return own;
+        }
+        List<PeakMatch> per = new ArrayList<>();
+        for (MarkerLocator.Hypothesis h : choice.others()) {
+            int pos = -1;
+            for (int q = 0; q < h.analytes().length; q++) {
+                if (h.analytes()[q] == index) {
+                    pos = q;
+                }
+            }
+            per.add(pos < 0 || h.match() == null ? null : h.match().matches().get(pos));
+        }
+        return LibraryMatcher.mix(per, choice.weights(), own, ms);
     }
 
     /** The temperature most library entries refer to (25 °C when none states one). */
@@ -212,7 +296,7 @@ public final class Identifier {
     }
 
     /** Converts a run mobility to the temperature of each library entry. */
-    private static MobilityAdjuster adjusterFor(RunConditions c, List<String> notes) {
+    private static MobilityAdjuster adjusterFor(RunConditions c) {
         double runC = c.temperatureC();
         if (Double.isNaN(runC)) {
             return MobilityAdjuster.IDENTITY;

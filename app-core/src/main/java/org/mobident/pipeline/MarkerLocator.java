@@ -4,152 +4,281 @@ import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.List;
 import java.util.Locale;
-import org.mobident.library.Library;
-import org.mobident.matching.MatchSettings;
-import org.mobident.matching.Matcher;
-import org.mobident.matching.MobilityAdjuster;
-import org.mobident.matching.PeakMatch;
+import org.mobident.matching.RunMatch;
 import org.mobident.mobility.ChargedMarkerScale;
 import org.mobident.mobility.MobilityScale;
 import org.mobident.mobility.NeutralMarkerScale;
 import org.mobident.mobility.TwoMarkerScale;
 import org.mobident.signal.Peak;
 import org.mobident.trace.RunConditions;
-import org.mobident.trace.RunSpec;
 
 /**
  * Finds a run's markers and sets its mobility scale.
  *
  * <ul>
- *   <li>With a neutral-marker window: the tallest peak in the window is the neutral marker.</li>
- *   <li>With a charged marker of known mobility: the tallest peak in its window; combined with the
- *       neutral marker it needs no lengths or voltage (Jumppanen &amp; Riekkola 1995); alone, with
- *       lengths and voltage, it gives the EOF.</li>
- *   <li>Without a window, each of the tallest peaks is tried as the neutral marker and the one
- *       under which the library explains the run best (the largest sum of assignment
- *       confidences over the other peaks) is taken; ties go to the taller peak. With an empty
- *       library the tallest peak is taken. The note says so, since this is a guess an analyst
- *       should see.</li>
+ *   <li>A charged marker of known mobility is the tallest peak in its window; with the neutral
+ *       marker it needs no lengths or voltage (Jumppanen &amp; Riekkola 1995); alone, with lengths
+ *       and voltage, it gives the EOF.</li>
+ *   <li>The neutral marker is chosen as the peak under which the library explains the run best:
+ *       each candidate peak is weighed by its prior (the peaks inside the marker window share
+ *       {@value #IN_WINDOW_PRIOR} of it, the tallest peaks outside the rest; without a window the
+ *       tallest peaks share it evenly) times the run's evidence under the library with that marker
+ *       ({@link RunMatch#logEvidence()}: every analyte peak matched, the run's scale fitted).
+ *       The peaks inside the window are always tried; the others only when the window holds no
+ *       peak or the best peak inside it leaves most of the run unexplained. A taller foreign peak
+ *       in the window therefore does not win when the library disagrees, and a weak marker is
+ *       still found. The weights of the hypotheses tried are returned, so the uncertainty of the
+ *       choice can enter the confidences.</li>
+ *   <li>With an empty library the tallest peak in the window (or of the run) is taken.</li>
  * </ul>
+ * A scale whose EOF mobility lies beyond {@link PlausibleMobility#LIMIT} is not considered.
  */
 final class MarkerLocator {
 
-    /** How many of the tallest peaks are tried as neutral marker when no window is given. */
+    /** How many of the tallest peaks are tried as neutral marker outside (or without) a window. */
     static final int MAX_MARKER_HYPOTHESES = 15;
+    /** Most peaks inside the marker window tried (the tallest). */
+    static final int MAX_IN_WINDOW = 8;
+    /** Prior probability that the neutral marker lies inside the window the user gave. */
+    static final double IN_WINDOW_PRIOR = 0.95;
+    /**
+     * The best in-window marker explains the run "well enough" to skip the peaks outside the
+     * window when the library explains at least this share of the other peaks (a modelling choice).
+     */
+    static final double WELL_EXPLAINED_SHARE = 0.5;
+    /** Hypotheses with less weight than this are left out of the mixture. */
+    static final double NEGLIGIBLE_WEIGHT = 1e-6;
+    /** A marker choice less certain than this is mentioned in the run's notes. */
+    static final double MENTION_BELOW = 0.99;
 
-    /** Scores closer than this count as a tie (sum of confidences). */
-    static final double SCORE_TIE = 1e-6;
-
-    /** The outcome: the scale (null when none could be set), marker indices (-1 when absent), a note. */
-    record Choice(MobilityScale scale, int neutralIndex, int refIndex, String note) {
+    /** Evaluates the run's analyte peaks under a scale. */
+    interface Evaluator {
+        RunMatch match(double[] mobility, double[] mobilitySd);
     }
 
-    private final Library library;
-    private final MatchSettings matchSettings;
-
-    MarkerLocator(Library library, MatchSettings matchSettings) {
-        this.library = library;
-        this.matchSettings = matchSettings;
+    /**
+     * One way of reading the run: a scale from a choice of markers, and the match of the other peaks.
+     *
+     * @param scale        the scale
+     * @param neutralIndex index of the neutral marker peak, or -1
+     * @param refIndex     index of the charged marker peak, or -1
+     * @param analytes     indices of the other peaks, in order
+     * @param mobility     their mobilities under the scale
+     * @param mobilitySd   their standard uncertainties
+     * @param match        their match (null when the library is empty)
+     * @param logScore     ln prior + ln evidence
+     */
+    record Hypothesis(MobilityScale scale, int neutralIndex, int refIndex, int[] analytes, double[] mobility,
+                      double[] mobilitySd, RunMatch match, double logScore) {
     }
 
-    Choice locate(RunSpec run, List<Peak> peaks, MobilityAdjuster adjuster) {
-        RunConditions c = run.conditions();
+    /**
+     * The outcome.
+     *
+     * @param best    the chosen reading, or null when no scale could be set
+     * @param others  every reading tried with a weight (the chosen one included), for mixing
+     * @param weights their normalised weights
+     * @param note    what an analyst should know about the choice ("" when nothing)
+     */
+    record Choice(Hypothesis best, List<Hypothesis> others, double[] weights, String note) {
+    }
+
+    private final boolean emptyLibrary;
+
+    MarkerLocator(boolean emptyLibrary) {
+        this.emptyLibrary = emptyLibrary;
+    }
+
+    Choice locate(RunConditions c, List<Peak> peaks, Evaluator evaluator) {
         if (peaks.isEmpty()) {
-            return new Choice(null, -1, -1, "no peaks found above the S/N threshold: no mobility scale (if the "
-                    + "peaks dip below the baseline, the detection mode should be 'indirect'; if they rise, 'direct')");
+            return failed("no peaks found above the S/N threshold: no mobility scale (if the peaks dip below the "
+                    + "baseline, the detection mode should be 'indirect'; if they rise, 'direct')");
         }
         int ref = -1;
         if (c.hasRefMarker()) {
             ref = tallestIn(peaks, c.refMarkerFromS(), c.refMarkerToS(), -1);
             if (ref < 0) {
-                return new Choice(null, -1, -1, String.format(Locale.ROOT,
+                return failed(String.format(Locale.ROOT,
                         "no peak in the charged-marker window %.1f–%.1f s: mobilities not computed",
                         c.refMarkerFromS(), c.refMarkerToS()));
             }
         }
-        if (c.hasMarkerWindow()) {
-            int n = tallestIn(peaks, c.markerFromS(), c.markerToS(), ref);
-            if (n < 0) {
-                return new Choice(null, -1, ref, String.format(Locale.ROOT,
-                        "no peak in the neutral-marker window %.1f–%.1f s: mobilities not computed",
-                        c.markerFromS(), c.markerToS()));
-            }
-            return new Choice(scale(c, peaks, n, ref), n, ref, "");
-        }
-        if (ref >= 0 && c.hasGeometry()) {
+        if (ref >= 0 && c.hasGeometry() && !c.hasMarkerWindow()) {
             Peak m = peaks.get(ref);
-            return new Choice(new ChargedMarkerScale(c.detectorLengthCm(), c.totalLengthCm(), c.voltageKv(),
-                    c.rampOrZeroS(), m.apexTimeS(), m.apexTimeSdS(), c.refMarkerMobility()), -1, ref, "");
+            MobilityScale scale = new ChargedMarkerScale(c.detectorLengthCm(), c.totalLengthCm(), c.voltageKv(),
+                    c.rampOrZeroS(), m.apexTimeS(), m.apexTimeSdS(), c.refMarkerMobility());
+            Hypothesis h = hypothesis(scale, -1, ref, peaks, 0.0, evaluator);
+            return single(h, "");
         }
-        return byLibraryFit(c, peaks, ref, adjuster);
-    }
-
-    private Choice byLibraryFit(RunConditions c, List<Peak> peaks, int ref, MobilityAdjuster adjuster) {
-        List<Integer> order = new ArrayList<>();
+        List<Integer> inWindow = new ArrayList<>();
+        List<Integer> outside = new ArrayList<>();
         for (int i = 0; i < peaks.size(); i++) {
-            if (i != ref) {
-                order.add(i);
+            if (i == ref) {
+                continue;
+            }
+            Peak p = peaks.get(i);
+            if (c.hasMarkerWindow() && p.apexTimeS() >= c.markerFromS() && p.apexTimeS() <= c.markerToS()) {
+                inWindow.add(i);
+            } else {
+                outside.add(i);
             }
         }
-        if (order.isEmpty()) {
-            return new Choice(null, -1, ref, "no peak left to serve as neutral marker: mobilities not computed");
+        Comparator<Integer> tallestFirst = Comparator.comparingDouble((Integer i) -> -peaks.get(i).height())
+                .thenComparingInt(i -> i);
+        inWindow.sort(tallestFirst);
+        outside.sort(tallestFirst);
+        if (inWindow.size() > MAX_IN_WINDOW) {
+            inWindow = inWindow.subList(0, MAX_IN_WINDOW);
         }
-        order.sort(Comparator.comparingDouble((Integer i) -> -peaks.get(i).height()));
-        if (library.size() == 0) {
-            int n = order.get(0);
-            return new Choice(scale(c, peaks, n, ref), n, ref, String.format(Locale.ROOT,
-                    "no marker window given and the library is empty: tallest peak at %.2f s taken as neutral marker",
-                    peaks.get(n).apexTimeS()));
+        if (outside.size() > MAX_MARKER_HYPOTHESES) {
+            outside = outside.subList(0, MAX_MARKER_HYPOTHESES);
         }
-        int best = -1;
-        double bestScore = Double.NEGATIVE_INFINITY;
-        double secondScore = Double.NEGATIVE_INFINITY;
-        int tried = Math.min(MAX_MARKER_HYPOTHESES, order.size());
-        for (int h = 0; h < tried; h++) {
-            int n = order.get(h);
-            double score = explained(scale(c, peaks, n, ref), peaks, n, ref, adjuster);
-            if (score > bestScore + SCORE_TIE) {
-                secondScore = bestScore;
-                bestScore = score;
-                best = n;
-            } else if (score > secondScore) {
-                secondScore = score;
+        if (inWindow.isEmpty() && outside.isEmpty()) {
+            return failed("no peak left to serve as neutral marker: mobilities not computed");
+        }
+        if (emptyLibrary) {
+            int n = !inWindow.isEmpty() ? inWindow.get(0) : outside.get(0);
+            Hypothesis h = hypothesis(scale(c, peaks, n, ref), n, ref, peaks, 0.0, evaluator);
+            String note = inWindow.isEmpty() ? String.format(Locale.ROOT, "%s and the library is empty: tallest peak "
+                    + "at %.2f s taken as neutral marker", c.hasMarkerWindow() ? "no peak in the marker window"
+                    : "no marker window given", peaks.get(n).apexTimeS()) : "";
+            return single(h, note);
+        }
+        List<Hypothesis> tried = new ArrayList<>();
+        double inShare = c.hasMarkerWindow() ? (outside.isEmpty() ? 1.0 : IN_WINDOW_PRIOR) : 0.0;
+        double outShare = 1.0 - inShare;
+        for (int n : inWindow) {
+            addIfPlausible(tried, c, peaks, n, ref, Math.log(inShare / inWindow.size()), evaluator);
+        }
+        boolean tryOutside = inWindow.isEmpty() || !explainsWell(best(tried));
+        if (tryOutside) {
+            double share = inWindow.isEmpty() ? 1.0 : outShare;
+            for (int n : outside) {
+                addIfPlausible(tried, c, peaks, n, ref, Math.log(share / outside.size()), evaluator);
             }
         }
-        String note = String.format(Locale.ROOT,
-                "no marker window given: peak at %.2f s taken as neutral marker because the library explains "
-                        + "the run best with it (score %.2f; next best %.2f); give marker_from_s/marker_to_s to fix it",
-                peaks.get(best).apexTimeS(), bestScore, Double.isInfinite(secondScore) ? 0.0 : secondScore);
-        return new Choice(scale(c, peaks, best, ref), best, ref, note);
+        if (tried.isEmpty()) {
+            return failed(String.format(Locale.ROOT, "every candidate neutral marker gives an EOF mobility beyond "
+                    + "±%.0f units: check the time unit of the trace (minutes read as seconds?), the voltage and "
+                    + "the capillary lengths", PlausibleMobility.LIMIT));
+        }
+        Hypothesis best = best(tried);
+        double[] weights = weights(tried);
+        int bestIndex = tried.indexOf(best);
+        return new Choice(best, tried, weights, note(c, peaks, inWindow, best, weights[bestIndex], tried.size()));
     }
 
-    /** Sum of assignment confidences of the other peaks under a candidate scale. */
-    private double explained(MobilityScale scale, List<Peak> peaks, int neutral, int ref, MobilityAdjuster adjuster) {
-        int n = peaks.size();
-        double[] mob = new double[n];
-        double[] sd = new double[n];
+    private static Choice failed(String note) {
+        return new Choice(null, List.of(), new double[0], note);
+    }
+
+    private static Choice single(Hypothesis h, String note) {
+        if (!PlausibleMobility.plausibleEof(h.scale())) {
+            return failed(PlausibleMobility.eofProblem(h.scale()));
+        }
+        return new Choice(h, List.of(h), new double[] {1.0}, note);
+    }
+
+    private void addIfPlausible(List<Hypothesis> tried, RunConditions c, List<Peak> peaks, int n, int ref,
+                                double logPrior, Evaluator evaluator) {
+        MobilityScale scale = scale(c, peaks, n, ref);
+        if (PlausibleMobility.plausibleEof(scale)) {
+            tried.add(hypothesis(scale, n, ref, peaks, logPrior, evaluator));
+        }
+    }
+
+    private static Hypothesis hypothesis(MobilityScale scale, int neutral, int ref, List<Peak> peaks, double logPrior,
+                                         Evaluator evaluator) {
+        int count = 0;
+        for (int i = 0; i < peaks.size(); i++) {
+            count += i != neutral && i != ref ? 1 : 0;
+        }
+        int[] analytes = new int[count];
+        double[] mob = new double[count];
+        double[] sd = new double[count];
         int k = 0;
-        for (int i = 0; i < n; i++) {
+        for (int i = 0; i < peaks.size(); i++) {
             if (i == neutral || i == ref) {
                 continue;
             }
             Peak p = peaks.get(i);
+            analytes[k] = i;
             mob[k] = scale.mobility(p.apexTimeS());
             sd[k] = scale.mobilitySd(p.apexTimeS(), p.apexTimeSdS());
             k++;
         }
-        if (k == 0) {
-            return 0.0;
-        }
-        List<PeakMatch> matches = Matcher.match(java.util.Arrays.copyOf(mob, k), java.util.Arrays.copyOf(sd, k),
-                library, matchSettings, adjuster);
-        double sum = 0;
-        for (PeakMatch m : matches) {
-            if (m.assigned() != null) {
-                sum += m.confidence();
+        RunMatch match = evaluator == null ? null : evaluator.match(mob, sd);
+        double evidence = match == null || !Double.isFinite(match.logEvidence()) ? 0.0 : match.logEvidence();
+        return new Hypothesis(scale, neutral, ref, analytes, mob, sd, match, logPrior + evidence);
+    }
+
+    private static Hypothesis best(List<Hypothesis> tried) {
+        Hypothesis best = null;
+        for (Hypothesis h : tried) {
+            if (best == null || h.logScore() > best.logScore()) {
+                best = h;
             }
         }
-        return sum;
+        return best;
+    }
+
+    private static boolean explainsWell(Hypothesis h) {
+        if (h == null || h.match() == null) {
+            return false;
+        }
+        int n = h.analytes().length;
+        return n == 0 || h.match().explainedPeaks() >= WELL_EXPLAINED_SHARE * n;
+    }
+
+    private static double[] weights(List<Hypothesis> tried) {
+        double max = Double.NEGATIVE_INFINITY;
+        for (Hypothesis h : tried) {
+            max = Math.max(max, h.logScore());
+        }
+        double[] w = new double[tried.size()];
+        double sum = 0;
+        for (int k = 0; k < w.length; k++) {
+            w[k] = Math.exp(tried.get(k).logScore() - max);
+            sum += w[k];
+        }
+        for (int k = 0; k < w.length; k++) {
+            w[k] /= sum;
+            if (w[k] < NEGLIGIBLE_WEIGHT) {
+                w[k] = 0;
+            }
+        }
+        return w;
+    }
+
+    private static String note(RunConditions c, List<Peak> peaks, List<Integer> inWindow, Hypothesis best,
+                               double weight, int tried) {
+        Peak chosen = peaks.get(best.neutralIndex());
+        String explained = best.match() == null ? "" : String.format(Locale.ROOT,
+                "the library explains %.1f of the other %d peaks with it", best.match().explainedPeaks(),
+                best.analytes().length);
+        String certainty = weight < MENTION_BELOW ? String.format(Locale.ROOT,
+                "; this choice is %.0f %% certain and its doubt is carried into the confidences", 100 * weight) : "";
+        if (!c.hasMarkerWindow()) {
+            return String.format(Locale.ROOT, "no marker window given: peak at %.2f s taken as neutral marker because "
+                    + "%s (%d peaks tried)%s; give marker_from_s/marker_to_s to fix it", chosen.apexTimeS(),
+                    explained, tried, certainty);
+        }
+        String window = String.format(Locale.ROOT, "%.1f–%.1f s", c.markerFromS(), c.markerToS());
+        if (inWindow.isEmpty()) {
+            return String.format(Locale.ROOT, "no peak in the marker window %s: peak at %.2f s taken as neutral "
+                    + "marker because %s%s", window, chosen.apexTimeS(), explained, certainty);
+        }
+        if (!inWindow.contains(best.neutralIndex())) {
+            return String.format(Locale.ROOT, "the peaks in the marker window %s leave the run unexplained: peak at "
+                    + "%.2f s, outside the window, taken as neutral marker because %s%s", window, chosen.apexTimeS(),
+                    explained, certainty);
+        }
+        if (best.neutralIndex() != inWindow.get(0)) {
+            return String.format(Locale.ROOT, "neutral marker: peak at %.2f s in the window %s, not the taller one at "
+                    + "%.2f s, because %s%s", chosen.apexTimeS(), window, peaks.get(inWindow.get(0)).apexTimeS(),
+                    explained, certainty);
+        }
+        return certainty.isEmpty() ? "" : "neutral marker" + certainty;
     }
 
     private static MobilityScale scale(RunConditions c, List<Peak> peaks, int neutral, int ref) {

@@ -13,7 +13,16 @@ import org.mobident.signal.Peak;
  * @param mobilityAtLibraryTemp mobility converted to the library temperature (equals mobility
  *                              when the temperatures agree; NaN if unknown)
  * @param match                 the matching outcome ({@link PeakMatch#none()} for markers)
+ * @param mobilityCorrected     the mobility compared with the library: at the library temperature and
+ *                              corrected for the run's scale ({@link org.mobident.matching.RunScale#corrected});
+ *                              equals mobilityAtLibraryTemp when the scale was not fitted (NaN if unknown)
  */
 public record PeakResult(Peak peak, PeakRole role, double mobility, double mobilitySd,
-                         double mobilityAtLibraryTemp, PeakMatch match) {
+                         double mobilityAtLibraryTemp, PeakMatch match, double mobilityCorrected) {
+
+    /** A peak whose run's scale was not corrected: the corrected mobility is the one at the library temperature. */
+    public PeakResult(Peak peak, PeakRole role, double mobility, double mobilitySd, double mobilityAtLibraryTemp,
+                      PeakMatch match) {
+        this(peak, role, mobility, mobilitySd, mobilityAtLibraryTemp, match, mobilityAtLibraryTemp);
+    }
 }

@@ -2,6 +2,7 @@ package org.mobident.pipeline;
 
 import java.util.List;
 import org.mobident.InputException;
+import org.mobident.matching.RunScale;
 import org.mobident.mobility.MobilityScale;
 import org.mobident.trace.RunSpec;
 
@@ -17,12 +18,25 @@ import org.mobident.trace.RunSpec;
  * @param peaks       peaks in order of apex time (empty when the run failed)
  * @param notes       warnings and remarks an analyst should read (temperature conversion, …)
  * @param noiseSd     baseline noise standard deviation of the trace (NaN when failed)
+ * @param runScale    the run-wide correction a, b applied before matching ({@link RunScale#OFF} when none)
+ * @param temperatureFactor factor that converts the run's mobilities to the library temperature
+ *                    (viscosity ratio; 1 when the temperatures agree or the run's is unknown)
  */
 public record RunResult(RunSpec spec, InputException error, String scaleNote, double eofMobility,
-                        MobilityScale scale, List<PeakResult> peaks, List<String> notes, double noiseSd) {
+                        MobilityScale scale, List<PeakResult> peaks, List<String> notes, double noiseSd,
+                        RunScale runScale, double temperatureFactor) {
     public RunResult {
         peaks = List.copyOf(peaks);
         notes = List.copyOf(notes);
+        if (runScale == null) {
+            runScale = RunScale.OFF;
+        }
+    }
+
+    /** A run without scale correction or temperature conversion. */
+    public RunResult(RunSpec spec, InputException error, String scaleNote, double eofMobility, MobilityScale scale,
+                     List<PeakResult> peaks, List<String> notes, double noiseSd) {
+        this(spec, error, scaleNote, eofMobility, scale, peaks, notes, noiseSd, RunScale.OFF, 1.0);
     }
 
     /** True when a mobility scale was set for this run. */

@@ -11,7 +11,9 @@ import org.mobident.library.Library;
 import org.mobident.library.LibraryEntry;
 import org.mobident.matching.Candidate;
 import org.mobident.matching.MatchStatus;
-import org.mobident.matching.Matcher;
+import org.mobident.matching.LibraryMatcher;
+import org.mobident.matching.MatchWindow;
+import org.mobident.matching.SpreadModel;
 import org.mobident.matching.MobilityAdjuster;
 import org.mobident.matching.PeakMatch;
 
@@ -29,7 +31,7 @@ import org.mobident.matching.PeakMatch;
  *   <li>otherwise the peak is moved by X's shift, μ' = μ_peak + (μ_B(X) − μ_A(X)), its standard
  *       uncertainty widened by the model part of the shift (without the part common to all
  *       analytes, {@link PredictedMobility#comparisonModelUncertainty()}), and every moved peak of the run is
- *       re-matched together against library B with the same {@link Matcher} that made the
+ *       re-matched together against library B with the same {@link LibraryMatcher} that made the
  *       original assignments (one-to-one, with probabilities). This is the honest test: it asks
  *       "if this run were made in the new buffer, would the peak be recognised as X, and as X alone?";</li>
  *   <li>{@link Verdict#LOST} also when no window of the new library reaches the moved peak;</li>
@@ -258,9 +260,9 @@ public final class Rechecker {
             movedSd[i] = Math.hypot(sd, t.moveSd());
             unmovedSd[i] = sd;
         }
-        List<PeakMatch> movedMatch = Matcher.match(moved, movedSd, libraryB, s.match(), MobilityAdjuster.IDENTITY);
+        List<PeakMatch> movedMatch = LibraryMatcher.match(moved, movedSd, libraryB, s.match(), MobilityAdjuster.IDENTITY);
         // the old window: the moved peak, with its own uncertainty, against library A as first matched
-        List<PeakMatch> oldWindow = Matcher.match(moved, unmovedSd, libraryA, s.match(), MobilityAdjuster.IDENTITY);
+        List<PeakMatch> oldWindow = LibraryMatcher.match(moved, unmovedSd, libraryA, s.match(), MobilityAdjuster.IDENTITY);
         for (int i = 0; i < n; i++) {
             PeakTableRow r = run.get(i);
             String x = r.assigned();
@@ -291,7 +293,7 @@ public final class Rechecker {
             Verdict verdict;
             String reason;
             String shiftText = String.format(Locale.ROOT, "shift %+.2f ± %.2f", shift, shiftSd);
-            double halfWidth = oldWindowHalfWidth(libraryA.find(x).orElseThrow(), unmovedSd[i], s);
+            double halfWidth = oldWindowHalfWidth(libraryA, libraryA.find(x).orElseThrow(), unmovedSd[i], s);
             String where = String.format(Locale.ROOT, "the moved peak (%.2f) %s the window of %s in the old "
                     + "library (%.2f ± %.2f)", moved[i], inOldWindow ? "stays inside" : "falls outside", x, muA,
                     halfWidth);
@@ -335,36 +337,13 @@ public final class Rechecker {
 
     /**
      * Half-width of an entry's candidate window for a peak of standard uncertainty {@code peakSd},
-     * as the {@link Matcher} applies it (found by bisection on the matcher itself, so that the
-     * number printed in a reason is the one the verdict used), to {@value #WINDOW_RESOLUTION_UNITS} units.
+     * exactly as matching applies it ({@link MatchWindow}, with the spreads of the whole library),
+     * so that the number printed in a reason is the one the verdict used.
      */
-    static double oldWindowHalfWidth(LibraryEntry entry, double peakSd, RecheckSettings s) {
-        Library single = new Library(List.of(entry), "window", List.of());
-        double lo = 0.0;
-        double hi = 1.0;
-        while (inWindow(single, entry.mobility() + hi, peakSd, s) && hi < MAX_WINDOW_UNITS) {
-            lo = hi;
-            hi *= 2.0;
-        }
-        while (hi - lo > WINDOW_RESOLUTION_UNITS) {
-            double mid = 0.5 * (lo + hi);
-            if (inWindow(single, entry.mobility() + mid, peakSd, s)) {
-                lo = mid;
-            } else {
-                hi = mid;
-            }
-        }
-        return 0.5 * (lo + hi);
-    }
-
-    /** Resolution of the printed window half-width, mobility units. */
-    static final double WINDOW_RESOLUTION_UNITS = 1e-4;
-    /** Search limit of the window half-width, mobility units. */
-    static final double MAX_WINDOW_UNITS = 1024.0;
-
-    private static boolean inWindow(Library single, double mu, double peakSd, RecheckSettings s) {
-        return !Matcher.match(new double[] {mu}, new double[] {peakSd}, single, s.match(), MobilityAdjuster.IDENTITY)
-                .get(0).candidates().isEmpty();
+    static double oldWindowHalfWidth(Library library, LibraryEntry entry, double peakSd, RecheckSettings s) {
+        int j = library.entries().indexOf(entry);
+        double peakVariance = Double.isFinite(peakSd) ? peakSd * peakSd : 0.0;
+        return MatchWindow.halfWidth(entry, SpreadModel.of(library, s.match()), j, peakVariance, s.match());
     }
 
     private static List<PairCheck> pairs(Library libraryA, Map<String, Transfer> transfers, Predictor predictor,

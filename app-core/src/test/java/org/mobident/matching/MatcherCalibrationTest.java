@@ -200,7 +200,7 @@ class MatcherCalibrationTest {
             mu[i] = peaks.get(i).mobility();
             sd[i] = peaks.get(i).sd();
         }
-        List<PeakMatch> matches = Matcher.match(mu, sd, library, MatchSettings.DEFAULT, MobilityAdjuster.IDENTITY);
+        List<PeakMatch> matches = LibraryMatcher.match(mu, sd, library, MatchSettings.DEFAULT, MobilityAdjuster.IDENTITY);
         for (int i = 0; i < mu.length; i++) {
             PeakMatch pm = matches.get(i);
             String truth = peaks.get(i).analyte();

@@ -63,7 +63,12 @@ class IdentifierEndToEndTest {
 
     private static RunResult run(Library library, RunConditions c, double eof, List<Truth> zones, long seed,
                                  double noiseSd) {
-        SimulationSpec.Builder b = SimulationSpec.builder(c).eofMobility(eof).neutralMarker(1.0)
+        return run(library, c, eof, zones, seed, noiseSd, 1.0);
+    }
+
+    private static RunResult run(Library library, RunConditions c, double eof, List<Truth> zones, long seed,
+                                 double noiseSd, double markerHeight) {
+        SimulationSpec.Builder b = SimulationSpec.builder(c).eofMobility(eof).neutralMarker(markerHeight)
                 .samplingHz(20).durationS(900).noiseSd(noiseSd).baseline(0.3).drift(2e-4, 1e-7).seed(seed);
         for (Truth z : zones) {
             b.zone(z.name(), z.mobility(), 0.8, 120_000);
@@ -169,7 +174,7 @@ class IdentifierEndToEndTest {
         }
         Trace t = TraceSimulator.simulate("two-marker", b.build());
         double sulfateTimeS = TraceSimulator.apexTimeS(b.build(), -73.9);
-        RunConditions stated = new RunConditions(Double.NaN, Double.NaN, Double.NaN, 0, 25.0, "test", 380, 800,
+        RunConditions stated = new RunConditions(Double.NaN, Double.NaN, Double.NaN, 0, 25.0, "test buffer", 380, 800,
                 Detection.INDIRECT, -73.9, sulfateTimeS - 1.0, sulfateTimeS + 1.0);
         Library noSulfate = new Library(ANIONS.entries().stream().filter(e -> !e.name().equals("sulfate")).toList(),
                 "test", List.of());
@@ -180,15 +185,24 @@ class IdentifierEndToEndTest {
     }
 
     @Test
-    void runWithoutMarkerInItsWindowIsReportedAndHasNoMobilities() {
+    void markerOutsideItsWindowIsFoundByThePatternAndSaidSo() {
         SplittableRandom rnd = new SplittableRandom(41);
         List<Truth> zones = draw(ANIONS, rnd, 0);
         RunConditions c = conditions(80, 72, -20, 0, Detection.INDIRECT, 800, 880);
         RunResult r = run(ANIONS, c, -50, zones, 41, 0.004);
         assertFalse(r.failed());
+        assertIdentified(r, zones);
+        assertEquals(-50.0, r.eofMobility(), 0.05, "EOF mobility recovered (value used to synthesise)");
+        assertTrue(r.notes().get(0).contains("no peak in the marker window 800.0–880.0 s"), r.notes().toString());
+    }
+
+    @Test
+    void runWithoutPeaksHasNoMobilities() {
+        RunConditions c = conditions(80, 72, -20, 0, Detection.INDIRECT, 800, 880);
+        RunResult r = run(ANIONS, c, -50, List.of(), 41, 0.004, 0.0);
+        assertFalse(r.failed());
         assertFalse(r.mobilityKnown());
-        assertTrue(r.scaleNote().contains("no peak in the neutral-marker window"), r.scaleNote());
-        assertTrue(r.peaks().stream().allMatch(p -> Double.isNaN(p.mobility()) && p.match().assigned() == null));
+        assertTrue(r.scaleNote().contains("no peaks found"), r.scaleNote());
     }
 
     @Test

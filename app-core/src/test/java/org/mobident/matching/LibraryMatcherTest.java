@@ -14,21 +14,29 @@ import org.mobident.library.Library;
 import org.mobident.library.LibraryEntry;
 
 /**
- * Unit tests of {@link Matcher}. All mobilities are invented test values in 1e-9 m²/(V s); the
- * expected probabilities are computed from the model stated in {@link Matcher}'s javadoc.
+ * Unit tests of {@link LibraryMatcher} with the run's scale as stated (no scale correction) and no
+ * between-session spread, so that each expected value follows from the formulas alone. All mobilities are invented test values in 1e-9 m²/(V s); the
+ * expected probabilities are computed from the model stated in {@link LibraryMatcher}'s javadoc.
  */
-class MatcherTest {
+class LibraryMatcherTest {
 
     private static final double EXACT = 1e-12;
     private static final double INF = Double.POSITIVE_INFINITY;
-    private static final MatchSettings S = MatchSettings.DEFAULT;
+    private static final MatchSettings S = MatchSettings.DEFAULT.withSessionRsd(0.0);
 
     private static Library lib(LibraryEntry... entries) {
         return new Library(List.of(entries), "test", List.of());
     }
 
     private static List<PeakMatch> run(Library lib, MatchSettings s, double[] mu, double[] sd) {
-        return Matcher.match(mu, sd, lib, s, MobilityAdjuster.IDENTITY);
+        return LibraryMatcher.match(mu, sd, lib, s, MobilityAdjuster.IDENTITY);
+    }
+
+    /** The window of entry j for a peak whose combined standard uncertainty with the entry is {@code combinedSd}. */
+    private static double window(Library lib, int j, double combinedSd, MatchSettings s) {
+        SpreadModel spread = SpreadModel.of(lib, s);
+        double extra = Math.max(0.0, combinedSd * combinedSd - spread.predictiveVariance(j));
+        return MatchWindow.halfWidth(lib.entries().get(j), spread, j, extra, s);
     }
 
     private static PeakMatch one(Library lib, MatchSettings s, double mu, double sd) {
@@ -43,7 +51,7 @@ class MatcherTest {
     /**
      * Likelihood ratio ρ = q·N(r; 0, v) / ((1 − q)·λ) under the default settings (n unknown), for a
      * run of P peaks and a library of M: L = min((1 − π₀)·P, 0.95·M), q = L / M, λ = (P − L) / W
-     * (see {@link Matcher}).
+     * (see {@link LibraryMatcher}).
      */
     private static double ratio(double r, double peakSd, double entrySd, int librarySize, int peaks) {
         double v = peakSd * peakSd + entrySd * entrySd + S.sdFloor() * S.sdFloor();
@@ -87,17 +95,17 @@ class MatcherTest {
         org.apache.commons.math3.distribution.TDistribution t3 =
                 new org.apache.commons.math3.distribution.TDistribution(null, 3.0);
         for (double z : new double[] {0.0, 0.7, -2.5, 6.0}) {
-            assertEquals(Math.log(t3.density(z)), Matcher.logDensity(z, 3.0), 1e-10);
+            assertEquals(Math.log(t3.density(z)), LibraryMatcher.logDensity(z, 3.0), 1e-10);
         }
-        assertEquals(-0.5 * 4.0 - 0.5 * Math.log(2 * Math.PI), Matcher.logDensity(2.0, INF), EXACT);
+        assertEquals(-0.5 * 4.0 - 0.5 * Math.log(2 * Math.PI), LibraryMatcher.logDensity(2.0, INF), EXACT);
         // The widened window keeps the normal 3σ coverage, 2Φ(3) − 1 = 0.99730 (normal table, from memory).
-        assertEquals(3.0, Matcher.coverageFactor(3.0, INF), EXACT);
-        double k10 = Matcher.coverageFactor(3.0, 10.0);
+        assertEquals(3.0, MatchWindow.coverageFactor(3.0, INF), EXACT);
+        double k10 = MatchWindow.coverageFactor(3.0, 10.0);
         org.apache.commons.math3.distribution.TDistribution t10 =
                 new org.apache.commons.math3.distribution.TDistribution(null, 10.0);
         assertEquals(0.99730, 2 * t10.cumulativeProbability(k10) - 1, 1e-5);
         assertTrue(k10 > 3.5 && k10 < 4.5, "t with 10 df: a little wider than 3");
-        assertEquals(Matcher.MAX_T_WIDENING * 3.0, Matcher.coverageFactor(3.0, 2.0), EXACT,
+        assertEquals(MatchWindow.MAX_T_WIDENING * 3.0, MatchWindow.coverageFactor(3.0, 2.0), EXACT,
                 "with 2 df the quantile (~19) is capped");
 
         // A peak 5 combined σ from an entry measured 3 times is still a candidate; with n unknown it is not.
@@ -206,16 +214,16 @@ class MatcherTest {
         assertEquals(1, one(lib, abs2, -51.9, 0.1).candidates().size());
         assertEquals(0, one(lib, abs2, -52.1, 0.1).candidates().size());
         MatchSettings rel = S.withRelativeWindow(0.02);
-        assertEquals(1.0, Matcher.window(lib.entries().get(0), 1.0, INF, rel), EXACT, "2 % of 50");
+        assertEquals(1.0, window(lib, 0, 1.0, rel), EXACT, "2 % of 50");
         assertEquals(1, one(lib, rel, -50.95, 0.1).candidates().size());
         assertEquals(0, one(lib, rel, -51.05, 0.1).candidates().size());
-        assertEquals(0.5, Matcher.window(lib.entries().get(1), 1.0, INF, rel), EXACT, "2 % of 10 is below the floor");
+        assertEquals(0.5, window(lib, 1, 1.0, rel), EXACT, "2 % of 10 is below the floor");
         assertEquals(1, one(lib, rel, 10.45, 0.1).candidates().size());
         assertEquals(0, one(lib, rel, 10.55, 0.1).candidates().size());
         assertEquals(MatchSettings.WindowRule.ABSOLUTE, MatchSettings.ABSOLUTE.windowRule());
         assertEquals(MatchSettings.WindowRule.RELATIVE, MatchSettings.RELATIVE.windowRule());
-        assertEquals(3.0 * 2.0, Matcher.window(lib.entries().get(0), 2.0, INF, S), EXACT, "k = 3 by default");
-        assertEquals(0.5, Matcher.window(lib.entries().get(0), 0.1, INF, S), EXACT, "the 0.5-unit floor");
+        assertEquals(3.0 * 2.0, window(lib, 0, 2.0, S), EXACT, "k = 3 by default");
+        assertEquals(0.5, window(lib(LibraryEntry.of("Z", -50.0, 0.1)), 0, 0.1, S), EXACT, "the 0.5-unit floor");
     }
 
     @Test
@@ -224,12 +232,12 @@ class MatcherTest {
                 Double.NaN, Double.NaN, 35.0, null);
         Library lib = lib(warm);
         MobilityAdjuster toEntryTemperature = (mu, e) -> mu * (1 + 0.02 * (e.temperatureOrDefaultC() - 25.0));
-        PeakMatch adjusted = Matcher.match(new double[] {25.0}, new double[] {0.05}, lib, S, toEntryTemperature).get(0);
+        PeakMatch adjusted = LibraryMatcher.match(new double[] {25.0}, new double[] {0.05}, lib, S, toEntryTemperature).get(0);
         assertEquals("Warm", adjusted.assigned());
         assertEquals(0.0, adjusted.candidates().get(0).residual(), 1e-9, "25 × 1.2 = 30");
         assertNull(one(lib, S, 25.0, 0.05).assigned(), "without conversion the peak is 5 units off");
         MobilityAdjuster unknown = (mu, e) -> Double.NaN;
-        assertEquals(PeakMatch.none(), Matcher.match(new double[] {30.0}, null, lib, S, unknown).get(0));
+        assertEquals(PeakMatch.none(), LibraryMatcher.match(new double[] {30.0}, null, lib, S, unknown).get(0));
     }
 
     @Test
@@ -237,7 +245,7 @@ class MatcherTest {
         List<PeakMatch> m = run(spreadOut(), S, new double[] {Double.NaN, -42.0}, new double[] {0.1, Double.NaN});
         assertEquals(PeakMatch.none(), m.get(0));
         assertEquals("Acetate", m.get(1).assigned(), "an unknown σ counts as 0");
-        assertEquals("Acetate", Matcher.match(new double[] {-42.0}, null, spreadOut(), S,
+        assertEquals("Acetate", LibraryMatcher.match(new double[] {-42.0}, null, spreadOut(), S,
                 MobilityAdjuster.IDENTITY).get(0).assigned());
         assertEquals(0, run(spreadOut(), S, new double[0], new double[0]).size());
         assertThrows(IllegalArgumentException.class, () -> run(spreadOut(), S, new double[2], new double[1]));
@@ -278,7 +286,7 @@ class MatcherTest {
                     logW[t][k] = rnd.nextGaussian() * 3;
                 }
             }
-            double[][] fast = AssignmentMarginals.compute(entryOf, logW, Matcher.MAX_STATES);
+            double[][] fast = AssignmentMarginals.compute(entryOf, logW, LibraryMatcher.MAX_STATES);
             double[][] slow = bruteForce(entryOf, logW);
             for (int t = 0; t < peaks; t++) {
                 for (int k = 0; k < slow[t].length; k++) {
@@ -340,7 +348,7 @@ class MatcherTest {
         double[] mu = {10.05, 9.5};
         double[] sd = {0.0, 0.0};
         List<PeakMatch> exact = run(lib, S, mu, sd);
-        List<PeakMatch> approx = Matcher.match(mu, sd, lib, S, MobilityAdjuster.IDENTITY, 1);
+        List<PeakMatch> approx = LibraryMatcher.match(mu, sd, lib, S, MobilityAdjuster.IDENTITY, 1);
         for (int i = 0; i < 2; i++) {
             assertEquals(exact.get(i).assigned(), approx.get(i).assigned(), "the assignment itself is exact");
         }
