@@ -6,34 +6,67 @@ import java.util.concurrent.Callable;
 import org.mobident.library.Library;
 import org.mobident.library.LibraryCsv;
 import org.mobident.simulate.ArchiveGenerator;
+import org.mobident.simulate.LabDayBench;
+import org.mobident.simulate.LabDaySummary;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Spec;
 import picocli.CommandLine.Model.CommandSpec;
 
-/** {@code mobident simulate}: writes synthetic runs for trials and speed measurements. */
+/** {@code mobident simulate}: writes synthetic runs for trials, speed measurements and honest benches. */
 @Command(name = "simulate",
         mixinStandardHelpOptions = true,
         versionProvider = VersionProvider.class,
         sortOptions = false,
-        description = "Writes synthetic anion runs drawn from a library (reversed polarity, EOF drifting "
-                + "±15 %%, indirect detection, noise and drift) plus their run sheet, to try the tool or time it. "
-                + "The data are invented; never mix them with real records.")
+        description = {
+            "Writes invented runs to try the tool, time it, or measure how well it identifies. Two scenarios:",
+            "  archive  (default) anion runs drawn from --library: reversed polarity, EOF drifting ±15 %%, "
+                    + "indirect detection, noise and drift, plus their run sheet. The speed benchmark.",
+            "  lab-day  a hard bench from three built-in invented methods (two anion, one cation): standards "
+                    + "runs with run and standards sheets for building libraries, sample runs, and truth tables "
+                    + "saying what every run really holds. The runs carry a working day's troubles: a temperature "
+                    + "the sheet does not know, EOF drift, concentration-dependent peak skew, weak markers, "
+                    + "foreign zones, spikes, correlated noise, wandering baselines, three file layouts. "
+                    + "README.txt in the folder explains it and gives the commands to build, identify and score.",
+            "The data are invented; never mix them with real records."},
+        footer = {"", "Examples:",
+            "  mobident simulate --library demo-data/library.csv --count 1000 --points 60000 --out /tmp/archive",
+            "  mobident simulate --scenario lab-day --count 160 --seed 7 --out /tmp/bench-7"})
 public final class SimulateCommand implements Callable<Integer> {
+
+    static final String ARCHIVE = "archive";
+    static final String LAB_DAY = "lab-day";
+    static final int DEFAULT_ARCHIVE_RUNS = 20;
+    static final int DEFAULT_LAB_DAY_SAMPLES = 160;
+    static final int DEFAULT_POINTS = 14_400;
+    static final int MAX_ARCHIVE_RUNS = 100_000;
+    static final int MAX_LAB_DAY_SAMPLES = 10_000;
+    static final int MIN_POINTS = 100;
+    static final int MAX_POINTS = 10_000_000;
+    private static final String OVERWRITE_HINT = "add --overwrite to replace it";
 
     @Spec
     CommandSpec spec;
 
-    @Option(names = {"-l", "--library"}, required = true, paramLabel = "FILE", description = "Library to draw anions from.")
+    @Option(names = "--scenario", paramLabel = "NAME", description = "archive (default) or lab-day.")
+    String scenario = ARCHIVE;
+
+    @Option(names = {"-l", "--library"}, paramLabel = "FILE",
+            description = "archive: library to draw anions from (required). lab-day: not used (built-in panels).")
     Path libraryFile;
 
-    @Option(names = "--count", paramLabel = "N", description = "Number of runs (default ${DEFAULT-VALUE}).")
-    int runs = 20;
+    @Option(names = "--count", paramLabel = "N",
+            description = "archive: number of runs (default " + DEFAULT_ARCHIVE_RUNS + "). lab-day: number of sample "
+                    + "runs, besides the standards (default " + DEFAULT_LAB_DAY_SAMPLES + ").")
+    Integer count;
 
-    @Option(names = "--points", paramLabel = "N", description = "Points per run (default ${DEFAULT-VALUE}).")
-    int points = 14_400;
+    @Option(names = "--points", paramLabel = "N",
+            description = "archive: points per run (default " + DEFAULT_POINTS + "). lab-day: not used (each run "
+                    + "has its own sampling rate and length).")
+    Integer points;
 
-    @Option(names = "--seed", paramLabel = "N", description = "Random seed (default ${DEFAULT-VALUE}).")
+    @Option(names = "--seed", paramLabel = "N", description = "Random seed (default ${DEFAULT-VALUE}); the same seed "
+            + "gives the same files.")
     long seed = 1;
 
     @Option(names = {"-o", "--out"}, required = true, paramLabel = "DIR", description = "Folder to write into.")
@@ -44,14 +77,28 @@ public final class SimulateCommand implements Callable<Integer> {
 
     @Override
     public Integer call() throws Exception {
-        if (runs < 1 || runs > 100_000 || points < 100 || points > 10_000_000) {
-            spec.commandLine().getErr().println("mobident simulate: --count must be 1..100000 and --points 100..10000000");
-            return ExitCodes.USAGE;
+        if (ARCHIVE.equals(scenario)) {
+            return archive();
+        }
+        if (LAB_DAY.equals(scenario)) {
+            return labDay();
+        }
+        return usage("unknown --scenario '" + scenario + "'; choose " + ARCHIVE + " or " + LAB_DAY);
+    }
+
+    private Integer archive() throws Exception {
+        int runs = count == null ? DEFAULT_ARCHIVE_RUNS : count;
+        int n = points == null ? DEFAULT_POINTS : points;
+        if (runs < 1 || runs > MAX_ARCHIVE_RUNS || n < MIN_POINTS || n > MAX_POINTS) {
+            return usage("--count must be 1.." + MAX_ARCHIVE_RUNS + " and --points " + MIN_POINTS + ".." + MAX_POINTS);
+        }
+        if (libraryFile == null) {
+            return usage("the archive scenario draws its anions from a library: give --library FILE");
         }
         Library library = LibraryCsv.read(libraryFile);
         try {
-            Path sheet = ArchiveGenerator.write(library, runs, points, seed, out, overwrite);
-            spec.commandLine().getOut().println(runs + " runs of " + points + " points written; run sheet " + sheet);
+            Path sheet = ArchiveGenerator.write(library, runs, n, seed, out, overwrite);
+            spec.commandLine().getOut().println(runs + " runs of " + n + " points written; run sheet " + sheet);
         } catch (IllegalArgumentException e) {
             spec.commandLine().getErr().println("mobident simulate: " + e.getMessage());
             return ExitCodes.BAD_INPUT;
@@ -59,5 +106,32 @@ public final class SimulateCommand implements Callable<Integer> {
             throw new OutputException(out + ": " + e.getMessage(), e);
         }
         return ExitCodes.OK;
+    }
+
+    private Integer labDay() throws Exception {
+        if (libraryFile != null) {
+            return usage("the lab-day scenario uses its own invented panels; leave out --library");
+        }
+        if (points != null) {
+            return usage("the lab-day scenario chooses each run's sampling rate and length; leave out --points");
+        }
+        int samples = count == null ? DEFAULT_LAB_DAY_SAMPLES : count;
+        if (samples < 1 || samples > MAX_LAB_DAY_SAMPLES) {
+            return usage("--count must be 1.." + MAX_LAB_DAY_SAMPLES + " sample runs");
+        }
+        try {
+            LabDaySummary summary = LabDayBench.write(samples, seed, out, overwrite, OVERWRITE_HINT);
+            var o = spec.commandLine().getOut();
+            o.println(summary.paragraph());
+            o.println("Written to " + out + "; start with " + out.resolve(LabDayBench.README) + ".");
+        } catch (IOException e) {
+            throw new OutputException(out + ": " + e.getMessage(), e);
+        }
+        return ExitCodes.OK;
+    }
+
+    private Integer usage(String message) {
+        spec.commandLine().getErr().println("mobident simulate: " + message);
+        return ExitCodes.USAGE;
     }
 }

@@ -18,11 +18,16 @@ import org.mobident.trace.RunConditions;
  * @param neutralMarkerHeight height of the neutral marker zone (moves with the EOF); 0 = no marker
  * @param samplingHz          detector sampling rate, Hz
  * @param durationS           length of the recording, s; the first point is at 0 s
- * @param noiseSd             standard deviation of the Gaussian white noise, signal units
+ * @param noiseSd             marginal standard deviation of the Gaussian noise, signal units
  * @param baselineOffset      constant baseline, signal units
  * @param driftPerS           linear baseline drift, signal units per s
  * @param driftCurvature      quadratic baseline drift, signal units per s²
  * @param seed                seed of the noise generator: the same spec gives the same trace
+ * @param noiseCorrelation    lag-one autocorrelation φ of the noise, in [0, {@value #MAX_NOISE_CORRELATION}]:
+ *                            0 = white noise, otherwise a first-order autoregressive series
+ *                            scaled to the marginal SD {@code noiseSd}
+ * @param baselineWaves       slow sinusoids added to the baseline (may be empty)
+ * @param spikes              electrical spikes added to the trace (may be empty)
  */
 public record SimulationSpec(
         RunConditions conditions,
@@ -35,11 +40,22 @@ public record SimulationSpec(
         double baselineOffset,
         double driftPerS,
         double driftCurvature,
-        long seed) {
+        long seed,
+        double noiseCorrelation,
+        List<BaselineWave> baselineWaves,
+        List<Spike> spikes) {
+
+    /**
+     * Largest accepted lag-one autocorrelation of the noise; nearer to 1 the series hardly
+     * forgets its start and the marginal SD is no longer reached within a trace.
+     */
+    public static final double MAX_NOISE_CORRELATION = 0.99;
 
     public SimulationSpec {
         Objects.requireNonNull(conditions, "conditions");
         zones = List.copyOf(zones);
+        baselineWaves = List.copyOf(baselineWaves);
+        spikes = List.copyOf(spikes);
         if (!conditions.hasGeometry()) {
             throw new IllegalArgumentException("simulation needs total length, detector length and voltage");
         }
@@ -61,6 +77,16 @@ public record SimulationSpec(
         if (!Double.isFinite(baselineOffset) || !Double.isFinite(driftPerS) || !Double.isFinite(driftCurvature)) {
             throw new IllegalArgumentException("baseline offset and drifts must be finite");
         }
+        if (!(noiseCorrelation >= 0 && noiseCorrelation <= MAX_NOISE_CORRELATION)) {
+            throw new IllegalArgumentException("noise correlation must be between 0 and " + MAX_NOISE_CORRELATION
+                    + ", got " + noiseCorrelation);
+        }
+        for (Spike spike : spikes) {
+            if (spike.timeS() > durationS) {
+                throw new IllegalArgumentException("spike at " + spike.timeS() + " s lies after the end of the recording ("
+                        + durationS + " s)");
+            }
+        }
     }
 
     private static void requireNonNegative(String what, double v) {
@@ -69,7 +95,10 @@ public record SimulationSpec(
         }
     }
 
-    /** A builder with 20 Hz sampling, 600 s, no noise, flat zero baseline, no marker, seed 1. */
+    /**
+     * A builder with 20 Hz sampling, 600 s, no noise (white when an SD is set), flat zero baseline,
+     * no marker, no spikes, seed 1.
+     */
     public static Builder builder(RunConditions conditions) {
         return new Builder(conditions);
     }
@@ -78,8 +107,10 @@ public record SimulationSpec(
     public Builder toBuilder() {
         Builder b = new Builder(conditions).eofMobility(eofMobility).neutralMarker(neutralMarkerHeight)
                 .samplingHz(samplingHz).durationS(durationS).noiseSd(noiseSd).baseline(baselineOffset)
-                .drift(driftPerS, driftCurvature).seed(seed);
+                .drift(driftPerS, driftCurvature).seed(seed).noiseCorrelation(noiseCorrelation);
         zones.forEach(b::zone);
+        baselineWaves.forEach(b::baselineWave);
+        spikes.forEach(b::spike);
         return b;
     }
 
@@ -101,6 +132,9 @@ public record SimulationSpec(
         private double driftPerS;
         private double driftCurvature;
         private long seed = 1L;
+        private double noiseCorrelation;
+        private final List<BaselineWave> baselineWaves = new ArrayList<>();
+        private final List<Spike> spikes = new ArrayList<>();
 
         private Builder(RunConditions conditions) {
             this.conditions = Objects.requireNonNull(conditions, "conditions");
@@ -164,9 +198,34 @@ public record SimulationSpec(
             return this;
         }
 
+        /** Lag-one autocorrelation φ of the noise (0: white, the default). */
+        public Builder noiseCorrelation(double phi) {
+            this.noiseCorrelation = phi;
+            return this;
+        }
+
+        /** Adds a slow sinusoid to the baseline. */
+        public Builder baselineWave(BaselineWave wave) {
+            baselineWaves.add(Objects.requireNonNull(wave, "wave"));
+            return this;
+        }
+
+        /** Adds an electrical spike. */
+        public Builder spike(Spike spike) {
+            spikes.add(Objects.requireNonNull(spike, "spike"));
+            return this;
+        }
+
+        /** Removes every spike added so far. */
+        public Builder clearSpikes() {
+            spikes.clear();
+            return this;
+        }
+
         public SimulationSpec build() {
             return new SimulationSpec(conditions, eofMobility, zones, neutralMarkerHeight, samplingHz, durationS,
-                    noiseSd, baselineOffset, driftPerS, driftCurvature, seed);
+                    noiseSd, baselineOffset, driftPerS, driftCurvature, seed, noiseCorrelation, baselineWaves,
+                    spikes);
         }
     }
 }

@@ -32,6 +32,10 @@ public record TraceFileStyle(String timeHeader, String signalHeader, char delimi
     public static final TraceFileStyle MINUTES_SEMICOLON_DECIMAL_COMMA =
             new TraceFileStyle("Time (min)", "Signal", ';', true, TimeScale.MINUTES);
 
+    /** {@code Time [s]<TAB>Absorbance [mAU]}, seconds, decimal point: a tab-separated export. */
+    public static final TraceFileStyle SECONDS_TAB =
+            new TraceFileStyle("Time [s]", "Absorbance [mAU]", '\t', false, TimeScale.SECONDS);
+
     public TraceFileStyle {
         Objects.requireNonNull(timeHeader, "timeHeader");
         Objects.requireNonNull(signalHeader, "signalHeader");

@@ -29,10 +29,16 @@ import org.mobident.trace.Trace;
  * detection dips. The neutral marker (mobility 0) has {@link #MARKER_PLATES} plates and the same
  * sign as the analyte peaks (in indirect detection it stands for the system dip at the EOF time).
  *
- * <p>Baseline and noise: offset + drift·t + curvature·t², plus Gaussian white noise drawn from a
- * {@link SplittableRandom} seeded with the spec's seed through the Box–Muller transform (Box &amp;
- * Muller, Ann. Math. Statist. 29 (1958) 610), so a trace depends on the seed alone and not on the
- * JDK's own Gaussian sampler. Sampling points are at i / samplingHz from 0 to the duration.
+ * <p>Baseline and noise: offset + drift·t + curvature·t², plus any slow sinusoids of the spec
+ * ({@link BaselineWave}), plus Gaussian noise drawn from a {@link SplittableRandom} seeded with the
+ * spec's seed through the Box–Muller transform (Box &amp; Muller, Ann. Math. Statist. 29 (1958)
+ * 610), so a trace depends on the seed alone and not on the JDK's own Gaussian sampler. The noise
+ * is white, or, when the spec gives a lag-one correlation φ &gt; 0, a stationary first-order
+ * autoregressive series e_i = φ·e_{i−1} + √(1 − φ²)·σ·z_i started from e_0 = σ·z_0, whose marginal
+ * SD is σ and whose lag-k autocorrelation is φ^k (Box &amp; Jenkins, Time Series Analysis:
+ * Forecasting and Control, 1970, ch. 3). Electrical spikes ({@link Spike}) are added last, on the
+ * sampling points nearest to their times. Sampling points are at i / samplingHz from 0 to the
+ * duration.
  */
 public final class TraceSimulator {
 
@@ -104,24 +110,47 @@ public final class TraceSimulator {
             time[i] = t;
             signal[i] = spec.baselineOffset() + spec.driftPerS() * t + spec.driftCurvature() * t * t;
         }
+        for (BaselineWave wave : spec.baselineWaves()) {
+            for (int i = 0; i < n; i++) {
+                signal[i] += wave.valueAt(time[i]);
+            }
+        }
         double sign = spec.conditions().detectionOrDirect() == Detection.INDIRECT ? -1.0 : 1.0;
         for (SimulatedZone z : spec.zones()) {
-            addZone(spec, time, signal, sign * z.height(), z.mobility(), z.plates(), dispersion);
+            double strength = dispersion == null ? 0.0
+                    : z.hasOwnDispersion() ? z.dispersionStrength() : dispersion.strength();
+            addZone(spec, time, signal, sign * z.height(), z.mobility(), z.plates(), dispersion, strength);
         }
         if (spec.neutralMarkerHeight() > 0) {
-            addZone(spec, time, signal, sign * spec.neutralMarkerHeight(), 0.0, MARKER_PLATES, null);
+            addZone(spec, time, signal, sign * spec.neutralMarkerHeight(), 0.0, MARKER_PLATES, null, 0.0);
         }
         if (spec.noiseSd() > 0) {
-            addNoise(signal, spec.noiseSd(), spec.seed());
+            if (spec.noiseCorrelation() > 0) {
+                addCorrelatedNoise(signal, spec.noiseSd(), spec.noiseCorrelation(), spec.seed());
+            } else {
+                addNoise(signal, spec.noiseSd(), spec.seed());
+            }
+        }
+        for (Spike spike : spec.spikes()) {
+            int first = spikeIndex(spec, spike);
+            for (int k = 0; k < spike.widthSamples() && first + k < n; k++) {
+                signal[first + k] += spike.amplitude();
+            }
         }
         return new Trace(name, name + " (simulated)", time, signal);
+    }
+
+    /** Index of the sampling point on which {@code spike} starts: the one nearest to its time. */
+    public static int spikeIndex(SimulationSpec spec, Spike spike) {
+        return (int) Math.round(spike.timeS() * spec.samplingHz());
     }
 
     /** Slack when counting sampling points, so 600 s at 20 Hz gives exactly 12001 points. */
     private static final double RELATIVE_ROUNDING = 1e-9;
 
     private static void addZone(SimulationSpec spec, double[] time, double[] signal, double signedHeight,
-                                double mobility, double plates, ElectromigrationDispersion dispersion) {
+                                double mobility, double plates, ElectromigrationDispersion dispersion,
+                                double strength) {
         double centre = apexTimeS(spec, mobility);
         if (!Double.isFinite(centre) || centre > spec.durationS() || signedHeight == 0) {
             return;
@@ -131,7 +160,7 @@ public final class TraceSimulator {
         boolean fronting = false;
         if (dispersion != null && mobility != 0 && Math.signum(mobility) == Math.signum(dispersion.coIonMobility())) {
             double mismatch = Math.abs(mobility - dispersion.coIonMobility()) / Math.abs(dispersion.coIonMobility());
-            tau = dispersion.strength() * centre * mismatch;
+            tau = strength * centre * mismatch;
             boolean faster = Math.abs(mobility) > Math.abs(dispersion.coIonMobility());
             // Own migration towards the detector when V·μ > 0 (the apparent velocity V·(μ+μ_eof) is > 0 here).
             boolean migratesTowardsDetector = spec.conditions().voltageKv() * mobility > 0;
@@ -202,6 +231,22 @@ public final class TraceSimulator {
         }
     }
 
+    /**
+     * A stationary AR(1) series of marginal SD {@code sd} and lag-one correlation {@code phi} added to
+     * {@code signal}; the standard normals come from the same Box–Muller pairs as the white noise.
+     */
+    private static void addCorrelatedNoise(double[] signal, double sd, double phi, long seed) {
+        double[] innovations = new double[signal.length];
+        addNoise(innovations, 1.0, seed);
+        double scale = Math.sqrt(1.0 - phi * phi);
+        double e = innovations[0];
+        signal[0] += sd * e;
+        for (int i = 1; i < signal.length; i++) {
+            e = phi * e + scale * innovations[i];
+            signal[i] += sd * e;
+        }
+    }
+
     /** Writes {@code trace} as {@code time_s,signal} to a new file; refuses to replace an existing one. */
     public static void writeCsv(Trace trace, Path target) throws IOException {
         writeCsv(trace, target, false);
@@ -215,6 +260,23 @@ public final class TraceSimulator {
     /** Writes {@code trace} in the given layout, atomically through {@link SafeFiles}. */
     public static void write(Trace trace, Path target, boolean overwrite, TraceFileStyle style) throws IOException {
         SafeFiles.write(target, overwrite, out -> write(trace, out, style));
+    }
+
+    /**
+     * As {@link #write(Trace, Path, boolean, TraceFileStyle)}, with a first line {@code # comment}
+     * (trace readers skip lines that start with {@code #}).
+     *
+     * @param comment one line of text without line breaks
+     */
+    public static void write(Trace trace, Path target, boolean overwrite, TraceFileStyle style, String comment)
+            throws IOException {
+        if (comment.indexOf('\n') >= 0 || comment.indexOf('\r') >= 0) {
+            throw new IllegalArgumentException("the comment must be one line");
+        }
+        SafeFiles.write(target, overwrite, out -> {
+            out.write("# " + comment + "\n");
+            write(trace, out, style);
+        });
     }
 
     /** Writes {@code trace} as {@code time_s,signal} to {@code out} (not closed). */
