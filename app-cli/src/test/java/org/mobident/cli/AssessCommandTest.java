@@ -188,7 +188,7 @@ class AssessCommandTest {
         assertEquals(ExitCodes.SOME_RUNS_FAILED, failing.code());
         assertTrue(failing.err().contains("acceptance limit was not met"), failing.err());
         // 34 of 35 identified calls right = 0.971 < 0.98
-        assertTrue(failing.out().contains("precision >= 0.980: NOT MET (measured 0.971)"), failing.out());
+        assertTrue(failing.out().contains("precision >= 0.98: NOT MET (measured 0.9714)"), failing.out());
         List<CSVRecord> rows = csv(Files.readString(scores));
         assertEquals("1", value(rows, "identification", "all", "wrong_names"));
         assertEquals("1", value(rows, "identification", "all", "missed"));

@@ -41,7 +41,6 @@ public final class AssessmentCsv {
     private static final CSVFormat FORMAT = CSVFormat.DEFAULT.builder().setRecordSeparator("\n")
             .setQuoteMode(QuoteMode.MINIMAL).get();
     private static final String ALL = "all";
-    private static final int CONFIDENCE_DECIMALS = 3;
 
     private AssessmentCsv() {
     }
@@ -135,14 +134,14 @@ public final class AssessmentCsv {
                     CsvCells.inert(v.run()),
                     p == null ? "" : Integer.toString(p.number()),
                     p == null ? "" : CsvCells.inert(p.role()),
-                    p == null ? "" : Figures.fixed(p.apexTimeS(), Figures.TIME_DECIMALS + 2, ""),
+                    p == null ? "" : Figures.fixed(p.apexTimeS(), Figures.TABLE_TIME_DECIMALS, ""),
                     p == null ? "" : p.status().label(),
                     p == null ? "" : CsvCells.inert(p.assigned()),
-                    p == null ? "" : Figures.fixed(p.confidence(), CONFIDENCE_DECIMALS, ""),
+                    p == null ? "" : Figures.fixed(p.confidence(), Figures.CONFIDENCE_DECIMALS, ""),
                     k == null || k.line() <= 0 ? "" : Long.toString(k.line()),
                     k == null ? "" : k.kind().label(),
                     k == null ? "" : CsvCells.inert(k.name()),
-                    k == null ? "" : Figures.fixed(k.timeS(), Figures.TIME_DECIMALS + 2, ""),
+                    k == null ? "" : Figures.fixed(k.timeS(), Figures.TABLE_TIME_DECIMALS, ""),
                     v.how() == null ? "" : v.how().label(),
                     v.verdict().label());
         }

@@ -62,12 +62,12 @@ public final class AssessmentText {
         out.flush();
     }
 
-    /** "precision >= 0.950: met (measured 1.000)". */
+    /** "precision >= 0.95: met (measured 1.0000)". */
     static String limitLine(AcceptanceLimits.Check c) {
         String value = Double.isNaN(c.value()) ? "cannot be measured (nothing to count)"
-                : "measured " + Figures.fixed(c.value(), Figures.CONFIDENCE_DECIMALS, NONE);
-        return c.name() + (c.atLeast() ? " >= " : " <= ") + Figures.fixed(c.limit(), Figures.CONFIDENCE_DECIMALS, NONE)
-                + ": " + (c.met() ? "met" : "NOT MET") + " (" + value + ")";
+                : "measured " + Figures.fixed(c.value(), Figures.FRACTION_DECIMALS, NONE);
+        return c.name() + (c.atLeast() ? " >= " : " <= ") + Figures.plain(c.limit()) + ": "
+                + (c.met() ? "met" : "NOT MET") + " (" + value + ")";
     }
 
     private static void identification(Identification id, PrintWriter out) {

@@ -20,8 +20,8 @@ final class Figures {
     static final int MOBILITY_DECIMALS = 4;
     /** Decimals of mobility errors in the terminal and the page. */
     static final int MOBILITY_ERROR_DECIMALS = 3;
-    /** Decimals of times, s. */
-    static final int TIME_DECIMALS = 2;
+    /** Decimals of times in tables, s (as in the peak table). */
+    static final int TABLE_TIME_DECIMALS = 4;
 
     private static final double PERCENT = 100.0;
 
@@ -51,6 +51,11 @@ final class Figures {
     /** "35 of 36". */
     static String counted(Ratio r) {
         return r.count() + " of " + r.of();
+    }
+
+    /** A limit as the user gave it, without trailing zeros ("0.95"). */
+    static String plain(double value) {
+        return java.math.BigDecimal.valueOf(value).stripTrailingZeros().toPlainString();
     }
 
     /** "0.9-1.0": a reliability bin's edges. */

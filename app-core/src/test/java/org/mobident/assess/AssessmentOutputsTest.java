@@ -90,7 +90,7 @@ class AssessmentOutputsTest {
         assertTrue(text.contains("precision of identified calls    60.0 %  3 of 5 right"), text);
         assertTrue(text.contains("ECE 0.352, Brier score 0.2192"), text);
         assertTrue(text.contains("1e-9 m^2/(V s)"), "mobility unit stated");
-        assertTrue(text.contains("recall >= 0.500: NOT MET (measured 0.333)"), text);
+        assertTrue(text.contains("recall >= 0.5: NOT MET (measured 0.3333)"), text);
         assertTrue(text.contains("r6: the neutral marker chosen is at 250.00 s; the known marker is at 300.00 s"));
         assertFalse(text.matches("(?s).*\\d\\.\\d{6,}.*"), "no long decimals:\n" + text);
     }
