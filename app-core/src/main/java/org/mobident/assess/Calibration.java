@@ -10,7 +10,7 @@ import java.util.List;
  *   <li><b>Reliability table</b>: the predictions in {@link #BINS} equal-width confidence bins
  *       [0, 0.1), [0.1, 0.2), …, [0.9, 1] with their count, mean confidence and observed accuracy.</li>
  *   <li><b>Expected calibration error</b> ECE = Σ_b (n_b / N) · |acc_b − conf_b| over those bins
- *       (Naeini, Cooper &amp; Hauskrecht, AAAI 2015; Guo, Pleiss, Sun &amp; Weinberger, ICML 2017, eq. 3).</li>
+ *       (Naeini, Cooper &amp; Hauskrecht, AAAI 2015; Guo, Pleiss, Sun &amp; Weinberger, ICML 2017).</li>
  *   <li><b>Brier score</b> = (1/N) · Σ_i (p_i − o_i)², with p_i the stated confidence and o_i 1 when the
  *       statement was right, 0 otherwise (Brier, Monthly Weather Review 78 (1950) 1–3, for the one event
  *       "the statement is right"; Brier's two-class sum counts each prediction twice and is twice this).</li>
@@ -26,7 +26,7 @@ import java.util.List;
 public record Calibration(int count, double meanConfidence, double accuracy, double ece, double brier,
                           List<ReliabilityBin> bins) {
 
-    /** Number of equal-width confidence bins (Guo et al. 2017 use 15; ten is the customary table). */
+    /** Number of equal-width confidence bins of the reliability table. */
     public static final int BINS = 10;
 
     public Calibration {

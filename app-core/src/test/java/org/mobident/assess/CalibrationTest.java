@@ -9,7 +9,7 @@ import org.junit.jupiter.api.Test;
 /**
  * Expected calibration error and Brier score on a hand-worked example. Definitions: ECE =
  * Σ_b (n_b/N)·|acc_b − conf_b| over equal-width confidence bins (Naeini, Cooper &amp; Hauskrecht,
- * AAAI 2015; Guo, Pleiss, Sun &amp; Weinberger, ICML 2017, eq. 3); Brier score = (1/N)·Σ (p − o)²
+ * AAAI 2015; Guo, Pleiss, Sun &amp; Weinberger, ICML 2017); Brier score = (1/N)·Σ (p − o)²
  * for the event "the statement is right" (Brier, Mon. Weather Rev. 78 (1950) 1).
  */
 class CalibrationTest {
