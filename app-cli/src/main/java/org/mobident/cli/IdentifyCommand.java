@@ -43,6 +43,11 @@ public final class IdentifyCommand implements Callable<Integer> {
     @Option(names = "--html", paramLabel = "FILE", description = "Write a self-contained HTML report with plots.")
     Path htmlOut;
 
+    @Option(names = "--known", paramLabel = "FILE",
+            description = "Known-identities table: score the results against it as 'assess' does, print the scores "
+                    + "and add them to the --html report.")
+    Path knownFile;
+
     @Option(names = "--overwrite", description = "Replace output files that already exist.")
     boolean overwrite;
 
@@ -58,10 +63,15 @@ public final class IdentifyCommand implements Callable<Integer> {
             return ExitCodes.USAGE;
         }
         Outputs.checkFree(overwrite, csvOut, jsonOut, htmlOut);
+        KnownScores known = KnownScores.read(knownFile);
         BatchOptions.Batch done = batch.identify();
         var results = done.results();
+        KnownScores scored = known == null ? null : known.score(results, done.library());
         if (!quiet) {
             RunSummaryText.write(results, out);
+            if (scored != null) {
+                scored.print(out);
+            }
         }
         if (csvOut != null) {
             Outputs.write(csvOut, overwrite, w -> PeakTableCsv.write(results, w));
@@ -72,7 +82,7 @@ public final class IdentifyCommand implements Callable<Integer> {
         if (htmlOut != null) {
             var traces = done.traces();
             Outputs.write(htmlOut, overwrite, w -> HtmlReport.write(results, traces, done.library(),
-                    Outputs.htmlOptions(), w));
+                    Outputs.htmlOptions(), KnownScores.sections(scored), w));
         }
         return Outputs.reportRunProblems(results, err);
     }

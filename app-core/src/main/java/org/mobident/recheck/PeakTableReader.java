@@ -26,10 +26,12 @@ import org.mobident.report.CsvCells;
 
 /**
  * Reads back the peak table CSV that Mobident writes ({@link org.mobident.report.PeakTableCsv}),
- * keeping only what a recheck needs: run, peak, role, mobility, mobility_sd,
- * mobility_at_library_temp, assigned, confidence, status.
+ * keeping only what a recheck or a scoring needs: run, peak, role, mobility, mobility_sd,
+ * mobility_at_library_temp, assigned, confidence, status, and when present apex_time_s,
+ * width_half_s, signal_to_noise and mobility_corrected.
  *
- * <p>The header must name those columns (any case, any order; other columns are ignored). Text
+ * <p>The header must name the required columns (any case, any order; the optional ones are read
+ * when present, other columns are ignored). Text
  * cells that the writer made spreadsheet-safe ({@link CsvCells#inert}: a leading apostrophe
  * before {@code = + - @}, tab or carriage return) are read back without the apostrophe. Numbers
  * use a decimal point; an empty cell is unknown. Every problem raises an {@link InputException}
@@ -40,6 +42,10 @@ public final class PeakTableReader {
     /** The columns that must be present. */
     public static final List<String> REQUIRED = List.of("run", "peak", "role", "mobility", "mobility_sd",
             "mobility_at_library_temp", "assigned", "confidence", "status");
+
+    /** Columns read when the table has them; an empty or absent one reads as unknown (NaN). */
+    public static final List<String> OPTIONAL = List.of("apex_time_s", "width_half_s", "signal_to_noise",
+            "mobility_corrected");
 
     /** Status values the writer produces. */
     public static final Set<String> STATUSES = Set.of("identified", "ambiguous", "unassigned", "marker", "failed",
@@ -99,7 +105,7 @@ public final class PeakTableReader {
             text = " " + text.substring(1);
         }
         if (text.strip().startsWith("{")) {
-            throw new InputException(label, 1, null, "this looks like the JSON peak table; recheck reads the CSV "
+            throw new InputException(label, 1, null, "this looks like the JSON peak table; give the CSV "
                     + "peak table (write it with 'identify --csv')");
         }
         int[] lineStarts = lineStarts(text);
@@ -188,7 +194,7 @@ public final class PeakTableReader {
         Map<String, Integer> column = new HashMap<>();
         for (int i = 0; i < rec.size(); i++) {
             String name = rec.get(i).strip().toLowerCase(Locale.ROOT);
-            if (column.putIfAbsent(name, i) != null && REQUIRED.contains(name)) {
+            if (column.putIfAbsent(name, i) != null && (REQUIRED.contains(name) || OPTIONAL.contains(name))) {
                 throw new InputException(label, line, name, "column '" + name + "' appears twice");
             }
         }
@@ -241,7 +247,16 @@ public final class PeakTableReader {
         }
         return new PeakTableRow(line, run, peak, role == null ? "" : role.toLowerCase(Locale.ROOT),
                 number(rec, column, "mobility", label, line), sd,
-                number(rec, column, "mobility_at_library_temp", label, line), assigned, confidence, status);
+                number(rec, column, "mobility_at_library_temp", label, line), assigned, confidence, status,
+                optional(rec, column, "apex_time_s", label, line), optional(rec, column, "width_half_s", label, line),
+                optional(rec, column, "signal_to_noise", label, line),
+                optional(rec, column, "mobility_corrected", label, line));
+    }
+
+    /** An optional numeric column: NaN when the table has no such column. */
+    private static double optional(CSVRecord rec, Map<String, Integer> column, String name, String label, long line)
+            throws InputException {
+        return column.containsKey(name) ? number(rec, column, name, label, line) : Double.NaN;
     }
 
     /** The cell, trimmed, with the spreadsheet-safety apostrophe removed; null when empty or absent. */

@@ -1,7 +1,7 @@
 package org.mobident.recheck;
 
 /**
- * The part of one row of Mobident's peak table that a recheck needs (see
+ * The part of one row of Mobident's peak table that a recheck or a scoring needs (see
  * {@link org.mobident.report.PeakTableCsv} for the whole table).
  *
  * @param line                  1-based line of the row in its file (0 when built in code)
@@ -14,9 +14,22 @@ package org.mobident.recheck;
  * @param assigned              assigned analyte, or null
  * @param confidence            confidence of the assignment, NaN when empty
  * @param status                identified, ambiguous, unassigned, marker, failed or no_peaks
+ * @param apexTimeS             apex time, s; NaN when empty or the table has no such column
+ * @param widthHalfS            full width at half height, s; NaN when empty or absent
+ * @param signalToNoise         signal-to-noise ratio; NaN when empty or absent
+ * @param mobilityCorrected     mobility after the run's scale correction, at the library temperature,
+ *                              1e-9 m²/(V s); NaN when empty or absent (tables of earlier versions)
  */
 public record PeakTableRow(long line, String run, int peak, String role, double mobility, double mobilitySd,
-                           double mobilityAtLibraryTemp, String assigned, double confidence, String status) {
+                           double mobilityAtLibraryTemp, String assigned, double confidence, String status,
+                           double apexTimeS, double widthHalfS, double signalToNoise, double mobilityCorrected) {
+
+    /** A row without the peak measures and the corrected mobility (as a recheck needs it). */
+    public PeakTableRow(long line, String run, int peak, String role, double mobility, double mobilitySd,
+                        double mobilityAtLibraryTemp, String assigned, double confidence, String status) {
+        this(line, run, peak, role, mobility, mobilitySd, mobilityAtLibraryTemp, assigned, confidence, status,
+                Double.NaN, Double.NaN, Double.NaN, Double.NaN);
+    }
 
     /** Role label of an analyte peak. */
     public static final String ROLE_ANALYTE = "analyte";

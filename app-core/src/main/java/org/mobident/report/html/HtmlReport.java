@@ -126,7 +126,16 @@ public final class HtmlReport {
     /** Writes the report; see {@link #write(List, Map, Library, Writer)}. */
     public static void write(List<RunResult> results, Map<String, Trace> tracesByRun, Library library,
                              Options options, Writer out) throws IOException {
-        out.write(render(results, tracesByRun, library, options));
+        write(results, tracesByRun, library, options, List.of(), out);
+    }
+
+    /**
+     * Writes the report with extra sections (such as scores against known identities), placed after
+     * the batch summary; see {@link #write(List, Map, Library, Writer)}.
+     */
+    public static void write(List<RunResult> results, Map<String, Trace> tracesByRun, Library library,
+                             Options options, List<HtmlSection> sections, Writer out) throws IOException {
+        out.write(render(results, tracesByRun, library, options, sections));
         out.flush();
     }
 
@@ -140,7 +149,14 @@ public final class HtmlReport {
     /** The whole page as a string. */
     public static String render(List<RunResult> results, Map<String, Trace> tracesByRun, Library library,
                                 Options options) {
+        return render(results, tracesByRun, library, options, List.of());
+    }
+
+    /** The whole page as a string, with extra sections after the batch summary. */
+    public static String render(List<RunResult> results, Map<String, Trace> tracesByRun, Library library,
+                                Options options, List<HtmlSection> sections) {
         Objects.requireNonNull(results, "results");
+        Objects.requireNonNull(sections, "sections");
         Objects.requireNonNull(options, "options");
         Map<String, Trace> traces = tracesByRun == null ? Map.of() : tracesByRun;
         StringBuilder sb = new StringBuilder(256 * 1024);
@@ -155,6 +171,9 @@ public final class HtmlReport {
         header(sb, results, library, options);
         sb.append("<main>\n");
         summary(sb, results);
+        for (HtmlSection section : sections) {
+            sb.append(section.markup());
+        }
         overlay(sb, results, traces, library);
         for (int i = 0; i < results.size(); i++) {
             run(sb, i + 1, results.get(i), traces, library);
