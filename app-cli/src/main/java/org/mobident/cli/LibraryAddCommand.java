@@ -61,6 +61,7 @@ public final class LibraryAddCommand implements Callable<Integer> {
             out.println("  - " + w.message());
         }
         out.println("library " + libraryFile + " updated; previous version kept as " + libraryFile + ".prev");
-        return fresh.warnings().isEmpty() && merged.warnings().isEmpty() ? ExitCodes.OK : ExitCodes.SOME_RUNS_FAILED;
+        return BuildWarning.anyWarning(fresh.warnings()) || BuildWarning.anyWarning(merged.warnings())
+                ? ExitCodes.SOME_RUNS_FAILED : ExitCodes.OK;
     }
 }

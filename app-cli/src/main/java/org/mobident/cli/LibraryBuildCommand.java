@@ -8,6 +8,7 @@ import org.mobident.io.SafeFiles;
 import org.mobident.library.LibraryCsv;
 import org.mobident.library.build.BuildResult;
 import org.mobident.library.build.BuildText;
+import org.mobident.library.build.BuildWarning;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
@@ -48,7 +49,7 @@ public final class LibraryBuildCommand implements Callable<Integer> {
         BuildText.write(result, spec.commandLine().getOut());
         writeLibrary(out, overwrite, result.library());
         spec.commandLine().getOut().println("library written to " + out + " (" + result.library().size() + " analytes)");
-        return result.warnings().isEmpty() ? ExitCodes.OK : ExitCodes.SOME_RUNS_FAILED;
+        return BuildWarning.anyWarning(result.warnings()) ? ExitCodes.SOME_RUNS_FAILED : ExitCodes.OK;
     }
 
     /** Writes atomically; an existing file is replaced only when allowed, and kept as .prev. */

@@ -28,11 +28,15 @@ public final class LibraryCheckCommand implements Callable<Integer> {
     @Parameters(paramLabel = "LIBRARY", description = "The library file.")
     Path libraryFile;
 
+    @picocli.CommandLine.Mixin
+    MatchOptions matching;
+
     @Override
     public Integer call() throws Exception {
         Library library = LibraryCsv.read(libraryFile);
-        List<BuildWarning> findings = LibraryCheck.check(library, BuildSettings.defaults());
-        BuildText.write(library, findings, BuildSettings.defaults(), spec.commandLine().getOut());
-        return findings.isEmpty() ? ExitCodes.OK : ExitCodes.SOME_RUNS_FAILED;
+        org.mobident.matching.MatchSettings match = matching.toSettings(org.mobident.matching.MatchSettings.DEFAULT);
+        List<BuildWarning> findings = LibraryCheck.check(library, BuildSettings.defaults(), match);
+        BuildText.write(library, findings, match, spec.commandLine().getOut());
+        return BuildWarning.anyWarning(findings) ? ExitCodes.SOME_RUNS_FAILED : ExitCodes.OK;
     }
 }

@@ -65,12 +65,14 @@ public final class StandardsOptions {
     @Option(names = "--drop-outliers", description = "Leave Grubbs outliers out of the statistics (they are always reported).")
     boolean dropOutliers;
 
-    @Option(names = "--window-k", paramLabel = "K",
-            description = "Match window written to the library: ± K replicate standard deviations (default 3).")
+    @Option(names = "--fixed-window-k", paramLabel = "K",
+            description = "Write a fixed match window into the library: ± K replicate standard deviations "
+                    + "(with --fixed-window-floor, default 0.5). Without either, no window is written and "
+                    + "identification applies its prediction interval, which a fixed window would replace.")
     Double windowK;
 
-    @Option(names = "--window-floor", paramLabel = "MOB",
-            description = "Smallest half-width of that window, mobility units (default 0.5).")
+    @Option(names = "--fixed-window-floor", paramLabel = "MOB",
+            description = "Smallest half-width of that fixed window, mobility units (with --fixed-window-k, default 3).")
     Double windowFloor;
 
     /** Processes the standards runs and builds a library from them. */
@@ -117,8 +119,8 @@ public final class StandardsOptions {
                         Grubbs.Alternative.TWO_SIDED, dropOutliers);
             }
             if (windowK != null || windowFloor != null) {
-                s = s.withTolerance(windowK != null ? windowK : s.toleranceSdMultiple(),
-                        windowFloor != null ? windowFloor : s.toleranceFloor());
+                s = s.withTolerance(windowK != null ? windowK : BuildSettings.DEFAULT_FIXED_WINDOW_K,
+                        windowFloor != null ? windowFloor : BuildSettings.DEFAULT_FIXED_WINDOW_FLOOR);
             }
         } catch (IllegalArgumentException e) {
             throw new picocli.CommandLine.ParameterException(new picocli.CommandLine(this), e.getMessage());

@@ -42,8 +42,8 @@ public record Library(List<LibraryEntry> entries, String sourceFile, List<String
         this(entries, sourceFile, notes, List.of());
     }
 
-    /** The uniqueness key of an entry: its name within its buffer. */
-    static String key(LibraryEntry e) {
+    /** The uniqueness key of an entry: its name within its buffer (case and spaces of the label ignored). */
+    public static String key(LibraryEntry e) {
         return e.name() + "\u0000" + (e.buffer() == null ? "" : e.buffer().trim().toLowerCase(Locale.ROOT));
     }
 

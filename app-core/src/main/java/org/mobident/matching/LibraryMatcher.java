@@ -42,7 +42,7 @@ import org.mobident.library.LibraryEntry;
  *       assignment then has posterior odds, against "every peak foreign", equal to the product
  *       over its pairs of ρ_ij = q_j·f(r_ij) / ((1 − q_j)·λ). q and λ come from the prior share
  *       π₀ of peaks not in the library ({@link MatchSettings#notInLibraryPrior()}), the range W
- *       they spread over, the number P of peaks and the library size M: the expected number of
+ *       they spread over ({@link MatchSettings#notInLibraryRange}), the number P of peaks and the library size M: the expected number of
  *       library peaks is L = min((1 − π₀)·P, {@value #MAX_PRESENCE}·M), q = L/M and
  *       λ = (P − L)/W; an entry the lab marks as internal standard has q = {@value #INTERNAL_STANDARD_PRESENCE}.</li>
  * </ul>
@@ -59,8 +59,9 @@ import org.mobident.library.LibraryEntry;
  * matrix is the covariance of (a, b). Each refined mode is weighed by its Laplace approximation
  * of the evidence, ln Z(a*, b*) + ln p(a*, b*) + ln 2π + ½ ln det Σ (MacKay, Information Theory,
  * Inference and Learning Algorithms, 2003, ch. 27), with Z the exact sum over one-to-one
- * assignments. A mode whose fit rests on fewer than {@value #MIN_ANCHORS} expected peaks is not
- * used: the run then keeps a = 1, b = 0 and the prior's uncertainty enters every match.
+ * assignments. When the best mode rests on fewer than {@value #MIN_ANCHORS} expected peaks, the run is
+ * reported as not corrected (its mobilities compared at the prior's centre); its matches still weigh
+ * every way its few peaks could fit within the prior.
  *
  * <h2>Assignment and confidence</h2>
  * The reported assignment is the most probable joint one under the best mode, found exactly as a
@@ -100,8 +101,11 @@ public final class LibraryMatcher {
     static final double SAME_MODE_FACTOR = 1e-3;
     /** Two refined modes closer than this in b are the same, mobility units. */
     static final double SAME_MODE_OFFSET = 0.05;
-    /** Fewest expected matched peaks for a fitted scale (two, with the prior, as the two-parameter line needs). */
-    static final double MIN_ANCHORS = 2.0;
+    /**
+     * Fewest expected matched peaks for a fitted scale: two peaks matched with good probability (with
+     * the prior, the two-parameter line needs two).
+     */
+    static final double MIN_ANCHORS = 1.5;
     /** Modes with less weight than this are dropped from the mixture. */
     static final double NEGLIGIBLE_MODE_WEIGHT = 1e-6;
 
@@ -154,12 +158,12 @@ public final class LibraryMatcher {
      * @param peaks   number of peaks with a known mobility
      * @param entries library size
      */
-    static double logPriorOdds(int peaks, int entries, MatchSettings s) {
+    static double logPriorOdds(int peaks, int entries, MatchSettings s, double rangeUnits) {
         if (peaks == 0 || entries == 0) {
             return Double.NaN;
         }
         double presence = presence(peaks, entries, s);
-        return Math.log(presence) - Math.log1p(-presence) - Math.log(foreignDensity(peaks, entries, s));
+        return Math.log(presence) - Math.log1p(-presence) - Math.log(foreignDensity(peaks, entries, s, rangeUnits));
     }
 
     private static double presence(int peaks, int entries, MatchSettings s) {
@@ -170,8 +174,21 @@ public final class LibraryMatcher {
         return Math.min((1.0 - s.notInLibraryPrior()) * peaks, MAX_PRESENCE * entries);
     }
 
-    private static double foreignDensity(int peaks, int entries, MatchSettings s) {
-        return (peaks - libraryPeaks(peaks, entries, s)) / s.notInLibraryRangeUnits();
+    private static double foreignDensity(int peaks, int entries, MatchSettings s, double rangeUnits) {
+        return (peaks - libraryPeaks(peaks, entries, s)) / rangeUnits;
+    }
+
+    /** The range of unknown peaks for these entries ({@link MatchSettings#notInLibraryRange}). */
+    static double range(List<LibraryEntry> entries, MatchSettings s) {
+        double lo = Double.POSITIVE_INFINITY;
+        double hi = Double.NEGATIVE_INFINITY;
+        for (LibraryEntry e : entries) {
+            if (Double.isFinite(e.mobility())) {
+                lo = Math.min(lo, e.mobility());
+                hi = Math.max(hi, e.mobility());
+            }
+        }
+        return s.notInLibraryRange(lo, hi);
     }
 
     /**
@@ -303,8 +320,9 @@ public final class LibraryMatcher {
             }
             entryMobility = new double[m];
             logOdds = new double[m];
-            double ordinary = logPriorOdds(known, m, s);
-            double logForeign = known > 0 && m > 0 ? Math.log(foreignDensity(known, m, s)) : Double.NaN;
+            double rangeUnits = range(entries, s);
+            double ordinary = logPriorOdds(known, m, s, rangeUnits);
+            double logForeign = known > 0 && m > 0 ? Math.log(foreignDensity(known, m, s, rangeUnits)) : Double.NaN;
             for (int j = 0; j < m; j++) {
                 LibraryEntry e = entries.get(j);
                 entryMobility[j] = e.mobility();
@@ -338,7 +356,8 @@ public final class LibraryMatcher {
                         if (prior == null) {
                             reach = window(j, peakVariance[i]);
                         } else {
-                            double priorVar = RunScale.prior(prior, 0).varianceAt(e.mobility());
+                            double priorVar = RunScale.prior(ScalePrior.DEFAULT, 0).varianceAt(e.mobility())
+                                    + RunScale.prior(prior, 0).varianceAt(e.mobility());
                             reach = prior.maxFactorDeviation() * Math.abs(e.mobility()) + prior.maxOffset()
                                     + window(j, peakVariance[i] + priorVar) * (1 + prior.maxFactorDeviation());
                         }
@@ -392,19 +411,12 @@ public final class LibraryMatcher {
                 modes.add(evaluate(RunScale.OFF, false));
             } else {
                 for (Fit f : searchModes(prior)) {
-                    if (f.anchors() >= MIN_ANCHORS && prior.plausible(f.factor(), f.offset())) {
+                    if (prior.plausible(f.factor(), f.offset())) {
                         modes.add(evaluate(f.toScale(RunScale.Status.FITTED), true));
                     }
                 }
                 if (modes.isEmpty()) {
-                    double anchors = 0;
-                    Mode m = evaluate(RunScale.prior(prior, 0), false);
-                    for (double[] row : m.marginal()) {
-                        for (int k = 1; k < row.length; k++) {
-                            anchors += row[k];
-                        }
-                    }
-                    modes.add(new Mode(RunScale.prior(prior, anchors), m.pairs(), m.marginal(), m.logEvidence()));
+                    modes.add(evaluate(RunScale.prior(prior, 0), false));
                 }
             }
             return combine(modes);
@@ -512,8 +524,8 @@ public final class LibraryMatcher {
                 h11 = ia2;
                 h12 = 0;
                 h22 = ib2;
-                double g1 = ia2;
-                double g2 = 0;
+                double g1 = ia2 * prior.factorCentre();
+                double g2 = ib2 * prior.offsetCentre();
                 anchors = 0;
                 for (int i = 0; i < peaks; i++) {
                     int[] pe = pairEntry[i];
@@ -707,7 +719,13 @@ public final class LibraryMatcher {
             for (int i = 0; i < peaks; i++) {
                 out.add(result(i, modes, weight, bestMode, assigned[i]));
             }
-            return new RunMatch(out, best.scale(), logEvidence, carrying);
+            RunScale reported = best.scale();
+            if (reported.fitted() && reported.anchors() < MIN_ANCHORS) {
+                // one matched peak cannot pin a scale: report the run as not corrected (its matches still
+                // weigh every way the peak could fit, with the prior's uncertainty)
+                reported = RunScale.prior(s.scalePrior(), reported.anchors());
+            }
+            return new RunMatch(out, reported, logEvidence, carrying);
         }
 
         /** One peak's match, its probabilities averaged over the weighted modes. */

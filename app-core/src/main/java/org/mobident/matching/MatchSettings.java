@@ -35,7 +35,8 @@ package org.mobident.matching;
  * @param minimumWindow           floor of the relative and spread windows, mobility units
  * @param notInLibraryPrior       prior fraction of peaks that are not in the library, in (0, 1)
  * @param notInLibraryRangeUnits  width of the mobility range over which an unknown peak is
- *                                assumed uniformly spread, mobility units
+ *                                assumed uniformly spread, mobility units; NaN: the library's own span
+ *                                widened by a margin (see {@link #DEFAULT_NOT_IN_LIBRARY_RANGE})
  * @param assumedEntrySd          spread used for entries without {@code mobility_sd}, mobility units
  * @param sdFloor                 standard uncertainty added in quadrature, mobility units
  * @param ambiguityRatio          runner-up / assigned probability ratio at which a match is ambiguous
@@ -71,8 +72,16 @@ public record MatchSettings(WindowRule windowRule, double windowValue, double mi
     public static final double DEFAULT_RELATIVE_WINDOW = 0.02;
     /** Prior that a peak is not in the library (`common practice` for screening runs). */
     public static final double DEFAULT_NOT_IN_LIBRARY_PRIOR = 0.2;
-    /** Unknown peaks are spread over about −100 … +100 mobility units (small ions in water). */
-    public static final double DEFAULT_NOT_IN_LIBRARY_RANGE = 200.0;
+    /**
+     * NaN: unknown peaks are taken as spread over the library's own mobility range, widened by
+     * {@link #RANGE_MARGIN_UNITS} on each side (at least {@link #MIN_RANGE_UNITS}): peaks of a run
+     * appear where the method separates, not over every mobility an ion could have.
+     */
+    public static final double DEFAULT_NOT_IN_LIBRARY_RANGE = Double.NaN;
+    /** Margin added on each side of the library's mobility span for the range of unknown peaks (a modelling choice). */
+    public static final double RANGE_MARGIN_UNITS = 10.0;
+    /** Smallest range of unknown peaks, mobility units (a modelling choice). */
+    public static final double MIN_RANGE_UNITS = 20.0;
     /** Spread assumed for entries without one: 1 unit, ≈2 % of a typical |μ| of 50 (`common practice`). */
     public static final double DEFAULT_ASSUMED_ENTRY_SD = 1.0;
     /** Standard uncertainty added in quadrature: 0.05 units (rounding of tabulated values). */
@@ -113,7 +122,9 @@ public record MatchSettings(WindowRule windowRule, double windowValue, double mi
             throw new IllegalArgumentException("notInLibraryPrior must lie strictly between 0 and 1, got "
                     + notInLibraryPrior);
         }
-        requirePositive("notInLibraryRangeUnits", notInLibraryRangeUnits);
+        if (!Double.isNaN(notInLibraryRangeUnits)) {
+            requirePositive("notInLibraryRangeUnits", notInLibraryRangeUnits);
+        }
         requirePositive("assumedEntrySd", assumedEntrySd);
         requirePositive("sdFloor", sdFloor);
         if (!(ambiguityRatio > 0 && ambiguityRatio <= 1)) {
@@ -126,6 +137,15 @@ public record MatchSettings(WindowRule windowRule, double windowValue, double mi
         if (!(sessionRsd >= 0 && sessionRsd < 1)) {
             throw new IllegalArgumentException("sessionRsd must lie in [0, 1), got " + sessionRsd);
         }
+    }
+
+    /** The range over which unknown peaks are spread for a library whose mobilities span [low, high]. */
+    public double notInLibraryRange(double lowMobility, double highMobility) {
+        if (!Double.isNaN(notInLibraryRangeUnits)) {
+            return notInLibraryRangeUnits;
+        }
+        double span = Double.isFinite(highMobility - lowMobility) ? highMobility - lowMobility : 0.0;
+        return Math.max(span + 2 * RANGE_MARGIN_UNITS, MIN_RANGE_UNITS);
     }
 
     /** True when each run's mobility scale is corrected from its matched peaks. */

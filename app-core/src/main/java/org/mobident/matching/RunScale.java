@@ -21,7 +21,7 @@ public record RunScale(Status status, double factor, double factorSd, double off
     public enum Status {
         /** Fitted from the run's matched peaks. */
         FITTED("fitted"),
-        /** Too few peaks matched to fit it: left at a = 1, b = 0 with the prior's uncertainty. */
+        /** Too few peaks matched to fit it: left at the prior's centre with the prior's uncertainty. */
         TOO_FEW_ANCHORS("too few matched peaks"),
         /** Scale correction switched off. */
         OFF("off");
@@ -50,9 +50,10 @@ public record RunScale(Status status, double factor, double factorSd, double off
         }
     }
 
-    /** Not fitted: a = 1, b = 0, with the prior's uncertainty. */
+    /** Not fitted: the prior's centre (a = 1, b = 0 unless a batch showed otherwise), with the prior's uncertainty. */
     static RunScale prior(ScalePrior p, double anchors) {
-        return new RunScale(Status.TOO_FEW_ANCHORS, 1.0, p.factorSd(), 0.0, p.offsetSd(), 0.0, anchors);
+        return new RunScale(Status.TOO_FEW_ANCHORS, p.factorCentre(), p.factorSd(), p.offsetCentre(), p.offsetSd(),
+                0.0, anchors);
     }
 
     /** A run mobility (at the library's temperature) as compared with the library: (μ − b)/a. */

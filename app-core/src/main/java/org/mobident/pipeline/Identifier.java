@@ -3,6 +3,7 @@ package org.mobident.pipeline;
 import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.HashMap;
+import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
@@ -23,6 +24,7 @@ import org.mobident.matching.RunScale;
 import org.mobident.matching.SpreadModel;
 import org.mobident.mobility.MobilityMath;
 import org.mobident.mobility.MobilityScale;
+import org.mobident.mobility.PhysicalBounds;
 import org.mobident.signal.Peak;
 import org.mobident.signal.PeakDetector;
 import org.mobident.signal.TraceAnalysis;
@@ -80,16 +82,62 @@ public final class Identifier {
     /**
      * Processes the runs, several at once (at most {@code settings.threads()} traces in memory),
      * and returns their results in the order given.
+     *
+     * <p>Two passes: the first detects every run's peaks and matches them with the settings' scale
+     * prior; when a buffer's runs then show with enough of them how their scales scatter
+     * ({@link BatchScalePrior}), the second matches that buffer's runs again (peaks are kept, traces
+     * are not read twice) with the prior learned from the batch, so that runs with few peaks borrow
+     * the certainty of the others.
      */
     public List<RunResult> identifyAll(List<RunSpec> runs) {
         if (runs.isEmpty()) {
             return List.of();
         }
-        int threads = Math.min(settings.threads(), runs.size());
-        if (threads == 1) {
-            List<RunResult> out = new ArrayList<>(runs.size());
-            for (RunSpec r : runs) {
-                out.add(identify(r));
+        List<Detected> detected = parallel(runs, this::detect,
+                (spec, e) -> new Detected(spec, RunResult.failure(spec, e), List.of(), Double.NaN));
+        List<RunResult> first = parallel(detected, d -> finish(d, null),
+                (d, e) -> RunResult.failure(d.run(), e));
+        Map<String, BatchScalePrior.Learned> learned = new HashMap<>();
+        MatchSettings ms = settings.matchSettings();
+        if (ms.fitsScale()) {
+            Map<String, List<RunResult>> groups = new LinkedHashMap<>();
+            for (RunResult r : first) {
+                if (!r.failed()) {
+                    groups.computeIfAbsent(bufferKey(r.spec().conditions().buffer()), k -> new ArrayList<>()).add(r);
+                }
+            }
+            for (Map.Entry<String, List<RunResult>> g : groups.entrySet()) {
+                BatchScalePrior.learn(g.getValue(), ms.scalePrior()).ifPresent(l -> learned.put(g.getKey(), l));
+            }
+        }
+        if (learned.isEmpty()) {
+            return first;
+        }
+        List<Integer> again = new ArrayList<>();
+        for (int i = 0; i < detected.size(); i++) {
+            Detected d = detected.get(i);
+            if (d.failure() == null && learned.containsKey(bufferKey(d.run().conditions().buffer()))) {
+                again.add(i);
+            }
+        }
+        List<RunResult> second = parallel(again, i -> finish(detected.get(i),
+                        learned.get(bufferKey(detected.get(i).run().conditions().buffer()))),
+                (i, e) -> first.get(i));
+        List<RunResult> out = new ArrayList<>(first);
+        for (int k = 0; k < again.size(); k++) {
+            out.set(again.get(k), second.get(k));
+        }
+        return out;
+    }
+
+    /** Applies {@code work} to every item, several at once, keeping the order; a crash becomes {@code onCrash}. */
+    private <T, R> List<R> parallel(List<T> items, java.util.function.Function<T, R> work,
+                                    java.util.function.BiFunction<T, InputException, R> onCrash) {
+        int threads = Math.min(settings.threads(), items.size());
+        List<R> out = new ArrayList<>(items.size());
+        if (threads <= 1) {
+            for (T item : items) {
+                out.add(work.apply(item));
             }
             return out;
         }
@@ -99,29 +147,26 @@ public final class Identifier {
             return t;
         });
         try {
-            List<Future<RunResult>> futures = new ArrayList<>(runs.size());
-            for (RunSpec r : runs) {
-                futures.add(pool.submit(() -> identify(r)));
+            List<Future<R>> futures = new ArrayList<>(items.size());
+            for (T item : items) {
+                futures.add(pool.submit(() -> work.apply(item)));
             }
-            List<RunResult> out = new ArrayList<>(runs.size());
             for (int i = 0; i < futures.size(); i++) {
-                out.add(await(futures.get(i), runs.get(i)));
+                try {
+                    out.add(futures.get(i).get());
+                } catch (InterruptedException e) {
+                    Thread.currentThread().interrupt();
+                    out.add(onCrash.apply(items.get(i), new InputException("batch", 0, null,
+                            "processing was interrupted")));
+                } catch (ExecutionException e) {
+                    out.add(onCrash.apply(items.get(i), new InputException("batch", 0, null,
+                            "could not be processed (" + e.getCause() + "); please report this with the file",
+                            e.getCause())));
+                }
             }
             return out;
         } finally {
             pool.shutdownNow();
-        }
-    }
-
-    private static RunResult await(Future<RunResult> f, RunSpec spec) {
-        try {
-            return f.get();
-        } catch (InterruptedException e) {
-            Thread.currentThread().interrupt();
-            return RunResult.failure(spec, new InputException(spec.traceFile().toString(), 0, null,
-                    "processing was interrupted"));
-        } catch (ExecutionException e) {
-            return RunResult.failure(spec, unexpected(spec, e.getCause()));
         }
     }
 
@@ -132,18 +177,50 @@ public final class Identifier {
 
     /** Reads the run's trace and identifies its peaks; never throws for bad user data. */
     public RunResult identify(RunSpec run) {
-        try {
-            Trace trace = TraceFiles.read(run.traceFile(), settings.readOptions());
-            return identify(run, trace);
-        } catch (InputException e) {
-            return RunResult.failure(run, e);
-        } catch (RuntimeException e) {
-            return RunResult.failure(run, unexpected(run, e));
-        }
+        return finish(detect(run), null);
     }
 
     /** Identifies the peaks of an already loaded trace. */
     public RunResult identify(RunSpec run, Trace trace) {
+        return finish(detect(run, trace), null);
+    }
+
+    /**
+     * A run after peak detection: its peaks, ready to be matched, or the failure that stops it.
+     *
+     * @param run     the run
+     * @param failure the run's failure, or null
+     * @param peaks   its peaks in order of apex time
+     * @param noiseSd its baseline noise SD
+     */
+    record Detected(RunSpec run, RunResult failure, List<Peak> peaks, double noiseSd) {
+    }
+
+    /** Reads the run's trace and detects its peaks; never throws for bad user data. */
+    Detected detect(RunSpec run) {
+        try {
+            Trace trace = TraceFiles.read(run.traceFile(), settings.readOptions());
+            return detect(run, trace);
+        } catch (InputException e) {
+            return new Detected(run, RunResult.failure(run, e), List.of(), Double.NaN);
+        } catch (RuntimeException e) {
+            return new Detected(run, RunResult.failure(run, unexpected(run, e)), List.of(), Double.NaN);
+        }
+    }
+
+    /** Checks the run's conditions and detects the peaks of its trace. */
+    Detected detect(RunSpec run, Trace trace) {
+        RunResult problem = conditionProblem(run, trace);
+        if (problem != null) {
+            return new Detected(run, problem, List.of(), Double.NaN);
+        }
+        TraceAnalysis analysis = PeakDetector.analyse(trace, run.conditions().detectionOrDirect(),
+                settings.peakSettings());
+        return new Detected(run, null, analysis.peaks(), analysis.noiseSd());
+    }
+
+    /** The failure a run's conditions (with its trace) make inevitable, or null. */
+    private RunResult conditionProblem(RunSpec run, Trace trace) {
         RunConditions c = run.conditions();
         String geometry = c.geometryProblem();
         if (geometry != null) {
@@ -164,19 +241,33 @@ public final class Identifier {
             return RunResult.failure(run, new InputException(run.origin(), run.originLine(), missing,
                     "lengths and voltage are needed unless a charged marker of known mobility is given"));
         }
-        Prepared prepared = byBuffer.get(bufferKey(c.buffer()));
-        if (prepared == null) {
+        if (byBuffer.get(bufferKey(c.buffer())) == null) {
             return RunResult.failure(run, new InputException(run.origin(), run.originLine(), "buffer",
                     String.format(Locale.ROOT, "the run's buffer '%s' has no entries in the library %s, whose "
                                     + "entries are for %s; give the buffer label the library uses, or a library "
                                     + "built in this buffer", c.buffer().trim(), library.sourceFile(),
                             String.join(", ", library.bufferLabels()))));
         }
-        TraceAnalysis analysis = PeakDetector.analyse(trace, c.detectionOrDirect(), settings.peakSettings());
-        List<Peak> peaks = analysis.peaks();
+        return null;
+    }
+
+    /**
+     * Finds the markers, sets the mobility scale and matches the peaks of a detected run.
+     *
+     * @param learned a scale prior learned from the batch for the run's buffer, or null for the settings' own
+     */
+    RunResult finish(Detected d, BatchScalePrior.Learned learned) {
+        if (d.failure() != null) {
+            return d.failure();
+        }
+        RunSpec run = d.run();
+        RunConditions c = run.conditions();
+        Prepared prepared = byBuffer.get(bufferKey(c.buffer()));
+        List<Peak> peaks = d.peaks();
         List<String> notes = new ArrayList<>();
         MobilityAdjuster adjuster = adjusterFor(c);
-        MatchSettings ms = settings.matchSettings();
+        MatchSettings ms = learned == null ? settings.matchSettings()
+                : settings.matchSettings().withScalePrior(learned.prior());
         MarkerLocator.Evaluator evaluator = prepared.library().size() == 0 ? null
                 : (mob, sd) -> LibraryMatcher.matchRun(mob, sd, prepared.library(), prepared.spread(), ms, adjuster);
         MarkerLocator.Choice choice = new MarkerLocator(prepared.library().size() == 0).locate(c, peaks, evaluator);
@@ -190,7 +281,7 @@ public final class Identifier {
                 rows.add(new PeakResult(p, PeakRole.ANALYTE, Double.NaN, Double.NaN, Double.NaN, PeakMatch.none()));
             }
             notes.add(choice.note());
-            return new RunResult(run, null, choice.note(), Double.NaN, null, rows, notes, analysis.noiseSd(),
+            return new RunResult(run, null, choice.note(), Double.NaN, null, rows, notes, d.noiseSd(),
                     RunScale.OFF, temperatureFactor);
         }
         MarkerLocator.Hypothesis best = choice.best();
@@ -198,14 +289,14 @@ public final class Identifier {
         int analyteCount = best.analytes().length;
         int beyond = 0;
         for (double mu : best.mobility()) {
-            beyond += PlausibleMobility.plausible(mu) ? 0 : 1;
+            beyond += PhysicalBounds.plausibleIon(mu) ? 0 : 1;
         }
         if (analyteCount > 0 && 2 * beyond > analyteCount) {
             return RunResult.failure(run, new InputException(run.origin(), run.originLine(), "conditions",
                     String.format(Locale.ROOT, "%d of %d peaks come out with mobilities beyond ±%.0f units "
                                     + "(1e-9 m²/(V s)): check the time unit of the trace (minutes read as seconds?), "
                                     + "the voltage and the capillary lengths", beyond, analyteCount,
-                            PlausibleMobility.LIMIT)));
+                            PhysicalBounds.MAX_ION_MOBILITY)));
         }
         RunMatch match = best.match();
         RunScale runScale = match == null ? RunScale.OFF : match.scale();
@@ -228,7 +319,7 @@ public final class Identifier {
         }
         if (beyond > 0) {
             notes.add(String.format(Locale.ROOT, "%d peak(s) with a mobility beyond ±%.0f units cannot be an ion in "
-                    + "water and were not matched", beyond, PlausibleMobility.LIMIT));
+                    + "water and were not matched", beyond, PhysicalBounds.MAX_ION_MOBILITY));
         }
         if (temperatureFactor != 1.0) {
             notes.add(String.format(Locale.ROOT,
@@ -240,6 +331,9 @@ public final class Identifier {
         }
         if (match != null) {
             notes.add(ScaleNotes.describe(runScale, match.modes(), libraryTempC, ms));
+            if (learned != null) {
+                notes.add(learned.describe());
+            }
             String sign = ScaleNotes.voltageSignHint(best, match, evaluator);
             if (sign != null) {
                 notes.add(sign);
@@ -248,7 +342,7 @@ public final class Identifier {
         if (choice.note() != null && !choice.note().isEmpty()) {
             notes.add(0, choice.note());
         }
-        return new RunResult(run, null, scale.describe(), scale.eofMobility(), scale, rows, notes, analysis.noiseSd(),
+        return new RunResult(run, null, scale.describe(), scale.eofMobility(), scale, rows, notes, d.noiseSd(),
                 runScale, temperatureFactor);
     }
 

@@ -8,6 +8,7 @@ import org.mobident.matching.RunMatch;
 import org.mobident.mobility.ChargedMarkerScale;
 import org.mobident.mobility.MobilityScale;
 import org.mobident.mobility.NeutralMarkerScale;
+import org.mobident.mobility.PhysicalBounds;
 import org.mobident.mobility.TwoMarkerScale;
 import org.mobident.signal.Peak;
 import org.mobident.trace.RunConditions;
@@ -31,7 +32,7 @@ import org.mobident.trace.RunConditions;
  *       choice can enter the confidences.</li>
  *   <li>With an empty library the tallest peak in the window (or of the run) is taken.</li>
  * </ul>
- * A scale whose EOF mobility lies beyond {@link PlausibleMobility#LIMIT} is not considered.
+ * A scale whose EOF mobility lies beyond {@link PhysicalBounds#MAX_EOF_MOBILITY} is not considered.
  */
 final class MarkerLocator {
 
@@ -160,7 +161,7 @@ final class MarkerLocator {
         if (tried.isEmpty()) {
             return failed(String.format(Locale.ROOT, "every candidate neutral marker gives an EOF mobility beyond "
                     + "±%.0f units: check the time unit of the trace (minutes read as seconds?), the voltage and "
-                    + "the capillary lengths", PlausibleMobility.LIMIT));
+                    + "the capillary lengths", PhysicalBounds.MAX_EOF_MOBILITY));
         }
         Hypothesis best = best(tried);
         double[] weights = weights(tried);
@@ -173,8 +174,11 @@ final class MarkerLocator {
     }
 
     private static Choice single(Hypothesis h, String note) {
-        if (!PlausibleMobility.plausibleEof(h.scale())) {
-            return failed(PlausibleMobility.eofProblem(h.scale()));
+        if (!PhysicalBounds.plausibleEof(h.scale().eofMobility())) {
+            return failed(String.format(Locale.ROOT, "the EOF mobility comes out at %.1f units (1e-9 m²/(V s)), "
+                    + "beyond the physical bound of ±%.0f: check the time unit of the trace (minutes read as "
+                    + "seconds?), the voltage and the capillary lengths", h.scale().eofMobility(),
+                    PhysicalBounds.MAX_EOF_MOBILITY));
         }
         return new Choice(h, List.of(h), new double[] {1.0}, note);
     }
@@ -182,7 +186,7 @@ final class MarkerLocator {
     private void addIfPlausible(List<Hypothesis> tried, RunConditions c, List<Peak> peaks, int n, int ref,
                                 double logPrior, Evaluator evaluator) {
         MobilityScale scale = scale(c, peaks, n, ref);
-        if (PlausibleMobility.plausibleEof(scale)) {
+        if (PhysicalBounds.plausibleEof(scale.eofMobility())) {
             tried.add(hypothesis(scale, n, ref, peaks, logPrior, evaluator));
         }
     }

@@ -6,6 +6,7 @@ import java.util.Locale;
 import org.mobident.matching.Candidate;
 import org.mobident.matching.MatchStatus;
 import org.mobident.matching.PeakMatch;
+import org.mobident.matching.RunScale;
 import org.mobident.pipeline.PeakResult;
 import org.mobident.pipeline.PeakRole;
 import org.mobident.pipeline.RunResult;
@@ -26,8 +27,15 @@ final class PeakRows {
             "run", "sample", "peak", "role", "apex_time_s", "apex_time_sd_s", "start_s", "end_s",
             "height", "area", "corrected_area", "width_half_s", "plates", "resolution",
             "signal_to_noise", "direction", "mobility", "mobility_sd", "mobility_at_library_temp",
-            "assigned", "confidence", "status", "runner_up", "runner_up_probability", "candidates",
-            "note");
+            "mobility_corrected", "assigned", "confidence", "status", "runner_up", "runner_up_probability",
+            "candidates", "scale_factor", "scale_factor_sd", "scale_offset", "scale_offset_sd", "note");
+
+    /** The columns that describe the whole run (repeated on each of its rows in CSV, stated once per run in JSON). */
+    static final List<String> RUN_COLUMNS = List.of("scale_factor", "scale_factor_sd", "scale_offset",
+            "scale_offset_sd");
+
+    /** Decimals of the scale factor a and its SD. */
+    static final int FACTOR_DECIMALS = 5;
 
     static final int TIME_DECIMALS = 4;
     static final int MOBILITY_DECIMALS = 3;
@@ -139,14 +147,31 @@ final class PeakRows {
         row.add(mobility(pr.mobility()));
         row.add(mobility(pr.mobilitySd()));
         row.add(mobility(pr.mobilityAtLibraryTemp()));
+        row.add(mobility(pr.mobilityCorrected()));
         row.add(Cell.text(matched ? m.assigned() : null));
         row.add(matched ? probability(m.confidence()) : Cell.number(null));
         row.add(Cell.text(statusOf(pr)));
         row.add(Cell.text(matched ? m.runnerUp() : null));
         row.add(matched && m.runnerUp() != null ? probability(m.runnerUpProbability()) : Cell.number(null));
         row.add(Cell.text(matched ? candidatesText(m.candidates()) : null));
+        row.addAll(scaleCells(run));
         row.add(Cell.text(analyte && !run.mobilityKnown() ? run.scaleNote() : null));
         return row;
+    }
+
+    /**
+     * The run's scale correction a ± sd, b ± sd; empty when it was switched off or the run has no
+     * mobility scale (a = 1, b = 0 with the prior's SDs when too few peaks matched to fit it).
+     */
+    static List<Cell> scaleCells(RunResult run) {
+        RunScale s = run.runScale();
+        if (!run.mobilityKnown() || s.status() == RunScale.Status.OFF) {
+            return List.of(Cell.number(null), Cell.number(null), Cell.number(null), Cell.number(null));
+        }
+        return List.of(Cell.number(Numbers.fixed(s.factor(), FACTOR_DECIMALS)),
+                Cell.number(Numbers.fixed(s.factorSd(), FACTOR_DECIMALS)),
+                Cell.number(Numbers.fixed(s.offset(), MOBILITY_DECIMALS)),
+                Cell.number(Numbers.fixed(s.offsetSd(), MOBILITY_DECIMALS)));
     }
 
     /** identified / ambiguous / unassigned for analytes, "marker" for markers. */

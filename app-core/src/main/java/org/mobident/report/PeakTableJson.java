@@ -65,6 +65,10 @@ public final class PeakTableJson {
         field(sb, in2, "mobility_known", Boolean.toString(run.mobilityKnown()));
         field(sb, in2, "noise_sd", Json.number(Numbers.significant(run.noiseSd(),
                 PeakRows.MAGNITUDE_DIGITS)));
+        List<PeakRows.Cell> scale = PeakRows.scaleCells(run);
+        for (int k = 0; k < PeakRows.RUN_COLUMNS.size(); k++) {
+            field(sb, in2, PeakRows.RUN_COLUMNS.get(k), Json.number(scale.get(k).text()));
+        }
         StringBuilder notes = new StringBuilder("[");
         for (int i = 0; i < run.notes().size(); i++) {
             notes.append(i == 0 ? "" : ", ").append(Json.quote(run.notes().get(i)));
@@ -90,7 +94,7 @@ public final class PeakTableJson {
         boolean first = true;
         for (int c = 0; c < PeakRows.COLUMNS.size(); c++) {
             String column = PeakRows.COLUMNS.get(c);
-            if (column.equals("run") || column.equals("sample")) {
+            if (column.equals("run") || column.equals("sample") || PeakRows.RUN_COLUMNS.contains(column)) {
                 continue; // stated once for the run
             }
             String value;

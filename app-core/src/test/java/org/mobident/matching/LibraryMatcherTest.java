@@ -22,7 +22,7 @@ class LibraryMatcherTest {
 
     private static final double EXACT = 1e-12;
     private static final double INF = Double.POSITIVE_INFINITY;
-    private static final MatchSettings S = MatchSettings.DEFAULT.withSessionRsd(0.0);
+    private static final MatchSettings S = MatchSettings.DEFAULT.withSessionRsd(0.0).withNotInLibraryRange(200.0);
 
     private static Library lib(LibraryEntry... entries) {
         return new Library(List.of(entries), "test", List.of());

@@ -38,8 +38,9 @@ class PeakTableCsvTest {
         String first = csv(List.of()).split("\n")[0];
         assertEquals("run,sample,peak,role,apex_time_s,apex_time_sd_s,start_s,end_s,height,area,corrected_area,"
                 + "width_half_s,plates,resolution,signal_to_noise,direction,mobility,mobility_sd,"
-                + "mobility_at_library_temp,assigned,confidence,status,runner_up,runner_up_probability,"
-                + "candidates,note", first);
+                + "mobility_at_library_temp,mobility_corrected,assigned,confidence,status,runner_up,"
+                + "runner_up_probability,candidates,scale_factor,scale_factor_sd,scale_offset,scale_offset_sd,note",
+                first);
     }
 
     @Test

@@ -4,11 +4,12 @@ package org.mobident.library.build;
  * How a library is built from standards runs. Immutable; start from {@link #defaults()} and change
  * single values with the {@code with…} methods. Mobility values are in 1e-9 m²/(V·s).
  *
- * @param toleranceSdMultiple  k of the match window half-width max(k·SD, floor); 3 by default
- *                             (three standard deviations: common practice)
- * @param toleranceFloor       the floor of that window, mobility units; 0.5 by default (common practice:
- *                             a replicate SD of a few hundredths would otherwise give a window that
- *                             day-to-day drift leaves)
+ * @param toleranceSdMultiple  k of a fixed match window max(k·SD, floor) written into the library as
+ *                             each entry's {@code tolerance}; NaN by default: no window is written, and
+ *                             identification applies its prediction interval
+ *                             ({@link org.mobident.matching.MatchWindow}), which a fixed window would
+ *                             override. Only when the lab asks for a fixed window.
+ * @param toleranceFloor       the floor of that fixed window, mobility units; NaN by default
  * @param rsdLimitPercent      replicate RSD above which a warning is given, %; 2 by default (common practice)
  * @param minReplicates        fewer replicates than this give a warning; 3 by default (the Grubbs test
  *                             and a meaningful SD need at least three)
@@ -54,14 +55,29 @@ public record BuildSettings(
 
     /** The defaults described on each component. */
     public static BuildSettings defaults() {
-        return new BuildSettings(3.0, 0.5, 2.0, 3, 0.05, Grubbs.Alternative.TWO_SIDED, false, 0.05,
+        return new BuildSettings(Double.NaN, Double.NaN, 2.0, 3, 0.05, Grubbs.Alternative.TWO_SIDED, false, 0.05,
                 4.0, 2.0, 5.0, 5.0, 2.0, 6);
+    }
+
+    /** k of a fixed window when only the floor is asked for (three standard deviations: common practice). */
+    public static final double DEFAULT_FIXED_WINDOW_K = 3.0;
+    /** Floor of a fixed window when only k is asked for, mobility units (common practice). */
+    public static final double DEFAULT_FIXED_WINDOW_FLOOR = 0.5;
+
+    /** True when a fixed window is written into the library. */
+    public boolean writesTolerance() {
+        return Double.isFinite(toleranceSdMultiple);
     }
 
     /** @throws IllegalArgumentException when a value is out of its range */
     public BuildSettings {
-        positive("toleranceSdMultiple", toleranceSdMultiple);
-        positive("toleranceFloor", toleranceFloor);
+        if (Double.isNaN(toleranceSdMultiple) != Double.isNaN(toleranceFloor)) {
+            throw new IllegalArgumentException("a fixed window needs both its k and its floor (or neither)");
+        }
+        if (!Double.isNaN(toleranceSdMultiple)) {
+            positive("toleranceSdMultiple", toleranceSdMultiple);
+            positive("toleranceFloor", toleranceFloor);
+        }
         positive("rsdLimitPercent", rsdLimitPercent);
         if (minReplicates < 1) {
             throw new IllegalArgumentException("minReplicates must be at least 1, got " + minReplicates);
@@ -91,8 +107,14 @@ public record BuildSettings(
         }
     }
 
-    /** The match window half-width for a replicate SD: max(k·SD, floor); the floor when SD is unknown. */
+    /**
+     * The fixed window half-width to write for a replicate SD: max(k·SD, floor), the floor when SD is
+     * unknown; NaN when no fixed window was asked for.
+     */
     public double toleranceFor(double sd) {
+        if (!writesTolerance()) {
+            return Double.NaN;
+        }
         return Double.isNaN(sd) ? toleranceFloor : Math.max(toleranceSdMultiple * sd, toleranceFloor);
     }
 

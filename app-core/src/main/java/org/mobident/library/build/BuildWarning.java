@@ -61,6 +61,20 @@ public record BuildWarning(Kind kind, String mix, String analyte, String run, St
         /** Merge: the fresh mean differs from the existing one by more than their combined uncertainty. */
         MEANS_DIFFER,
         /** Merge: the existing entry has no n or SD, so its value was replaced rather than pooled. */
-        NOT_POOLED
+        NOT_POOLED;
+
+        /**
+         * True for a finding that is information rather than a warning: overlapping windows are normal
+         * for neighbouring analytes (the matcher weighs both), so they are printed but do not make a
+         * build or a check end with "warnings".
+         */
+        public boolean informational() {
+            return this == OVERLAPPING_WINDOWS;
+        }
+    }
+
+    /** True when any of {@code findings} is a warning rather than information. */
+    public static boolean anyWarning(java.util.List<BuildWarning> findings) {
+        return findings.stream().anyMatch(w -> !w.kind().informational());
     }
 }

@@ -16,6 +16,7 @@ import org.mobident.chem.BufferConditions;
 import org.mobident.chem.ReferenceIons;
 import org.mobident.library.Library;
 import org.mobident.library.LibraryEntry;
+import org.mobident.matching.MatchSettings;
 import org.mobident.pipeline.PeakResult;
 import org.mobident.pipeline.PeakRole;
 import org.mobident.pipeline.RunResult;
@@ -214,7 +215,11 @@ public final class LibraryBuilder {
                 stats.add(s);
                 entries.add(entry(s));
             }
-            warnings.addAll(WindowOverlaps.check(entries));
+            double[] applied = LibraryCheck.windows(new Library(entries, "built", List.of()), MatchSettings.DEFAULT);
+            for (int k = 0; k < stats.size(); k++) {
+                stats.set(k, stats.get(k).withWindow(applied[k]));
+            }
+            warnings.addAll(WindowOverlaps.check(entries, applied));
             Library library = new Library(entries, SOURCE_LABEL + sheet.sourceFile(), notes());
             List<String> usedNames = used.stream().map(r -> r.spec().name()).toList();
             return new BuildResult(library, stats, outliers, unexpected, warnings, usedNames, settings, stamp);
@@ -536,7 +541,7 @@ public final class LibraryBuilder {
                                 + " charge in the standards sheet.", p.name, s.mean())));
             }
             return new AnalyteStats(p.name, p.mixes, p.basis, ms, s.n(), s.mean(), s.sd(), min, max, rsd, tol,
-                    charge, runs, found);
+                    charge, runs, found, Double.NaN);
         }
 
         private LibraryEntry entry(AnalyteStats s) {
@@ -636,8 +641,9 @@ public final class LibraryBuilder {
             notes.add("Mobility library built from standards runs by " + stamp.toolVersion() + " on "
                     + stamp.builtAt());
             notes.add("Mobility in 1e-9 m^2/(V s), signed (cations +, anions -); mobility_sd is the SD between"
-                    + " replicate runs; tolerance = max(" + plain(settings.toleranceSdMultiple()) + " x SD, "
-                    + plain(settings.toleranceFloor()) + ")");
+                    + " replicate runs; " + (settings.writesTolerance() ? "fixed windows written as tolerance = max("
+                    + plain(settings.toleranceSdMultiple()) + " x SD, " + plain(settings.toleranceFloor()) + ")"
+                    : "no fixed windows: identification applies its prediction interval (see 'mobident library check')"));
             notes.add("Standards sheet: " + sheet.sourceFile());
             List<RunConditions> cs = used.stream().map(r -> r.spec().conditions()).toList();
             Set<String> buffers = new LinkedHashSet<>();

@@ -5,7 +5,11 @@ import java.util.List;
 import java.util.Locale;
 import org.mobident.library.Library;
 import org.mobident.library.LibraryEntry;
+import org.mobident.InputException;
 import org.mobident.matching.MatchSettings;
+import org.mobident.matching.MatchWindow;
+import org.mobident.matching.SpreadModel;
+import org.mobident.mobility.PhysicalBounds;
 
 /**
  * Checks an existing library for what an analyst should know before trusting it: impossible
@@ -16,49 +20,32 @@ import org.mobident.matching.MatchSettings;
  */
 public final class LibraryCheck {
 
-    /**
-     * Largest plausible |mobility|, 1e-9 m²/(V·s). The fastest common ions apart from H⁺ (limiting
-     * mobility ≈ 362) and OH⁻ (≈ 205) reach about 115 (¼[Fe(CN)₆]⁴⁻, λ ≈ 110 S cm²/mol per charge);
-     * sulfate is 83 (limiting molar conductivities: CRC Handbook of Chemistry and Physics, table "Ionic
-     * conductivity and diffusion at infinite dilution", from memory). Effective mobilities are smaller
-     * still, so anything beyond this bound is almost surely a unit or typing error.
-     */
-    public static final double MAX_PLAUSIBLE_MOBILITY = 130.0;
+    /** Largest plausible |mobility| of an entry, 1e-9 m²/(V·s) (see {@link PhysicalBounds#MAX_ION_MOBILITY}). */
+    public static final double MAX_PLAUSIBLE_MOBILITY = PhysicalBounds.MAX_ION_MOBILITY;
 
     private LibraryCheck() {
     }
 
-    /** The findings, in entry order, then the pairs that lie close together. */
+    /** The findings with the default match settings, in entry order, then the pairs that lie close together. */
     public static List<BuildWarning> check(Library library, BuildSettings settings) {
+        return check(library, settings, MatchSettings.DEFAULT);
+    }
+
+    /** The findings, in entry order, then the pairs that lie close together under the windows of {@code match}. */
+    public static List<BuildWarning> check(Library library, BuildSettings settings, MatchSettings match) {
         List<BuildWarning> out = new ArrayList<>();
-        List<LibraryEntry> windowed = new ArrayList<>();
         for (LibraryEntry e : library.entries()) {
-            if (e.charge() != 0 && e.mobility() != 0 && Math.signum(e.mobility()) != Integer.signum(e.charge())) {
-                out.add(new BuildWarning(BuildWarning.Kind.SIGN_CONTRADICTS_CHARGE, null, e.name(), null,
-                        String.format(Locale.ROOT, "%s: mobility %.3f has the wrong sign for charge %+d (mobilities"
-                                + " are signed: cations positive, anions negative)", e.name(), e.mobility(),
-                                e.charge())));
-            }
-            if (Math.abs(e.mobility()) > MAX_PLAUSIBLE_MOBILITY) {
-                out.add(new BuildWarning(BuildWarning.Kind.IMPLAUSIBLE_MOBILITY, null, e.name(), null,
-                        String.format(Locale.ROOT, "%s: mobility %.3f is beyond ±%s, faster than any common ion but"
-                                        + " H+ (about 362) and OH- (about 205); probably a unit or typing error"
-                                        + " (mobilities are in 1e-9 m^2/(V s))", e.name(), e.mobility(),
-                                LibraryBuilder.plain(MAX_PLAUSIBLE_MOBILITY))));
-            } else {
-                for (double mu : e.limitingMobilities()) {
-                    if (Math.abs(mu) > MAX_PLAUSIBLE_MOBILITY) {
-                        out.add(new BuildWarning(BuildWarning.Kind.IMPLAUSIBLE_MOBILITY, null, e.name(), null,
-                                String.format(Locale.ROOT, "%s: limiting mobility %.3f is beyond ±%s, faster than"
-                                                + " any common ion but H+ and OH-; probably a unit or typing error",
-                                        e.name(), mu, LibraryBuilder.plain(MAX_PLAUSIBLE_MOBILITY))));
-                        break;
-                    }
-                }
+            String impossible = impossible(e);
+            if (impossible != null) {
+                boolean sign = e.charge() != 0 && e.mobility() != 0
+                        && Math.signum(e.mobility()) != Integer.signum(e.charge());
+                out.add(new BuildWarning(sign ? BuildWarning.Kind.SIGN_CONTRADICTS_CHARGE
+                        : BuildWarning.Kind.IMPLAUSIBLE_MOBILITY, null, e.name(), null, impossible));
             }
             if (Double.isNaN(e.mobilitySd())) {
                 out.add(new BuildWarning(BuildWarning.Kind.FEW_REPLICATES, null, e.name(), null,
-                        e.name() + ": no spread (mobility_sd) given; matching assumes a default spread"));
+                        e.name() + ": no spread (mobility_sd) given; matching uses the spread pooled over the "
+                                + "library's other analytes, or a default"));
             } else if (e.n() > 0 && e.n() < settings.minReplicates()) {
                 out.add(new BuildWarning(BuildWarning.Kind.FEW_REPLICATES, null, e.name(), null, String.format(
                         Locale.ROOT, "%s: only %d measurement(s) behind the value (at least %d advised)",
@@ -69,33 +56,72 @@ public final class LibraryCheck {
                 out.add(new BuildWarning(BuildWarning.Kind.HIGH_RSD, null, e.name(), null, String.format(Locale.ROOT,
                         "%s: RSD %.2f %% is above the limit of %.2f %%", e.name(), rsd, settings.rsdLimitPercent())));
             }
-            windowed.add(withWindow(e, settings));
         }
-        out.addAll(WindowOverlaps.check(windowed));
+        out.addAll(WindowOverlaps.check(library.entries(), windows(library, match)));
         return out;
     }
 
     /**
-     * The match window half-width identification would use for an entry: its own tolerance, or else
-     * the rule max(k·SD, floor) of the settings on its SD, with the SD matching assumes when the entry
-     * gives none ({@link MatchSettings#DEFAULT_ASSUMED_ENTRY_SD}). (Identification widens it further by
-     * the peak's own uncertainty.)
+     * What makes an entry physically impossible, or null: a mobility whose sign contradicts its
+     * charge, or a mobility (or limiting mobility) beyond the plausible bounds of an ion in water,
+     * with a hint at the unit it was probably written in.
      */
-    public static double window(LibraryEntry e, BuildSettings settings) {
-        if (Double.isFinite(e.tolerance())) {
-            return e.tolerance();
+    public static String impossible(LibraryEntry e) {
+        if (e.charge() != 0 && e.mobility() != 0 && Math.signum(e.mobility()) != Integer.signum(e.charge())) {
+            return String.format(Locale.ROOT, "%s: mobility %s has the wrong sign for charge %+d (mobilities are "
+                    + "signed: cations positive, anions negative)", e.name(), plain(e.mobility()), e.charge());
         }
-        return settings.toleranceFor(Double.isFinite(e.mobilitySd()) ? e.mobilitySd()
-                : MatchSettings.DEFAULT_ASSUMED_ENTRY_SD);
+        double m = Math.abs(e.mobility());
+        boolean tiny = e.charge() != 0 && m > 0 && m < PhysicalBounds.MIN_CHARGED_MOBILITY;
+        if (m > MAX_PLAUSIBLE_MOBILITY || tiny) {
+            return String.format(Locale.ROOT, "%s: mobility %s is %s; %s", e.name(), plain(e.mobility()),
+                    tiny ? "far slower than any ion" : "beyond ±" + LibraryBuilder.plain(MAX_PLAUSIBLE_MOBILITY)
+                            + ", faster than any common ion but H+ (about 362) and OH- (about 205)",
+                    PhysicalBounds.unitHint(e.mobility()));
+        }
+        for (double mu : e.limitingMobilities()) {
+            if (Math.abs(mu) > MAX_PLAUSIBLE_MOBILITY) {
+                return String.format(Locale.ROOT, "%s: limiting mobility %s is beyond ±%s, faster than any common "
+                                + "ion but H+ and OH-; %s", e.name(), plain(mu), LibraryBuilder.plain(MAX_PLAUSIBLE_MOBILITY),
+                        PhysicalBounds.unitHint(mu));
+            }
+        }
+        return null;
     }
 
-    /** The entry with its match window made explicit ({@link #window}). */
-    static LibraryEntry withWindow(LibraryEntry e, BuildSettings settings) {
-        if (Double.isFinite(e.tolerance())) {
-            return e;
+    /**
+     * Refuses a library that holds a physically impossible entry (see {@link #impossible}): matching
+     * peaks against it would give wrong names with confidence. The message names the file, the line
+     * and the fix.
+     *
+     * @throws InputException for the first impossible entry
+     */
+    public static void requirePlausible(Library library) throws InputException {
+        for (int j = 0; j < library.size(); j++) {
+            String problem = impossible(library.entries().get(j));
+            if (problem != null) {
+                throw new InputException(library.sourceFile(), library.lineOf(j), "mobility",
+                        problem + " (correct the library, e.g. with 'mobident library check')");
+            }
         }
-        return new LibraryEntry(e.name(), e.mobility(), e.mobilitySd(), e.n(), e.charge(), window(e, settings),
-                e.pKa(), e.limitingMobilities(), e.buffer(), e.pH(), e.ionicStrengthMm(), e.temperatureC(),
-                e.source());
+    }
+
+    /**
+     * The match window half-width identification applies to each entry for a peak measured without
+     * uncertainty ({@link MatchWindow}, with the spreads pooled over the whole library); a peak's own
+     * uncertainty and that of its run's scale widen it further.
+     */
+    public static double[] windows(Library library, MatchSettings match) {
+        SpreadModel spread = SpreadModel.of(library, match);
+        double[] w = new double[library.size()];
+        for (int j = 0; j < w.length; j++) {
+            w[j] = MatchWindow.halfWidth(library.entries().get(j), spread, j, 0.0, match);
+        }
+        return w;
+    }
+
+    private static String plain(double v) {
+        return Math.abs(v) >= 1e-3 && Math.abs(v) < 1e6 ? String.format(Locale.ROOT, "%.3f", v)
+                : String.format(Locale.ROOT, "%.3g", v);
     }
 }

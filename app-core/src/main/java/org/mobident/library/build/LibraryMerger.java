@@ -19,7 +19,8 @@ import org.mobident.library.LibraryEntry;
  *   <li>An analyte in both, whose existing entry states n ≥ 1 (and an SD when n ≥ 2): mean and SD are
  *       combined exactly as if all measurements had been pooled, with the parallel formula of Chan,
  *       Golub &amp; LeVeque (1979), see {@link ReplicateStatistics#combine}; the tolerance is
- *       recomputed from the pooled SD with the fresh build's settings. A warning is given when
+ *       recomputed from the pooled SD when the fresh build asks for fixed windows (otherwise an existing
+ *       tolerance is kept as the lab wrote it). A warning is given when
  *       |m₁ − m₂| &gt; k·√(s₁²/n₁ + s₂²/n₂) (the standard uncertainty of the difference of two means,
  *       k the settings' coverage factor): the conditions may have changed.</li>
  *   <li>An analyte in both whose existing entry has no n or no SD (a handbook value): replaced by the
@@ -27,6 +28,14 @@ import org.mobident.library.LibraryEntry;
  *   <li>An analyte only in the fresh build is added at the end; one only in the existing library is
  *       kept unchanged.</li>
  *   <li>Notes: the existing notes, a line marking the merge, then the fresh notes.</li>
+ *   <li>Between-session spread ({@code session_sd}): the fresh build is another session. Its means
+ *       are first related to the existing ones by a least-squares line m_f = a·m_e + b over the pooled
+ *       analytes (three or more; a session-wide scale difference, such as another capillary
+ *       temperature, is what identification corrects per run), and each analyte's residual r then
+ *       estimates twice the between-session variance plus the sampling variance of the two means:
+ *       σ_B² = max(0, (r²·G/(G − 2) − s_e²/n_e − s_f²/n_f) / 2) for G analytes (method of moments).
+ *       An earlier session_sd is averaged in (mean of the variances). Identification pools these
+ *       per-analyte values into one between-session RSD ({@link org.mobident.matching.SpreadModel}).</li>
  * </ul>
  *
  * <p>Runs are pooled once only: a fresh run whose trace file has a SHA-256 that the existing
@@ -86,16 +95,19 @@ public final class LibraryMerger {
         BuildSettings settings = fresh.settings();
         Map<String, LibraryEntry> merged = new LinkedHashMap<>();
         for (LibraryEntry e : existing.entries()) {
-            merged.put(e.name(), e);
+            merged.put(Library.key(e), e);
         }
+        List<String> pooledKeys = new ArrayList<>();
+        List<LibraryEntry[]> pairs = new ArrayList<>();
         List<String> added = new ArrayList<>();
         List<String> pooled = new ArrayList<>();
         List<String> replaced = new ArrayList<>();
         List<BuildWarning> warnings = new ArrayList<>();
         for (LibraryEntry f : fresh.library().entries()) {
-            LibraryEntry e = merged.get(f.name());
+            String key = keyFor(merged, f);
+            LibraryEntry e = key == null ? null : merged.get(key);
             if (e == null) {
-                merged.put(f.name(), f);
+                merged.put(Library.key(f), f);
                 added.add(f.name());
                 continue;
             }
@@ -107,7 +119,7 @@ public final class LibraryMerger {
             }
             boolean poolable = e.n() >= 1 && (e.n() == 1 || Double.isFinite(e.mobilitySd()));
             if (!poolable) {
-                merged.put(f.name(), replace(e, f));
+                merged.put(key, replace(e, f));
                 replaced.add(f.name());
                 warnings.add(new BuildWarning(BuildWarning.Kind.NOT_POOLED, null, f.name(), null,
                         String.format(Locale.ROOT, "%s: the existing value %.3f states no %s, so it was replaced by"
@@ -127,17 +139,97 @@ public final class LibraryMerger {
                                         + " %.3f; have the conditions changed?", f.name(), f.mobility(), f.n(),
                                 e.mobility(), e.n(), delta, LibraryBuilder.plain(settings.mergeCoverageFactor()), u)));
             }
-            merged.put(f.name(), pool(e, f, all, settings));
+            merged.put(key, pool(e, f, all, settings));
             pooled.add(f.name());
+            pooledKeys.add(key);
+            pairs.add(new LibraryEntry[] {e, f});
+        }
+        double[] session = sessionSds(pairs);
+        for (int k = 0; k < pooledKeys.size(); k++) {
+            double sd = session[k];
+            if (Double.isFinite(sd)) {
+                merged.computeIfPresent(pooledKeys.get(k), (key, entry) -> entry.withSessionSd(sd));
+            }
         }
         List<LibraryEntry> entries = new ArrayList<>(merged.values());
-        warnings.addAll(WindowOverlaps.check(entries));
+        warnings.addAll(WindowOverlaps.check(entries, LibraryCheck.windows(new Library(entries, "merged", List.of()),
+                org.mobident.matching.MatchSettings.DEFAULT)));
         List<String> notes = new ArrayList<>(existing.notes());
         notes.add("Merged with a fresh build from standards on " + fresh.stamp().builtAt() + " ("
                 + fresh.stamp().toolVersion() + "): added " + added.size() + ", pooled " + pooled.size()
                 + ", replaced " + replaced.size());
         notes.addAll(fresh.library().notes());
         return new MergeResult(new Library(entries, existing.sourceFile(), notes), added, pooled, replaced, warnings);
+    }
+
+    /**
+     * The key of the existing entry a fresh one updates: the same name in the same buffer; else an
+     * existing entry of that name without a buffer label (it applies to every buffer); else, for a
+     * fresh entry without a label, the only existing entry of that name. Null when none.
+     */
+    private static String keyFor(Map<String, LibraryEntry> merged, LibraryEntry f) {
+        if (merged.containsKey(Library.key(f))) {
+            return Library.key(f);
+        }
+        String unlabelled = f.name() + "\u0000";
+        if (f.buffer() != null && merged.containsKey(unlabelled)) {
+            return unlabelled;
+        }
+        if (f.buffer() == null) {
+            List<String> same = new ArrayList<>();
+            for (Map.Entry<String, LibraryEntry> en : merged.entrySet()) {
+                if (en.getValue().name().equals(f.name())) {
+                    same.add(en.getKey());
+                }
+            }
+            return same.size() == 1 ? same.get(0) : null;
+        }
+        return null;
+    }
+
+    /** Fewest analytes pooled for a session-wide line a·m + b before the per-analyte residuals are used. */
+    static final int MIN_FOR_SESSION_LINE = 3;
+
+    /**
+     * The between-session SD of each pooled pair {existing, fresh} (see the class description);
+     * NaN for a pair whose existing entry has no earlier session SD and whose estimate cannot be formed.
+     */
+    static double[] sessionSds(List<LibraryEntry[]> pairs) {
+        int g = pairs.size();
+        double[] out = new double[g];
+        java.util.Arrays.fill(out, Double.NaN);
+        if (g == 0) {
+            return out;
+        }
+        double a = 1.0;
+        double b = 0.0;
+        double inflation = 1.0;
+        if (g >= MIN_FOR_SESSION_LINE) {
+            double sx = 0, sy = 0, sxx = 0, sxy = 0;
+            for (LibraryEntry[] p : pairs) {
+                double x = p[0].mobility();
+                double y = p[1].mobility();
+                sx += x;
+                sy += y;
+                sxx += x * x;
+                sxy += x * y;
+            }
+            double det = g * sxx - sx * sx;
+            if (det > 0) {
+                a = (g * sxy - sx * sy) / det;
+                b = (sy - a * sx) / g;
+                inflation = g > 2 ? (double) g / (g - 2) : 1.0;
+            }
+        }
+        for (int k = 0; k < g; k++) {
+            LibraryEntry e = pairs.get(k)[0];
+            LibraryEntry f = pairs.get(k)[1];
+            double r = f.mobility() - (a * e.mobility() + b);
+            double v = Math.max(0.0, (r * r * inflation - varianceOfMean(e) - varianceOfMean(f)) / 2.0);
+            double earlier = e.sessionSd();
+            out[k] = Double.isFinite(earlier) ? Math.sqrt(0.5 * (v + earlier * earlier)) : Math.sqrt(v);
+        }
+        return out;
     }
 
     /** s²/n of an entry's mean; 0 when its SD is unknown. */
@@ -169,15 +261,18 @@ public final class LibraryMerger {
         } else {
             temperature = (e.n() * e.temperatureC() + f.n() * f.temperatureC()) / (e.n() + f.n());
         }
+        double tolerance = settings.writesTolerance() ? settings.toleranceFor(sd) : e.tolerance();
         return new LibraryEntry(e.name(), all.mean(), sd, all.n(), e.charge() != 0 ? e.charge() : f.charge(),
-                settings.toleranceFor(sd), e.pKa(), e.limitingMobilities(), buffer, e.pH(), e.ionicStrengthMm(),
-                temperature, joinSources(e.source(), f.source()));
+                tolerance, e.pKa(), e.limitingMobilities(), buffer, e.pH(), e.ionicStrengthMm(),
+                temperature, joinSources(e.source(), f.source()), e.internalStandard() || f.internalStandard(),
+                e.sessionSd());
     }
 
     private static LibraryEntry replace(LibraryEntry e, LibraryEntry f) {
         return new LibraryEntry(e.name(), f.mobility(), f.mobilitySd(), f.n(), e.charge() != 0 ? e.charge() : f.charge(),
                 f.tolerance(), e.pKa(), e.limitingMobilities(), f.buffer() != null ? f.buffer() : e.buffer(), e.pH(),
-                e.ionicStrengthMm(), f.temperatureC(), f.source());
+                e.ionicStrengthMm(), f.temperatureC(), f.source(), e.internalStandard() || f.internalStandard(),
+                e.sessionSd());
     }
 
     private static String joinSources(String a, String b) {

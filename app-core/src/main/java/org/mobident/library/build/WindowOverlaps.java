@@ -15,7 +15,7 @@ import org.mobident.library.LibraryEntry;
  *       given to one rather than the other by mobility alone. The floor of 1 unit, twice the default
  *       window floor of 0.5, stands for day-to-day drift beyond the replicate SD (common practice).</li>
  *   <li>otherwise {@link BuildWarning.Kind#OVERLAPPING_WINDOWS}: |μ₁ − μ₂| &lt; w₁ + w₂ with w the
- *       entries' match windows. Only a peak that falls between the two, in both windows, may be
+ *       match windows identification applies ({@link org.mobident.matching.MatchWindow}). Only a peak that falls between the two, in both windows, may be
  *       ambiguous; identification still tells apart peaks that lie near one of them.</li>
  * </ul>
  */
@@ -29,7 +29,11 @@ final class WindowOverlaps {
     private WindowOverlaps() {
     }
 
-    static List<BuildWarning> check(List<LibraryEntry> entries) {
+    /**
+     * @param entries the entries
+     * @param windows each entry's applied match half-width ({@link LibraryCheck#windows}), same order
+     */
+    static List<BuildWarning> check(List<LibraryEntry> entries, double[] windows) {
         List<BuildWarning> out = new ArrayList<>();
         for (int i = 0; i < entries.size(); i++) {
             for (int j = i + 1; j < entries.size(); j++) {
@@ -52,15 +56,13 @@ final class WindowOverlaps {
                                     LibraryBuilder.plain(INDISTINGUISHABLE_FLOOR))));
                     continue;
                 }
-                if (!Double.isFinite(a.tolerance()) || !Double.isFinite(b.tolerance())) {
-                    continue;
-                }
-                if (d < a.tolerance() + b.tolerance()) {
+                double wa = windows[i];
+                double wb = windows[j];
+                if (Double.isFinite(wa) && Double.isFinite(wb) && d < wa + wb) {
                     out.add(new BuildWarning(BuildWarning.Kind.OVERLAPPING_WINDOWS, null, a.name() + ", " + b.name(),
                             null, String.format(Locale.ROOT, "The windows of %s (%.3f ± %.3f) and %s (%.3f ± %.3f)"
                                             + " overlap: a peak between them may be ambiguous; %s.",
-                                    a.name(), a.mobility(), a.tolerance(), b.name(), b.mobility(), b.tolerance(),
-                                    apart)));
+                                    a.name(), a.mobility(), wa, b.name(), b.mobility(), wb, apart)));
                 }
             }
         }

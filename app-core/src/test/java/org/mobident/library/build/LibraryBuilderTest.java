@@ -122,8 +122,12 @@ class LibraryBuilderTest {
         assertEquals(ds.getMin(), s.min(), 0.0);
         assertEquals(ds.getMax(), s.max(), 0.0);
         assertEquals(100 * ds.getStandardDeviation() / ds.getMean(), s.rsdPercent(), 1e-9);
-        // SD is a few hundredths, so the floor of 0.5 sets the window (max(3·SD, 0.5), common practice).
-        assertEquals(0.5, s.tolerance(), 0.0);
+        // No fixed window is written unless asked for; the window shown is the one identification applies.
+        assertTrue(Double.isNaN(s.tolerance()));
+        int idx = b.library().entries().indexOf(b.library().find("sodium").orElseThrow());
+        assertEquals(LibraryCheck.windows(b.library(), org.mobident.matching.MatchSettings.DEFAULT)[idx], s.window(),
+                1e-12);
+        assertTrue(Double.isNaN(b.library().find("sodium").orElseThrow().tolerance()));
         LibraryEntry e = b.library().find("sodium").orElseThrow();
         assertEquals(s.mean(), e.mobility());
         assertEquals(s.sd(), e.mobilitySd());

@@ -258,21 +258,28 @@ class UserTestFindingsTest {
     }
 
     @Test
-    void checkShowsTheComputedWindowOfEntriesWithoutATolerance() {
+    void checkShowsTheWindowIdentificationApplies() {
         LibraryEntry own = new LibraryEntry("own", -60.0, 0.1, 5, -1, 0.8, List.of(), List.of(), null, Double.NaN,
                 Double.NaN, 25.0, null);
         Library lib = new Library(List.of(own, entry("spread", -40.0, 0.3, -1),
                 LibraryEntry.of("handbook", -20.0, Double.NaN)), "lib.csv", List.of());
-        assertEquals(0.8, LibraryCheck.window(own, DEFAULTS));
-        assertEquals(0.9, LibraryCheck.window(lib.entries().get(1), DEFAULTS), 1e-12, "max(3 x 0.3, 0.5)");
-        // no SD: matching assumes 1.0 (MatchSettings.DEFAULT_ASSUMED_ENTRY_SD), so max(3 x 1.0, 0.5)
-        assertEquals(3.0, LibraryCheck.window(lib.entries().get(2), DEFAULTS), 1e-12);
+        org.mobident.matching.MatchSettings match = org.mobident.matching.MatchSettings.DEFAULT;
+        double[] w = LibraryCheck.windows(lib, match);
+        assertEquals(0.8, w[0], 0.0, "an entry's own fixed window replaces the rule");
+        org.mobident.matching.SpreadModel spread = org.mobident.matching.SpreadModel.of(lib, match);
+        for (int j = 0; j < 3; j++) {
+            // the same definition the matcher applies (MatchWindow), for a peak without uncertainty
+            assertEquals(org.mobident.matching.MatchWindow.halfWidth(lib.entries().get(j), spread, j, 0.0, match),
+                    w[j], 0.0);
+        }
         java.io.StringWriter text = new java.io.StringWriter();
-        BuildText.write(lib, LibraryCheck.check(lib, DEFAULTS), DEFAULTS, new java.io.PrintWriter(text));
+        BuildText.write(lib, LibraryCheck.check(lib, DEFAULTS), match, new java.io.PrintWriter(text));
         String out = text.toString();
-        assertTrue(out.contains("0.800 "), out);
-        assertTrue(out.contains("0.900*") && out.contains("3.000*"), out);
-        assertTrue(out.contains("* window computed"), out);
-        assertTrue(out.lines().filter(l -> l.startsWith("handbook")).findFirst().orElseThrow().contains("3.000*"), out);
+        assertTrue(out.contains("0.800="), out);
+        assertTrue(out.contains(String.format(java.util.Locale.ROOT, "%.3f ", w[1])), out);
+        assertTrue(out.lines().filter(l -> l.startsWith("handbook")).findFirst().orElseThrow()
+                .contains(String.format(java.util.Locale.ROOT, "%.3f ", w[2])), out);
+        assertTrue(out.contains("'=' marks an entry's own fixed window"), out);
     }
+
 }

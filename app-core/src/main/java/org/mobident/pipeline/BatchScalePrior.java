@@ -1,0 +1,105 @@
+package org.mobident.pipeline;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import java.util.Optional;
+import org.mobident.matching.RunScale;
+import org.mobident.matching.ScalePrior;
+
+/**
+ * Learns from a batch of runs in one buffer how far their mobility scales scatter, so that a run
+ * with too few peaks to pin its own scale borrows the certainty of the others (empirical Bayes).
+ *
+ * <p>Each run whose scale was fitted from at least {@value #MIN_ANCHORS} matched peaks gives an
+ * estimate a_r with standard error s_r (likewise b). Their spread between runs, τ², is estimated
+ * by the random-effects method of moments of DerSimonian &amp; Laird (Control. Clin. Trials 7 (1986)
+ * 177): with weights w_r = 1/s_r², the weighted mean m and Q = Σ w_r (a_r − m)²,
+ * τ² = max(0, (Q − (k − 1)) / (Σw − Σw²/Σw)). The prior for every run of the buffer is then
+ * centred on the random-effects mean (weights 1/(s_r² + τ²)), with a standard deviation of
+ * √(τ² + SE²) (SE the standard error of that mean), but never below {@link #MIN_FACTOR_SD} and
+ * {@link #MIN_OFFSET_SD} — nor above the settings' own prior: a batch can only make the prior
+ * more certain when its runs agree, or move its centre when they agree on a shift. At least
+ * {@value #MIN_RUNS} such runs are needed.
+ */
+final class BatchScalePrior {
+
+    /** Fewest runs with a fitted scale before a buffer's prior is learned. */
+    static final int MIN_RUNS = 5;
+    /** Fewest expected matched peaks of a run whose fitted scale is used. */
+    static final double MIN_ANCHORS = 3.0;
+    /** Smallest learned SD of a: 0.2 %, about 0.1 K of capillary temperature (a modelling choice). */
+    static final double MIN_FACTOR_SD = 0.002;
+    /** Smallest learned SD of b, mobility units (a modelling choice: the marker's own timing error). */
+    static final double MIN_OFFSET_SD = 0.15;
+
+    /**
+     * A prior learned from a batch.
+     *
+     * @param prior the prior for the buffer's runs
+     * @param runs  how many runs it was learned from
+     */
+    record Learned(ScalePrior prior, int runs) {
+        String describe() {
+            return String.format(Locale.ROOT, "scale prior learned from %d runs of this buffer in the batch: "
+                            + "a = %.4f ± %.4f, b = %+.2f ± %.2f (empirical Bayes, DerSimonian & Laird 1986)", runs,
+                    prior.factorCentre(), prior.factorSd(), prior.offsetCentre(), prior.offsetSd());
+        }
+    }
+
+    private BatchScalePrior() {
+    }
+
+    /** The prior learned from {@code runs} (one buffer), or empty when too few of them pin their scale. */
+    static Optional<Learned> learn(List<RunResult> runs, ScalePrior base) {
+        List<double[]> a = new ArrayList<>();
+        List<double[]> b = new ArrayList<>();
+        for (RunResult r : runs) {
+            RunScale s = r.runScale();
+            if (r.failed() || !s.fitted() || s.anchors() < MIN_ANCHORS) {
+                continue;
+            }
+            a.add(new double[] {s.factor(), s.factorSd()});
+            b.add(new double[] {s.offset(), s.offsetSd()});
+        }
+        if (a.size() < MIN_RUNS) {
+            return Optional.empty();
+        }
+        double[] fa = randomEffects(a);
+        double[] fb = randomEffects(b);
+        double sdA = Math.min(base.factorSd(), Math.max(MIN_FACTOR_SD, fa[1]));
+        double sdB = Math.min(base.offsetSd(), Math.max(MIN_OFFSET_SD, fb[1]));
+        return Optional.of(new Learned(base.centredOn(fa[0], sdA, fb[0], sdB), a.size()));
+    }
+
+    /**
+     * {random-effects mean, √(τ² + SE²)} of estimates {value, standard error} (DerSimonian &amp; Laird 1986).
+     */
+    static double[] randomEffects(List<double[]> estimates) {
+        int k = estimates.size();
+        double sw = 0;
+        double sw2 = 0;
+        double swx = 0;
+        for (double[] e : estimates) {
+            double w = 1.0 / Math.max(e[1] * e[1], Double.MIN_NORMAL);
+            sw += w;
+            sw2 += w * w;
+            swx += w * e[0];
+        }
+        double fixed = swx / sw;
+        double q = 0;
+        for (double[] e : estimates) {
+            double w = 1.0 / Math.max(e[1] * e[1], Double.MIN_NORMAL);
+            q += w * (e[0] - fixed) * (e[0] - fixed);
+        }
+        double tau2 = Math.max(0.0, (q - (k - 1)) / (sw - sw2 / sw));
+        double rw = 0;
+        double rwx = 0;
+        for (double[] e : estimates) {
+            double w = 1.0 / (e[1] * e[1] + tau2);
+            rw += w;
+            rwx += w * e[0];
+        }
+        return new double[] {rwx / rw, Math.sqrt(tau2 + 1.0 / rw)};
+    }
+}
