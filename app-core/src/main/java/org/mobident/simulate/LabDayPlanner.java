@@ -20,6 +20,7 @@ import org.mobident.trace.RunConditions;
  *       (samples: ±{@value #SAMPLE_TEMPERATURE_SPREAD_C} K each; standards: one common offset within
  *       ±{@value #STANDARDS_TEMPERATURE_SPREAD_C} K); every mobility, the EOF included, follows the
  *       viscosity of water ({@link MobilityMath#atTemperature});</li>
+ *   <li>every zone's mobility scatters from run to run by {@value #ZONE_SCATTER_RSD} (relative SD);</li>
  *   <li>the EOF drifts by up to ±{@value #EOF_DRIFT} (relative) around the method's nominal value;</li>
  *   <li>electromigration dispersion: standards at a moderate concentration, sample zones at
  *       {@value #MIN_CONCENTRATION_FACTOR}–{@value #MAX_CONCENTRATION_FACTOR} times that, growing with
@@ -35,8 +36,18 @@ public final class LabDayPlanner {
     public static final double SHEET_TEMPERATURE_C = 25.0;
     /** Half-range of the hidden temperature offset of a sample run, K. */
     public static final double SAMPLE_TEMPERATURE_SPREAD_C = 1.5;
-    /** Half-range of the common hidden temperature offset of the standards session, K. */
-    public static final double STANDARDS_TEMPERATURE_SPREAD_C = 0.3;
+    /**
+     * Half-range of the common hidden temperature offset of the standards session, K: the lab runs
+     * its standards under the method's stated conditions, so the library sets the scale to within a
+     * few hundredths of a kelvin (a modelling choice).
+     */
+    public static final double STANDARDS_TEMPERATURE_SPREAD_C = 0.05;
+    /**
+     * Relative run-to-run scatter of each zone's mobility, standards and samples alike (Gaussian SD):
+     * what stays of a zone's reproducibility after the marker has taken out the EOF (`from memory`:
+     * within-day RSDs of effective mobilities of about 0.1–0.5 % are commonly reported).
+     */
+    public static final double ZONE_SCATTER_RSD = 0.001;
     /** Relative half-range of the EOF drift around the nominal EOF. */
     public static final double EOF_DRIFT = 0.15;
 
@@ -246,6 +257,13 @@ public final class LabDayPlanner {
         return Math.round(v * perUnit) / perUnit;
     }
 
+    /** A standard normal deviate by the Box–Muller transform (Box &amp; Muller, Ann. Math. Statist. 29 (1958) 610). */
+    static double gaussian(SplittableRandom random) {
+        double u1 = 1.0 - random.nextDouble();
+        double u2 = random.nextDouble();
+        return Math.sqrt(-2.0 * Math.log(u1)) * Math.cos(2 * Math.PI * u2);
+    }
+
     static double logUniform(SplittableRandom random, double low, double high) {
         return low * Math.exp(random.nextDouble() * Math.log(high / low));
     }
@@ -395,8 +413,9 @@ public final class LabDayPlanner {
                     .neutralMarker(markerSd * noiseSd).samplingHz(samplingHz).noiseSd(noiseSd)
                     .noiseCorrelation(noiseCorrelation).seed(noiseSeed);
             for (PlannedZone z : zones) {
-                b.zone(new SimulatedZone(z.label(), actual(z.mobilityAt25C()), z.heightSd() * noiseSd, z.plates(),
-                        z.dispersionStrength()));
+                double scatter = 1.0 + ZONE_SCATTER_RSD * gaussian(random);
+                b.zone(new SimulatedZone(z.label(), actual(z.mobilityAt25C()) * scatter, z.heightSd() * noiseSd,
+                        z.plates(), z.dispersionStrength()));
             }
             // the recording lasts until shortly after the last arrival (zone or marker)
             SimulationSpec timing = b.build();

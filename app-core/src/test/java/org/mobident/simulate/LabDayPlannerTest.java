@@ -79,8 +79,13 @@ class LabDayPlannerTest {
                 double mu = MobilityMath.atTemperature(t.mobility(), 25, r.actualTemperatureC());
                 double expected = MobilityMath.migrationTimeS(c.detectorLengthCm(), c.totalLengthCm(), c.voltageKv(),
                         c.rampS(), mu + eof);
-                assertEquals(expected, t.timeS(), TIME_TOLERANCE_S * expected, r.name() + " " + t.analyte());
-                assertEquals(TraceSimulator.apexTimeS(r.spec(), mu), t.timeS(), TIME_TOLERANCE_S * expected);
+                // each zone's mobility scatters by ZONE_SCATTER_RSD: within 5 SDs of that in time (the marker exactly)
+                double scatter = 5 * LabDayPlanner.ZONE_SCATTER_RSD * Math.abs(mu / (mu + eof)) * expected;
+                assertEquals(expected, t.timeS(), TIME_TOLERANCE_S * expected + scatter, r.name() + " " + t.analyte());
+                double simulated = t.kind() == TruthKind.MARKER ? 0.0 : r.spec().zones().stream()
+                        .filter(z -> z.label().equals(t.analyte())).findFirst().orElseThrow().mobility();
+                assertEquals(TraceSimulator.apexTimeS(r.spec(), simulated), t.timeS(), TIME_TOLERANCE_S * expected,
+                        "the truth time is that of the zone as simulated");
             }
             assertTrue(r.spec().durationS() >= LabDayPlanner.DURATION_MARGIN
                     * r.truth().stream().filter(t -> t.kind() != TruthKind.SPIKE).mapToDouble(TruthRow::timeS)
@@ -102,7 +107,9 @@ class LabDayPlannerTest {
             assertEquals(zones.size(), r.spec().zones().size());
             for (SimulatedZone z : r.spec().zones()) {
                 TruthRow t = zones.stream().filter(x -> x.analyte().equals(z.label())).findFirst().orElseThrow();
-                assertEquals(ratio, z.mobility() / t.mobility(), RATIO_TOLERANCE, r.name() + " " + z.label());
+                // the viscosity ratio, times the zone's run-to-run scatter (5 SDs of ZONE_SCATTER_RSD)
+                assertEquals(ratio, z.mobility() / t.mobility(), RATIO_TOLERANCE + 5 * LabDayPlanner.ZONE_SCATTER_RSD,
+                        r.name() + " " + z.label());
             }
             assertEquals(ratio, r.dispersion().coIonMobility() / r.method().coIonMobility(), RATIO_TOLERANCE);
         }
