@@ -32,6 +32,12 @@ public final class MatchOptions {
             description = "Prior share of peaks that are in no library entry, 0 < P < 1 (default 0.2).")
     Double unknownShare;
 
+    @Option(names = "--fixed-scale",
+            description = "Take each run's mobility scale as stated: no correction a·μ + b fitted from the peaks "
+                    + "the library explains (by default a run whose capillary ran a little warm or cool, or whose "
+                    + "marker is slightly off, is corrected and the correction reported).")
+    boolean fixedScale;
+
     MatchSettings toSettings(MatchSettings base) {
         MatchSettings s = base;
         try {
@@ -49,6 +55,9 @@ public final class MatchOptions {
             }
             if (unknownShare != null) {
                 s = s.withNotInLibraryPrior(unknownShare);
+            }
+            if (fixedScale) {
+                s = s.withScalePrior(null);
             }
         } catch (IllegalArgumentException e) {
             throw new picocli.CommandLine.ParameterException(new picocli.CommandLine(this), e.getMessage());

@@ -47,6 +47,10 @@ final class PeakDetails {
                 && !(Math.abs(pr.mobilityAtLibraryTemp() - pr.mobility()) < SAME_MOBILITY)) {
             rows.add(row("At library temperature", num(pr.mobilityAtLibraryTemp(), 2)));
         }
+        if (Double.isFinite(pr.mobilityCorrected())
+                && !(Math.abs(pr.mobilityCorrected() - pr.mobilityAtLibraryTemp()) < SAME_MOBILITY)) {
+            rows.add(row("Compared with library", num(pr.mobilityCorrected(), 2) + " (run scale corrected)"));
+        }
         if (p != null) {
             rows.add(row("Apex time", withSd(p.apexTimeS(), 2, p.apexTimeSdS(), 3) + " s"));
         }

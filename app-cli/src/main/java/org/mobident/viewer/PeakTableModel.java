@@ -62,9 +62,8 @@ final class PeakTableModel extends AbstractTableModel {
             case 1:
                 return pr.peak() == null ? null : pr.peak().apexTimeS();
             case 2:
-                // the value compared with the library (converted to its temperature when the run's differs)
-                return finiteOrNull(Double.isFinite(pr.mobilityAtLibraryTemp()) ? pr.mobilityAtLibraryTemp()
-                        : pr.mobility());
+                // the value compared with the library (at its temperature, corrected for the run's scale)
+                return finiteOrNull(Double.isFinite(pr.mobilityCorrected()) ? pr.mobilityCorrected() : pr.mobility());
             case 3:
                 return finiteOrNull(pr.mobilitySd());
             case 4:

@@ -66,13 +66,12 @@ public final class PlotScene {
             }
             List<PeakResult> peaks = run.result().peaks();
             // the same mobilities the plot draws: those compared with the library
-            double factor = PlotModel.libraryTemperatureFactor(run.result());
             for (int k = 0; k < peaks.size(); k++) {
                 Peak p = peaks.get(k).peak();
                 if (p == null) {
                     continue;
                 }
-                double x = axis == Axis.TIME ? p.apexTimeS() : factor * scale.mobility(p.apexTimeS());
+                double x = axis == Axis.TIME ? p.apexTimeS() : run.result().comparedMobility(scale.mobility(p.apexTimeS()));
                 if (Double.isFinite(x)) {
                     spots.add(new PeakSpot(new PeakRef(i, k), x, apexSignal(run.trace(), p)));
                 }

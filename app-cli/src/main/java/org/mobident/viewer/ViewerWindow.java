@@ -69,7 +69,7 @@ final class ViewerWindow implements PlotPanel.Gestures {
     private boolean syncing;
 
     private ViewerWindow(Viewer.Setup setup, Runnable onClosed) {
-        data = new ViewerData(setup.library(), MatchBands.rule(setup.settings().matchSettings()), setup.initialRuns());
+        data = new ViewerData(setup.library(), org.mobident.report.plot.ToleranceBand.matching(setup.library(), setup.settings().matchSettings()), setup.initialRuns());
         List<Integer> ticked = new ArrayList<>();
         for (int i : setup.tickedAtStart()) {
             if (i >= 0 && i < data.runs().size()) {

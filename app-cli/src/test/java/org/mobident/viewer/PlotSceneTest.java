@@ -129,8 +129,10 @@ class PlotSceneTest {
         }
         org.mobident.pipeline.RunResult r = early.result();
         ViewerRun warm = new ViewerRun(early.spec(), early.trace(), new org.mobident.pipeline.RunResult(r.spec(), null,
-                r.scaleNote(), r.eofMobility(), r.scale(), peaks, r.notes(), r.noiseSd()));
-        ViewerData data = new ViewerData(ViewerFixtures.library(), ToleranceBand.defaultRule(), List.of(warm));
+                r.scaleNote(), r.eofMobility(), r.scale(), peaks, r.notes(), r.noiseSd(),
+                org.mobident.matching.RunScale.OFF, 0.9));
+        ViewerData data = new ViewerData(ViewerFixtures.library(), ToleranceBand.matching(ViewerFixtures.library(),
+                org.mobident.matching.MatchSettings.DEFAULT), List.of(warm));
         PlotScene mob = PlotScene.of(data, ViewState.initial(Axis.MOBILITY, List.of(0)));
         // nitrate: −30 at the run temperature, compared with the library as 0.9 × −30 = −27
         assertEquals(-27, mob.spotOf(new PeakRef(0, ViewerFixtures.NITRATE)).x(), 1e-6);

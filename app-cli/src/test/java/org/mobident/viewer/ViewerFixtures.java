@@ -142,7 +142,7 @@ final class ViewerFixtures {
      * the height) and one without a scale.
      */
     static ViewerData data() {
-        return new ViewerData(library(), ToleranceBand.defaultRule(),
+        return new ViewerData(library(), ToleranceBand.matching(library(), org.mobident.matching.MatchSettings.DEFAULT),
                 List.of(run("early", 200, true), run("late", 250, true, 0.5), run("unscaled", 220, false)));
     }
 }

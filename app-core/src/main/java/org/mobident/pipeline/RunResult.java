@@ -39,6 +39,24 @@ public record RunResult(RunSpec spec, InputException error, String scaleNote, do
         this(spec, error, scaleNote, eofMobility, scale, peaks, notes, noiseSd, RunScale.OFF, 1.0);
     }
 
+    /**
+     * A mobility of this run (at its own temperature) as compared with the library: converted to the
+     * library temperature, then corrected for the run's scale, (f·μ − b)/a.
+     */
+    public double comparedMobility(double runMobility) {
+        return runScale.corrected(runMobility * temperatureFactor);
+    }
+
+    /** The inverse of {@link #comparedMobility}: the run mobility that is compared as {@code compared}. */
+    public double runMobility(double compared) {
+        return (runScale.factor() * compared + runScale.offset()) / temperatureFactor;
+    }
+
+    /** The factor by which a run mobility's standard uncertainty carries over to the compared value, |f/a|. */
+    public double comparedSdFactor() {
+        return Math.abs(temperatureFactor / runScale.factor());
+    }
+
     /** True when a mobility scale was set for this run. */
     public boolean mobilityKnown() {
         return scale != null;

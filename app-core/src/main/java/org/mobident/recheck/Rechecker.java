@@ -340,7 +340,7 @@ public final class Rechecker {
      * exactly as matching applies it ({@link MatchWindow}, with the spreads of the whole library),
      * so that the number printed in a reason is the one the verdict used.
      */
-    static double oldWindowHalfWidth(Library library, LibraryEntry entry, double peakSd, RecheckSettings s) {
+    public static double oldWindowHalfWidth(Library library, LibraryEntry entry, double peakSd, RecheckSettings s) {
         int j = library.entries().indexOf(entry);
         double peakVariance = Double.isFinite(peakSd) ? peakSd * peakSd : 0.0;
         return MatchWindow.halfWidth(entry, SpreadModel.of(library, s.match()), j, peakVariance, s.match());

@@ -125,7 +125,7 @@ public final class RunSummaryText {
         if (!known) {
             mobility = "n/a";
         } else {
-            double compared = Double.isFinite(pr.mobilityAtLibraryTemp()) ? pr.mobilityAtLibraryTemp() : pr.mobility();
+            double compared = Double.isFinite(pr.mobilityCorrected()) ? pr.mobilityCorrected() : pr.mobility();
             double sdCompared = pr.mobilitySd() * (pr.mobility() != 0 ? Math.abs(compared / pr.mobility()) : 1.0);
             String sd = Numbers.fixed(sdCompared, SD_DECIMALS);
             mobility = Numbers.fixed(compared, MOBILITY_DECIMALS) + " +/- " + (sd == null ? "?" : sd);

@@ -247,4 +247,112 @@ class IdentifierEndToEndTest {
         assertEquals("voltage_kv", r.error().field());
         assertEquals(7, r.error().line());
     }
+
+    /** One anion run from the simulator, with extra zones (name, mobility, height) and a marker height. */
+    private static Trace anionTrace(String name, double eof, double markerHeight, List<Truth> zones,
+                                    double[][] extra, long seed) {
+        RunConditions c = conditions(80, 72, -20, 0, Detection.INDIRECT, 380, 800);
+        SimulationSpec.Builder b = SimulationSpec.builder(c).eofMobility(eof).neutralMarker(markerHeight)
+                .samplingHz(20).durationS(900).noiseSd(0.004).baseline(0.3).seed(seed);
+        for (Truth z : zones) {
+            b.zone(z.name(), z.mobility(), 0.8, 120_000);
+        }
+        for (int k = 0; k < extra.length; k++) {
+            b.zone("foreign" + k, extra[k][0], extra[k][1], 120_000);
+        }
+        return TraceSimulator.simulate(name, b.build());
+    }
+
+    @Test
+    void aTallerForeignPeakInTheMarkerWindowDoesNotWin() {
+        // a weakly charged substance (μ = −2) 2.5 times as tall as the marker, inside the window 380–800 s
+        List<Truth> zones = draw(ANIONS, new SplittableRandom(61), 0);
+        Trace t = anionTrace("tall", -48.0, 1.0, zones, new double[][] {{-2.0, 2.5}}, 61);
+        RunConditions c = conditions(80, 72, -20, 0, Detection.INDIRECT, 380, 800);
+        RunResult r = new Identifier(ANIONS, IdentifySettings.defaults().withThreads(1))
+                .identify(new RunSpec("tall", Path.of("tall.csv"), c, "test", 0), t);
+        assertEquals(-48.0, r.eofMobility(), 0.05, "the real marker: EOF mobility used to synthesise");
+        assertTrue(r.notes().get(0).contains("not the taller one"), r.notes().toString());
+        for (Truth z : zones) {
+            assertTrue(r.peaks().stream().anyMatch(p -> z.name().equals(p.match().assigned())), z.name());
+        }
+    }
+
+    @Test
+    void aWeakMarkerStillGivesTheScale() {
+        // the marker at a tenth of its usual height (0.1 against analytes of 0.8, noise 0.004: 25 noise SDs)
+        List<Truth> zones = draw(ANIONS, new SplittableRandom(62), 0);
+        Trace t = anionTrace("weak", -52.0, 0.1, zones, new double[0][], 62);
+        RunConditions c = conditions(80, 72, -20, 0, Detection.INDIRECT, 380, 800);
+        RunResult r = new Identifier(ANIONS, IdentifySettings.defaults().withThreads(1))
+                .identify(new RunSpec("weak", Path.of("weak.csv"), c, "test", 0), t);
+        assertIdentified(r, zones);
+        assertEquals(-52.0, r.eofMobility(), 0.05);
+    }
+
+    @Test
+    void aRunInABufferTheLibraryLacksIsRefusedNamingBoth() {
+        List<Truth> zones = draw(ANIONS, new SplittableRandom(63), 0);
+        Trace t = anionTrace("nope", -50.0, 1.0, zones, new double[0][], 63);
+        RunConditions c = new RunConditions(80, 72, -20, 0, 25.0, "NOPE-9", 380, 800, Detection.INDIRECT,
+                Double.NaN, Double.NaN, Double.NaN);
+        RunResult r = new Identifier(ANIONS, IdentifySettings.defaults().withThreads(1))
+                .identify(new RunSpec("nope", Path.of("nope.csv"), c, "runs.csv", 3), t);
+        assertTrue(r.failed());
+        assertEquals("buffer", r.error().field());
+        assertEquals(3, r.error().line());
+        assertTrue(r.error().getMessage().contains("'NOPE-9'") && r.error().getMessage().contains("test buffer"),
+                r.error().getMessage());
+    }
+
+    @Test
+    void onlyTheRunsBufferIsOffered() {
+        // one library with both buffers: the anion run never sees the cation entries, whatever its mobilities
+        List<LibraryEntry> both = new ArrayList<>(ANIONS.entries());
+        for (LibraryEntry e : CATIONS.entries()) {
+            both.add(new LibraryEntry(e.name(), -e.mobility(), e.mobilitySd(), e.n(), -1, Double.NaN, List.of(),
+                    List.of(), "other buffer", Double.NaN, Double.NaN, 25.0, "test"));
+        }
+        Library lib = new Library(both, "both", List.of());
+        List<Truth> zones = draw(ANIONS, new SplittableRandom(64), 0);
+        Trace t = anionTrace("mine", -50.0, 1.0, zones, new double[0][], 64);
+        RunConditions c = conditions(80, 72, -20, 0, Detection.INDIRECT, 380, 800);
+        RunResult r = new Identifier(lib, IdentifySettings.defaults().withThreads(1))
+                .identify(new RunSpec("mine", Path.of("mine.csv"), c, "test", 0), t);
+        for (PeakResult p : r.peaks()) {
+            for (org.mobident.matching.Candidate cand : p.match().candidates()) {
+                assertTrue(ANIONS.find(cand.name()).isPresent(), cand.name() + " is of another buffer");
+            }
+        }
+        assertIdentified(r, zones);
+    }
+
+    @Test
+    void minutesReadAsSecondsFailTheRunWithTheLikelyCause() {
+        List<Truth> zones = draw(ANIONS, new SplittableRandom(65), 0);
+        Trace t = anionTrace("minutes", -50.0, 1.0, zones, new double[0][], 65);
+        double[] times = t.timesS();
+        for (int i = 0; i < times.length; i++) {
+            times[i] /= 60.0; // a trace in minutes whose header says seconds
+        }
+        Trace wrong = new Trace("minutes", "minutes", times, t.signals());
+        RunConditions c = conditions(80, 72, -20, 0, Detection.INDIRECT, Double.NaN, Double.NaN);
+        RunResult r = new Identifier(ANIONS, IdentifySettings.defaults().withThreads(1))
+                .identify(new RunSpec("minutes", Path.of("minutes.csv"), c, "test", 0), wrong);
+        boolean refused = r.failed() || !r.mobilityKnown();
+        assertTrue(refused, "a run whose EOF mobility is some 3000 units must not pass: " + r.scaleNote());
+        String why = r.failed() ? r.error().getMessage() : r.scaleNote();
+        assertTrue(why.contains("time unit"), why);
+    }
+
+    @Test
+    void aMistypedVoltageSignIsPointedOut() {
+        List<Truth> zones = draw(ANIONS, new SplittableRandom(66), 0);
+        Trace t = anionTrace("sign", -50.0, 1.0, zones, new double[0][], 66);
+        RunConditions c = conditions(80, 72, +20, 0, Detection.INDIRECT, 380, 800);
+        RunResult r = new Identifier(ANIONS, IdentifySettings.defaults().withThreads(1))
+                .identify(new RunSpec("sign", Path.of("sign.csv"), c, "test", 0), t);
+        assertTrue(r.peaks().stream().noneMatch(p -> p.match().status() == MatchStatus.IDENTIFIED));
+        assertTrue(r.notes().stream().anyMatch(n -> n.contains("opposite voltage sign")), r.notes().toString());
+    }
 }

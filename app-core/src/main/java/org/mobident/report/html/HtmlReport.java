@@ -369,8 +369,8 @@ public final class HtmlReport {
             boolean marker = status == PeakStatus.MARKER;
             sb.append("<tr><td class=\"num\">").append(n).append("</td>");
             sb.append("<td class=\"num\">").append(fixed(p.apexTimeS(), 2)).append("</td>");
-            // the value compared with the library: converted to its temperature when the run's differs
-            double compared = Double.isFinite(pr.mobilityAtLibraryTemp()) ? pr.mobilityAtLibraryTemp() : pr.mobility();
+            // the value compared with the library: at its temperature, corrected for the run's scale
+            double compared = Double.isFinite(pr.mobilityCorrected()) ? pr.mobilityCorrected() : pr.mobility();
             sb.append("<td class=\"num\">").append(fixed(compared, 2));
             if (Double.isFinite(pr.mobilitySd())) {
                 double scale = pr.mobility() != 0 && Double.isFinite(compared) ? Math.abs(compared / pr.mobility()) : 1.0;

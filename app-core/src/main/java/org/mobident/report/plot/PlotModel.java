@@ -5,6 +5,7 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Objects;
 import org.mobident.library.Library;
+import org.mobident.matching.MatchSettings;
 import org.mobident.library.LibraryEntry;
 import org.mobident.mobility.MobilityScale;
 import org.mobident.pipeline.PeakResult;
@@ -73,7 +74,7 @@ public record PlotModel(Axis axis, String title, List<Series> series, List<PeakM
     public static PlotModel of(Trace trace, RunResult result, Library library, Axis axis) {
         Builder b = builder(axis).run(trace, result).peakLabels(true);
         if (library != null) {
-            b.library(library, ToleranceBand.defaultRule());
+            b.library(library, ToleranceBand.matching(library, MatchSettings.DEFAULT));
         }
         return b.build();
     }
@@ -155,11 +156,11 @@ public record PlotModel(Axis axis, String title, List<Series> series, List<PeakM
         private final List<Series> series = new ArrayList<>();
         private final List<PeakMark> peaks = new ArrayList<>();
         private final List<MobilityScale> scales = new ArrayList<>();
-        /** Per series: run mobility × factor = mobility at the library temperature (1 when they agree). */
-        private final List<Double> factors = new ArrayList<>();
+        /** Per series: the run, whose {@link RunResult#comparedMobility} places its mobilities (null: none). */
+        private final List<RunResult> compared = new ArrayList<>();
         private final List<String> omitted = new ArrayList<>();
         private Library library;
-        private ToleranceBand bandRule = ToleranceBand.defaultRule();
+        private ToleranceBand bandRule;
         private boolean peakLabels = true;
         private boolean bandLabels;
         private double xLo = Double.NaN;
@@ -197,10 +198,9 @@ public record PlotModel(Axis axis, String title, List<Series> series, List<PeakM
                     omitted.add(name);
                     return this;
                 }
-                double factor = libraryTemperatureFactor(result);
                 double[] mu = new double[t.length];
                 for (int i = 0; i < t.length; i++) {
-                    mu[i] = t[i] > 0 ? factor * scale.mobility(t[i]) : Double.NaN;
+                    mu[i] = t[i] > 0 ? result.comparedMobility(scale.mobility(t[i])) : Double.NaN;
                 }
                 int[] kept = monotoneFiniteTail(mu);
                 if (kept[1] - kept[0] < 1) {
@@ -213,11 +213,10 @@ public record PlotModel(Axis axis, String title, List<Series> series, List<PeakM
             int index = series.size();
             series.add(new Series(name, x, y));
             scales.add(scale);
-            double seriesFactor = libraryTemperatureFactor(result);
-            factors.add(seriesFactor);
+            compared.add(result);
             if (result != null) {
                 for (PeakResult pr : result.peaks()) {
-                    PeakMark m = mark(index, trace, scale, seriesFactor, pr);
+                    PeakMark m = mark(index, trace, scale, result, pr);
                     if (m != null) {
                         peaks.add(m);
                     }
@@ -226,9 +225,9 @@ public record PlotModel(Axis axis, String title, List<Series> series, List<PeakM
             return this;
         }
 
-        /** Draws a band for every library entry with the default half-width rule. */
+        /** Draws a band for every library entry: the window matching applies under the default settings. */
         public Builder library(Library lib) {
-            return library(lib, ToleranceBand.defaultRule());
+            return library(lib, ToleranceBand.matching(lib, MatchSettings.DEFAULT));
         }
 
         /** Draws a band for every library entry, {@code rule} giving its half-width. */
@@ -309,8 +308,9 @@ public record PlotModel(Axis axis, String title, List<Series> series, List<PeakM
                 double a = e.mobility() - hw;
                 double b = e.mobility() + hw;
                 if (timeScale != null) {
-                    a = timeScale.timeS(a / factors.get(0));
-                    b = timeScale.timeS(b / factors.get(0));
+                    RunResult run = compared.get(0);
+                    a = timeScale.timeS(run == null ? a : run.runMobility(a));
+                    b = timeScale.timeS(run == null ? b : run.runMobility(b));
                 }
                 if (Double.isFinite(a) && Double.isFinite(b)) {
                     out.add(new Band(e.name(), Math.min(a, b), Math.max(a, b)));
@@ -375,41 +375,18 @@ public record PlotModel(Axis axis, String title, List<Series> series, List<PeakM
             return finiteRange(yLo, yHi);
         }
 
-        private PeakMark mark(int seriesIndex, Trace trace, MobilityScale scale, double factor, PeakResult pr) {
+        private PeakMark mark(int seriesIndex, Trace trace, MobilityScale scale, RunResult run, PeakResult pr) {
             Peak p = pr.peak();
             if (p == null) {
                 return null;
             }
-            double x = axis == Axis.TIME ? p.apexTimeS() : factor * scale.mobility(p.apexTimeS());
+            double x = axis == Axis.TIME ? p.apexTimeS() : run.comparedMobility(scale.mobility(p.apexTimeS()));
             if (!Double.isFinite(x)) {
                 return null;
             }
             return new PeakMark(seriesIndex, x, apexSignal(trace, p), p.dip(), labelOf(pr), PeakStatus.of(pr));
         }
     }
-
-    /**
-     * The factor that turns a run's mobilities into the ones compared with the library (the
-     * viscosity ratio when the run's temperature differs from the library's), read off the
-     * results; 1 when there is nothing to read. The mobility axis shows compared mobilities, so
-     * that a warm run lines up with the library's windows and with runs at the library temperature.
-     */
-    public static double libraryTemperatureFactor(RunResult result) {
-        if (result == null) {
-            return 1.0;
-        }
-        for (PeakResult pr : result.peaks()) {
-            double m = pr.mobility();
-            double c = pr.mobilityAtLibraryTemp();
-            if (Double.isFinite(m) && Double.isFinite(c) && Math.abs(m) > MIN_FACTOR_MOBILITY) {
-                return c / m;
-            }
-        }
-        return 1.0;
-    }
-
-    /** Peaks this close to zero mobility (the neutral marker) say nothing about the factor. */
-    private static final double MIN_FACTOR_MOBILITY = 1.0;
 
     /** The signal at a peak's apex: the apex sample when it is valid, else interpolated at the apex time. */
     static double apexSignal(Trace trace, Peak p) {

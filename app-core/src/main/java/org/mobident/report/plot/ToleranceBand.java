@@ -1,36 +1,36 @@
 package org.mobident.report.plot;
 
+import org.mobident.library.Library;
+import org.mobident.matching.MatchSettings;
+import org.mobident.matching.MatchWindow;
+import org.mobident.matching.SpreadModel;
 import org.mobident.library.LibraryEntry;
 
 /**
  * The half-width, in mobility units (1e-9 m²/(V s)), of the band drawn around a library
- * entry's mobility. The plots only draw it; the rule that matching really uses belongs to the
- * matching settings, and a caller that has them should pass that rule here instead of
- * {@link #defaultRule()}.
+ * entry's mobility. The plots only draw it; {@link #matching} gives exactly the window matching
+ * applies ({@link MatchWindow}) to a peak measured without uncertainty.
  */
 @FunctionalInterface
 public interface ToleranceBand {
-
-    /** Multiple of the entry's between-run standard deviation in the default rule (common practice: 3 σ). */
-    double SD_MULTIPLE = 3.0;
-
-    /** Smallest half-width of the default rule, 1e-9 m²/(V s) (common practice). */
-    double FLOOR = 0.5;
 
     /** Half-width of the band around {@code entry}; not finite or &le; 0 means "draw no band". */
     double halfWidth(LibraryEntry entry);
 
     /**
-     * The entry's own tolerance when it states one; otherwise 3 × its mobility standard
-     * deviation, but at least {@link #FLOOR} (also when the deviation is unknown).
+     * The window matching applies to each entry of {@code library} under {@code settings}, for a
+     * peak measured without uncertainty ({@link MatchWindow}, with the spreads of the whole library);
+     * NaN (no band) for an entry of another library.
      */
-    static ToleranceBand defaultRule() {
+    static ToleranceBand matching(Library library, MatchSettings settings) {
+        SpreadModel spread = SpreadModel.of(library, settings);
+        java.util.Map<LibraryEntry, Integer> index = new java.util.HashMap<>();
+        for (int j = 0; j < library.size(); j++) {
+            index.put(library.entries().get(j), j);
+        }
         return entry -> {
-            if (Double.isFinite(entry.tolerance()) && entry.tolerance() > 0) {
-                return entry.tolerance();
-            }
-            double sd = entry.mobilitySd();
-            return Double.isFinite(sd) ? Math.max(SD_MULTIPLE * sd, FLOOR) : FLOOR;
+            Integer j = index.get(entry);
+            return j == null ? Double.NaN : MatchWindow.halfWidth(entry, spread, j, 0.0, settings);
         };
     }
 }

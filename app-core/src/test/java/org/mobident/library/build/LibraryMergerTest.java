@@ -54,6 +54,41 @@ class LibraryMergerTest {
     }
 
     @Test
+    void anotherSessionTeachesTheBetweenSessionSpread() throws Exception {
+        // four analytes measured on two days, n = 4 each with SD 0.02 (s²/n = 1e-4 per mean); day 2 is 1 %
+        // higher across the board (a session-wide scale the line a·m + b takes out) and differs by
+        // r = +0.3, −0.3, +0.3, −0.3 around that line (a, b: least squares through the four pairs).
+        double[] day1 = {-70.0, -60.0, -50.0, -40.0};
+        double[] offsets = {0.3, -0.3, 0.3, -0.3};
+        LibraryEntry[] first = new LibraryEntry[4];
+        LibraryEntry[] second = new LibraryEntry[4];
+        for (int k = 0; k < 4; k++) {
+            first[k] = new LibraryEntry("a" + k, day1[k], 0.02, 4, -1, Double.NaN, List.of(), List.of(), "B",
+                    Double.NaN, Double.NaN, 25.0, "d1");
+            second[k] = new LibraryEntry("a" + k, 1.01 * day1[k] + offsets[k], 0.02, 4, -1, Double.NaN, List.of(),
+                    List.of(), "B", Double.NaN, Double.NaN, 25.0, "d2");
+        }
+        MergeResult m = LibraryMerger.merge(new Library(List.of(first), "lib.csv", List.of()), fresh(second));
+        // the least-squares residuals of (m1, m2) are the offsets minus their projection on the line
+        double sx = 0, sy = 0, sxx = 0, sxy = 0;
+        for (int k = 0; k < 4; k++) {
+            sx += first[k].mobility();
+            sy += second[k].mobility();
+            sxx += first[k].mobility() * first[k].mobility();
+            sxy += first[k].mobility() * second[k].mobility();
+        }
+        double a = (4 * sxy - sx * sy) / (4 * sxx - sx * sx);
+        double b = (sy - a * sx) / 4;
+        for (int k = 0; k < 4; k++) {
+            double r = second[k].mobility() - (a * first[k].mobility() + b);
+            // σ_B² = (r²·G/(G − 2) − s²/n − s²/n) / 2 with G = 4 (method of moments, see LibraryMerger)
+            double expected = Math.sqrt(Math.max(0, (r * r * 2.0 - 1e-4 - 1e-4) / 2));
+            assertEquals(expected, m.library().entries().get(k).sessionSd(), 1e-9, "a" + k);
+            assertTrue(m.library().entries().get(k).sessionSd() > 0.1, "a few tenths off the line give a real spread");
+        }
+    }
+
+    @Test
     void handExampleOfThePooling() {
         // {1, 2, 3} and {4, 5}: all five have mean 3 and SD √2.5 = 1.5811 (hand computation);
         // Chan, Golub & LeVeque: M2 = 2 + 0.5 + 2.5²·3·2/5 = 10, SD = √(10/4).

@@ -128,25 +128,17 @@ class PlotModelTest {
     }
 
     @Test
-    void defaultBandIsThreeSdWithAFloorOrTheEntrysOwnTolerance() {
-        ToleranceBand rule = ToleranceBand.defaultRule();
-        assertEquals(1.2, rule.halfWidth(LibraryEntry.of("x", 10, 0.4)), 1e-12);
-        assertEquals(0.5, rule.halfWidth(LibraryEntry.of("x", 10, 0.05)), 1e-12);
-        assertEquals(0.5, rule.halfWidth(LibraryEntry.of("x", 10, Double.NaN)), 1e-12);
-        LibraryEntry own = new LibraryEntry("x", 10, 0.4, 3, 1, 2.0, List.of(), List.of(), null,
-                Double.NaN, Double.NaN, Double.NaN, null);
-        assertEquals(2.0, rule.halfWidth(own), 1e-12);
-    }
-
-    @Test
     void bandsFollowTheRuleGiven() {
         PlotFixtures.SyntheticRun run = PlotFixtures.run("a", 200, 1.0);
         Library lib = PlotFixtures.library();
         PlotModel byDefault = PlotModel.builder(Axis.MOBILITY).run(run.trace(), run.result()).library(lib).build();
         PlotModel.Band nitrate = byDefault.bands().stream().filter(b -> b.name().equals("nitrate")).findFirst()
                 .orElseThrow();
-        assertEquals(-30.9, nitrate.from(), 1e-9);
-        assertEquals(-29.1, nitrate.to(), 1e-9);
+        // by default the band is the window matching applies (see WindowContractTest)
+        LibraryEntry entry = lib.find("nitrate").orElseThrow();
+        double hw = ToleranceBand.matching(lib, org.mobident.matching.MatchSettings.DEFAULT).halfWidth(entry);
+        assertEquals(-30.0 - hw, nitrate.from(), 1e-9);
+        assertEquals(-30.0 + hw, nitrate.to(), 1e-9);
         PlotModel fixed = PlotModel.builder(Axis.MOBILITY).run(run.trace(), run.result())
                 .library(lib, e -> 1.0).build();
         assertEquals(-31.0, fixed.bands().get(2).from(), 1e-9);
@@ -160,9 +152,12 @@ class PlotModelTest {
         PlotFixtures.SyntheticRun run = PlotFixtures.run("a", 200, 1.0);
         PlotModel m = PlotModel.of(run.trace(), run.result(), PlotFixtures.library(), Axis.TIME);
         PlotModel.Band nitrate = m.bands().get(2);
-        // μ = 12000/t − 60 → t = 12000/(μ + 60); nitrate −30 ± 0.9
-        assertEquals(12000 / 30.9, nitrate.from(), 1e-6);
-        assertEquals(12000 / 29.1, nitrate.to(), 1e-6, "later edge from the lower mobility");
+        Library lib = PlotFixtures.library();
+        double hw = ToleranceBand.matching(lib, org.mobident.matching.MatchSettings.DEFAULT)
+                .halfWidth(lib.find("nitrate").orElseThrow());
+        // μ = 12000/t − 60 → t = 12000/(μ + 60); nitrate −30 ± hw
+        assertEquals(12000 / (30 + hw), nitrate.from(), 1e-6);
+        assertEquals(12000 / (30 - hw), nitrate.to(), 1e-6, "later edge from the lower mobility");
         assertTrue(nitrate.from() < 400 && nitrate.to() > 400);
     }
 
@@ -184,7 +179,7 @@ class PlotModelTest {
         }
         org.mobident.pipeline.RunResult r = warm.result();
         org.mobident.pipeline.RunResult converted = new org.mobident.pipeline.RunResult(r.spec(), null, r.scaleNote(),
-                r.eofMobility(), r.scale(), peaks, r.notes(), r.noiseSd());
+                r.eofMobility(), r.scale(), peaks, r.notes(), r.noiseSd(), org.mobident.matching.RunScale.OFF, 0.9);
         PlotModel model = PlotModel.of(warm.trace(), converted, null, Axis.MOBILITY);
         for (PlotModel.PeakMark m : model.peaks()) {
             if (m.status() != PeakStatus.MARKER) {
@@ -195,8 +190,8 @@ class PlotModelTest {
                 assertTrue(found, "mark at " + m.x() + " is a compared mobility");
             }
         }
-        assertEquals(0.9, PlotModel.libraryTemperatureFactor(converted), 1e-12);
-        assertEquals(1.0, PlotModel.libraryTemperatureFactor(r), 1e-12);
+        assertEquals(0.9, converted.temperatureFactor(), 1e-12);
+        assertEquals(1.0, r.temperatureFactor(), 1e-12);
     }
 
     @Test

@@ -1,0 +1,32 @@
+package org.mobident.pipeline;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+
+import java.util.List;
+import org.junit.jupiter.api.Test;
+
+/** The batch-learned scale prior: the DerSimonian–Laird random-effects estimate, worked by hand. */
+class BatchScalePriorTest {
+
+    @Test
+    void randomEffectsEstimateMatchesTheHandWorkedExample() {
+        // five runs, a = 1.00, 1.02, 0.98, 1.01, 0.99, each ± 0.01 (DerSimonian & Laird 1986):
+        // w = 1/0.01² = 10000 each; fixed mean 1.00; Q = 10000·(0 + 4 + 4 + 1 + 1)·1e-4 = 10;
+        // τ² = (Q − (k − 1)) / (Σw − Σw²/Σw) = 6 / (50000 − 10000) = 1.5e-4;
+        // random-effects weights 1/(1e-4 + 1.5e-4) = 4000 each, mean 1.00, SE² = 1/20000 = 5e-5;
+        // spread of the prior √(τ² + SE²) = √2e-4 = 0.014142
+        double[] r = BatchScalePrior.randomEffects(List.of(new double[] {1.00, 0.01}, new double[] {1.02, 0.01},
+                new double[] {0.98, 0.01}, new double[] {1.01, 0.01}, new double[] {0.99, 0.01}));
+        assertEquals(1.00, r[0], 1e-12);
+        assertEquals(Math.sqrt(2e-4), r[1], 1e-12);
+    }
+
+    @Test
+    void runsThatAgreeBetterThanTheirErrorsGiveNoBetweenRunSpread() {
+        // Q below its expectation k − 1: τ² = 0, only the standard error of the mean remains
+        double[] r = BatchScalePrior.randomEffects(List.of(new double[] {1.001, 0.01}, new double[] {0.999, 0.01},
+                new double[] {1.000, 0.01}));
+        assertEquals(1.0, r[0], 1e-12);
+        assertEquals(Math.sqrt(1e-4 / 3), r[1], 1e-12);
+    }
+}
