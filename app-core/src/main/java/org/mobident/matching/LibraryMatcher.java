@@ -87,6 +87,8 @@ public final class LibraryMatcher {
     static final double FACTOR_GRID_STEP = 0.0025;
     /** Grid step of the offset b in the mode search, mobility units. */
     static final double OFFSET_GRID_STEP = 0.2;
+    /** The mode search covers the prior's centre ± this many prior SDs (within the plausible bounds). */
+    static final double PRIOR_REACH_SDS = 4.0;
     /** Modes whose grid score is more than this below the best are not refined (a factor of 1000). */
     static final double MODE_LOG_DROP = Math.log(1000.0);
     /** Most modes refined and mixed. */
@@ -424,10 +426,17 @@ public final class LibraryMatcher {
 
         /** Grid search and EM refinement of the modes of the posterior over (a, b). */
         private List<Fit> searchModes(ScalePrior prior) {
-            int na = 2 * (int) Math.ceil(prior.maxFactorDeviation() / FACTOR_GRID_STEP) + 1;
-            int nb = 2 * (int) Math.ceil(prior.maxOffset() / OFFSET_GRID_STEP) + 1;
-            double a0 = 1.0 - (na / 2) * FACTOR_GRID_STEP;
-            double b0 = -(nb / 2) * OFFSET_GRID_STEP;
+            // the plausible bounds, narrowed to the prior's own reach when it is tight (a prior learned from a batch)
+            double reachA = Math.min(prior.maxFactorDeviation(), PRIOR_REACH_SDS * prior.factorSd());
+            double reachB = Math.min(prior.maxOffset(), PRIOR_REACH_SDS * prior.offsetSd());
+            double loA = Math.max(1 - prior.maxFactorDeviation(), prior.factorCentre() - reachA);
+            double hiA = Math.min(1 + prior.maxFactorDeviation(), prior.factorCentre() + reachA);
+            double loB = Math.max(-prior.maxOffset(), prior.offsetCentre() - reachB);
+            double hiB = Math.min(prior.maxOffset(), prior.offsetCentre() + reachB);
+            int na = Math.max(1, (int) Math.ceil((hiA - loA) / FACTOR_GRID_STEP) + 1);
+            int nb = Math.max(1, (int) Math.ceil((hiB - loB) / OFFSET_GRID_STEP) + 1);
+            double a0 = na == 1 ? prior.factorCentre() : loA;
+            double b0 = nb == 1 ? prior.offsetCentre() : loB;
             double[][] score = new double[na][nb];
             double best = Double.NEGATIVE_INFINITY;
             for (int ia = 0; ia < na; ia++) {

@@ -103,7 +103,7 @@ public final class MatchWindow {
     /** {@link #coverageFactor} for one k, remembered per whole number of degrees of freedom (one caller at a time). */
     static final class CoverageMemo {
         private final double k;
-        private final java.util.Map<Integer, Double> byDf = new java.util.HashMap<>();
+        private final double[] byDf = new double[(int) NORMAL_DF + 1];
 
         CoverageMemo(double k) {
             this.k = k;
@@ -113,7 +113,13 @@ public final class MatchWindow {
             if (!(df < NORMAL_DF)) {
                 return k;
             }
-            return byDf.computeIfAbsent((int) Math.max(1.0, Math.floor(df)), d -> coverageFactor(k, d));
+            int d = (int) Math.max(1.0, Math.floor(df));
+            double f = byDf[d];
+            if (f == 0.0) {
+                f = coverageFactor(k, d);
+                byDf[d] = f;
+            }
+            return f;
         }
     }
 }

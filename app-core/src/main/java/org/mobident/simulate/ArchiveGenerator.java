@@ -52,6 +52,16 @@ public final class ArchiveGenerator {
         if (anions.isEmpty()) {
             throw new IllegalArgumentException("the library has no anions (negative mobilities) to draw from");
         }
+        // the run sheet names the buffer of the anions drawn (runs are matched against their buffer's entries)
+        String buffer = anions.get(0).buffer() == null ? "" : anions.get(0).buffer().trim();
+        for (LibraryEntry e : anions) {
+            if (e.buffer() == null || !LibraryEntry.sameBuffer(e.buffer(), buffer)) {
+                buffer = "";
+            }
+        }
+        if (buffer.contains(",") || buffer.contains("\"")) {
+            buffer = "";
+        }
         Files.createDirectories(dir);
         SplittableRandom rnd = new SplittableRandom(seed);
         double hz = points / DURATION_S;
@@ -61,7 +71,8 @@ public final class ArchiveGenerator {
         for (int k = 1; k <= runs; k++) {
             double eof = NOMINAL_EOF * (1 + rnd.nextDouble(-EOF_DRIFT, EOF_DRIFT));
             RunConditions c = new RunConditions(TOTAL_LENGTH_CM, DETECTOR_LENGTH_CM, VOLTAGE_KV, 0, 25.0,
-                    "archive", Double.NaN, Double.NaN, Detection.INDIRECT, Double.NaN, Double.NaN, Double.NaN);
+                    buffer.isEmpty() ? null : buffer, Double.NaN, Double.NaN, Detection.INDIRECT, Double.NaN, Double.NaN,
+                    Double.NaN);
             SimulationSpec.Builder b = SimulationSpec.builder(c).eofMobility(eof).neutralMarker(1.0)
                     .samplingHz(hz).durationS(DURATION_S).noiseSd(0.01).baseline(0.5)
                     .drift(rnd.nextDouble(-5e-4, 5e-4), 0).seed(seed * 100_003 + k);
@@ -77,8 +88,8 @@ public final class ArchiveGenerator {
             String name = String.format(Locale.ROOT, "run-%05d", k);
             Trace t = TraceSimulator.simulate(name, spec);
             TraceSimulator.writeCsv(t, dir.resolve(name + ".csv"), overwrite);
-            sheet.append(String.format(Locale.ROOT, "%s.csv,%s,%s,%s,0,25,archive,%.1f,%.1f,indirect%n", name,
-                    fmt(TOTAL_LENGTH_CM), fmt(DETECTOR_LENGTH_CM), fmt(VOLTAGE_KV), markerS - 30, markerS + 30));
+            sheet.append(String.format(Locale.ROOT, "%s.csv,%s,%s,%s,0,25,%s,%.1f,%.1f,indirect%n", name,
+                    fmt(TOTAL_LENGTH_CM), fmt(DETECTOR_LENGTH_CM), fmt(VOLTAGE_KV), buffer, markerS - 30, markerS + 30));
         }
         Path runSheet = dir.resolve("runs.csv");
         String text = sheet.toString();

@@ -292,6 +292,19 @@ public final class HtmlReport {
         sb.append("</section>\n");
     }
 
+    /** The run's scale correction a, b in words: fitted values with SDs, not fitted, or switched off. */
+    static String scaleText(RunResult r) {
+        org.mobident.matching.RunScale s = r.runScale();
+        if (!r.mobilityKnown() || s.status() == org.mobident.matching.RunScale.Status.OFF) {
+            return "none";
+        }
+        if (!s.fitted()) {
+            return String.format(java.util.Locale.ROOT, "not fitted (%.1f peaks matched, 2 needed)", s.anchors());
+        }
+        return String.format(java.util.Locale.ROOT, "a = %.4f ± %.4f, b = %+.2f ± %.2f (from %.1f matched peaks)",
+                s.factor(), s.factorSd(), s.offset(), s.offsetSd(), s.anchors());
+    }
+
     private static void run(StringBuilder sb, int index, RunResult r, Map<String, Trace> traces, Library library) {
         sb.append("<section class=\"run\" id=\"run-").append(index).append("\">\n");
         sb.append("<h2>Run ").append(index).append(": ").append(esc(runName(r))).append("</h2>\n");
@@ -302,6 +315,7 @@ public final class HtmlReport {
         fact(sb, "Buffer", esc(buffer(r)));
         fact(sb, "How mobilities were set", esc(r.scaleNote()));
         fact(sb, "EOF mobility", fixed(r.eofMobility(), 2) + " × 10⁻⁹ m² V⁻¹ s⁻¹");
+        fact(sb, "Run scale correction", esc(scaleText(r)));
         fact(sb, "Baseline noise (SD)", sig(r.noiseSd()));
         sb.append("</dl>\n");
         if (r.failed()) {
