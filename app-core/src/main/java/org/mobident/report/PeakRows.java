@@ -18,6 +18,11 @@ import org.mobident.signal.Peak;
  * <p>Formats (all {@link Locale#ROOT}): times in s with 4 decimals; mobilities with 3 decimals;
  * probabilities with 3 decimals; height, area and corrected area with 6 significant digits;
  * plates as an integer; resolution with 2 decimals; S/N with 1 decimal.
+ *
+ * <p>Columns added later come at the end, just before {@code note}, so that the earlier ones
+ * keep their order: {@code centre_time_s} and {@code centre_time_sd_s} (the zone's first moment
+ * and its uncertainty, see {@link Peak}) and {@code sn_class}, where the S/N stands against the
+ * detection and quantitation limits ({@link org.mobident.signal.SignalToNoiseClass}).
  */
 final class PeakRows {
 
@@ -27,7 +32,7 @@ final class PeakRows {
             "height", "area", "corrected_area", "width_half_s", "plates", "resolution",
             "signal_to_noise", "direction", "mobility", "mobility_sd", "mobility_at_library_temp",
             "assigned", "confidence", "status", "runner_up", "runner_up_probability", "candidates",
-            "note");
+            "centre_time_s", "centre_time_sd_s", "sn_class", "note");
 
     static final int TIME_DECIMALS = 4;
     static final int MOBILITY_DECIMALS = 3;
@@ -145,6 +150,9 @@ final class PeakRows {
         row.add(Cell.text(matched ? m.runnerUp() : null));
         row.add(matched && m.runnerUp() != null ? probability(m.runnerUpProbability()) : Cell.number(null));
         row.add(Cell.text(matched ? candidatesText(m.candidates()) : null));
+        row.add(time(p.centreTimeS()));
+        row.add(time(p.centreTimeSdS()));
+        row.add(Cell.text(p.signalToNoiseClass().label()));
         row.add(Cell.text(analyte && !run.mobilityKnown() ? run.scaleNote() : null));
         return row;
     }
