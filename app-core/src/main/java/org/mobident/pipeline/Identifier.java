@@ -40,6 +40,11 @@ import org.mobident.trace.io.TraceFiles;
  */
 public final class Identifier {
 
+    /** Lowest S/N of the targeted search for a weak marker inside its window (a modelling choice). */
+    static final double MARKER_SEARCH_MIN_SN = 1.5;
+    /** The window must hold this many samples for the targeted search. */
+    static final int MARKER_SEARCH_MIN_POINTS = 50;
+
     /** Temperatures closer than this are treated as equal (no viscosity conversion), K. */
     static final double SAME_TEMPERATURE_K = 0.05;
 
@@ -216,7 +221,52 @@ public final class Identifier {
         }
         TraceAnalysis analysis = PeakDetector.analyse(trace, run.conditions().detectionOrDirect(),
                 settings.peakSettings());
-        return new Detected(run, null, analysis.peaks(), analysis.noiseSd());
+        return new Detected(run, null, withWeakMarkers(run.conditions(), trace, analysis.peaks()),
+                analysis.noiseSd());
+    }
+
+    /**
+     * A targeted search for a weak neutral marker: when the marker window holds at most one detected
+     * peak (no marker at all, or possibly a foreign peak in its place), the window alone is analysed
+     * again down to S/N {@value #MARKER_SEARCH_MIN_SN}, and the zones found there that are not already
+     * peaks are added. A marker is expected in that window, so a lower threshold there is no fishing
+     * in noise: the marker choice still has to make the library explain the run.
+     */
+    private List<Peak> withWeakMarkers(RunConditions c, Trace trace, List<Peak> peaks) {
+        if (!c.hasMarkerWindow() || settings.peakSettings().minSignalToNoise() <= MARKER_SEARCH_MIN_SN) {
+            return peaks;
+        }
+        int inside = 0;
+        for (Peak p : peaks) {
+            inside += p.apexTimeS() >= c.markerFromS() && p.apexTimeS() <= c.markerToS() ? 1 : 0;
+        }
+        if (inside > 1) {
+            return peaks;
+        }
+        int from = Math.max(0, trace.indexAtOrAfter(c.markerFromS()));
+        int to = Math.min(trace.size(), trace.indexAtOrAfter(c.markerToS()));
+        if (to - from < MARKER_SEARCH_MIN_POINTS) {
+            return peaks;
+        }
+        Trace window = new Trace(trace.name(), trace.sourceFile(),
+                java.util.Arrays.copyOfRange(trace.timesS(), from, to),
+                java.util.Arrays.copyOfRange(trace.signals(), from, to));
+        List<Peak> weak = PeakDetector.analyse(window, c.detectionOrDirect(),
+                settings.peakSettings().withMinSignalToNoise(MARKER_SEARCH_MIN_SN)).peaks();
+        List<Peak> out = new ArrayList<>(peaks);
+        for (Peak w : weak) {
+            boolean known = false;
+            for (Peak p : peaks) {
+                known |= Math.abs(p.apexTimeS() - w.apexTimeS()) < Math.max(p.widthHalfS(), w.widthHalfS());
+            }
+            if (!known) {
+                out.add(new Peak(trace.indexAtOrAfter(w.apexTimeS()), w.apexTimeS(), w.apexTimeSdS(), w.centreTimeS(),
+                        w.centreTimeSdS(), w.startTimeS(), w.endTimeS(), w.height(), w.area(), w.correctedArea(),
+                        w.widthHalfS(), w.plates(), w.resolution(), w.signalToNoise(), w.dip()));
+            }
+        }
+        out.sort(java.util.Comparator.comparingDouble(Peak::apexTimeS));
+        return out;
     }
 
     /** The failure a run's conditions (with its trace) make inevitable, or null. */
@@ -304,8 +354,8 @@ public final class Identifier {
         int k = 0;
         for (int i = 0; i < peaks.size(); i++) {
             Peak p = peaks.get(i);
-            double m = scale.mobility(p.apexTimeS());
-            double s = scale.mobilitySd(p.apexTimeS(), p.apexTimeSdS());
+            double m = scale.mobility(p.migrationTimeS());
+            double s = scale.mobilitySd(p.migrationTimeS(), p.migrationTimeSdS());
             double atLib = convert(m, runTempC, libraryTempC);
             if (i == best.neutralIndex()) {
                 rows.add(new PeakResult(p, PeakRole.NEUTRAL_MARKER, m, s, atLib, PeakMatch.none(), atLib));

@@ -107,7 +107,7 @@ final class MarkerLocator {
         if (ref >= 0 && c.hasGeometry() && !c.hasMarkerWindow()) {
             Peak m = peaks.get(ref);
             MobilityScale scale = new ChargedMarkerScale(c.detectorLengthCm(), c.totalLengthCm(), c.voltageKv(),
-                    c.rampOrZeroS(), m.apexTimeS(), m.apexTimeSdS(), c.refMarkerMobility());
+                    c.rampOrZeroS(), m.migrationTimeS(), m.migrationTimeSdS(), c.refMarkerMobility());
             Hypothesis h = hypothesis(scale, -1, ref, peaks, 0.0, evaluator);
             return single(h, "");
         }
@@ -207,8 +207,8 @@ final class MarkerLocator {
             }
             Peak p = peaks.get(i);
             analytes[k] = i;
-            mob[k] = scale.mobility(p.apexTimeS());
-            sd[k] = scale.mobilitySd(p.apexTimeS(), p.apexTimeSdS());
+            mob[k] = scale.mobility(p.migrationTimeS());
+            sd[k] = scale.mobilitySd(p.migrationTimeS(), p.migrationTimeSdS());
             k++;
         }
         RunMatch match = evaluator == null ? null : evaluator.match(mob, sd);
@@ -289,11 +289,11 @@ final class MarkerLocator {
         Peak n = peaks.get(neutral);
         if (ref >= 0) {
             Peak m = peaks.get(ref);
-            return new TwoMarkerScale(c.rampOrZeroS(), n.apexTimeS(), n.apexTimeSdS(),
-                    m.apexTimeS(), m.apexTimeSdS(), c.refMarkerMobility());
+            return new TwoMarkerScale(c.rampOrZeroS(), n.migrationTimeS(), n.migrationTimeSdS(),
+                    m.migrationTimeS(), m.migrationTimeSdS(), c.refMarkerMobility());
         }
         return new NeutralMarkerScale(c.detectorLengthCm(), c.totalLengthCm(), c.voltageKv(), c.rampOrZeroS(),
-                n.apexTimeS(), n.apexTimeSdS());
+                n.migrationTimeS(), n.migrationTimeSdS());
     }
 
     /** Index of the tallest peak with apex in [fromS, toS], skipping {@code exclude}; -1 if none. */

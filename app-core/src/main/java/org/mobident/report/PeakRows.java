@@ -19,6 +19,11 @@ import org.mobident.signal.Peak;
  * <p>Formats (all {@link Locale#ROOT}): times in s with 4 decimals; mobilities with 3 decimals;
  * probabilities with 3 decimals; height, area and corrected area with 6 significant digits;
  * plates as an integer; resolution with 2 decimals; S/N with 1 decimal.
+ *
+ * <p>Columns added later come at the end, just before {@code note}, so that the earlier ones
+ * keep their order: {@code centre_time_s} and {@code centre_time_sd_s} (the zone's first moment
+ * and its uncertainty, see {@link Peak}) and {@code sn_class}, where the S/N stands against the
+ * detection and quantitation limits ({@link org.mobident.signal.SignalToNoiseClass}).
  */
 final class PeakRows {
 
@@ -28,7 +33,8 @@ final class PeakRows {
             "height", "area", "corrected_area", "width_half_s", "plates", "resolution",
             "signal_to_noise", "direction", "mobility", "mobility_sd", "mobility_at_library_temp",
             "mobility_corrected", "assigned", "confidence", "status", "runner_up", "runner_up_probability",
-            "candidates", "scale_factor", "scale_factor_sd", "scale_offset", "scale_offset_sd", "note");
+            "candidates", "centre_time_s", "centre_time_sd_s", "sn_class", "scale_factor", "scale_factor_sd",
+            "scale_offset", "scale_offset_sd", "note");
 
     /** The columns that describe the whole run (repeated on each of its rows in CSV, stated once per run in JSON). */
     static final List<String> RUN_COLUMNS = List.of("scale_factor", "scale_factor_sd", "scale_offset",
@@ -154,6 +160,9 @@ final class PeakRows {
         row.add(Cell.text(matched ? m.runnerUp() : null));
         row.add(matched && m.runnerUp() != null ? probability(m.runnerUpProbability()) : Cell.number(null));
         row.add(Cell.text(matched ? candidatesText(m.candidates()) : null));
+        row.add(time(p.centreTimeS()));
+        row.add(time(p.centreTimeSdS()));
+        row.add(Cell.text(p.signalToNoiseClass().label()));
         row.addAll(scaleCells(run));
         row.add(Cell.text(analyte && !run.mobilityKnown() ? run.scaleNote() : null));
         return row;

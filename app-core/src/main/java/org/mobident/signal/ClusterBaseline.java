@@ -15,6 +15,16 @@ package org.mobident.signal;
  * signal in a window of {@code edgeS} just outside each end, and the baseline inside becomes the
  * lower of the two. Groups longer than {@code maxSpanS} are left alone (a chord that long would
  * cut across real baseline curvature). Linear in the number of points.
+ *
+ * <p>The same chord serves a stretch where the signal dips below the clipped baseline by the
+ * detection level: clipping cannot rise into a dip, so a dip wider than the closing of
+ * {@link SnipBaseline} drags the baseline down with it, and the rims of the dip then stand above the
+ * sagging baseline like broad, low peaks. A group therefore also takes in every run more than
+ * {@code returnLevel} below the baseline that reaches {@code detectLevel}, and a group holding such a
+ * dip gets the chord itself as its baseline (raised as well as lowered): the chord from the
+ * undisturbed signal before the stretch to that after it is then the only baseline the data
+ * support. Dips and their rims chain into long disturbed stretches, so such a group may span
+ * {@link SignalLimits#GROUP_DIP_SPAN_FACTOR} times the usual longest group.
  */
 final class ClusterBaseline {
 
@@ -38,40 +48,53 @@ final class ClusterBaseline {
         int groupStart = -1;
         int groupEnd = -1;
         int runsInGroup = 0;
+        boolean dipInGroup = false;
         while (i < n) {
-            if (smooth[i] - baseline[i] <= returnLevel) {
+            double v = smooth[i] - baseline[i];
+            double sign = v > returnLevel ? 1 : v < -returnLevel ? -1 : 0;
+            if (sign == 0) {
                 i++;
                 continue;
             }
             int j = i;
-            double top = smooth[i] - baseline[i];
-            while (j + 1 < n && smooth[j + 1] - baseline[j + 1] > returnLevel) {
+            double top = sign * v;
+            while (j + 1 < n && sign * (smooth[j + 1] - baseline[j + 1]) > returnLevel) {
                 j++;
-                top = Math.max(top, smooth[j] - baseline[j]);
+                top = Math.max(top, sign * (smooth[j] - baseline[j]));
             }
             if (top >= detectLevel) {
-                if (groupStart >= 0 && t[i] - t[groupEnd] < mergeGapS && t[j] - t[groupStart] <= maxSpanS) {
+                double span = dipInGroup || sign < 0 ? SignalLimits.GROUP_DIP_SPAN_FACTOR * maxSpanS : maxSpanS;
+                if (groupStart >= 0 && t[i] - t[groupEnd] < mergeGapS && t[j] - t[groupStart] <= span) {
                     groupEnd = j;
                     runsInGroup++;
+                    dipInGroup |= sign < 0;
                 } else {
                     if (runsInGroup >= 2) {
-                        lower(t, smooth, baseline, groupStart, groupEnd, edgeS, maxSpanS);
+                        lower(t, smooth, baseline, groupStart, groupEnd, edgeS, spanOf(maxSpanS, dipInGroup),
+                                dipInGroup);
                     }
                     groupStart = i;
                     groupEnd = j;
                     runsInGroup = 1;
+                    dipInGroup = sign < 0;
                 }
             }
             i = j + 1;
         }
         if (runsInGroup >= 2) {
-            lower(t, smooth, baseline, groupStart, groupEnd, edgeS, maxSpanS);
+            lower(t, smooth, baseline, groupStart, groupEnd, edgeS, spanOf(maxSpanS, dipInGroup), dipInGroup);
         }
         return baseline;
     }
 
+    private static double spanOf(double maxSpanS, boolean dipInGroup) {
+        return dipInGroup ? SignalLimits.GROUP_DIP_SPAN_FACTOR * maxSpanS : maxSpanS;
+    }
+
+    /** The chord over [start, end]: the baseline there becomes the lower of the two, or the chord
+     *  itself when {@code replace} (a group holding a dip). */
     private static void lower(double[] t, double[] smooth, double[] baseline, int start, int end, double edgeS,
-                              double maxSpanS) {
+                              double maxSpanS, boolean replace) {
         if (t[end] - t[start] > maxSpanS || start == 0 || end == t.length - 1) {
             return;
         }
@@ -105,7 +128,7 @@ final class ClusterBaseline {
         double slope = (yR - yL) / (tR - tL);
         for (int k = start; k <= end; k++) {
             double chord = yL + slope * (t[k] - tL);
-            if (chord < baseline[k]) {
+            if (replace || chord < baseline[k]) {
                 baseline[k] = chord;
             }
         }

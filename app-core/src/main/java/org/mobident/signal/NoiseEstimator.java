@@ -79,15 +79,77 @@ final class NoiseEstimator {
     }
 
     /**
-     * Expected range of {@code n} independent standard normal values, d₂(n) (Tippett 1925),
-     * by Simpson integration of {@code 1 − Φⁿ − (1 − Φ)ⁿ}.
+     * Robust SD of the first {@code count} entries of {@code work} (reordered): 1.4826 times their
+     * median absolute deviation from their median (Rousseeuw &amp; Croux 1993). Selection only: linear.
+     *
+     * @param work  values, reordered and overwritten
+     * @param count how many leading entries to use, at least 1
+     */
+    static double madSdInPlace(double[] work, int count) {
+        double centre = Selection.medianInPlace(work, count);
+        for (int i = 0; i < count; i++) {
+            work[i] = Math.abs(work[i] - centre);
+        }
+        return SignalLimits.MAD_TO_SD * Selection.medianInPlace(work, count);
+    }
+
+    /**
+     * Robust SD (1.4826 · MAD about the median) of the values themselves, not of their differences,
+     * over the samples that are not {@code excluded}, from an evenly strided subset of at most
+     * {@link SignalLimits#NOISE_SAMPLE_CAP} of them. On a baseline-corrected signal with the peaks
+     * excluded this is the marginal SD of the noise, right for correlated noise too; 0 when fewer
+     * than two samples remain.
+     *
+     * @param v        values (not modified)
+     * @param excluded samples to leave out, or null for none (not modified)
+     */
+    static double marginalSd(double[] v, boolean[] excluded) {
+        int kept = 0;
+        for (int i = 0; i < v.length; i++) {
+            if (excluded == null || !excluded[i]) {
+                kept++;
+            }
+        }
+        if (kept < 2) {
+            return 0.0;
+        }
+        int stride = Math.max(1, kept / SignalLimits.NOISE_SAMPLE_CAP);
+        double[] work = new double[(kept + stride - 1) / stride];
+        int m = 0;
+        int seen = 0;
+        for (int i = 0; i < v.length && m < work.length; i++) {
+            if (excluded != null && excluded[i]) {
+                continue;
+            }
+            if (seen++ % stride == 0) {
+                work[m++] = v[i];
+            }
+        }
+        return m < 2 ? 0.0 : madSdInPlace(work, m);
+    }
+
+    /**
+     * Expected range of {@code n} independent standard normal values, d₂(n) (Tippett 1925):
+     * exact (Simpson integration, {@link #integratedNormalRange}) up to
+     * {@link RangeTable#EXACT_UP_TO}, beyond that interpolated linearly in ln n on a table of
+     * exact values whose neighbours are 5 % apart in n (the error is below 1e-4: d₂ bends
+     * slowly in ln n). The table is computed once and never modified.
      *
      * @param n sample count ≥ 2
      */
-    static double expectedNormalRange(int n) {
+    static double expectedNormalRange(long n) {
         if (n < 2) {
             throw new IllegalArgumentException("a range needs at least two samples, got " + n);
         }
+        return RangeTable.value(n);
+    }
+
+    /**
+     * d₂(n) by Simpson integration of {@code 1 − Φⁿ − (1 − Φ)ⁿ} over ±10 SD.
+     *
+     * @param n sample count ≥ 2 (a real number: the table interpolates between integers)
+     */
+    static double integratedNormalRange(double n) {
         double step = 2 * RANGE_INTEGRAL_LIMIT / RANGE_INTEGRAL_STEPS;
         double sum = 0;
         for (int i = 0; i <= RANGE_INTEGRAL_STEPS; i++) {
@@ -95,6 +157,42 @@ final class NoiseEstimator {
             sum += weight * (1.0 - Math.pow(NormalGrid.LOWER[i], n) - Math.pow(NormalGrid.UPPER[i], n));
         }
         return sum * step / 3;
+    }
+
+    /** d₂(n) tabulated once: every n up to {@link #EXACT_UP_TO}, then a geometric grid in n. */
+    private static final class RangeTable {
+        /** Sample counts up to this are tabulated one by one. */
+        static final int EXACT_UP_TO = 128;
+        /** Ratio of neighbouring sample counts in the geometric part. */
+        static final double RATIO = 1.05;
+        /** Largest count of the geometric part; beyond it d₂ is extrapolated linearly in ln n. */
+        static final double LARGEST = 1e8;
+        static final double[] EXACT = new double[EXACT_UP_TO + 1];
+        static final double[] GRID;
+
+        static {
+            for (int n = 2; n <= EXACT_UP_TO; n++) {
+                EXACT[n] = integratedNormalRange(n);
+            }
+            int steps = (int) Math.ceil(Math.log(LARGEST / EXACT_UP_TO) / Math.log(RATIO));
+            GRID = new double[steps + 1];
+            for (int k = 0; k <= steps; k++) {
+                GRID[k] = integratedNormalRange(EXACT_UP_TO * Math.pow(RATIO, k));
+            }
+        }
+
+        private RangeTable() {
+        }
+
+        static double value(long n) {
+            if (n <= EXACT_UP_TO) {
+                return EXACT[(int) n];
+            }
+            double x = Math.log((double) n / EXACT_UP_TO) / Math.log(RATIO);
+            int k = Math.min((int) Math.floor(x), GRID.length - 2);
+            double f = x - k;
+            return GRID[k] + f * (GRID[k + 1] - GRID[k]);
+        }
     }
 
     /**

@@ -3,6 +3,7 @@ package org.mobident.signal;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Objects;
+import org.apache.commons.math3.special.Erf;
 import org.mobident.trace.Detection;
 import org.mobident.trace.Trace;
 
@@ -75,7 +76,7 @@ public final class PeakDetector {
      * @param trace     the trace (times strictly increasing; sampling may be irregular)
      * @param detection DIRECT (peaks rise) or INDIRECT (peaks are dips)
      * @param settings  detection settings
-     * @return peaks in order of apex time, with the noise SD and the peak-to-peak noise
+     * @return peaks in order of apex time, with the run's noise SD and peak-to-peak noise
      */
     public static TraceAnalysis analyse(Trace trace, Detection detection, PeakSettings settings) {
         Objects.requireNonNull(trace, "trace");
@@ -90,12 +91,15 @@ public final class PeakDetector {
                 y[i] = -y[i];
             }
         }
-        double sigma = flooredNoise(y);
         if (n < SignalLimits.MIN_POINTS) {
+            double sigma = flooredNoise(y);
             return new TraceAnalysis(List.of(), sigma, NoiseEstimator.expectedNormalRange(2) * sigma);
         }
+        SpikeFilter.despike(t, y);
+        double floor = noiseFloor(y);
+        double whiteSigma = Math.max(NoiseEstimator.robustSd(y), floor);
         double sampling = medianInterval(t);
-        double typicalWidth = PeakWidthEstimator.typicalWidthS(t, y, sigma, sampling);
+        double typicalWidth = PeakWidthEstimator.typicalWidthS(t, y, whiteSigma, sampling);
 
         double windowS = Double.isFinite(settings.smoothingWindowS()) && settings.smoothingWindowS() > 0
                 ? settings.smoothingWindowS()
@@ -106,25 +110,50 @@ public final class PeakDetector {
         double smoothGain = halfWidth >= 1 && SMOOTHING_ORDER < 2 * halfWidth
                 ? Math.sqrt(PeakWidthEstimator.sumOfSquares(SavitzkyGolay.weights(halfWidth, SMOOTHING_ORDER)))
                 : 1.0;
+        int typicalPoints = (int) Math.round(SignalLimits.PEAK_TO_PEAK_WINDOW_WIDTHS * typicalWidth / sampling) + 1;
+        double typicalRange = NoiseEstimator.expectedNormalRange(Math.max(2, Math.min(n, typicalPoints)));
 
-        int windowPoints = (int) Math.round(SignalLimits.PEAK_TO_PEAK_WINDOW_WIDTHS * typicalWidth / sampling) + 1;
-        windowPoints = Math.max(2, Math.min(n, windowPoints));
-        double peakToPeak = NoiseEstimator.expectedNormalRange(windowPoints) * sigma;
-        double minHeight = settings.minSignalToNoise() * peakToPeak / 2;
-        double smoothSigma = sigma * smoothGain;
-        double returnLevel = SignalLimits.RETURN_TO_BASELINE_SIGMAS * smoothSigma;
-
+        // first look at the corrected signal: the marginal noise of the raw and the smoothed signal
+        // (measured, not derived from first differences), for the thresholds of the common baseline;
+        // the mask found with the clipped baseline is refreshed once the common baseline is in
         double[] baseline = SnipBaseline.estimate(t, smooth, typicalWidth, sampling);
-        ClusterBaseline.bridge(t, smooth, baseline, returnLevel, minHeight,
+        double[] raw = new double[n];
+        double[] corrected = new double[n];
+        for (int i = 0; i < n; i++) {
+            raw[i] = y[i] - baseline[i];
+            corrected[i] = smooth[i] - baseline[i];
+        }
+        int margin = (int) Math.ceil(SignalLimits.PEAK_MASK_MARGIN_WIDTHS * typicalWidth / sampling);
+        LocalNoise.Estimate first = baselineNoise(raw, corrected, margin, floor, smoothGain).estimate();
+        double firstSigma = Math.max(first.rawSd(), whiteSigma);
+        double firstSmoothSigma = first.smoothSd();
+        ClusterBaseline.bridge(t, smooth, baseline,
+                SignalLimits.RETURN_TO_BASELINE_SIGMAS * firstSmoothSigma,
+                settings.minSignalToNoise() * typicalRange * firstSigma / 2,
                 SignalLimits.GROUP_GAP_IN_WIDTHS * typicalWidth, SignalLimits.GROUP_EDGE_IN_WIDTHS * typicalWidth,
                 SignalLimits.GROUP_MAX_SPAN_IN_WIDTHS * typicalWidth);
-        double[] raw = new double[n];
         for (int i = 0; i < n; i++) {
             raw[i] = y[i] - baseline[i];
             smooth[i] -= baseline[i];
         }
+
+        // the run's noise from its baseline stretches: the peaks (runs passing 5 smoothed-noise SDs,
+        // with their feet) are left out
+        BaselineNoise background = baselineNoise(raw, smooth, margin, floor, smoothGain);
+        boolean[] inPeak = background.inPeak();
+        double sigma = background.estimate().rawSd();
+        double smoothSigma = background.estimate().smoothSd();
+        double correlation = lagOneCorrelation(whiteSigma, sigma);
+        LocalNoise localNoise = new LocalNoise(raw, smooth, inPeak, correlation,
+                new LocalNoise.Estimate(sigma, smoothSigma, n), floor, floor * smoothGain);
+
+        double peakToPeak = typicalRange * sigma;
+        double minHeight = settings.minSignalToNoise() * peakToPeak / 2;
+        double significance = significanceSigmas(n, halfWidth);
+        double returnLevel = SignalLimits.RETURN_TO_BASELINE_SIGMAS * smoothSigma;
         double hysteresis = Math.max(SignalLimits.SPLIT_FRACTION_OF_MIN_HEIGHT * minHeight,
                 SignalLimits.SPLIT_MIN_SIGMAS * smoothSigma);
+        double prefilter = SignalLimits.PREFILTER_FRACTION * Math.max(minHeight, significance * smoothSigma);
         double minWidth = Double.isFinite(settings.minWidthS()) && settings.minWidthS() >= 0
                 ? settings.minWidthS()
                 : Math.max(SignalLimits.MIN_WIDTH_SAMPLES * sampling,
@@ -132,7 +161,7 @@ public final class PeakDetector {
 
         int curvatureHalfWidth = ShoulderFinder.halfWidth(typicalWidth, sampling, n);
         double[] concavity = ShoulderFinder.concavity(y, curvatureHalfWidth, sampling);
-        double concavitySd = ShoulderFinder.noiseSd(concavity, sigma, curvatureHalfWidth, sampling);
+        double concavitySd = ShoulderFinder.noiseSd(concavity, whiteSigma, curvatureHalfWidth, sampling);
         Cluster cluster = new Cluster(t, raw, smooth, concavity,
                 SignalLimits.SHOULDER_MIN_CONCAVITY_SIGMAS * concavitySd,
                 SignalLimits.SHOULDER_PROMINENCE_SIGMAS * concavitySd,
@@ -155,8 +184,8 @@ public final class PeakDetector {
                 found.addAll(resolved);
             } else {
                 for (int[] segment : region) {
-                    Measured m = measure(t, raw, smooth, segment[0], segment[1], sigma, halfWidth,
-                            minHeight, minWidth);
+                    Measured m = measure(t, raw, smooth, segment[0], segment[1], whiteSigma, halfWidth,
+                            prefilter, minWidth);
                     if (m != null) {
                         found.add(m);
                     }
@@ -164,11 +193,20 @@ public final class PeakDetector {
             }
             s = e + 1;
         }
-        List<Peak> peaks = new ArrayList<>(found.size());
-        for (int k = 0; k < found.size(); k++) {
-            Measured m = found.get(k);
+        Reporting reporting = new Reporting(t, raw, sampling, localNoise, correlation, significance,
+                settings.minSignalToNoise());
+        List<Measured> reported = new ArrayList<>(found.size());
+        for (Measured m : found) {
+            Measured r = reporting.judge(m);
+            if (r != null) {
+                reported.add(r);
+            }
+        }
+        List<Peak> peaks = new ArrayList<>(reported.size());
+        for (int k = 0; k < reported.size(); k++) {
+            Measured m = reported.get(k);
             double resolution = Double.NaN;
-            Measured neighbour = nearest(found, k);
+            Measured neighbour = nearest(reported, k);
             if (neighbour != null) {
                 resolution = RESOLUTION_FACTOR * Math.abs(neighbour.apexTimeS - m.apexTimeS)
                         / (m.widthHalfS + neighbour.widthHalfS);
@@ -178,19 +216,128 @@ public final class PeakDetector {
             double correctedArea = apexTime > 0 ? m.area / apexTime : Double.NaN;
             double apexSd = m.apexTimeSdS;
             if (!m.fitted) {
-                double overlap = overlapShiftS(found, k);
+                double overlap = overlapShiftS(reported, k);
                 apexSd = Math.sqrt(apexSd * apexSd + overlap * overlap);
             }
-            peaks.add(new Peak(nearestIndex(t, apexTime), apexTime, apexSd,
+            peaks.add(new Peak(nearestIndex(t, apexTime), apexTime, apexSd, m.centreTimeS, m.centreTimeSdS,
                     m.startTimeS, m.endTimeS, m.height, m.area, correctedArea, m.widthHalfS,
-                    plates, resolution, 2 * m.height / peakToPeak, dip));
+                    plates, resolution, m.signalToNoise, dip));
         }
         return new TraceAnalysis(peaks, sigma, peakToPeak);
     }
 
-    /** A peak that passed the checks, before its neighbours are known. */
+    /**
+     * The last checks of a measured peak, with the noise where it sits: the local noise SDs of the
+     * raw and the smoothed signal ({@link LocalNoise}), the peak-to-peak noise h = d₂(n)·σ over
+     * {@link SignalLimits#PEAK_TO_PEAK_WINDOW_WIDTHS} of its widths, its S/N = 2H/h, the
+     * significance of its smoothed height, the spike shape of a barely sampled top, and the
+     * uncertainty of its centre time.
+     */
+    private record Reporting(double[] t, double[] raw, double sampling, LocalNoise noise, double correlation,
+                             double significance, double minSignalToNoise) {
+
+        /** The peak with its S/N and centre uncertainty, or null when it is not to be reported. */
+        Measured judge(Measured m) {
+            int apex = nearestIndex(t, m.apexTimeS);
+            int support = (int) Math.ceil(0.5 * SignalLimits.NOISE_SUPPORT_WIDTHS * m.widthHalfS / sampling);
+            LocalNoise.Estimate local = noise.around(apex, support);
+            long points = Math.max(2, Math.round(SignalLimits.PEAK_TO_PEAK_WINDOW_WIDTHS * m.widthHalfS / sampling) + 1);
+            double peakToPeak = NoiseEstimator.expectedNormalRange(points) * local.rawSd();
+            double signalToNoise = 2 * m.height / peakToPeak;
+            if (!(signalToNoise >= minSignalToNoise)) {
+                return null;
+            }
+            if (!(m.smoothedHeight >= significance * local.smoothSd())) {
+                return null;
+            }
+            if (!m.fitted && m.widthHalfS < SignalLimits.SPIKE_CHECK_WIDTH_SAMPLES * sampling && spikeShaped(apex)) {
+                return null;
+            }
+            double centreSd = m.centre == null ? m.centreTimeSdS
+                    : m.centre.uncertaintyS(local.rawSd(), correlation, m.apexTimeS);
+            return m.reported(signalToNoise, centreSd);
+        }
+
+        /** True when the highest one or two raw samples at the apex have no shoulders. */
+        private boolean spikeShaped(int apex) {
+            int top = apex;
+            for (int i = Math.max(0, apex - 1); i <= Math.min(raw.length - 1, apex + 1); i++) {
+                if (raw[i] > raw[top]) {
+                    top = i;
+                }
+            }
+            int pair = top > 0 && (top + 1 >= raw.length || raw[top - 1] > raw[top + 1]) ? top - 1 : top;
+            return SpikeFilter.looksLikeSpike(t, raw, top, 1)
+                    || (pair + 1 < raw.length && SpikeFilter.looksLikeSpike(t, raw, pair, 2));
+        }
+    }
+
+    /** The noise of a run's baseline stretches and the samples left out as peaks. */
+    private record BaselineNoise(LocalNoise.Estimate estimate, boolean[] inPeak) {
+    }
+
+    /**
+     * Robust SDs of the corrected raw and smoothed signal over the samples outside the peaks, the
+     * peaks found with the smoothed SD itself: the first SD (all samples) is inflated by the peaks,
+     * so the mask and the SD are refined in turn, {@link SignalLimits#NOISE_MASK_ITERATIONS} times
+     * at most or until the smoothed SD changes by less than {@link SignalLimits#NOISE_MASK_CONVERGENCE}.
+     * Each round is linear. SDs are floored at {@code floor} (raw) and {@code floor · gain} (smoothed).
+     */
+    private static BaselineNoise baselineNoise(double[] raw, double[] smooth, int margin, double floor,
+                                               double gain) {
+        double smoothFloor = floor * gain;
+        boolean[] mask = null;
+        double smoothSd = Math.max(NoiseEstimator.marginalSd(smooth, null), smoothFloor);
+        for (int round = 0; round < SignalLimits.NOISE_MASK_ITERATIONS; round++) {
+            mask = LocalNoise.peakMask(smooth, SignalLimits.RETURN_TO_BASELINE_SIGMAS * smoothSd,
+                    SignalLimits.PEAK_MASK_SIGMAS * smoothSd, margin);
+            double next = Math.max(NoiseEstimator.marginalSd(smooth, mask), smoothFloor);
+            boolean settled = Math.abs(next - smoothSd) <= SignalLimits.NOISE_MASK_CONVERGENCE * smoothSd;
+            smoothSd = next;
+            if (settled) {
+                break;
+            }
+        }
+        double rawSd = Math.max(NoiseEstimator.marginalSd(raw, mask), floor);
+        return new BaselineNoise(new LocalNoise.Estimate(rawSd, smoothSd, raw.length), mask);
+    }
+
+    /** The lag-one correlation ρ = 1 − σ_d²/σ² of the noise from the white-noise equivalent σ_d of
+     *  its first differences (Var(y_{i+1} − y_i) = 2σ²(1 − ρ)) and its marginal SD σ, in [0, 0.99]. */
+    private static double lagOneCorrelation(double whiteSigma, double sigma) {
+        if (!(sigma > 0)) {
+            return 0.0;
+        }
+        double ratio = whiteSigma / sigma;
+        return Math.min(SignalLimits.MAX_NOISE_CORRELATION, Math.max(0.0, 1 - ratio * ratio));
+    }
+
+    /** The significance threshold, in smoothed-noise SDs, for a run of n samples smoothed over
+     *  2m + 1: z = Φ⁻¹(1 − α/M) with M = n/(2m + 1) looks ({@link SignalLimits#DETECTION_FALSE_ALARM_PER_RUN}). */
+    private static double significanceSigmas(int n, int halfWidth) {
+        double looks = Math.max(1.0, (double) n / (2 * halfWidth + 1));
+        double tail = SignalLimits.DETECTION_FALSE_ALARM_PER_RUN / looks;
+        return Math.sqrt(2.0) * Erf.erfcInv(2 * tail);
+    }
+
+    /**
+     * A measured peak, before the checks that need the local noise and its neighbours.
+     *
+     * @param smoothedHeight height of the smoothed corrected signal at the apex (for a fitted zone,
+     *                       the fitted height), for the significance test
+     * @param centre         the first moment of a segment; null for a fitted zone, whose centre
+     *                       is the fitted one
+     * @param signalToNoise  NaN until judged
+     */
     private record Measured(double apexTimeS, double apexTimeSdS, double height, double startTimeS,
-                            double endTimeS, double area, double widthHalfS, boolean fitted) {
+                            double endTimeS, double area, double widthHalfS, boolean fitted,
+                            double smoothedHeight, ZoneCentre centre, double centreTimeS, double centreTimeSdS,
+                            double signalToNoise) {
+
+        Measured reported(double sn, double centreSd) {
+            return new Measured(apexTimeS, apexTimeSdS, height, startTimeS, endTimeS, area, widthHalfS, fitted,
+                    smoothedHeight, centre, centreTimeS, centreSd, sn);
+        }
     }
 
     /**
@@ -307,7 +454,7 @@ public final class PeakDetector {
                 GaussianClusterFit.Component z = c.get(k);
                 double end = k + 1 < c.size() ? GaussianClusterFit.dominanceBoundaryS(z, c.get(k + 1)) : t[last];
                 out.add(new Measured(z.apexTimeS(), z.apexTimeSdS(), z.height(), start, end, z.area(),
-                        z.widthHalfS(), true));
+                        z.widthHalfS(), true, z.height(), null, z.apexTimeS(), z.apexTimeSdS(), Double.NaN));
                 start = end;
             }
             return out;
@@ -330,19 +477,23 @@ public final class PeakDetector {
         }
     }
 
+    /**
+     * Measures one segment, or null when it is far too low to be reported ({@code prefilter}, on
+     * the smoothed signal), has no positive fitted height, or is narrower than {@code minWidth}.
+     */
     private static Measured measure(double[] t, double[] raw, double[] smooth, int first, int last,
-                                    double sigma, int halfWidth, double minHeight, double minWidth) {
+                                    double sigma, int halfWidth, double prefilter, double minWidth) {
         int apex = first;
         for (int i = first + 1; i <= last; i++) {
             if (smooth[i] > smooth[apex]) {
                 apex = i;
             }
         }
-        if (!(smooth[apex] >= SignalLimits.SPLIT_FRACTION_OF_MIN_HEIGHT * minHeight)) {
-            return null; // far too low to reach the threshold: skip the fit
+        if (!(smooth[apex] >= prefilter)) {
+            return null; // far too low to pass the checks: skip the fit
         }
         ApexFit fit = ApexFit.fit(t, raw, smooth, apex, first, last, sigma);
-        if (!(fit.height() >= minHeight)) {
+        if (!(fit.height() > 0)) {
             return null;
         }
         if (rawWidthS(t, raw, apex, first, last, halfWidth) < minWidth) {
@@ -352,8 +503,13 @@ public final class PeakDetector {
         if (!(width > 0)) {
             return null;
         }
+        ZoneCentre centre = ZoneCentre.of(t, raw, first, last);
+        if (Double.isNaN(centre.centreTimeS())) {
+            centre = null;
+        }
         return new Measured(fit.apexTimeS(), fit.apexTimeSdS(), fit.height(), t[first], t[last],
-                trapezoid(t, raw, first, last), width, false);
+                trapezoid(t, raw, first, last), width, false, smooth[apex], centre,
+                centre == null ? fit.apexTimeS() : centre.centreTimeS(), fit.apexTimeSdS(), Double.NaN);
     }
 
     /**
@@ -572,7 +728,11 @@ public final class PeakDetector {
 
     /** Robust noise SD, never below a tiny fraction of the signal range (nor zero). */
     private static double flooredNoise(double[] y) {
-        double floor = SignalLimits.NOISE_FLOOR_RELATIVE * NoiseEstimator.robustSpan(y);
-        return Math.max(Math.max(NoiseEstimator.robustSd(y), floor), Double.MIN_NORMAL);
+        return Math.max(NoiseEstimator.robustSd(y), noiseFloor(y));
+    }
+
+    /** A tiny fraction of the signal range, never zero: the least noise SD a trace is given. */
+    private static double noiseFloor(double[] y) {
+        return Math.max(SignalLimits.NOISE_FLOOR_RELATIVE * NoiseEstimator.robustSpan(y), Double.MIN_NORMAL);
     }
 }

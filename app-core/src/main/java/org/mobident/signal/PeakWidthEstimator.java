@@ -12,7 +12,10 @@ import java.util.Arrays;
  * and Mathematical Morphology, 1982), computed with the van Herk / Gil–Werman block algorithm; then every excursion (a
  * run of points above 3 smoothed-noise SDs) whose maximum rises more than 10 smoothed-noise
  * SDs is measured at half its maximum by linear
- * interpolation between samples. When there is no such excursion, those below the background
+ * interpolation between samples. The smoothed-noise SD is the white-noise value σ√(Σw²) or, when
+ * larger, the robust SD (1.4826 · MAD) of the top-hat series itself: correlated noise passes the
+ * light smoothing almost unchanged and is understated by first differences, and without the
+ * measured value its excursions would be taken for peaks and the width for the noise's own. When there is no such excursion, those below the background
  * (the closing minus the signal) are measured instead: the width scale of a run does not depend
  * on the sign of its zones, and the baseline must know the width of dips as well. Excursions
  * below are only a fallback because, beside a large peak on a sloping background, the closing
@@ -51,7 +54,11 @@ final class PeakWidthEstimator {
         for (int i = 0; i < n; i++) {
             excursion[i] = light[i] - opening[i + pad]; // rise above the background
         }
-        double threshold = SignalLimits.WIDTH_ESTIMATE_MIN_SIGMAS * noiseSd * gain;
+        // the noise of the light smoothing: its white-noise value, or the spread of the top-hat
+        // itself when that is larger (correlated noise is barely lowered by a 5-point smoothing, and
+        // its first differences understate it)
+        double lightNoise = Math.max(noiseSd * gain, NoiseEstimator.marginalSd(excursion, null));
+        double threshold = SignalLimits.WIDTH_ESTIMATE_MIN_SIGMAS * lightNoise;
         double minWidth = SignalLimits.WIDTH_ESTIMATE_MIN_SAMPLES * samplingS;
         double[] widths = new double[16];
         int[] found = {0};

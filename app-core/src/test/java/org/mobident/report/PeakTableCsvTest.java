@@ -39,8 +39,8 @@ class PeakTableCsvTest {
         assertEquals("run,sample,peak,role,apex_time_s,apex_time_sd_s,start_s,end_s,height,area,corrected_area,"
                 + "width_half_s,plates,resolution,signal_to_noise,direction,mobility,mobility_sd,"
                 + "mobility_at_library_temp,mobility_corrected,assigned,confidence,status,runner_up,"
-                + "runner_up_probability,candidates,scale_factor,scale_factor_sd,scale_offset,scale_offset_sd,note",
-                first);
+                + "runner_up_probability,candidates,centre_time_s,centre_time_sd_s,sn_class,scale_factor,"
+                + "scale_factor_sd,scale_offset,scale_offset_sd,note", first);
     }
 
     @Test
@@ -71,7 +71,21 @@ class PeakTableCsvTest {
         assertEquals("bromide", r.get("runner_up"));
         assertEquals("0.027", r.get("runner_up_probability"));
         assertEquals("chloride:0.973 bromide:0.027", r.get("candidates"));
+        assertEquals("223.5000", r.get("centre_time_s"), "223.45678 + 0.04321, 4 decimals");
+        assertEquals("0.0211", r.get("centre_time_sd_s"));
+        assertEquals("quantifiable", r.get("sn_class"), "S/N 57.25 is above the quantitation limit 10");
         assertEquals("", r.get("note"));
+    }
+
+    @Test
+    void signalToNoiseClassAgainstTheDetectionAndQuantitationLimits() throws IOException {
+        List<CSVRecord> rows = records(csv(List.of(ReportFixtures.okRun())));
+        // ICH Q2(R1): detection limit S/N 3, quantitation limit S/N 10; the fixture's third peak has 6.5
+        assertEquals("below quantitation limit", rows.get(2).get("sn_class"));
+        assertEquals("6.5", rows.get(2).get("signal_to_noise"));
+        // a peak made without a centre measurement reports the apex as its centre
+        assertEquals(rows.get(3).get("apex_time_s"), rows.get(3).get("centre_time_s"));
+        assertEquals(rows.get(3).get("apex_time_sd_s"), rows.get(3).get("centre_time_sd_s"));
     }
 
     @Test

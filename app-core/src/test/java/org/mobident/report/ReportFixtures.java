@@ -69,8 +69,13 @@ final class ReportFixtures {
     }
 
     static Peak peak(double apexS, double height, boolean dip) {
-        return new Peak(100, apexS, 0.0123, apexS - 2.5, apexS + 3.25, height, height * 1.7,
-                height * 1.7 / apexS, 1.5, 123456.4, 2.345, 57.25, dip);
+        return peak(apexS, height, dip, 57.25);
+    }
+
+    /** A peak whose zone centre lies 0.04321 s after its apex (uncertainty 0.02109 s). */
+    static Peak peak(double apexS, double height, boolean dip, double signalToNoise) {
+        return new Peak(100, apexS, 0.0123, apexS + 0.04321, 0.02109, apexS - 2.5, apexS + 3.25, height,
+                height * 1.7, height * 1.7 / apexS, 1.5, 123456.4, 2.345, signalToNoise, dip);
     }
 
     /** An ok run: one identified, one ambiguous, one unassigned analyte and the neutral marker. */
@@ -85,7 +90,7 @@ final class ReportFixtures {
         List<PeakResult> peaks = List.of(
                 new PeakResult(peak(223.45678, 3.2, true), PeakRole.ANALYTE, -71.52, 0.21, -71.52, chloride),
                 new PeakResult(peak(240.1, 1.1, true), PeakRole.ANALYTE, -69.5, 0.25, -69.5, nitrate),
-                new PeakResult(peak(261.0, 0.8, true), PeakRole.ANALYTE, -59.6, 0.3, -59.6, none),
+                new PeakResult(peak(261.0, 0.8, true, 6.5), PeakRole.ANALYTE, -59.6, 0.3, -59.6, none),
                 new PeakResult(new Peak(900, 576.0, 0.02, 574.0, 578.0, 2.0, 4.0, 4.0 / 576.0, 1.9,
                         Double.NaN, Double.NaN, 40.0, true), PeakRole.NEUTRAL_MARKER, 0.0, Double.NaN,
                         Double.NaN, PeakMatch.none()));

@@ -61,8 +61,9 @@ class PeakDetectorTest {
         assertTrue(p.startTimeS() < apex - 3 * sigma && p.endTimeS() > apex + 3 * sigma);
         assertTrue(Double.isNaN(p.resolution()), "a lone peak has no neighbour");
         assertFalse(p.dip());
-        // S/N = 2H/h (Ph. Eur. 2.2.46) with the reported h
-        assertEquals(2 * p.height() / analysis.noisePeakToPeak(), p.signalToNoise(), 1e-9 * p.signalToNoise());
+        // S/N = 2H/h (Ph. Eur. 2.2.46): the peak's own h comes from its own width and local noise,
+        // the run's from the typical width and the run's noise; on a lone peak they agree closely
+        assertEquals(2 * p.height() / analysis.noisePeakToPeak(), p.signalToNoise(), 0.02 * p.signalToNoise());
     }
 
     @Test

@@ -1,0 +1,316 @@
+package org.mobident.signal;
+
+/**
+ * Finds and removes electrical spikes: features one or two samples wide, of either sign, that no
+ * migrating zone can produce.
+ *
+ * <p><b>The test.</b> For every block of one or two neighbouring samples, a parabola in time is
+ * fitted by least squares to the two samples beyond each shoulder of the block (four anchors; the
+ * block and its two shoulders are left out), and the residuals of the block and of its shoulders
+ * from that parabola are taken. A spike is a block that
+ * <ol>
+ * <li>stands out: every residual of the block has the same sign and at least
+ *     {@link SignalLimits#SPIKE_MIN_RESIDUAL_SIGMAS} times the robust SD of the one-sample
+ *     residuals over the whole trace (1.4826 · MAD, Rousseeuw &amp; Croux 1993; measured, so
+ *     correlated noise needs no model), and</li>
+ * <li>has no shoulders: the mean residual of its two shoulders, in the direction of the block, is
+ *     at most {@link SignalLimits#SPIKE_SHOULDER_FRACTION} of the block's smaller residual, and</li>
+ * <li>holds the largest one-sample residual within reach (its shoulders and anchors): a spike
+ *     among the anchors of a neighbouring block bends that block's parabola, and the clean samples
+ *     beside it would otherwise seem to stand out.</li>
+ * </ol>
+ * The second condition is about shape alone, so it holds for spikes of any height. A Gaussian zone
+ * whose width at half height spans at least two sampling intervals keeps shoulders of at least
+ * about a quarter of its top above such a parabola, wherever its apex falls between samples
+ * (worked out for apexes on a sample and midway between two); narrower zones are undersampled and
+ * cannot be told from a spike by their samples. The parabola follows a baseline, a drift or the
+ * flank and top of a zone much wider than the block, so a spike riding on a peak is found as well,
+ * and its samples are replaced by the parabola's values: the peak's apex, height and area are then
+ * measured as if the spike had not been there. This is the outlier test of a running filter (the
+ * Hampel identifier: Hampel, J. Am. Stat. Assoc. 69 (1974) 383; from memory), with a local
+ * parabola instead of the window median, so that the tops of narrow zones are not cut, and with
+ * the shoulder condition that tells a one- or two-sample glitch from a zone.
+ *
+ * <p>Two passes from left to right (the second finds a smaller spike that stood within reach of
+ * a larger one) with a fixed number of operations per sample (fixed weights when
+ * the sampling is regular, a 3×3 least-squares solve per tested block otherwise), and the robust
+ * scale from an evenly strided subset: linear in the number of points. Times, not indices, enter
+ * the parabola, so irregular sampling is handled.
+ */
+final class SpikeFilter {
+
+    /** Anchor samples on each side of a block (beyond its shoulder). */
+    private static final int ANCHORS_PER_SIDE = 2;
+    /** Widest block tested, samples. */
+    static final int MAX_SPIKE_SAMPLES = 2;
+    /** Samples a block needs on each side: its shoulder and the anchors beyond. */
+    private static final int REACH = 1 + ANCHORS_PER_SIDE;
+    /** Passes over the trace: a second one finds a smaller spike that stood within reach of a larger
+     *  one (it is not the largest residual of its neighbourhood until the larger one is gone). */
+    private static final int PASSES = 2;
+    /** Sampling is treated as regular when every interval is within this fraction of the first. */
+    private static final double REGULAR_RELATIVE = 1e-4;
+
+    private SpikeFilter() {
+    }
+
+    /**
+     * Removes the spikes of {@code y} in place.
+     *
+     * @param t times, s, strictly increasing (not modified)
+     * @param y signal (modified: spike samples replaced by the local parabola)
+     * @return the number of spikes removed
+     */
+    static int despike(double[] t, double[] y) {
+        int n = y.length;
+        if (n < 2 * REACH + MAX_SPIKE_SAMPLES) {
+            return 0;
+        }
+        Parabola parabola = regular(t) ? new Stencils(t[1] - t[0]) : new LeastSquares();
+        double scale = residualSd(t, y, parabola);
+        if (!(scale > 0)) {
+            return 0;
+        }
+        double minResidual = SignalLimits.SPIKE_MIN_RESIDUAL_SIGMAS * scale;
+        int removed = 0;
+        for (int pass = 0; pass < PASSES; pass++) {
+            int found = pass(t, y, minResidual, parabola);
+            removed += found;
+            if (found == 0) {
+                break;
+            }
+        }
+        return removed;
+    }
+
+    /** One pass from left to right; returns the number of spikes removed. */
+    private static int pass(double[] t, double[] y, double minResidual, Parabola parabola) {
+        int n = y.length;
+        double[] r = new double[MAX_SPIKE_SAMPLES + 2];
+        int removed = 0;
+        int i = REACH;
+        while (i < n - REACH) {
+            int width = 0;
+            for (int w = 1; w <= MAX_SPIKE_SAMPLES && i + w - 1 < n - REACH; w++) {
+                if (isSpike(t, y, i, w, minResidual, parabola, r)) {
+                    width = w;
+                    break;
+                }
+            }
+            if (width == 0) {
+                i++;
+                continue;
+            }
+            // r holds the block residuals: subtracting them leaves the parabola's values
+            for (int k = 0; k < width; k++) {
+                y[i + k] -= r[k];
+            }
+            removed++;
+            i += width;
+        }
+        return removed;
+    }
+
+    /**
+     * True when the block [first, first + width − 1] (one or two samples, the top of a peak that
+     * points up) has the shape of a spike: its shoulders stand at most
+     * {@link SignalLimits#SPIKE_SHOULDER_FRACTION} of its height above the parabola through the
+     * anchors. No significance condition: any height.
+     */
+    static boolean looksLikeSpike(double[] t, double[] y, int first, int width) {
+        if (first - REACH < 0 || first + width - 1 + REACH >= y.length) {
+            return false;
+        }
+        double[] r = new double[MAX_SPIKE_SAMPLES + 2];
+        if (!new LeastSquares().residuals(t, y, first, width, r)) {
+            return false;
+        }
+        double top = Double.POSITIVE_INFINITY;
+        for (int k = 0; k < width; k++) {
+            top = Math.min(top, r[k]);
+        }
+        return top > 0 && 0.5 * (r[width] + r[width + 1]) <= SignalLimits.SPIKE_SHOULDER_FRACTION * top;
+    }
+
+    private static boolean isSpike(double[] t, double[] y, int first, int width, double minResidual,
+                                   Parabola parabola, double[] r) {
+        // cheap first look: the first sample of the block alone must stand out
+        if (!parabola.residuals(t, y, first, width, r)) {
+            return false;
+        }
+        double sign = Math.signum(r[0]);
+        if (!(sign * r[0] >= minResidual)) {
+            return false;
+        }
+        double top = Double.POSITIVE_INFINITY;
+        double largest = 0;
+        for (int k = 0; k < width; k++) {
+            double v = sign * r[k];
+            if (!(v >= minResidual)) {
+                return false;
+            }
+            top = Math.min(top, v);
+            largest = Math.max(largest, v);
+        }
+        if (!(0.5 * sign * (r[width] + r[width + 1]) <= SignalLimits.SPIKE_SHOULDER_FRACTION * top)) {
+            return false;
+        }
+        // the block must hold the largest one-sample residual around it: a spike among the anchors
+        // of a neighbouring block bends that block's parabola and makes clean samples stand out
+        double[] own = new double[MAX_SPIKE_SAMPLES + 2];
+        int last = first + width - 1;
+        for (int j = Math.max(REACH, first - REACH); j <= Math.min(y.length - 1 - REACH, last + REACH); j++) {
+            if (j >= first && j <= last) {
+                continue;
+            }
+            if (parabola.residuals(t, y, j, 1, own) && Math.abs(own[0]) > largest) {
+                return false;
+            }
+        }
+        return true;
+    }
+
+    private static boolean regular(double[] t) {
+        double step = t[1] - t[0];
+        double tolerance = REGULAR_RELATIVE * step;
+        for (int i = 2; i < t.length; i++) {
+            if (Math.abs(t[i] - t[i - 1] - step) > tolerance) {
+                return false;
+            }
+        }
+        return true;
+    }
+
+    /**
+     * Residuals from the anchor parabola of a block: {@code r[0..width−1]} for the block samples,
+     * {@code r[width]} for the left shoulder and {@code r[width + 1]} for the right one.
+     */
+    private interface Parabola {
+        boolean residuals(double[] t, double[] y, int first, int width, double[] r);
+    }
+
+    /** Index of the k-th anchor (0…3) of the block of {@code width} samples starting at {@code first}. */
+    private static int anchor(int first, int width, int k) {
+        return k < ANCHORS_PER_SIDE ? first - REACH + k : first + width + 1 + (k - ANCHORS_PER_SIDE);
+    }
+
+    /** The general case: a least-squares parabola in time through the anchors of each block. */
+    private static final class LeastSquares implements Parabola {
+        @Override
+        public boolean residuals(double[] t, double[] y, int first, int width, double[] r) {
+            double ref = t[first];
+            double s0 = 0, s1 = 0, s2 = 0, s3 = 0, s4 = 0, z0 = 0, z1 = 0, z2 = 0;
+            for (int k = 0; k < 2 * ANCHORS_PER_SIDE; k++) {
+                int j = anchor(first, width, k);
+                double u = t[j] - ref;
+                double u2 = u * u;
+                s0 += 1;
+                s1 += u;
+                s2 += u2;
+                s3 += u2 * u;
+                s4 += u2 * u2;
+                z0 += y[j];
+                z1 += u * y[j];
+                z2 += u2 * y[j];
+            }
+            double[][] inv = ApexFit.inverseSymmetric3(s0, s1, s2, s3, s4);
+            if (inv == null) {
+                return false;
+            }
+            double a = inv[0][0] * z0 + inv[0][1] * z1 + inv[0][2] * z2;
+            double b = inv[1][0] * z0 + inv[1][1] * z1 + inv[1][2] * z2;
+            double c = inv[2][0] * z0 + inv[2][1] * z1 + inv[2][2] * z2;
+            for (int k = 0; k < width + 2; k++) {
+                int j = k < width ? first + k : (k == width ? first - 1 : first + width);
+                double u = t[j] - ref;
+                r[k] = y[j] - (a + u * (b + u * c));
+            }
+            return true;
+        }
+    }
+
+    /**
+     * Regular sampling: the parabola's value at a block or shoulder sample is a fixed weighted sum of
+     * the four anchors, so each block costs a few multiplications. Weights per block width: rows for
+     * the block samples, then the left and the right shoulder.
+     */
+    private static final class Stencils implements Parabola {
+        private final double[][][] weights = new double[MAX_SPIKE_SAMPLES + 1][][];
+
+        Stencils(double stepS) {
+            for (int width = 1; width <= MAX_SPIKE_SAMPLES; width++) {
+                int first = REACH;
+                double[] times = new double[first + width + REACH];
+                for (int i = 0; i < times.length; i++) {
+                    times[i] = i * stepS;
+                }
+                double[][] w = new double[width + 2][2 * ANCHORS_PER_SIDE];
+                // the weights are the parabola's response to a unit value at each anchor in turn
+                double[] unit = new double[times.length];
+                double[] r = new double[MAX_SPIKE_SAMPLES + 2];
+                for (int k = 0; k < 2 * ANCHORS_PER_SIDE; k++) {
+                    java.util.Arrays.fill(unit, 0.0);
+                    unit[anchor(first, width, k)] = 1.0;
+                    new LeastSquares().residuals(times, unit, first, width, r);
+                    for (int row = 0; row < width + 2; row++) {
+                        w[row][k] = -r[row]; // the sample itself is 0, so the residual is −value
+                    }
+                }
+                weights[width] = w;
+            }
+        }
+
+        @Override
+        public boolean residuals(double[] t, double[] y, int first, int width, double[] r) {
+            double[][] w = weights[width];
+            double y0 = y[first - REACH];
+            double y1 = y[first - REACH + 1];
+            double y2 = y[first + width + 1];
+            double y3 = y[first + width + 2];
+            for (int k = 0; k < width + 2; k++) {
+                int j = k < width ? first + k : (k == width ? first - 1 : first + width);
+                double[] row = w[k];
+                r[k] = y[j] - (row[0] * y0 + row[1] * y1 + row[2] * y2 + row[3] * y3);
+            }
+            return true;
+        }
+    }
+
+    /**
+     * Robust SD (1.4826 · MAD about the median) of the one-sample residuals over an evenly strided
+     * subset of at most {@link SignalLimits#NOISE_SAMPLE_CAP} samples.
+     */
+    static double residualSd(double[] t, double[] y) {
+        if (y.length < 2 * REACH + MAX_SPIKE_SAMPLES) {
+            return 0.0;
+        }
+        return residualSd(t, y, regular(t) ? new Stencils(t[1] - t[0]) : new LeastSquares());
+    }
+
+    private static double residualSd(double[] t, double[] y, Parabola parabola) {
+        int first = REACH;
+        int last = y.length - 1 - REACH;
+        int all = last - first + 1;
+        if (all < 2) {
+            return 0.0;
+        }
+        int stride = Math.max(1, all / SignalLimits.NOISE_SAMPLE_CAP);
+        int count = (all + stride - 1) / stride;
+        double[] values = new double[count];
+        double[] r = new double[MAX_SPIKE_SAMPLES + 2];
+        int m = 0;
+        for (int i = first; i <= last && m < count; i += stride) {
+            if (parabola.residuals(t, y, i, 1, r)) {
+                values[m++] = r[0];
+            }
+        }
+        if (m < 2) {
+            return 0.0;
+        }
+        double centre = Selection.medianInPlace(values.clone(), m);
+        for (int k = 0; k < m; k++) {
+            values[k] = Math.abs(values[k] - centre);
+        }
+        return SignalLimits.MAD_TO_SD * Selection.medianInPlace(values, m);
+    }
+}
