@@ -76,6 +76,30 @@ public final class MatchWindow {
     }
 
     /**
+     * The half-width applied to each entry of {@code library} for a peak measured without
+     * uncertainty, as identification applies it: an entry labelled with a buffer is judged with the
+     * spreads of that buffer's entries (the ones a run in that buffer is matched against), an
+     * unlabelled one with those of the whole library.
+     */
+    public static double[] halfWidths(org.mobident.library.Library library, MatchSettings s) {
+        java.util.Map<String, SpreadModel> byBuffer = new java.util.HashMap<>();
+        SpreadModel all = SpreadModel.of(library, s);
+        double[] w = new double[library.size()];
+        for (int j = 0; j < w.length; j++) {
+            LibraryEntry e = library.entries().get(j);
+            if (e.buffer() == null || library.bufferLabels().size() <= 1) {
+                w[j] = halfWidth(e, all, j, 0.0, s);
+                continue;
+            }
+            org.mobident.library.Library mine = library.forBuffer(e.buffer());
+            SpreadModel spread = byBuffer.computeIfAbsent(e.buffer().trim().toLowerCase(java.util.Locale.ROOT),
+                    k -> SpreadModel.of(mine, s));
+            w[j] = halfWidth(e, spread, mine.entries().indexOf(e), 0.0, s);
+        }
+        return w;
+    }
+
+    /**
      * Welch–Satterthwaite degrees of freedom of a variance {@code total} of which only
      * {@code estimated} (with {@code df} degrees of freedom) is an estimate; infinite when nothing is.
      */

@@ -187,12 +187,15 @@ public final class LibraryBuilder {
         BuildResult run(List<RunResult> runs) {
             for (StandardsMix m : sheet.mixes()) {
                 runsByMix.put(m.name(), new ArrayList<>());
-                for (StandardAnalyte a : m.analytes()) {
-                    pools.computeIfAbsent(key(a.name()), k -> new Pool(a.name()));
-                }
             }
             for (RunResult r : runs) {
                 admit(r);
+            }
+            // one pool per analyte and buffer: a standards sheet may hold the mixes of several methods
+            for (StandardsMix m : sheet.mixes()) {
+                for (StandardAnalyte a : m.analytes()) {
+                    pools.computeIfAbsent(poolKey(a.name(), m), k -> new Pool(a.name()));
+                }
             }
             prepareReference();
             Map<String, Integer> runOrder = new LinkedHashMap<>();
@@ -343,7 +346,7 @@ public final class LibraryBuilder {
                 StandardAnalyte a = naming.analyteOfGroup()[g];
                 if (a != null) {
                     found.add(a);
-                    Pool p = pools.get(key(a.name()));
+                    Pool p = pools.get(poolKey(a.name(), mix));
                     p.mixes.add(mix.name());
                     p.measurements.addAll(groups.get(g));
                     if (p.basis == null) {
@@ -371,6 +374,19 @@ public final class LibraryBuilder {
                                     + " run(s)" + (why == null ? "" : ": " + why) + "."));
                 }
             }
+        }
+
+        /** The pool of an analyte of a mix: its name within the buffer the mix's runs were made in. */
+        private String poolKey(String name, StandardsMix mix) {
+            String buffer = null;
+            for (RunResult r : runsByMix.getOrDefault(mix.name(), List.of())) {
+                String b = r.spec().conditions().buffer();
+                if (b != null && !b.isBlank()) {
+                    buffer = b.strip().toLowerCase(Locale.ROOT);
+                    break;
+                }
+            }
+            return key(name) + "\u0000" + (buffer == null ? "" : buffer);
         }
 
         /** The run's analyte peaks with a mobility; small ones are set aside as unexpected. */

@@ -3,12 +3,11 @@ package org.mobident.library.build;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
+import org.mobident.InputException;
 import org.mobident.library.Library;
 import org.mobident.library.LibraryEntry;
-import org.mobident.InputException;
 import org.mobident.matching.MatchSettings;
 import org.mobident.matching.MatchWindow;
-import org.mobident.matching.SpreadModel;
 import org.mobident.mobility.PhysicalBounds;
 
 /**
@@ -112,12 +111,7 @@ public final class LibraryCheck {
      * uncertainty and that of its run's scale widen it further.
      */
     public static double[] windows(Library library, MatchSettings match) {
-        SpreadModel spread = SpreadModel.of(library, match);
-        double[] w = new double[library.size()];
-        for (int j = 0; j < w.length; j++) {
-            w[j] = MatchWindow.halfWidth(library.entries().get(j), spread, j, 0.0, match);
-        }
-        return w;
+        return MatchWindow.halfWidths(library, match);
     }
 
     private static String plain(double v) {

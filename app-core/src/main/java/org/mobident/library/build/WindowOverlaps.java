@@ -39,6 +39,9 @@ final class WindowOverlaps {
             for (int j = i + 1; j < entries.size(); j++) {
                 LibraryEntry a = entries.get(i);
                 LibraryEntry b = entries.get(j);
+                if (a.buffer() != null && b.buffer() != null && !LibraryEntry.sameBuffer(a.buffer(), b.buffer())) {
+                    continue; // entries of two buffers never meet in one run
+                }
                 double d = Math.abs(a.mobility() - b.mobility());
                 double sdDiff = Math.sqrt(a.mobilitySd() * a.mobilitySd() + b.mobilitySd() * b.mobilitySd());
                 double limit = Double.isFinite(sdDiff)

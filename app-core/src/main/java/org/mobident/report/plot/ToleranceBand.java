@@ -3,7 +3,6 @@ package org.mobident.report.plot;
 import org.mobident.library.Library;
 import org.mobident.matching.MatchSettings;
 import org.mobident.matching.MatchWindow;
-import org.mobident.matching.SpreadModel;
 import org.mobident.library.LibraryEntry;
 
 /**
@@ -23,14 +22,15 @@ public interface ToleranceBand {
      * NaN (no band) for an entry of another library.
      */
     static ToleranceBand matching(Library library, MatchSettings settings) {
-        SpreadModel spread = SpreadModel.of(library, settings);
+        double[] w = MatchWindow.halfWidths(library, settings);
         java.util.Map<LibraryEntry, Integer> index = new java.util.HashMap<>();
         for (int j = 0; j < library.size(); j++) {
             index.put(library.entries().get(j), j);
         }
         return entry -> {
             Integer j = index.get(entry);
-            return j == null ? Double.NaN : MatchWindow.halfWidth(entry, spread, j, 0.0, settings);
+            return j == null ? Double.NaN : w[j];
         };
     }
+
 }
