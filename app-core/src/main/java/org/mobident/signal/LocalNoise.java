@@ -122,15 +122,20 @@ final class LocalNoise {
      * @param margin      samples added on each side
      */
     static boolean[] peakMask(double[] smooth, double returnLevel, double peakLevel, int margin) {
+        return peakMask(smooth, returnLevel, peakLevel, margin, new boolean[smooth.length]);
+    }
+
+    /** {@link #peakMask(double[], double, double, int)} written into {@code mask} (cleared first). */
+    static boolean[] peakMask(double[] smooth, double returnLevel, double peakLevel, int margin, boolean[] mask) {
         int n = smooth.length;
-        boolean[] mask = new boolean[n];
+        java.util.Arrays.fill(mask, false);
         int i = 0;
         while (i < n) {
-            double sign = smooth[i] > returnLevel ? 1 : smooth[i] < -returnLevel ? -1 : 0;
-            if (sign == 0) {
+            if (!(Math.abs(smooth[i]) > returnLevel)) {
                 i++;
                 continue;
             }
+            double sign = Math.signum(smooth[i]);
             int j = i;
             double extreme = sign * smooth[i];
             while (j + 1 < n && sign * smooth[j + 1] > returnLevel) {

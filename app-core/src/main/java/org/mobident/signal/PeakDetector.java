@@ -124,7 +124,8 @@ public final class PeakDetector {
             corrected[i] = smooth[i] - baseline[i];
         }
         int margin = (int) Math.ceil(SignalLimits.PEAK_MASK_MARGIN_WIDTHS * typicalWidth / sampling);
-        LocalNoise.Estimate first = baselineNoise(raw, corrected, margin, floor, smoothGain).estimate();
+        LocalNoise.Estimate first = BackgroundNoise.of(raw, corrected, margin, floor, smoothGain, Double.NaN, false)
+                .estimate();
         double firstSigma = Math.max(first.rawSd(), whiteSigma);
         double firstSmoothSigma = first.smoothSd();
         ClusterBaseline.bridge(t, smooth, baseline,
@@ -139,7 +140,8 @@ public final class PeakDetector {
 
         // the run's noise from its baseline stretches: the peaks (runs passing 5 smoothed-noise SDs,
         // with their feet) are left out
-        BaselineNoise background = baselineNoise(raw, smooth, margin, floor, smoothGain);
+        BackgroundNoise.Result background = BackgroundNoise.of(raw, smooth, margin, floor, smoothGain, firstSmoothSigma,
+                true);
         boolean[] inPeak = background.inPeak();
         double sigma = background.estimate().rawSd();
         double smoothSigma = background.estimate().smoothSd();
@@ -270,36 +272,6 @@ public final class PeakDetector {
             return SpikeFilter.looksLikeSpike(t, raw, top, 1)
                     || (pair + 1 < raw.length && SpikeFilter.looksLikeSpike(t, raw, pair, 2));
         }
-    }
-
-    /** The noise of a run's baseline stretches and the samples left out as peaks. */
-    private record BaselineNoise(LocalNoise.Estimate estimate, boolean[] inPeak) {
-    }
-
-    /**
-     * Robust SDs of the corrected raw and smoothed signal over the samples outside the peaks, the
-     * peaks found with the smoothed SD itself: the first SD (all samples) is inflated by the peaks,
-     * so the mask and the SD are refined in turn, {@link SignalLimits#NOISE_MASK_ITERATIONS} times
-     * at most or until the smoothed SD changes by less than {@link SignalLimits#NOISE_MASK_CONVERGENCE}.
-     * Each round is linear. SDs are floored at {@code floor} (raw) and {@code floor · gain} (smoothed).
-     */
-    private static BaselineNoise baselineNoise(double[] raw, double[] smooth, int margin, double floor,
-                                               double gain) {
-        double smoothFloor = floor * gain;
-        boolean[] mask = null;
-        double smoothSd = Math.max(NoiseEstimator.marginalSd(smooth, null), smoothFloor);
-        for (int round = 0; round < SignalLimits.NOISE_MASK_ITERATIONS; round++) {
-            mask = LocalNoise.peakMask(smooth, SignalLimits.RETURN_TO_BASELINE_SIGMAS * smoothSd,
-                    SignalLimits.PEAK_MASK_SIGMAS * smoothSd, margin);
-            double next = Math.max(NoiseEstimator.marginalSd(smooth, mask), smoothFloor);
-            boolean settled = Math.abs(next - smoothSd) <= SignalLimits.NOISE_MASK_CONVERGENCE * smoothSd;
-            smoothSd = next;
-            if (settled) {
-                break;
-            }
-        }
-        double rawSd = Math.max(NoiseEstimator.marginalSd(raw, mask), floor);
-        return new BaselineNoise(new LocalNoise.Estimate(rawSd, smoothSd, raw.length), mask);
     }
 
     /** The lag-one correlation ρ = 1 − σ_d²/σ² of the noise from the white-noise equivalent σ_d of
@@ -718,12 +690,17 @@ public final class PeakDetector {
         return time - t[after - 1] <= t[after] - time ? after - 1 : after;
     }
 
+    /** Median sampling interval, from an evenly strided subset of at most
+     *  {@link SignalLimits#NOISE_SAMPLE_CAP} intervals (exact for regular sampling). */
     private static double medianInterval(double[] t) {
-        double[] d = new double[t.length - 1];
-        for (int i = 0; i < d.length; i++) {
-            d[i] = t[i + 1] - t[i];
+        int all = t.length - 1;
+        int stride = Math.max(1, all / SignalLimits.NOISE_SAMPLE_CAP);
+        double[] d = new double[(all + stride - 1) / stride];
+        int m = 0;
+        for (int i = 0; i < all && m < d.length; i += stride) {
+            d[m++] = t[i + 1] - t[i];
         }
-        return Selection.medianInPlace(d, d.length);
+        return Selection.medianInPlace(d, m);
     }
 
     /** Robust noise SD, never below a tiny fraction of the signal range (nor zero). */

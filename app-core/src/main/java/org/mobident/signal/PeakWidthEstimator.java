@@ -57,7 +57,7 @@ final class PeakWidthEstimator {
         // the noise of the light smoothing: its white-noise value, or the spread of the top-hat
         // itself when that is larger (correlated noise is barely lowered by a 5-point smoothing, and
         // its first differences understate it)
-        double lightNoise = Math.max(noiseSd * gain, NoiseEstimator.marginalSd(excursion, null));
+        double lightNoise = Math.max(noiseSd * gain, NoiseEstimator.marginalSd(excursion, null, SignalLimits.SCALE_SAMPLE_CAP));
         double threshold = SignalLimits.WIDTH_ESTIMATE_MIN_SIGMAS * lightNoise;
         double minWidth = SignalLimits.WIDTH_ESTIMATE_MIN_SAMPLES * samplingS;
         double[] widths = new double[16];

@@ -31,8 +31,9 @@ package org.mobident.signal;
  * parabola instead of the window median, so that the tops of narrow zones are not cut, and with
  * the shoulder condition that tells a one- or two-sample glitch from a zone.
  *
- * <p>Two passes from left to right (the second finds a smaller spike that stood within reach of
- * a larger one) with a fixed number of operations per sample (fixed weights when
+ * <p>One pass from left to right (after each spike removed, the few samples before it whose
+ * anchors it was are looked at again, so a smaller spike beside a larger one is found too), with a
+ * fixed number of operations per sample (fixed weights when
  * the sampling is regular, a 3×3 least-squares solve per tested block otherwise), and the robust
  * scale from an evenly strided subset: linear in the number of points. Times, not indices, enter
  * the parabola, so irregular sampling is handled.
@@ -45,9 +46,10 @@ final class SpikeFilter {
     static final int MAX_SPIKE_SAMPLES = 2;
     /** Samples a block needs on each side: its shoulder and the anchors beyond. */
     private static final int REACH = 1 + ANCHORS_PER_SIDE;
-    /** Passes over the trace: a second one finds a smaller spike that stood within reach of a larger
-     *  one (it is not the largest residual of its neighbourhood until the larger one is gone). */
-    private static final int PASSES = 2;
+    /** A sample is tested only when its screening residual reaches this fraction of the least
+     *  residual of a spike: the screen's parabola (or, for irregular sampling, line) differs a little
+     *  from a block's, and a two-sample spike's first sample stands out on either. */
+    private static final double SCREEN_FRACTION = 0.5;
     /** Sampling is treated as regular when every interval is within this fraction of the first. */
     private static final double REGULAR_RELATIVE = 1e-4;
 
@@ -72,27 +74,19 @@ final class SpikeFilter {
             return 0;
         }
         double minResidual = SignalLimits.SPIKE_MIN_RESIDUAL_SIGMAS * scale;
-        int removed = 0;
-        for (int pass = 0; pass < PASSES; pass++) {
-            int found = pass(t, y, minResidual, parabola);
-            removed += found;
-            if (found == 0) {
-                break;
-            }
-        }
-        return removed;
-    }
-
-    /** One pass from left to right; returns the number of spikes removed. */
-    private static int pass(double[] t, double[] y, double minResidual, Parabola parabola) {
-        int n = y.length;
         double[] r = new double[MAX_SPIKE_SAMPLES + 2];
+        double screen = SCREEN_FRACTION * minResidual;
         int removed = 0;
         int i = REACH;
         while (i < n - REACH) {
+            // a block of one or two samples starting at i stands out only if sample i does
+            if (!(Math.abs(parabola.screen(t, y, i)) >= screen)) {
+                i++;
+                continue;
+            }
             int width = 0;
             for (int w = 1; w <= MAX_SPIKE_SAMPLES && i + w - 1 < n - REACH; w++) {
-                if (isSpike(t, y, i, w, minResidual, parabola, r)) {
+                if (test(t, y, i, w, minResidual, parabola, r) == Verdict.SPIKE) {
                     width = w;
                     break;
                 }
@@ -106,10 +100,15 @@ final class SpikeFilter {
                 y[i + k] -= r[k];
             }
             removed++;
-            i += width;
+            // the samples just before had this spike among their anchors: look at them again
+            i = Math.max(REACH, i - REACH - MAX_SPIKE_SAMPLES + 1);
         }
         return removed;
     }
+
+    /** Outcome of the test of one block: no spike, a spike, or a spike-like block beside a larger
+     *  residual (left for when that one is gone). */
+    private enum Verdict { NONE, SPIKE, DEFERRED }
 
     /**
      * True when the block [first, first + width − 1] (one or two samples, the top of a peak that
@@ -132,28 +131,27 @@ final class SpikeFilter {
         return top > 0 && 0.5 * (r[width] + r[width + 1]) <= SignalLimits.SPIKE_SHOULDER_FRACTION * top;
     }
 
-    private static boolean isSpike(double[] t, double[] y, int first, int width, double minResidual,
-                                   Parabola parabola, double[] r) {
-        // cheap first look: the first sample of the block alone must stand out
+    private static Verdict test(double[] t, double[] y, int first, int width, double minResidual,
+                                Parabola parabola, double[] r) {
         if (!parabola.residuals(t, y, first, width, r)) {
-            return false;
+            return Verdict.NONE;
         }
         double sign = Math.signum(r[0]);
         if (!(sign * r[0] >= minResidual)) {
-            return false;
+            return Verdict.NONE;
         }
         double top = Double.POSITIVE_INFINITY;
         double largest = 0;
         for (int k = 0; k < width; k++) {
             double v = sign * r[k];
             if (!(v >= minResidual)) {
-                return false;
+                return Verdict.NONE;
             }
             top = Math.min(top, v);
             largest = Math.max(largest, v);
         }
         if (!(0.5 * sign * (r[width] + r[width + 1]) <= SignalLimits.SPIKE_SHOULDER_FRACTION * top)) {
-            return false;
+            return Verdict.NONE;
         }
         // the block must hold the largest one-sample residual around it: a spike among the anchors
         // of a neighbouring block bends that block's parabola and makes clean samples stand out
@@ -164,10 +162,10 @@ final class SpikeFilter {
                 continue;
             }
             if (parabola.residuals(t, y, j, 1, own) && Math.abs(own[0]) > largest) {
-                return false;
+                return Verdict.DEFERRED;
             }
         }
-        return true;
+        return Verdict.SPIKE;
     }
 
     private static boolean regular(double[] t) {
@@ -187,6 +185,9 @@ final class SpikeFilter {
      */
     private interface Parabola {
         boolean residuals(double[] t, double[] y, int first, int width, double[] r);
+
+        /** A cheap look at how far sample i stands from its neighbours, signal units. */
+        double screen(double[] t, double[] y, int i);
     }
 
     /** Index of the k-th anchor (0…3) of the block of {@code width} samples starting at {@code first}. */
@@ -227,6 +228,13 @@ final class SpikeFilter {
             }
             return true;
         }
+
+        /** Distance of sample i from the straight line through samples i − 2 and i + 2: no solve. */
+        @Override
+        public double screen(double[] t, double[] y, int i) {
+            double f = (t[i] - t[i - 2]) / (t[i + 2] - t[i - 2]);
+            return y[i] - (y[i - 2] + f * (y[i + 2] - y[i - 2]));
+        }
     }
 
     /**
@@ -236,6 +244,7 @@ final class SpikeFilter {
      */
     private static final class Stencils implements Parabola {
         private final double[][][] weights = new double[MAX_SPIKE_SAMPLES + 1][][];
+        private final double[] oneSample;
 
         Stencils(double stepS) {
             for (int width = 1; width <= MAX_SPIKE_SAMPLES; width++) {
@@ -258,6 +267,7 @@ final class SpikeFilter {
                 }
                 weights[width] = w;
             }
+            oneSample = weights[1][0];
         }
 
         @Override
@@ -274,11 +284,18 @@ final class SpikeFilter {
             }
             return true;
         }
+
+        /** The one-sample residual of sample i itself. */
+        @Override
+        public double screen(double[] t, double[] y, int i) {
+            double[] row = oneSample;
+            return y[i] - (row[0] * y[i - REACH] + row[1] * y[i - REACH + 1] + row[2] * y[i + 2] + row[3] * y[i + 3]);
+        }
     }
 
     /**
      * Robust SD (1.4826 · MAD about the median) of the one-sample residuals over an evenly strided
-     * subset of at most {@link SignalLimits#NOISE_SAMPLE_CAP} samples.
+     * subset of at most {@link SignalLimits#SCALE_SAMPLE_CAP} samples.
      */
     static double residualSd(double[] t, double[] y) {
         if (y.length < 2 * REACH + MAX_SPIKE_SAMPLES) {
@@ -294,7 +311,7 @@ final class SpikeFilter {
         if (all < 2) {
             return 0.0;
         }
-        int stride = Math.max(1, all / SignalLimits.NOISE_SAMPLE_CAP);
+        int stride = Math.max(1, all / SignalLimits.SCALE_SAMPLE_CAP);
         int count = (all + stride - 1) / stride;
         double[] values = new double[count];
         double[] r = new double[MAX_SPIKE_SAMPLES + 2];
