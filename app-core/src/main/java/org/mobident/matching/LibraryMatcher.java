@@ -86,9 +86,9 @@ public final class LibraryMatcher {
     /** Grid step of the scale factor a in the mode search (about a quarter of a typical match width). */
     static final double FACTOR_GRID_STEP = 0.0025;
     /** Grid step of the offset b in the mode search, mobility units. */
-    static final double OFFSET_GRID_STEP = 0.2;
+    static final double OFFSET_GRID_STEP = 0.25;
     /** The mode search covers the prior's centre ± this many prior SDs (within the plausible bounds). */
-    static final double PRIOR_REACH_SDS = 4.0;
+    static final double PRIOR_REACH_SDS = 3.5;
     /** Modes whose grid score is more than this below the best are not refined (a factor of 1000). */
     static final double MODE_LOG_DROP = Math.log(1000.0);
     /** Most modes refined and mixed. */
@@ -289,7 +289,6 @@ public final class LibraryMatcher {
         private final SpreadModel spread;
         private final MatchSettings s;
         private final int maxStates;
-        private final MatchWindow.CoverageMemo memo;
         private final double[] peakVariance;
         private final double[] entryMobility;
         private final double[] logOdds;
@@ -314,7 +313,6 @@ public final class LibraryMatcher {
             this.spread = spread;
             this.s = s;
             this.maxStates = maxStates;
-            this.memo = new MatchWindow.CoverageMemo(s.windowValue());
             int m = entries.size();
             int known = 0;
             for (double mu : mobility) {
@@ -391,7 +389,7 @@ public final class LibraryMatcher {
         }
 
         private double window(int j, double extraVariance) {
-            return MatchWindow.halfWidth(entries.get(j), spread, j, extraVariance, s, memo);
+            return MatchWindow.halfWidth(entries.get(j), spread, j, extraVariance, s);
         }
 
         RunMatch solve() {

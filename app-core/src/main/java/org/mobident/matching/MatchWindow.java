@@ -53,12 +53,6 @@ public final class MatchWindow {
      */
     public static double halfWidth(LibraryEntry entry, SpreadModel spread, int j, double extraVariance,
                                    MatchSettings s) {
-        return halfWidth(entry, spread, j, extraVariance, s, null);
-    }
-
-    /** As {@link #halfWidth(LibraryEntry, SpreadModel, int, double, MatchSettings)}, remembering t quantiles in {@code memo}. */
-    static double halfWidth(LibraryEntry entry, SpreadModel spread, int j, double extraVariance, MatchSettings s,
-                            CoverageMemo memo) {
         if (Double.isFinite(entry.tolerance()) && entry.tolerance() > 0) {
             return entry.tolerance();
         }
@@ -70,7 +64,7 @@ public final class MatchWindow {
             default:
                 double v = spread.predictiveVariance(j) + extraVariance;
                 double df = combinedDf(v, spread.estimatedVariance(j), spread.degreesOfFreedom(j));
-                double k = memo != null ? memo.factor(df) : coverageFactor(s.windowValue(), df);
+                double k = spread.coverageFactor(s.windowValue(), df);
                 return Math.max(k * Math.sqrt(v), s.minimumWindow());
         }
     }
@@ -122,28 +116,5 @@ public final class MatchWindow {
         double upper = 1.0 - 0.5 * Erf.erfc(k / Math.sqrt(2.0));
         double t = new TDistribution(null, Math.max(1.0, Math.floor(df))).inverseCumulativeProbability(upper);
         return Math.min(t, MAX_T_WIDENING * k);
-    }
-
-    /** {@link #coverageFactor} for one k, remembered per whole number of degrees of freedom (one caller at a time). */
-    static final class CoverageMemo {
-        private final double k;
-        private final double[] byDf = new double[(int) NORMAL_DF + 1];
-
-        CoverageMemo(double k) {
-            this.k = k;
-        }
-
-        double factor(double df) {
-            if (!(df < NORMAL_DF)) {
-                return k;
-            }
-            int d = (int) Math.max(1.0, Math.floor(df));
-            double f = byDf[d];
-            if (f == 0.0) {
-                f = coverageFactor(k, d);
-                byDf[d] = f;
-            }
-            return f;
-        }
     }
 }

@@ -50,6 +50,8 @@ public final class SpreadModel {
     /** Smallest |μ| used to turn a spread into an RSD, mobility units (keeps near-neutral analytes finite). */
     static final double MIN_MOBILITY_FOR_RSD = 10.0;
 
+    /** Coverage factors of the window rule's k per whole number of degrees of freedom, filled as needed. */
+    private final java.util.concurrent.ConcurrentHashMap<Long, Double> coverage = new java.util.concurrent.ConcurrentHashMap<>();
     private final double[] predictiveVariance;
     private final double[] replicateVariance;
     private final double[] df;
@@ -160,6 +162,19 @@ public final class SpreadModel {
     /** The estimated (replicate) part of {@link #predictiveVariance}, (mobility units)². */
     public double estimatedVariance(int j) {
         return replicateVariance[j];
+    }
+
+    /**
+     * {@link MatchWindow#coverageFactor}(k, df), remembered for this library (thread-safe): the
+     * Student-t quantile is costly and the same few degrees of freedom recur in every run.
+     */
+    double coverageFactor(double k, double df) {
+        if (!(df < MatchWindow.NORMAL_DF)) {
+            return k;
+        }
+        int d = (int) Math.max(1.0, Math.floor(df));
+        long key = ((long) Double.hashCode(k) << 32) ^ d;
+        return coverage.computeIfAbsent(key, x -> MatchWindow.coverageFactor(k, d));
     }
 
     /** Pooled replicate RSD (a fraction) the spreads were drawn towards; NaN when nothing was pooled. */

@@ -100,8 +100,13 @@ public final class Identifier {
         }
         List<Detected> detected = parallel(runs, this::detect,
                 (spec, e) -> new Detected(spec, RunResult.failure(spec, e), List.of(), Double.NaN));
-        List<RunResult> first = parallel(detected, d -> finish(d, null),
-                (d, e) -> RunResult.failure(d.run(), e));
+        List<Finished> done = parallel(detected, d -> finishing(d, null),
+                (d, e) -> new Finished(RunResult.failure(d.run(), e), d));
+        List<RunResult> first = new ArrayList<>(done.size());
+        for (int i = 0; i < done.size(); i++) {
+            first.add(done.get(i).result());
+            detected.set(i, done.get(i).settled());
+        }
         Map<String, BatchScalePrior.Learned> learned = new HashMap<>();
         MatchSettings ms = settings.matchSettings();
         if (ms.fitsScale()) {
@@ -198,7 +203,15 @@ public final class Identifier {
      * @param peaks   its peaks in order of apex time
      * @param noiseSd its baseline noise SD
      */
-    record Detected(RunSpec run, RunResult failure, List<Peak> peaks, double noiseSd) {
+    record Detected(RunSpec run, RunResult failure, List<Peak> peaks, double noiseSd, Trace markerWindow) {
+        Detected(RunSpec run, RunResult failure, List<Peak> peaks, double noiseSd) {
+            this(run, failure, peaks, noiseSd, null);
+        }
+
+        /** The same run with the weak-marker search done: these peaks, no window kept. */
+        Detected settled(List<Peak> withMarker) {
+            return new Detected(run, failure, withMarker, noiseSd, null);
+        }
     }
 
     /** Reads the run's trace and detects its peaks; never throws for bad user data. */
@@ -221,36 +234,41 @@ public final class Identifier {
         }
         TraceAnalysis analysis = PeakDetector.analyse(trace, run.conditions().detectionOrDirect(),
                 settings.peakSettings());
-        return new Detected(run, null, withWeakMarkers(run.conditions(), trace, analysis.peaks()),
-                analysis.noiseSd());
+        return new Detected(run, null, analysis.peaks(), analysis.noiseSd(),
+                markerWindow(run.conditions(), trace, analysis.peaks()));
     }
 
     /**
-     * A targeted search for a weak neutral marker: when the marker window holds at most one detected
-     * peak (no marker at all, or possibly a foreign peak in its place), the window alone is analysed
-     * again down to S/N {@value #MARKER_SEARCH_MIN_SN}, and the zones found there that are not already
-     * peaks are added. A marker is expected in that window, so a lower threshold there is no fishing
-     * in noise: the marker choice still has to make the library explain the run.
+     * The stretch of the trace inside the marker window, kept for a targeted search for a weak
+     * marker (see {@link #withWeakMarkers}) when the window holds at most one detected peak; null
+     * otherwise. Only the window is kept, and only until the run's first matching.
      */
-    private List<Peak> withWeakMarkers(RunConditions c, Trace trace, List<Peak> peaks) {
+    private Trace markerWindow(RunConditions c, Trace trace, List<Peak> peaks) {
         if (!c.hasMarkerWindow() || settings.peakSettings().minSignalToNoise() <= MARKER_SEARCH_MIN_SN) {
-            return peaks;
+            return null;
         }
         int inside = 0;
         for (Peak p : peaks) {
             inside += p.apexTimeS() >= c.markerFromS() && p.apexTimeS() <= c.markerToS() ? 1 : 0;
         }
-        if (inside > 1) {
-            return peaks;
-        }
         int from = Math.max(0, trace.indexAtOrAfter(c.markerFromS()));
         int to = Math.min(trace.size(), trace.indexAtOrAfter(c.markerToS()));
-        if (to - from < MARKER_SEARCH_MIN_POINTS) {
-            return peaks;
+        if (inside > 1 || to - from < MARKER_SEARCH_MIN_POINTS) {
+            return null;
         }
-        Trace window = new Trace(trace.name(), trace.sourceFile(),
-                java.util.Arrays.copyOfRange(trace.timesS(), from, to),
+        return new Trace(trace.name(), trace.sourceFile(), java.util.Arrays.copyOfRange(trace.timesS(), from, to),
                 java.util.Arrays.copyOfRange(trace.signals(), from, to));
+    }
+
+    /**
+     * A targeted search for a weak neutral marker: when the marker window holds at most one
+     * detected peak and the marker chosen among the peaks leaves the run poorly explained (or lies
+     * outside the window, or is uncertain), the window alone is analysed again down to S/N
+     * {@value #MARKER_SEARCH_MIN_SN}, and the zones found there that are not already peaks are added.
+     * A marker is expected in that window, so a lower threshold there is no fishing in noise: the
+     * marker choice still has to make the library explain the run.
+     */
+    private List<Peak> withWeakMarkers(RunConditions c, Trace window, List<Peak> peaks) {
         List<Peak> weak = PeakDetector.analyse(window, c.detectionOrDirect(),
                 settings.peakSettings().withMinSignalToNoise(MARKER_SEARCH_MIN_SN)).peaks();
         List<Peak> out = new ArrayList<>(peaks);
@@ -260,9 +278,7 @@ public final class Identifier {
                 known |= Math.abs(p.apexTimeS() - w.apexTimeS()) < Math.max(p.widthHalfS(), w.widthHalfS());
             }
             if (!known) {
-                out.add(new Peak(trace.indexAtOrAfter(w.apexTimeS()), w.apexTimeS(), w.apexTimeSdS(), w.centreTimeS(),
-                        w.centreTimeSdS(), w.startTimeS(), w.endTimeS(), w.height(), w.area(), w.correctedArea(),
-                        w.widthHalfS(), w.plates(), w.resolution(), w.signalToNoise(), w.dip()));
+                out.add(w);
             }
         }
         out.sort(java.util.Comparator.comparingDouble(Peak::apexTimeS));
@@ -307,8 +323,16 @@ public final class Identifier {
      * @param learned a scale prior learned from the batch for the run's buffer, or null for the settings' own
      */
     RunResult finish(Detected d, BatchScalePrior.Learned learned) {
+        return finishing(d, learned).result();
+    }
+
+    /** A finished run with the run as detected after the weak-marker search (for a second pass). */
+    private record Finished(RunResult result, Detected settled) {
+    }
+
+    private Finished finishing(Detected d, BatchScalePrior.Learned learned) {
         if (d.failure() != null) {
-            return d.failure();
+            return new Finished(d.failure(), d);
         }
         RunSpec run = d.run();
         RunConditions c = run.conditions();
@@ -320,7 +344,16 @@ public final class Identifier {
                 : settings.matchSettings().withScalePrior(learned.prior());
         MarkerLocator.Evaluator evaluator = prepared.library().size() == 0 ? null
                 : (mob, sd) -> LibraryMatcher.matchRun(mob, sd, prepared.library(), prepared.spread(), ms, adjuster);
-        MarkerLocator.Choice choice = new MarkerLocator(prepared.library().size() == 0).locate(c, peaks, evaluator);
+        MarkerLocator locator = new MarkerLocator(prepared.library().size() == 0);
+        MarkerLocator.Choice choice = locator.locate(c, peaks, evaluator);
+        if (d.markerWindow() != null && !MarkerLocator.settled(choice, c)) {
+            List<Peak> more = withWeakMarkers(c, d.markerWindow(), peaks);
+            if (more.size() > peaks.size()) {
+                peaks = more;
+                choice = locator.locate(c, peaks, evaluator);
+            }
+        }
+        Detected settled = d.settled(peaks);
         double libraryTempC = libraryTemperatureC();
         double runTempC = c.temperatureC();
         double temperatureFactor = Double.isNaN(runTempC) || Math.abs(runTempC - libraryTempC) < SAME_TEMPERATURE_K
@@ -331,8 +364,8 @@ public final class Identifier {
                 rows.add(new PeakResult(p, PeakRole.ANALYTE, Double.NaN, Double.NaN, Double.NaN, PeakMatch.none()));
             }
             notes.add(choice.note());
-            return new RunResult(run, null, choice.note(), Double.NaN, null, rows, notes, d.noiseSd(),
-                    RunScale.OFF, temperatureFactor);
+            return new Finished(new RunResult(run, null, choice.note(), Double.NaN, null, rows, notes, d.noiseSd(),
+                    RunScale.OFF, temperatureFactor), settled);
         }
         MarkerLocator.Hypothesis best = choice.best();
         MobilityScale scale = best.scale();
@@ -342,11 +375,11 @@ public final class Identifier {
             beyond += PhysicalBounds.plausibleIon(mu) ? 0 : 1;
         }
         if (analyteCount > 0 && 2 * beyond > analyteCount) {
-            return RunResult.failure(run, new InputException(run.origin(), run.originLine(), "conditions",
+            return new Finished(RunResult.failure(run, new InputException(run.origin(), run.originLine(), "conditions",
                     String.format(Locale.ROOT, "%d of %d peaks come out with mobilities beyond ±%.0f units "
                                     + "(1e-9 m²/(V s)): check the time unit of the trace (minutes read as seconds?), "
                                     + "the voltage and the capillary lengths", beyond, analyteCount,
-                            PhysicalBounds.MAX_ION_MOBILITY)));
+                            PhysicalBounds.MAX_ION_MOBILITY))), settled);
         }
         RunMatch match = best.match();
         RunScale runScale = match == null ? RunScale.OFF : match.scale();
@@ -392,8 +425,8 @@ public final class Identifier {
         if (choice.note() != null && !choice.note().isEmpty()) {
             notes.add(0, choice.note());
         }
-        return new RunResult(run, null, scale.describe(), scale.eofMobility(), scale, rows, notes, d.noiseSd(),
-                runScale, temperatureFactor);
+        return new Finished(new RunResult(run, null, scale.describe(), scale.eofMobility(), scale, rows, notes,
+                d.noiseSd(), runScale, temperatureFactor), settled);
     }
 
     /**

@@ -226,6 +226,20 @@ final class MarkerLocator {
         return best;
     }
 
+    /**
+     * True when the choice needs no further marker candidates: a chosen marker inside the window
+     * (or no window), that leaves the run well explained and is nearly certain.
+     */
+    static boolean settled(Choice choice, RunConditions c) {
+        Hypothesis best = choice.best();
+        if (best == null || best.neutralIndex() < 0) {
+            return best != null;
+        }
+        int index = choice.others().indexOf(best);
+        double weight = index >= 0 && index < choice.weights().length ? choice.weights()[index] : 1.0;
+        return explainsWell(best) && weight >= MENTION_BELOW && choice.note().isEmpty();
+    }
+
     private static boolean explainsWell(Hypothesis h) {
         if (h == null || h.match() == null) {
             return false;
