@@ -27,9 +27,10 @@ public final class ConditionOptions {
     String buffer;
 
     @Option(names = "--marker-window", paramLabel = "FROM:TO",
-            description = "Time window (s) holding the neutral marker, e.g. 180:240. Without it the marker is "
-                    + "chosen as the peak under which the expected analytes (the library; for standards, the mixes) "
-                    + "fit best.")
+            description = "Time window (s) holding the neutral marker, e.g. 180:240. The marker is the peak "
+                    + "under which the expected analytes (the library; for standards, the mixes) fit best: the peaks "
+                    + "in the window are weighed first (a weak marker is searched for there), others only when the "
+                    + "window holds none or nothing fits. Without a window the tallest peaks are weighed.")
     String markerWindow;
 
     @Option(names = "--detection", paramLabel = "MODE",
