@@ -4,6 +4,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Objects;
 import org.apache.commons.math3.special.Erf;
+import org.mobident.Tolerances;
 import org.mobident.trace.Detection;
 import org.mobident.trace.Trace;
 
@@ -130,7 +131,8 @@ public final class PeakDetector {
         double firstSmoothSigma = first.smoothSd();
         ClusterBaseline.bridge(t, smooth, baseline,
                 SignalLimits.RETURN_TO_BASELINE_SIGMAS * firstSmoothSigma,
-                settings.minSignalToNoise() * typicalRange * firstSigma / 2,
+                Math.max(settings.minSignalToNoise(), Tolerances.DETECTION_LIMIT_SIGNAL_TO_NOISE)
+                        * typicalRange * firstSigma / 2,
                 SignalLimits.GROUP_GAP_IN_WIDTHS * typicalWidth, SignalLimits.GROUP_EDGE_IN_WIDTHS * typicalWidth,
                 SignalLimits.GROUP_MAX_SPAN_IN_WIDTHS * typicalWidth);
         for (int i = 0; i < n; i++) {
@@ -252,7 +254,8 @@ public final class PeakDetector {
             if (!(m.smoothedHeight >= significance * local.smoothSd())) {
                 return null;
             }
-            if (!m.fitted && m.widthHalfS < SignalLimits.SPIKE_CHECK_WIDTH_SAMPLES * sampling && spikeShaped(apex)) {
+            if (!m.fitted && m.widthHalfS < SignalLimits.SPIKE_CHECK_WIDTH_SAMPLES * sampling
+                    && spikeShaped(apex, local.rawSd())) {
                 return null;
             }
             double centreSd = m.centre == null ? m.centreTimeSdS
@@ -261,7 +264,7 @@ public final class PeakDetector {
         }
 
         /** True when the highest one or two raw samples at the apex have no shoulders. */
-        private boolean spikeShaped(int apex) {
+        private boolean spikeShaped(int apex, double noiseSd) {
             int top = apex;
             for (int i = Math.max(0, apex - 1); i <= Math.min(raw.length - 1, apex + 1); i++) {
                 if (raw[i] > raw[top]) {
@@ -269,8 +272,8 @@ public final class PeakDetector {
                 }
             }
             int pair = top > 0 && (top + 1 >= raw.length || raw[top - 1] > raw[top + 1]) ? top - 1 : top;
-            return SpikeFilter.looksLikeSpike(t, raw, top, 1)
-                    || (pair + 1 < raw.length && SpikeFilter.looksLikeSpike(t, raw, pair, 2));
+            return SpikeFilter.looksLikeSpike(t, raw, top, 1, noiseSd)
+                    || (pair + 1 < raw.length && SpikeFilter.looksLikeSpike(t, raw, pair, 2, noiseSd));
         }
     }
 
