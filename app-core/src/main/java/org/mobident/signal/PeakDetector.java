@@ -4,6 +4,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Objects;
 import org.apache.commons.math3.special.Erf;
+import org.mobident.Tolerances;
 import org.mobident.trace.Detection;
 import org.mobident.trace.Trace;
 
@@ -130,7 +131,8 @@ public final class PeakDetector {
         double firstSmoothSigma = first.smoothSd();
         ClusterBaseline.bridge(t, smooth, baseline,
                 SignalLimits.RETURN_TO_BASELINE_SIGMAS * firstSmoothSigma,
-                settings.minSignalToNoise() * typicalRange * firstSigma / 2,
+                Math.max(settings.minSignalToNoise(), Tolerances.DETECTION_LIMIT_SIGNAL_TO_NOISE)
+                        * typicalRange * firstSigma / 2,
                 SignalLimits.GROUP_GAP_IN_WIDTHS * typicalWidth, SignalLimits.GROUP_EDGE_IN_WIDTHS * typicalWidth,
                 SignalLimits.GROUP_MAX_SPAN_IN_WIDTHS * typicalWidth);
         for (int i = 0; i < n; i++) {
@@ -195,7 +197,7 @@ public final class PeakDetector {
             }
             s = e + 1;
         }
-        Reporting reporting = new Reporting(t, raw, sampling, localNoise, correlation, significance,
+        Reporting reporting = new Reporting(t, raw, smooth, sampling, localNoise, correlation, significance,
                 settings.minSignalToNoise());
         List<Measured> reported = new ArrayList<>(found.size());
         for (Measured m : found) {
@@ -235,8 +237,8 @@ public final class PeakDetector {
      * significance of its smoothed height, the spike shape of a barely sampled top, and the
      * uncertainty of its centre time.
      */
-    private record Reporting(double[] t, double[] raw, double sampling, LocalNoise noise, double correlation,
-                             double significance, double minSignalToNoise) {
+    private record Reporting(double[] t, double[] raw, double[] smooth, double sampling, LocalNoise noise,
+                             double correlation, double significance, double minSignalToNoise) {
 
         /** The peak with its S/N and centre uncertainty, or null when it is not to be reported. */
         Measured judge(Measured m) {
@@ -252,16 +254,37 @@ public final class PeakDetector {
             if (!(m.smoothedHeight >= significance * local.smoothSd())) {
                 return null;
             }
-            if (!m.fitted && m.widthHalfS < SignalLimits.SPIKE_CHECK_WIDTH_SAMPLES * sampling && spikeShaped(apex)) {
+            if (!m.fitted && m.widthHalfS < SignalLimits.SPIKE_CHECK_WIDTH_SAMPLES * sampling
+                    && spikeShaped(apex, local.rawSd())) {
                 return null;
             }
             double centreSd = m.centre == null ? m.centreTimeSdS
-                    : m.centre.uncertaintyS(local.rawSd(), correlation, m.apexTimeS);
+                    : m.centre.uncertaintyS(local.rawSd(), correlation, m.apexTimeS,
+                            new ZoneCentre.Boundaries(m.startTimeS, valueAt(m.startTimeS), m.endTimeS,
+                                    valueAt(m.endTimeS)),
+                            m.widthHalfS, m.area);
             return m.reported(signalToNoise, centreSd);
         }
 
+        /** The smoothed corrected signal at a time, by linear interpolation between samples. */
+        private double valueAt(double timeS) {
+            int i = java.util.Arrays.binarySearch(t, timeS);
+            if (i >= 0) {
+                return smooth[i];
+            }
+            int after = -i - 1;
+            if (after == 0) {
+                return smooth[0];
+            }
+            if (after >= t.length) {
+                return smooth[t.length - 1];
+            }
+            double f = (timeS - t[after - 1]) / (t[after] - t[after - 1]);
+            return smooth[after - 1] + f * (smooth[after] - smooth[after - 1]);
+        }
+
         /** True when the highest one or two raw samples at the apex have no shoulders. */
-        private boolean spikeShaped(int apex) {
+        private boolean spikeShaped(int apex, double noiseSd) {
             int top = apex;
             for (int i = Math.max(0, apex - 1); i <= Math.min(raw.length - 1, apex + 1); i++) {
                 if (raw[i] > raw[top]) {
@@ -269,8 +292,8 @@ public final class PeakDetector {
                 }
             }
             int pair = top > 0 && (top + 1 >= raw.length || raw[top - 1] > raw[top + 1]) ? top - 1 : top;
-            return SpikeFilter.looksLikeSpike(t, raw, top, 1)
-                    || (pair + 1 < raw.length && SpikeFilter.looksLikeSpike(t, raw, pair, 2));
+            return SpikeFilter.looksLikeSpike(t, raw, top, 1, noiseSd)
+                    || (pair + 1 < raw.length && SpikeFilter.looksLikeSpike(t, raw, pair, 2, noiseSd));
         }
     }
 
@@ -412,6 +435,9 @@ public final class PeakDetector {
                         && GaussianClusterFit.extraZonesPValue(fewer, more) <= SignalLimits.SHOULDER_F_TEST_ALPHA) {
                     chosen = more;
                 }
+                if (chosen != null && region.size() == 1 && oneSkewedZone(first, last, more, minSigma, maxSigma)) {
+                    return null; // a shoulder that is the diffuse flank of one skewed zone
+                }
             }
             if (chosen == null && overlapped && fewer != null && plausible(fewer)) {
                 chosen = fewer;
@@ -425,11 +451,48 @@ public final class PeakDetector {
             for (int k = 0; k < c.size(); k++) {
                 GaussianClusterFit.Component z = c.get(k);
                 double end = k + 1 < c.size() ? GaussianClusterFit.dominanceBoundaryS(z, c.get(k + 1)) : t[last];
+                ZoneCentre centre = shareCentre(c, k, first, last);
                 out.add(new Measured(z.apexTimeS(), z.apexTimeSdS(), z.height(), start, end, z.area(),
-                        z.widthHalfS(), true, z.height(), null, z.apexTimeS(), z.apexTimeSdS(), Double.NaN));
+                        z.widthHalfS(), true, z.height(), centre,
+                        centre == null ? z.apexTimeS() : centre.centreTimeS(), z.apexTimeSdS(), Double.NaN));
                 start = end;
             }
             return out;
+        }
+
+        /**
+         * The first moment of one fitted zone's share of the signal: each sample of the cluster is
+         * dealt out to the zones in proportion to their fitted values there, and the moment is taken
+         * of zone k's part ({@link ZoneCentre}). For Gaussian zones that fit, it is the fitted centre;
+         * for a skewed zone the data's own flank moves it towards the zone's centre of mass, which a
+         * symmetric model cannot. Null when the share has no positive area.
+         */
+        private ZoneCentre shareCentre(List<GaussianClusterFit.Component> c, int k, int first, int last) {
+            double[] part = new double[last - first + 1];
+            double[] times = java.util.Arrays.copyOfRange(t, first, last + 1);
+            for (int i = first; i <= last; i++) {
+                double total = 0;
+                for (GaussianClusterFit.Component z : c) {
+                    total += z.value(t[i]);
+                }
+                part[i - first] = total > 0 ? raw[i] * c.get(k).value(t[i]) / total : 0.0;
+            }
+            ZoneCentre centre = ZoneCentre.of(times, part, 0, part.length - 1);
+            return Double.isNaN(centre.centreTimeS()) ? null : centre;
+        }
+
+        /**
+         * True when one skewed zone ({@link SkewedZoneFit}) explains the samples of a single peak as
+         * well as the Gaussian zones the curvature suggested: the extra-sum-of-squares test of the
+         * zones against it does not reach {@link SignalLimits#SHOULDER_F_TEST_ALPHA}. Electromigration
+         * dispersion gives a zone one long flank, which a sum of Gaussians follows with a false extra
+         * zone.
+         */
+        private boolean oneSkewedZone(int first, int last, GaussianClusterFit.Result zones, double minSigma,
+                                      double maxSigma) {
+            SkewedZoneFit skewed = SkewedZoneFit.fit(t, raw, first, last, minSigma, maxSigma);
+            return skewed != null && zones.parameters() > SkewedZoneFit.PARAMETERS
+                    && skewed.pValueAgainst(zones) > SignalLimits.SHOULDER_F_TEST_ALPHA;
         }
 
         /** Every zone reportable (height and width) and no two closer than the minimum separation. */

@@ -183,6 +183,15 @@ final class SignalLimits {
      *  the shoulders of a spike are noise. */
     static final double SPIKE_SHOULDER_FRACTION = 0.15;
 
+    /** A Gaussian zone at least two sampling intervals wide at half height keeps shoulders of at
+     *  least this fraction of its top above the anchor parabola (worked out for the least favourable
+     *  sampling, apex midway between two samples; see {@code SpikeFilter}). */
+    static final double SPIKE_ZONE_SHOULDER_FRACTION = 0.23;
+
+    /** Before a narrow peak is dropped as a spike, a zone's shoulders must be rejected by this many
+     *  SDs of the shoulders' noise (one-sided, about 2 %; common practice). */
+    static final double SPIKE_SHAPE_SIGMAS = 2.0;
+
     /** A peak narrower than this many sampling intervals at half height is tested for the shape
      *  of a spike before it is reported (a zone this narrow is barely sampled). */
     static final double SPIKE_CHECK_WIDTH_SAMPLES = 3.5;

@@ -111,12 +111,19 @@ final class SpikeFilter {
     private enum Verdict { NONE, SPIKE, DEFERRED }
 
     /**
-     * True when the block [first, first + width − 1] (one or two samples, the top of a peak that
-     * points up) has the shape of a spike: its shoulders stand at most
-     * {@link SignalLimits#SPIKE_SHOULDER_FRACTION} of its height above the parabola through the
-     * anchors. No significance condition: any height.
+     * True when the block [first, first + width − 1] (one or two samples, the top of a narrow peak
+     * that points up) has the shape of a spike whatever its height, as far as the noise lets one
+     * tell: its shoulders stand at most {@link SignalLimits#SPIKE_SHOULDER_FRACTION} of its height
+     * above the parabola through the anchors, and also so far below the least shoulders of a zone,
+     * {@link SignalLimits#SPIKE_ZONE_SHOULDER_FRACTION} of its height, that a zone is rejected at
+     * {@link SignalLimits#SPIKE_SHAPE_SIGMAS} standard deviations of the shoulders' noise. A low,
+     * barely sampled zone whose shoulders drown in the noise is thus not taken for a spike; a tall
+     * spike is.
+     *
+     * @param noiseSd SD of the noise of {@code y} (white-noise propagation through the parabola
+     *                gives the SD of the shoulders' mean residual)
      */
-    static boolean looksLikeSpike(double[] t, double[] y, int first, int width) {
+    static boolean looksLikeSpike(double[] t, double[] y, int first, int width, double noiseSd) {
         if (first - REACH < 0 || first + width - 1 + REACH >= y.length) {
             return false;
         }
@@ -128,7 +135,35 @@ final class SpikeFilter {
         for (int k = 0; k < width; k++) {
             top = Math.min(top, r[k]);
         }
-        return top > 0 && 0.5 * (r[width] + r[width + 1]) <= SignalLimits.SPIKE_SHOULDER_FRACTION * top;
+        if (!(top > 0)) {
+            return false;
+        }
+        double shoulders = 0.5 * (r[width] + r[width + 1]);
+        double shoulderSd = noiseSd * shoulderNoiseFactor(t, first, width);
+        return shoulders <= SignalLimits.SPIKE_SHOULDER_FRACTION * top
+                && shoulders <= SignalLimits.SPIKE_ZONE_SHOULDER_FRACTION * top
+                        - SignalLimits.SPIKE_SHAPE_SIGMAS * shoulderSd;
+    }
+
+    /**
+     * SD of the mean shoulder residual per unit SD of white noise: the shoulders' own noise and that
+     * of the parabola's values there, a weighted sum of the anchors (variance of a weighted sum of
+     * independent samples). The weights are the parabola's responses to each anchor.
+     */
+    private static double shoulderNoiseFactor(double[] t, int first, int width) {
+        double[] unit = new double[t.length];
+        double[] r = new double[MAX_SPIKE_SAMPLES + 2];
+        LeastSquares fit = new LeastSquares();
+        double variance = 0.5; // the mean of two independent shoulder samples: (1 + 1)/4
+        for (int k = 0; k < 2 * ANCHORS_PER_SIDE; k++) {
+            int j = anchor(first, width, k);
+            unit[j] = 1.0;
+            fit.residuals(t, unit, first, width, r);
+            unit[j] = 0.0;
+            double weight = -0.5 * (r[width] + r[width + 1]); // the shoulders are 0: residual = −value
+            variance += weight * weight;
+        }
+        return Math.sqrt(variance);
     }
 
     private static Verdict test(double[] t, double[] y, int first, int width, double minResidual,

@@ -26,7 +26,9 @@ package org.mobident.signal;
  * shape adds a term k·|t_c − t_apex| with k = {@link SignalLimits#CENTRE_SHAPE_FACTOR} (a modelling
  * choice: the distance between the apex and the centre measures how far the zone is from the
  * symmetric shape for which both agree, and a third of it is how far the centre may itself lie from
- * the zone's infinite-dilution position); both terms are combined in quadrature (GUM §5.1.2).
+ * the zone's infinite-dilution position). A peak cut at a valley shared with a neighbour adds a
+ * boundary term for each end ({@link #boundaryTermS}); all terms are combined in quadrature
+ * (GUM §5.1.2).
  *
  * @param centreTimeS first moment, s; NaN when the area is not positive
  * @param leverS      √(Σ (w_i (t_i − t_c))²) / A, s per signal unit: times σ it is the
@@ -73,15 +75,55 @@ record ZoneCentre(double centreTimeS, double leverS) {
     }
 
     /**
-     * Standard uncertainty of the centre time, s.
+     * Standard uncertainty of the centre time, s: the noise, the shape term and the two boundary
+     * terms, combined in quadrature.
      *
      * @param noiseSd     SD σ of the noise of the signal the moment was taken on
      * @param correlation lag-one correlation ρ of that noise, in [0, 1)
      * @param apexTimeS   the apex time of the same peak, s
+     * @param boundary    the peak's start and end: times, s, and signal heights there (see
+     *                    {@link #boundaryTermS})
+     * @param widthHalfS  the peak's width at half height, s
+     * @param area        the peak's area, signal units × s
      */
-    double uncertaintyS(double noiseSd, double correlation, double apexTimeS) {
+    double uncertaintyS(double noiseSd, double correlation, double apexTimeS, Boundaries boundary,
+                        double widthHalfS, double area) {
         double noise = noiseSd * leverS * Math.sqrt((1 + correlation) / (1 - correlation));
         double shape = SignalLimits.CENTRE_SHAPE_FACTOR * Math.abs(centreTimeS - apexTimeS);
-        return Math.hypot(noise, shape);
+        double start = boundaryTermS(boundary.startTimeS(), boundary.startHeight(), widthHalfS, area);
+        double end = boundaryTermS(boundary.endTimeS(), boundary.endHeight(), widthHalfS, area);
+        return Math.sqrt(noise * noise + shape * shape + start * start + end * end);
     }
+
+    /**
+     * A peak's start and end, and the height of the smoothed corrected signal there.
+     *
+     * @param startTimeS  start, s
+     * @param startHeight signal at the start, signal units
+     * @param endTimeS    end, s
+     * @param endHeight   signal at the end, signal units
+     */
+    record Boundaries(double startTimeS, double startHeight, double endTimeS, double endHeight) {
+    }
+
+    /**
+     * How far the moment may be off because the peak is cut at a boundary where the signal has not
+     * returned to the baseline (a valley shared with a neighbour, or the dominance boundary between
+     * fitted zones): the tail of a Gaussian of the peak's own width with the height v found at the
+     * boundary holds the mass v·s·√(π/2) beyond it (s = w½/2.3548, the half-Gaussian integral), and
+     * that mass, lost from this zone or taken in from the neighbour, moves the moment by about
+     * mass · |t_b − t_c| / A. This is an order-of-magnitude bound, not a correction: the zone's own
+     * lost tail and the neighbour's tail taken in push the moment in opposite directions. Zero where
+     * the signal is back at the baseline.
+     */
+    double boundaryTermS(double boundaryTimeS, double height, double widthHalfS, double area) {
+        if (!(height > 0) || !(area > 0)) {
+            return 0.0;
+        }
+        double tailMass = height * widthHalfS / GaussianClusterFit.HALF_WIDTH_PER_SIGMA * HALF_GAUSSIAN_FACTOR;
+        return tailMass * Math.abs(boundaryTimeS - centreTimeS) / area;
+    }
+
+    /** √(π/2): the integral of exp(−u²/2) over u ≥ 0. */
+    private static final double HALF_GAUSSIAN_FACTOR = Math.sqrt(Math.PI / 2);
 }
