@@ -41,8 +41,8 @@ final class BatchScalePrior {
      */
     record Learned(ScalePrior prior, int runs) {
         String describe() {
-            return String.format(Locale.ROOT, "scale prior learned from %d runs of this buffer in the batch: "
-                            + "a = %.4f ± %.4f, b = %+.2f ± %.2f (empirical Bayes, DerSimonian & Laird 1986)", runs,
+            return String.format(Locale.ROOT, "prior learned from %d runs of this buffer in the batch: "
+                            + "a = %.4f ± %.4f, b = %+.2f ± %.2f", runs,
                     prior.factorCentre(), prior.factorSd(), prior.offsetCentre(), prior.offsetSd());
         }
     }

@@ -413,10 +413,8 @@ public final class Identifier {
             notes.add("run temperature not given: assumed equal to the library temperature");
         }
         if (match != null) {
-            notes.add(ScaleNotes.describe(runScale, match.modes(), libraryTempC, ms));
-            if (learned != null) {
-                notes.add(learned.describe());
-            }
+            notes.add(ScaleNotes.describe(runScale, match.modes(), libraryTempC, ms)
+                    + (learned == null ? "" : "; " + learned.describe()));
             String sign = ScaleNotes.voltageSignHint(best, match, evaluator);
             if (sign != null) {
                 notes.add(sign);

@@ -45,9 +45,10 @@ public final class RunSummaryText {
 
     /** Writes the summary of {@code runs} to {@code out} (flushed, not closed). */
     public static void write(List<RunResult> runs, PrintWriter out) {
-        out.println("Effective mobilities in 1e-9 m^2/(V s), as compared with the library (converted to its");
-        out.println("temperature where the run's differs). +/- is the standard uncertainty from the apex and");
-        out.println("marker times only; the run-to-run spread enters the match through the library.");
+        out.println("Effective mobilities in 1e-9 m^2/(V s), as compared with the library: converted to its");
+        out.println("temperature and corrected for the run's scale (see each run's note). +/- is the standard");
+        out.println("uncertainty from the zone and marker times only; the run-to-run spread and the scale's");
+        out.println("uncertainty enter the match too.");
         int ok = 0;
         int failed = 0;
         int withoutScale = 0;
