@@ -2,25 +2,38 @@ package org.mobident.signal;
 
 /**
  * The noise of a run's baseline stretches: robust SDs (1.4826 · MAD about the median) of the
- * baseline-corrected raw and smoothed signal over the samples outside the peaks, with the peaks
- * found by the smoothed SD itself.
+ * baseline-corrected raw and smoothed signal over the samples outside the peaks, and which samples
+ * those peaks cover.
  *
- * <p>The SD over all samples is inflated by the peaks, so the peaks and the SD are found in turn:
- * runs of the smoothed signal beyond ±1 SD whose extreme passes ±{@link SignalLimits#PEAK_MASK_SIGMAS}
- * SDs are left out (with a margin for their feet, see {@link LocalNoise#peakMask}), the SD is taken
- * again, and so on, {@link SignalLimits#NOISE_MASK_ITERATIONS} times at most
- * ({@link SignalLimits#NOISE_MASK_FIRST_ROUNDS} for a first look that only sets thresholds) or
- * until it changes by less than {@link SignalLimits#NOISE_MASK_CONVERGENCE}. The rounds work on every k-th sample
- * (k chosen so that there are about {@link SignalLimits#SCALE_SAMPLE_CAP} of them), which both
- * traces the runs and gives the SD; a zone narrower than k samples is then left in, but it adds
- * at most one value to the SD, which its median absolute deviation does not notice. Every round
- * costs O(n/k), and the exact mask of all samples, when asked for, one pass: linear.
+ * <p><b>The noise level along the run.</b> The run is cut into blocks of a given length (wide
+ * against a zone, see the caller); each block's smoothed signal gives a robust SD from an evenly
+ * strided subset of its samples, and the level at a block is the median of the SDs of the five
+ * blocks centred on it. The median absolute deviation ignores the peaks as long as they fill less
+ * than half a block, and the median over five blocks a stretch crowded with zones (Rousseeuw &amp;
+ * Croux, J. Am. Stat. Assoc. 88 (1993) 1273, for the breakdown of the MAD; the block median is common
+ * practice). No sample is excluded for this, so the tails of the noise are kept.
+ *
+ * <p><b>The peaks.</b> A run of the smoothed signal beyond ±1 level whose extreme passes
+ * ±{@link SignalLimits#PEAK_MASK_SIGMAS} levels, widened by a margin for the feet, belongs to a
+ * peak. The level is the local one, so that where the noise is larger its excursions are not taken
+ * for peaks (a single level for the whole run would cut the tails of the larger noise and bias its
+ * SD low).
+ *
+ * <p><b>The run's SDs</b> are taken over every k-th sample outside the peaks (k chosen so that about
+ * {@link SignalLimits#SCALE_SAMPLE_CAP} are used). Every step is linear in the number of points; the
+ * levels are found once per run, the peaks once on every k-th sample (a first look) and once on
+ * every sample.
  */
 final class BackgroundNoise {
 
+    /** Blocks on each side of a block whose SDs enter its level (five blocks in all). */
+    private static final int LEVEL_NEIGHBOURS = 2;
+    /** A block's SD is taken from at most this many of its samples, evenly strided. */
+    private static final int BLOCK_SAMPLE_CAP = 64;
+
     /**
-     * @param estimate the SDs (the sample count is that of the trace)
-     * @param inPeak   samples inside peaks at the final level, or null when not asked for
+     * @param estimate the run's SDs (the sample count is that of the trace)
+     * @param inPeak   samples inside peaks
      */
     record Result(LocalNoise.Estimate estimate, boolean[] inPeak) {
     }
@@ -29,82 +42,147 @@ final class BackgroundNoise {
     }
 
     /**
-     * @param raw       baseline-corrected raw signal, peaks up
-     * @param smooth    baseline-corrected smoothed signal
-     * @param margin    samples added on each side of a peak
-     * @param floor     least raw SD; the least smoothed SD is {@code floor · gain}
-     * @param gain      noise gain of the smoothing
-     * @param start     smoothed SD to start from, or NaN to start from all samples
-     * @param exactMask true to return the samples inside peaks
+     * The noise level along a run (see the class notes), of the corrected signal
+     * {@code smooth − baseline}.
+     *
+     * @param smooth      smoothed signal
+     * @param baseline    its baseline
+     * @param blockLength samples per block, at least 2
+     * @param floor       least level
      */
-    static Result of(double[] raw, double[] smooth, int margin, double floor, double gain, double start,
-                     boolean exactMask) {
-        int n = smooth.length;
-        int k = Math.max(1, n / SignalLimits.SCALE_SAMPLE_CAP);
-        int blocks = (n + k - 1) / k;
-        double[] sampled = new double[blocks];
-        for (int b = 0; b < blocks; b++) {
-            sampled[b] = smooth[b * k];
-        }
-        int marginBlocks = (margin + k - 1) / k;
-        double smoothFloor = floor * gain;
-        boolean[] blockMask = new boolean[blocks];
-        double[] work = new double[blocks];
-        double smoothSd = Math.max(Double.isNaN(start) ? sd(smooth, k, blockMask, work) : start, smoothFloor);
-        int rounds = exactMask ? SignalLimits.NOISE_MASK_ITERATIONS : SignalLimits.NOISE_MASK_FIRST_ROUNDS;
-        for (int round = 0; round < rounds; round++) {
-            java.util.Arrays.fill(blockMask, false);
-            double returnLevel = SignalLimits.RETURN_TO_BASELINE_SIGMAS * smoothSd;
-            double peakLevel = SignalLimits.PEAK_MASK_SIGMAS * smoothSd;
-            markRuns(sampled, 1, returnLevel, peakLevel, marginBlocks, blockMask);
-            markRuns(sampled, -1, returnLevel, peakLevel, marginBlocks, blockMask);
-            double next = Math.max(sd(smooth, k, blockMask, work), smoothFloor);
-            boolean settled = Math.abs(next - smoothSd) <= SignalLimits.NOISE_MASK_CONVERGENCE * smoothSd;
-            smoothSd = next;
-            if (settled) {
-                break;
-            }
-        }
-        double rawSd = Math.max(sd(raw, k, blockMask, work), floor);
-        boolean[] inPeak = exactMask ? LocalNoise.peakMask(smooth, SignalLimits.RETURN_TO_BASELINE_SIGMAS * smoothSd,
-                SignalLimits.PEAK_MASK_SIGMAS * smoothSd, margin) : null;
-        return new Result(new LocalNoise.Estimate(rawSd, smoothSd, n), inPeak);
+    static Levels levels(double[] smooth, double[] baseline, int blockLength, double floor) {
+        int block = Math.max(2, Math.min(blockLength, smooth.length));
+        return new Levels(block, levelsOf(smooth, baseline, block, floor));
     }
 
-    /** Marks the runs of blocks whose sample (times sign) is beyond the return level and reaches
-     *  the peak level, with the margin. */
-    private static void markRuns(double[] extreme, double sign, double returnLevel, double peakLevel,
-                                 int marginBlocks, boolean[] mask) {
-        int blocks = extreme.length;
+    /**
+     * The noise level of each block of {@code block} samples.
+     *
+     * @param block  samples per block
+     * @param values level of each block, signal units of the smoothed signal
+     */
+    record Levels(int block, double[] values) {
+    }
+
+    /**
+     * The run's SDs outside the peaks and the samples inside peaks.
+     *
+     * @param raw    baseline-corrected raw signal, peaks up
+     * @param smooth baseline-corrected smoothed signal
+     * @param levels the noise level along the run
+     * @param margin samples added on each side of a peak
+     * @param floor  least raw SD; the least smoothed SD is {@code floor · gain}
+     * @param gain   noise gain of the smoothing
+     */
+    static Result of(double[] raw, double[] smooth, Levels levels, int margin, double floor, double gain) {
+        int cap = SignalLimits.SCALE_SAMPLE_CAP;
+        boolean[] mask = mask(smooth, 1, levels, margin);
+        double smoothSd = Math.max(NoiseEstimator.marginalSd(smooth, mask, cap), floor * gain);
+        double rawSd = Math.max(NoiseEstimator.marginalSd(raw, mask, cap), floor);
+        return new Result(new LocalNoise.Estimate(rawSd, smoothSd, raw.length), mask);
+    }
+
+    /**
+     * A first look at the run's SDs outside the peaks, on every k-th sample of the corrected
+     * signals {@code y − baseline} and {@code smooth − baseline} (k chosen so that about
+     * {@link SignalLimits#SCALE_SAMPLE_CAP} samples are used; no corrected copy of the run is made).
+     * A zone narrower than k samples is then left in, which the median absolute deviation does not
+     * notice.
+     */
+    static LocalNoise.Estimate firstLook(double[] y, double[] smooth, double[] baseline, Levels levels, int margin,
+                                         double floor, double gain) {
+        int n = smooth.length;
+        int cap = SignalLimits.SCALE_SAMPLE_CAP;
+        int k = Math.max(1, n / cap);
+        int m = (n + k - 1) / k;
+        double[] smoothSampled = new double[m];
+        double[] rawSampled = new double[m];
+        for (int j = 0; j < m; j++) {
+            smoothSampled[j] = smooth[j * k] - baseline[j * k];
+            rawSampled[j] = y[j * k] - baseline[j * k];
+        }
+        boolean[] mask = mask(smoothSampled, k, levels, (margin + k - 1) / k);
+        double smoothSd = Math.max(NoiseEstimator.marginalSd(smoothSampled, mask, cap), floor * gain);
+        double rawSd = Math.max(NoiseEstimator.marginalSd(rawSampled, mask, cap), floor);
+        return new LocalNoise.Estimate(rawSd, smoothSd, n);
+    }
+
+    /**
+     * Samples inside peaks, on a series holding every {@code step}-th sample of the run (1: all):
+     * runs beyond ±1 level whose extreme passes ±{@link SignalLimits#PEAK_MASK_SIGMAS} levels, with
+     * {@code margin} samples of the series on each side.
+     */
+    private static boolean[] mask(double[] v, int step, Levels levels, int margin) {
+        int n = v.length;
+        boolean[] mask = new boolean[n];
+        double[] level = levels.values();
+        // samples of the series per block of the levels; the last level also serves any remainder
+        int perBlock = Math.max(1, levels.block() / step);
+        int i = 0;
         int b = 0;
-        while (b < blocks) {
-            if (!(sign * extreme[b] > returnLevel)) {
-                b++;
+        int blockEnd = Math.min(n, perBlock);
+        while (i < n) {
+            if (i >= blockEnd) {
+                b = Math.min(level.length - 1, b + 1);
+                blockEnd = b == level.length - 1 ? n : Math.min(n, blockEnd + perBlock);
                 continue;
             }
-            int e = b;
-            double top = sign * extreme[b];
-            while (e + 1 < blocks && sign * extreme[e + 1] > returnLevel) {
-                e++;
-                top = Math.max(top, sign * extreme[e]);
+            double back = SignalLimits.RETURN_TO_BASELINE_SIGMAS * level[b];
+            if (!(Math.abs(v[i]) > back)) {
+                i++;
+                continue;
             }
-            if (top > peakLevel) {
-                for (int j = Math.max(0, b - marginBlocks); j <= Math.min(blocks - 1, e + marginBlocks); j++) {
-                    mask[j] = true;
+            double sign = Math.signum(v[i]);
+            boolean peak = sign * v[i] > SignalLimits.PEAK_MASK_SIGMAS * level[b];
+            int j = i;
+            int c = b;
+            int cEnd = blockEnd;
+            while (j + 1 < n) {
+                if (j + 1 >= cEnd) {
+                    c = Math.min(level.length - 1, c + 1);
+                    cEnd = c == level.length - 1 ? n : Math.min(n, cEnd + perBlock);
+                }
+                if (!(sign * v[j + 1] > SignalLimits.RETURN_TO_BASELINE_SIGMAS * level[c])) {
+                    break;
+                }
+                j++;
+                peak |= sign * v[j] > SignalLimits.PEAK_MASK_SIGMAS * level[c];
+            }
+            if (peak) {
+                for (int q = Math.max(0, i - margin); q <= Math.min(n - 1, j + margin); q++) {
+                    mask[q] = true;
                 }
             }
-            b = e + 1;
+            i = j + 1;
         }
+        return mask;
     }
 
-    /** Robust SD of the first sample of every block not masked; 0 when fewer than two remain. */
-    private static double sd(double[] v, int k, boolean[] blockMask, double[] work) {
-        int m = 0;
-        for (int b = 0; b < blockMask.length; b++) {
-            if (!blockMask[b]) {
-                work[m++] = v[b * k];
+    /** The noise level of every block: the median of the robust SDs of it and its neighbours. */
+    private static double[] levelsOf(double[] v, double[] baseline, int block, double floor) {
+        int n = v.length;
+        int blocks = (n + block - 1) / block;
+        double[] sd = new double[blocks];
+        double[] work = new double[BLOCK_SAMPLE_CAP + 1];
+        for (int b = 0; b < blocks; b++) {
+            int from = b * block;
+            int to = Math.min(n, from + block);
+            int stride = Math.max(1, (to - from) / BLOCK_SAMPLE_CAP);
+            int m = 0;
+            for (int k = from; k < to && m < work.length; k += stride) {
+                work[m++] = v[k] - baseline[k];
             }
+            sd[b] = m < 2 ? floor : Math.max(NoiseEstimator.madSdInPlace(work, m), floor);
         }
-        return m < 2 ? 0.0 : NoiseEstimator.madSdInPlace(work, m);
+        double[] level = new double[blocks];
+        double[] near = new double[2 * LEVEL_NEIGHBOURS + 1];
+        for (int b = 0; b < blocks; b++) {
+            int m = 0;
+            for (int c = Math.max(0, b - LEVEL_NEIGHBOURS); c <= Math.min(blocks - 1, b + LEVEL_NEIGHBOURS); c++) {
+                near[m++] = sd[c];
+            }
+            level[b] = Selection.medianInPlace(near, m);
+        }
+        return level;
     }
 }

@@ -51,11 +51,11 @@ final class ClusterBaseline {
         boolean dipInGroup = false;
         while (i < n) {
             double v = smooth[i] - baseline[i];
-            double sign = v > returnLevel ? 1 : v < -returnLevel ? -1 : 0;
-            if (sign == 0) {
+            if (!(Math.abs(v) > returnLevel)) {
                 i++;
                 continue;
             }
+            double sign = Math.signum(v);
             int j = i;
             double top = sign * v;
             while (j + 1 < n && sign * (smooth[j + 1] - baseline[j + 1]) > returnLevel) {

@@ -118,15 +118,11 @@ public final class PeakDetector {
         // (measured, not derived from first differences), for the thresholds of the common baseline;
         // the mask found with the clipped baseline is refreshed once the common baseline is in
         double[] baseline = SnipBaseline.estimate(t, smooth, typicalWidth, sampling);
-        double[] raw = new double[n];
-        double[] corrected = new double[n];
-        for (int i = 0; i < n; i++) {
-            raw[i] = y[i] - baseline[i];
-            corrected[i] = smooth[i] - baseline[i];
-        }
         int margin = (int) Math.ceil(SignalLimits.PEAK_MASK_MARGIN_WIDTHS * typicalWidth / sampling);
-        LocalNoise.Estimate first = BackgroundNoise.of(raw, corrected, margin, floor, smoothGain, Double.NaN, false)
-                .estimate();
+        int block = (int) Math.max(SignalLimits.LOCAL_NOISE_MIN_SAMPLES,
+                Math.round(SignalLimits.NOISE_SUPPORT_WIDTHS * typicalWidth / sampling));
+        BackgroundNoise.Levels levels = BackgroundNoise.levels(smooth, baseline, block, floor * smoothGain);
+        LocalNoise.Estimate first = BackgroundNoise.firstLook(y, smooth, baseline, levels, margin, floor, smoothGain);
         double firstSigma = Math.max(first.rawSd(), whiteSigma);
         double firstSmoothSigma = first.smoothSd();
         ClusterBaseline.bridge(t, smooth, baseline,
@@ -135,6 +131,7 @@ public final class PeakDetector {
                         * typicalRange * firstSigma / 2,
                 SignalLimits.GROUP_GAP_IN_WIDTHS * typicalWidth, SignalLimits.GROUP_EDGE_IN_WIDTHS * typicalWidth,
                 SignalLimits.GROUP_MAX_SPAN_IN_WIDTHS * typicalWidth);
+        double[] raw = new double[n];
         for (int i = 0; i < n; i++) {
             raw[i] = y[i] - baseline[i];
             smooth[i] -= baseline[i];
@@ -142,8 +139,7 @@ public final class PeakDetector {
 
         // the run's noise from its baseline stretches: the peaks (runs passing 5 smoothed-noise SDs,
         // with their feet) are left out
-        BackgroundNoise.Result background = BackgroundNoise.of(raw, smooth, margin, floor, smoothGain, firstSmoothSigma,
-                true);
+        BackgroundNoise.Result background = BackgroundNoise.of(raw, smooth, levels, margin, floor, smoothGain);
         boolean[] inPeak = background.inPeak();
         double sigma = background.estimate().rawSd();
         double smoothSigma = background.estimate().smoothSd();
@@ -198,7 +194,7 @@ public final class PeakDetector {
             s = e + 1;
         }
         Reporting reporting = new Reporting(t, raw, smooth, sampling, localNoise, correlation, significance,
-                settings.minSignalToNoise());
+                settings.minSignalToNoise(), returnLevel);
         List<Measured> reported = new ArrayList<>(found.size());
         for (Measured m : found) {
             Measured r = reporting.judge(m);
@@ -238,7 +234,8 @@ public final class PeakDetector {
      * uncertainty of its centre time.
      */
     private record Reporting(double[] t, double[] raw, double[] smooth, double sampling, LocalNoise noise,
-                             double correlation, double significance, double minSignalToNoise) {
+                             double correlation, double significance, double minSignalToNoise,
+                             double returnLevel) {
 
         /** The peak with its S/N and centre uncertainty, or null when it is not to be reported. */
         Measured judge(Measured m) {
@@ -260,10 +257,16 @@ public final class PeakDetector {
             }
             double centreSd = m.centre == null ? m.centreTimeSdS
                     : m.centre.uncertaintyS(local.rawSd(), correlation, m.apexTimeS,
-                            new ZoneCentre.Boundaries(m.startTimeS, valueAt(m.startTimeS), m.endTimeS,
-                                    valueAt(m.endTimeS)),
+                            new ZoneCentre.Boundaries(m.startTimeS, aboveBaseline(m.startTimeS), m.endTimeS,
+                                    aboveBaseline(m.endTimeS)),
                             m.widthHalfS, m.area);
             return m.reported(signalToNoise, centreSd);
+        }
+
+        /** How far the smoothed corrected signal stands above the return level at a time (a peak's
+         *  end on the baseline gives 0, a valley shared with a neighbour its excess). */
+        private double aboveBaseline(double timeS) {
+            return Math.max(0.0, valueAt(timeS) - returnLevel);
         }
 
         /** The smoothed corrected signal at a time, by linear interpolation between samples. */

@@ -23,8 +23,8 @@ final class SignalLimits {
      *  1.36 σ²/n; from memory). */
     static final int NOISE_SAMPLE_CAP = 4_096;
 
-    /** Robust scales that are refined in rounds or only set a screening level (the baseline noise
-     *  of the mask rounds, the spike residuals, the top-hat noise, the span behind the noise floor)
+    /** Robust scales of a whole run that need no more (the baseline noise outside the peaks, the
+     *  spike residuals, the top-hat noise, the span behind the noise floor)
      *  use at most this many evenly strided samples: the normal-scaled MAD of 2,048 values has a
      *  standard error under 3 % (asymptotic variance 1.36 σ²/n; from memory). */
     static final int SCALE_SAMPLE_CAP = 2_048;
@@ -137,23 +137,12 @@ final class SignalLimits {
     static final int LOCAL_NOISE_SAMPLE_CAP = 512;
 
     /** Samples of the smoothed corrected signal in a run that passes this many smoothed-noise SDs
-     *  belong to a peak and are left out of the noise (noise alone passes ±5 SDs about once
+     *  (the local level, see {@code BackgroundNoise}) belong to a peak and are left out of the noise (noise alone passes ±5 SDs about once
      *  in 1.7 million independent samples, so the noise keeps its tails). */
     static final double PEAK_MASK_SIGMAS = 5.0;
 
     /** ... together with this many typical widths at half height on each side (the feet). */
     static final double PEAK_MASK_MARGIN_WIDTHS = 0.5;
-
-    /** Rounds of the alternating refinement of the peak mask and the noise SD (the first SD, over
-     *  all samples, is inflated by the peaks; each round lowers it towards the baseline's own) ... */
-    static final int NOISE_MASK_ITERATIONS = 4;
-
-    /** ... stopped early when the SD changes by less than this fraction (common practice). */
-    static final double NOISE_MASK_CONVERGENCE = 0.05;
-
-    /** Rounds of that refinement for the first look at a run's noise, which only sets the
-     *  thresholds of the common baseline; the final estimate starts from its result. */
-    static final int NOISE_MASK_FIRST_ROUNDS = 2;
 
     /** The lag-one correlation of the noise is taken at most this large (the variance factors
      *  (1 + ρ)/(1 − ρ) stay finite). */

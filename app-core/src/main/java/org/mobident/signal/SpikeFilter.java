@@ -15,9 +15,12 @@ package org.mobident.signal;
  *     correlated noise needs no model), and</li>
  * <li>has no shoulders: the mean residual of its two shoulders, in the direction of the block, is
  *     at most {@link SignalLimits#SPIKE_SHOULDER_FRACTION} of the block's smaller residual, and</li>
- * <li>holds the largest one-sample residual within reach (its shoulders and anchors): a spike
- *     among the anchors of a neighbouring block bends that block's parabola, and the clean samples
- *     beside it would otherwise seem to stand out.</li>
+ * <li>holds the largest one-sample residual of its sign within reach (its shoulders and anchors):
+ *     a spike among the anchors of a neighbouring block bends that block's parabola, and the clean
+ *     samples beside it would otherwise seem to stand out. (Two samples from a spike, where it is an
+ *     anchor, the residual has the opposite sign and nine tenths of its size; three samples away,
+ *     the same sign and two fifths: worked out from the least-squares weights of the anchors at
+ *     ±2 and ±3 samples. So only residuals of the same sign are compared.)</li>
  * </ol>
  * The second condition is about shape alone, so it holds for spikes of any height. A Gaussian zone
  * whose width at half height spans at least two sampling intervals keeps shoulders of at least
@@ -196,7 +199,7 @@ final class SpikeFilter {
             if (j >= first && j <= last) {
                 continue;
             }
-            if (parabola.residuals(t, y, j, 1, own) && Math.abs(own[0]) > largest) {
+            if (parabola.residuals(t, y, j, 1, own) && sign * own[0] > largest) {
                 return Verdict.DEFERRED;
             }
         }

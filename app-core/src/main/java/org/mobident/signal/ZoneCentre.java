@@ -81,8 +81,8 @@ record ZoneCentre(double centreTimeS, double leverS) {
      * @param noiseSd     SD σ of the noise of the signal the moment was taken on
      * @param correlation lag-one correlation ρ of that noise, in [0, 1)
      * @param apexTimeS   the apex time of the same peak, s
-     * @param boundary    the peak's start and end: times, s, and signal heights there (see
-     *                    {@link #boundaryTermS})
+     * @param boundary    the peak's start and end: times, s, and how far the signal stands above the
+     *                    baseline's noise there (see {@link #boundaryTermS})
      * @param widthHalfS  the peak's width at half height, s
      * @param area        the peak's area, signal units × s
      */
@@ -96,12 +96,13 @@ record ZoneCentre(double centreTimeS, double leverS) {
     }
 
     /**
-     * A peak's start and end, and the height of the smoothed corrected signal there.
+     * A peak's start and end, and how far the smoothed corrected signal stands above the level at
+     * which it counts as back on the baseline there (0 at an end on the baseline).
      *
      * @param startTimeS  start, s
-     * @param startHeight signal at the start, signal units
+     * @param startHeight excess of the signal at the start, signal units
      * @param endTimeS    end, s
-     * @param endHeight   signal at the end, signal units
+     * @param endHeight   excess of the signal at the end, signal units
      */
     record Boundaries(double startTimeS, double startHeight, double endTimeS, double endHeight) {
     }

@@ -62,6 +62,43 @@ class NoiseEstimatorTest {
     }
 
     @Test
+    void expectedRangeForLargeSamplesFromTheTable() {
+        // d2(1000) = 6.483 (Tippett, Biometrika 17 (1925) 364, table of the mean range; from memory)
+        assertEquals(6.483, NoiseEstimator.expectedNormalRange(1000), 2e-3);
+        // the interpolated table agrees with the integral itself
+        for (long n : new long[] {129, 150, 1000, 12_345, 1_000_000}) {
+            assertEquals(NoiseEstimator.integratedNormalRange(n), NoiseEstimator.expectedNormalRange(n), 1e-4,
+                    "n = " + n);
+        }
+    }
+
+    @Test
+    void marginalSdOfAutoregressiveNoiseAndWhatFirstDifferencesMakeOfIt() {
+        // AR(1) e_i = φ e_{i−1} + a_i has Var(e) = σ_a²/(1 − φ²) and lag-one correlation φ (Box &
+        // Jenkins 1970, ch. 3); first differences have variance 2σ²(1 − φ), so the difference-based
+        // estimate is σ√(1 − φ): for φ = 0.9 about a third of the true SD
+        double sd = 0.5;
+        double phi = 0.9;
+        double[] y = new double[200_000];
+        Synthetic.addCorrelatedNoise(y, sd, phi, 17);
+        assertEquals(sd, NoiseEstimator.marginalSd(y, null), 0.06 * sd);
+        assertEquals(sd * Math.sqrt(1 - phi), NoiseEstimator.robustSd(y), 0.06 * sd * Math.sqrt(1 - phi));
+    }
+
+    @Test
+    void marginalSdLeavesOutTheExcludedSamples() {
+        double sd = 0.2;
+        double[] y = new double[50_000];
+        Synthetic.addNoise(y, sd, 23);
+        boolean[] excluded = new boolean[y.length];
+        for (int i = 10_000; i < 20_000; i++) {
+            y[i] += 50; // a fifth of the run far off the noise: the MAD alone would be pulled
+            excluded[i] = true;
+        }
+        assertEquals(sd, NoiseEstimator.marginalSd(y, excluded), 0.05 * sd);
+    }
+
+    @Test
     void tooShortGivesZero() {
         assertEquals(0.0, NoiseEstimator.robustSd(new double[] {1, 2}));
     }

@@ -73,6 +73,30 @@ final class Synthetic {
         }
     }
 
+    /**
+     * Adds a stationary first-order autoregressive series e_i = φ e_{i−1} + a_i of marginal SD
+     * {@code sd} (innovations of SD sd·√(1 − φ²), e_0 drawn from the marginal distribution; Box &amp;
+     * Jenkins, Time Series Analysis, 1970, ch. 3: Var(e) = σ_a²/(1 − φ²)).
+     */
+    static void addCorrelatedNoise(double[] y, double sd, double phi, long seed) {
+        Random random = new Random(seed);
+        double innovation = sd * Math.sqrt(1 - phi * phi);
+        double e = sd * random.nextGaussian();
+        for (int i = 0; i < y.length; i++) {
+            if (i > 0) {
+                e = phi * e + innovation * random.nextGaussian();
+            }
+            y[i] += e;
+        }
+    }
+
+    /** Adds a spike of {@code amplitude} to {@code width} samples from index {@code first}. */
+    static void addSpike(double[] y, int first, int width, double amplitude) {
+        for (int k = 0; k < width; k++) {
+            y[first + k] += amplitude;
+        }
+    }
+
     /** Adds {@code a + b t + c t²}. */
     static void addDrift(double[] t, double[] y, double a, double b, double c) {
         for (int i = 0; i < t.length; i++) {

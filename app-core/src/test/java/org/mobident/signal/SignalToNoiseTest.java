@@ -1,0 +1,126 @@
+package org.mobident.signal;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.util.List;
+import org.junit.jupiter.api.Test;
+import org.mobident.trace.Detection;
+
+/**
+ * The pharmacopoeial signal-to-noise ratio S/N = 2H/h (Ph. Eur. 2.2.46; USP &lt;621&gt;), h the range
+ * of the background noise over a window of 5 widths at half height around the peak, and the noise
+ * measured where the peak sits.
+ */
+class SignalToNoiseTest {
+
+    private static final double STEP_S = 0.1;
+    private static final double SIGMA_S = 1.0;
+    /** Gaussian identity: w½ = 2√(2 ln 2) σ. */
+    private static final double WIDTH_S = 2 * Math.sqrt(2 * Math.log(2)) * SIGMA_S;
+
+    @Test
+    void signalToNoiseIsTwiceTheHeightOverTheObservedPeakToPeakNoise() {
+        double noise = 0.02;
+        double height = 1.0;
+        double[] t = Synthetic.regularTimes(0, STEP_S, 12_000);
+        double[] y = new double[t.length];
+        Synthetic.addGaussian(t, y, 600, height, SIGMA_S);
+        Synthetic.addNoise(y, noise, 7);
+        Peak p = single(PeakDetector.analyse(Synthetic.trace(t, y), Detection.DIRECT, PeakSettings.DEFAULT).peaks());
+
+        // the trace's own peak-to-peak noise, measured as the Ph. Eur. asks: the range of the background
+        // over windows of 5 w½ (here 118 samples), averaged over the baseline away from the peak
+        int window = (int) Math.round(5 * WIDTH_S / STEP_S) + 1;
+        double observed = 0;
+        int windows = 0;
+        for (int from = 0; from + window <= 5_000; from += window) {
+            double lo = Double.POSITIVE_INFINITY;
+            double hi = Double.NEGATIVE_INFINITY;
+            for (int i = from; i < from + window; i++) {
+                lo = Math.min(lo, y[i]);
+                hi = Math.max(hi, y[i]);
+            }
+            observed += hi - lo;
+            windows++;
+        }
+        observed /= windows;
+        double h = 2 * p.height() / p.signalToNoise();
+        assertEquals(observed, h, 0.06 * observed, "h against the observed range of the noise");
+        // and against its expectation for white noise: d2(118)·σ (Tippett 1925), about 5.15 σ
+        assertEquals(NoiseEstimator.expectedNormalRange(window) * noise, h, 0.06 * h);
+        assertEquals(2 * height / (NoiseEstimator.expectedNormalRange(window) * noise), p.signalToNoise(),
+                0.07 * p.signalToNoise());
+        assertEquals(SignalToNoiseClass.QUANTIFIABLE, p.signalToNoiseClass());
+    }
+
+    @Test
+    void theNoiseIsTakenWhereThePeakSits() {
+        // two equal peaks, the noise four times larger around the second: its S/N is a quarter
+        double[] t = Synthetic.regularTimes(0, STEP_S, 12_000);
+        double[] y = new double[t.length];
+        Synthetic.addGaussian(t, y, 300, 1.0, SIGMA_S);
+        Synthetic.addGaussian(t, y, 900, 1.0, SIGMA_S);
+        double[] quiet = new double[t.length];
+        double[] loud = new double[t.length];
+        Synthetic.addNoise(quiet, 0.01, 8);
+        Synthetic.addNoise(loud, 0.04, 9);
+        for (int i = 0; i < t.length; i++) {
+            y[i] += i < t.length / 2 ? quiet[i] : loud[i];
+        }
+        List<Peak> peaks = PeakDetector.analyse(Synthetic.trace(t, y), Detection.DIRECT, PeakSettings.DEFAULT).peaks();
+        assertEquals(2, peaks.size(), peaks::toString);
+        double ratio = peaks.get(1).signalToNoise() / peaks.get(0).signalToNoise();
+        assertEquals(0.25, ratio, 0.05, "S/N of the loud one over the quiet one");
+    }
+
+    @Test
+    void theDetectionLimitIsTheDefaultAndPeaksBelowTheQuantitationLimitAreMarked() {
+        // ICH Q2(R1): detection limit S/N 3, quantitation limit S/N 10 (from memory)
+        assertEquals(3.0, PeakSettings.DEFAULT.minSignalToNoise());
+        assertEquals(SignalToNoiseClass.BELOW_DETECTION_LIMIT, SignalToNoiseClass.of(2.99));
+        assertEquals(SignalToNoiseClass.BELOW_QUANTITATION_LIMIT, SignalToNoiseClass.of(3.0));
+        assertEquals(SignalToNoiseClass.BELOW_QUANTITATION_LIMIT, SignalToNoiseClass.of(9.99));
+        assertEquals(SignalToNoiseClass.QUANTIFIABLE, SignalToNoiseClass.of(10.0));
+        assertEquals(SignalToNoiseClass.BELOW_DETECTION_LIMIT, SignalToNoiseClass.of(Double.NaN));
+        assertEquals("below quantitation limit", SignalToNoiseClass.BELOW_QUANTITATION_LIMIT.label());
+    }
+
+    @Test
+    void faintPeaksAreFoundAtTheRateTheirSignalToNoiseStates() {
+        // a peak is reported when its S/N = 2H/(d2(n)σ) reaches 3; with n = 5 w½ / Δt + 1 = 119 samples,
+        // d2 = 5.17 (Tippett 1925), so H = 3·5.17/2 σ = 7.8 σ is the detection limit. Expected S/N 4
+        // (H = 10.3 σ): found in at least 90 % of 40 runs; expected S/N 2 (H = 5.2 σ): in at most 10 %
+        double noise = 0.01;
+        double d2 = NoiseEstimator.expectedNormalRange((long) Math.round(5 * WIDTH_S / STEP_S) + 1);
+        int runs = 40;
+        int[] found = new int[2];
+        double[] expected = {4.0, 2.0};
+        for (int k = 0; k < 2; k++) {
+            double height = expected[k] * d2 * noise / 2;
+            for (int seed = 0; seed < runs; seed++) {
+                double[] t = Synthetic.regularTimes(0, STEP_S, 6_000);
+                double[] y = new double[t.length];
+                double apex = 250 + 0.37 * seed;
+                Synthetic.addGaussian(t, y, apex, height, SIGMA_S);
+                Synthetic.addNoise(y, noise, 1_000 * k + seed);
+                List<Peak> peaks = PeakDetector.analyse(Synthetic.trace(t, y), Detection.DIRECT,
+                        PeakSettings.DEFAULT).peaks();
+                for (Peak p : peaks) {
+                    if (Math.abs(p.apexTimeS() - apex) < WIDTH_S) {
+                        found[k]++;
+                        break;
+                    }
+                }
+                assertTrue(peaks.size() <= 1, "seed " + seed + ": " + peaks);
+            }
+        }
+        assertTrue(found[0] >= 0.9 * runs, "expected S/N 4: found in " + found[0] + " of " + runs);
+        assertTrue(found[1] <= 0.1 * runs, "expected S/N 2: found in " + found[1] + " of " + runs);
+    }
+
+    private static Peak single(List<Peak> peaks) {
+        assertEquals(1, peaks.size(), peaks::toString);
+        return peaks.get(0);
+    }
+}
