@@ -126,7 +126,8 @@ public final class Identifier {
         List<Integer> again = new ArrayList<>();
         for (int i = 0; i < detected.size(); i++) {
             Detected d = detected.get(i);
-            if (d.failure() == null && learned.containsKey(bufferKey(d.run().conditions().buffer()))) {
+            if (d.failure() == null && learned.containsKey(bufferKey(d.run().conditions().buffer()))
+                    && priorMatters(first.get(i))) {
                 again.add(i);
             }
         }
@@ -139,6 +140,33 @@ public final class Identifier {
         }
         return out;
     }
+
+    /**
+     * True when a run's matches could change with the batch's prior: its scale was not pinned by
+     * several peaks, or one of its peaks is not yet a near-certain call. A run whose every candidate
+     * peak is identified at {@value #SETTLED_CONFIDENCE} or more with a scale from
+     * {@link BatchScalePrior#MIN_ANCHORS} peaks keeps its first result (the prior would move its
+     * confidences in the third decimal at most).
+     */
+    static boolean priorMatters(RunResult r) {
+        if (r.failed() || !r.mobilityKnown()) {
+            return false;
+        }
+        if (!r.runScale().fitted() || r.runScale().anchors() < BatchScalePrior.MIN_ANCHORS) {
+            return true;
+        }
+        for (PeakResult p : r.peaks()) {
+            PeakMatch m = p.match();
+            if (p.role() == PeakRole.ANALYTE && !m.candidates().isEmpty()
+                    && (m.status() != org.mobident.matching.MatchStatus.IDENTIFIED || m.confidence() < SETTLED_CONFIDENCE)) {
+                return true;
+            }
+        }
+        return false;
+    }
+
+    /** Confidence above which a call needs no second pass. */
+    static final double SETTLED_CONFIDENCE = 0.99;
 
     /** Applies {@code work} to every item, several at once, keeping the order; a crash becomes {@code onCrash}. */
     private <T, R> List<R> parallel(List<T> items, java.util.function.Function<T, R> work,
