@@ -5,7 +5,9 @@ import org.mobident.Tolerances;
 /**
  * Settings of peak detection.
  *
- * @param minSignalToNoise  peaks with a lower S/N are not reported
+ * @param minSignalToNoise  peaks with a lower S/N (Ph. Eur. 2.2.46, see {@link PeakDetector}) are not
+ *                          reported; by default the ICH Q2 detection limit, 3. Whatever its value, a
+ *                          peak must also stand significantly above the smoothed noise around it
  * @param smoothingWindowS  width of the smoothing window in s; NaN chooses it from the data
  * @param minWidthS         narrower features (spikes) are not peaks, s; NaN chooses from the data
  */
