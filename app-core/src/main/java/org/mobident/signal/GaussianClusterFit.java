@@ -209,19 +209,31 @@ final class GaussianClusterFit {
      * this large if the extra zones were not there.
      */
     static double extraZonesPValue(Result reduced, Result full) {
-        int extra = full.parameters() - reduced.parameters();
-        int dof = full.points() - full.parameters();
-        if (extra <= 0 || dof <= 0 || reduced.points() != full.points()) {
+        if (reduced.points() != full.points()) {
             throw new IllegalArgumentException("fits are not nested on the same samples");
         }
-        double improvement = reduced.residualSumOfSquares() - full.residualSumOfSquares();
+        return extraParametersPValue(reduced.residualSumOfSquares(), full.residualSumOfSquares(),
+                full.parameters() - reduced.parameters(), full.points() - full.parameters());
+    }
+
+    /**
+     * The extra-sum-of-squares F-test: the probability of a fall of the residual sum of squares from
+     * {@code rssFewer} to {@code rssMore} at least this large, with {@code extra} more parameters
+     * and {@code dof} residual degrees of freedom of the larger fit, if those parameters were not
+     * needed (Bates &amp; Watts, Nonlinear Regression Analysis and Its Applications, 1988, §3.5).
+     */
+    static double extraParametersPValue(double rssFewer, double rssMore, int extra, int dof) {
+        if (extra <= 0 || dof <= 0) {
+            throw new IllegalArgumentException("the larger fit must have more parameters and residual degrees of freedom");
+        }
+        double improvement = rssFewer - rssMore;
         if (!(improvement > 0)) {
             return 1.0;
         }
-        if (!(full.residualSumOfSquares() > 0)) {
+        if (!(rssMore > 0)) {
             return 0.0;
         }
-        double f = (improvement / extra) / (full.residualSumOfSquares() / dof);
+        double f = (improvement / extra) / (rssMore / dof);
         return 1.0 - new FDistribution(extra, dof).cumulativeProbability(f);
     }
 

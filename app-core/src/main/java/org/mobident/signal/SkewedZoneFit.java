@@ -1,6 +1,5 @@
 package org.mobident.signal;
 
-import org.apache.commons.math3.distribution.FDistribution;
 import org.apache.commons.math3.exception.MathIllegalStateException;
 import org.apache.commons.math3.fitting.leastsquares.LeastSquaresBuilder;
 import org.apache.commons.math3.fitting.leastsquares.LeastSquaresOptimizer;
@@ -160,20 +159,11 @@ record SkewedZoneFit(double areaTimesS, double centreS, double sigmaS, double ta
      * it is used only to keep a split that the data clearly ask for.
      */
     double pValueAgainst(GaussianClusterFit.Result zones) {
-        int extra = zones.parameters() - PARAMETERS;
-        int dof = zones.points() - zones.parameters();
-        if (extra <= 0 || dof <= 0 || zones.points() != points) {
+        if (zones.points() != points) {
             throw new IllegalArgumentException("the Gaussian fit must have more parameters on the same samples");
         }
-        double improvement = residualSumOfSquares - zones.residualSumOfSquares();
-        if (!(improvement > 0)) {
-            return 1.0;
-        }
-        if (!(zones.residualSumOfSquares() > 0)) {
-            return 0.0;
-        }
-        double f = (improvement / extra) / (zones.residualSumOfSquares() / dof);
-        return 1.0 - new FDistribution(extra, dof).cumulativeProbability(f);
+        return GaussianClusterFit.extraParametersPValue(residualSumOfSquares, zones.residualSumOfSquares(),
+                zones.parameters() - PARAMETERS, zones.points() - zones.parameters());
     }
 
     /** The unit-area EMG g at offset {@code time − centre} (see the class notes); s = sign of τ. */
