@@ -9,7 +9,7 @@ import java.util.List;
 import org.junit.jupiter.api.Test;
 import org.mobident.library.Library;
 import org.mobident.library.LibraryEntry;
-import org.mobident.library.build.LibraryCheck;
+import org.mobident.library.standards.LibraryCheck;
 import org.mobident.matching.LibraryMatcher;
 import org.mobident.matching.MatchSettings;
 import org.mobident.matching.MatchWindow;

@@ -47,7 +47,7 @@ public final class BatchOptions {
 
     Batch identify() throws InputException {
         Library library = LibraryCsv.read(libraryFile);
-        org.mobident.library.build.LibraryCheck.requirePlausible(library);
+        org.mobident.library.standards.LibraryCheck.requirePlausible(library);
         RunInputs.Loaded loaded = inputs.load();
         IdentifySettings settings = inputs.settings(matching.toSettings(MatchSettings.DEFAULT));
         List<RunResult> results = new ArrayList<>(new Identifier(library, settings).identifyAll(loaded.runs()));

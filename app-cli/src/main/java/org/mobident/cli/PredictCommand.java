@@ -11,7 +11,7 @@ import org.mobident.library.Library;
 import org.mobident.library.LibraryCsv;
 import org.mobident.recheck.PhScan;
 import org.mobident.recheck.PredictedMobility;
-import org.mobident.recheck.Predictor;
+import org.mobident.recheck.BufferTransfer;
 import org.mobident.recheck.SeparationRule;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
@@ -68,8 +68,8 @@ public final class PredictCommand implements Callable<Integer> {
         PrintWriter o = spec.commandLine().getOut();
         Outputs.checkFree(overwrite, out);
         Library library = LibraryCsv.read(libraryFile);
-        Predictor predictor = referenceFile == null ? Predictor.withoutReference()
-                : Predictor.withReference(LibraryCsv.read(referenceFile));
+        BufferTransfer predictor = referenceFile == null ? BufferTransfer.withoutReference()
+                : BufferTransfer.withReference(LibraryCsv.read(referenceFile));
         if (scan != null) {
             return scan(library, predictor, o);
         }
@@ -96,7 +96,7 @@ public final class PredictCommand implements Callable<Integer> {
                 + "accounted for.");
         o.println("Predictions are estimates: measure standards in the new buffer before relying on them.");
         if (out != null) {
-            Library predicted = Predictor.asLibrary(predictions, library, buffers.newBufferForLibrary());
+            Library predicted = BufferTransfer.asLibrary(predictions, library, buffers.newBufferForLibrary());
             LibraryBuildCommand.writeLibrary(out, overwrite, predicted);
             o.println("predicted library written to " + out);
         }
@@ -135,7 +135,7 @@ public final class PredictCommand implements Callable<Integer> {
                 + "asks for %.2f)", c.first(), c.second(), range, closest, c.thresholdUnits());
     }
 
-    private int scan(Library library, Predictor predictor, PrintWriter o) throws InputException, OutputException {
+    private int scan(Library library, BufferTransfer predictor, PrintWriter o) throws InputException, OutputException {
         String[] p = scan.split(":");
         double from;
         double to;

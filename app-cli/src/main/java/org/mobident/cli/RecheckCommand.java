@@ -7,7 +7,7 @@ import org.mobident.library.Library;
 import org.mobident.library.LibraryCsv;
 import org.mobident.recheck.PeakTableReader;
 import org.mobident.recheck.PeakTableRow;
-import org.mobident.recheck.Predictor;
+import org.mobident.recheck.BufferTransfer;
 import org.mobident.recheck.RecheckReportCsv;
 import org.mobident.recheck.RecheckResult;
 import org.mobident.recheck.RecheckSettings;
@@ -77,8 +77,8 @@ public final class RecheckCommand implements Callable<Integer> {
         Outputs.checkFree(overwrite, csvOut, pairsOut);
         List<PeakTableRow> rows = PeakTableReader.read(tableFile);
         Library libraryA = LibraryCsv.read(libraryFile);
-        Predictor predictor = referenceFile == null ? Predictor.withoutReference()
-                : Predictor.withReference(LibraryCsv.read(referenceFile));
+        BufferTransfer predictor = referenceFile == null ? BufferTransfer.withoutReference()
+                : BufferTransfer.withReference(LibraryCsv.read(referenceFile));
         RecheckResult result;
         if (newLibraryFile != null) {
             Library libraryB = LibraryCsv.read(newLibraryFile);

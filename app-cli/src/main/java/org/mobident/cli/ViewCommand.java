@@ -70,7 +70,7 @@ public final class ViewCommand implements Callable<Integer> {
             return ExitCodes.USAGE;
         }
         Library library = LibraryCsv.read(libraryFile);
-        org.mobident.library.build.LibraryCheck.requirePlausible(library);
+        org.mobident.library.standards.LibraryCheck.requirePlausible(library);
         RunInputs.Loaded loaded = inputs.load();
         List<RunSpec> runs = loaded.runs();
         List<RunResult> rejected = loaded.rejected();

@@ -14,7 +14,7 @@ import org.mobident.library.LibraryEntry;
  * Predicted mobility against pH for the analytes of a library, and the pH intervals in which two
  * of them would comigrate.
  *
- * <p>Each point is a {@link Predictor} transfer of the measured library value to a buffer of that
+ * <p>Each point is a {@link BufferTransfer} transfer of the measured library value to a buffer of that
  * pH at the given ionic strength and temperature, so the curves pass through the measured values
  * and carry the prediction uncertainty. Two analytes are <em>not resolved</em> at a pH when their
  * predicted mobilities are closer than the {@link SeparationRule} asks (|Δμ| &lt; max(floor, k·u_c),
@@ -129,7 +129,7 @@ public final class PhScan {
      * @throws InputException           when a named analyte is not in the library or an entry's buffer is unknown
      * @throws IllegalArgumentException for a bad range or step, or more than {@value #MAX_POINTS} points
      */
-    public static Result scan(Predictor predictor, Library libraryA, BufferSpec bufferA, List<String> analytes,
+    public static Result scan(BufferTransfer predictor, Library libraryA, BufferSpec bufferA, List<String> analytes,
                               double pHFrom, double pHTo, double pHStep, double ionicStrengthMolar,
                               double temperatureC, SeparationRule rule) throws InputException {
         if (!(pHFrom >= BufferConditions.MIN_PH && pHTo <= BufferConditions.MAX_PH && pHTo >= pHFrom)) {

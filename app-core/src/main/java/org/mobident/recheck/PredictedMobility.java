@@ -4,7 +4,7 @@ import java.util.Locale;
 
 /**
  * One analyte's effective mobility transferred from the buffer it was measured in (A) to a new
- * buffer (B), see {@link Predictor}.
+ * buffer (B), see {@link BufferTransfer}.
  *
  * @param name             analyte name
  * @param bufferA          the conditions of the measured value

@@ -19,7 +19,7 @@ import org.mobident.matching.PeakMatch;
 
 /**
  * Rechecks earlier assignments for a new buffer B, against a library measured in B or one
- * predicted from library A and B's conditions ({@link Predictor}).
+ * predicted from library A and B's conditions ({@link BufferTransfer}).
  *
  * <h2>Per assignment</h2>
  * For a peak assigned to analyte X, with μ_A(X) and μ_B(X) X's mobilities in libraries A and B:
@@ -80,7 +80,7 @@ public final class Rechecker {
      */
     public static RecheckResult withMeasuredLibrary(List<PeakTableRow> rows, String tableLabel, Library libraryA,
                                                     BufferSpec bufferA, Library libraryB, BufferSpec bufferB,
-                                                    Predictor predictor, RecheckSettings settings)
+                                                    BufferTransfer predictor, RecheckSettings settings)
             throws InputException {
         List<String> notes = new ArrayList<>();
         Map<String, Transfer> transfers = new LinkedHashMap<>();
@@ -157,10 +157,10 @@ public final class Rechecker {
      * @throws InputException when an entry's buffer is unknown or an assigned analyte is not in library A
      */
     public static RecheckResult withPredictedLibrary(List<PeakTableRow> rows, String tableLabel, Library libraryA,
-                                                     BufferSpec bufferA, BufferSpec bufferB, Predictor predictor,
+                                                     BufferSpec bufferA, BufferSpec bufferB, BufferTransfer predictor,
                                                      RecheckSettings settings) throws InputException {
         List<PredictedMobility> predictions = predictor.predictAll(libraryA, bufferA, bufferB);
-        Library libraryB = Predictor.asLibrary(predictions, libraryA, bufferB);
+        Library libraryB = BufferTransfer.asLibrary(predictions, libraryA, bufferB);
         Map<String, Transfer> transfers = new LinkedHashMap<>();
         List<String> notes = new ArrayList<>();
         for (PredictedMobility p : predictions) {
@@ -178,14 +178,14 @@ public final class Rechecker {
     private record Transfer(double mobilityB, double sdB, double shiftSd, double moveSd, PredictionBasis basis) {
     }
 
-    private static double spread(LibraryEntry e, Predictor predictor) {
+    private static double spread(LibraryEntry e, BufferTransfer predictor) {
         return Double.isFinite(e.mobilitySd()) ? e.mobilitySd() : predictor.assumedSpread();
     }
 
     private static RecheckResult check(List<PeakTableRow> rows, String tableLabel, Library libraryA, Library libraryB,
                                        BufferSpec bufferB, boolean predicted, Map<String, Transfer> transfers,
                                        List<PredictedMobility> predictions, List<PredictionError> errors,
-                                       List<String> notes, Predictor predictor, RecheckSettings s)
+                                       List<String> notes, BufferTransfer predictor, RecheckSettings s)
             throws InputException {
         Map<String, List<PeakTableRow>> byRun = new LinkedHashMap<>();
         int skipped = 0;
@@ -346,7 +346,7 @@ public final class Rechecker {
         return MatchWindow.halfWidth(entry, SpreadModel.of(library, s.match()), j, peakVariance, s.match());
     }
 
-    private static List<PairCheck> pairs(Library libraryA, Map<String, Transfer> transfers, Predictor predictor,
+    private static List<PairCheck> pairs(Library libraryA, Map<String, Transfer> transfers, BufferTransfer predictor,
                                          SeparationRule rule) {
         List<LibraryEntry> present = new ArrayList<>();
         for (LibraryEntry e : libraryA.entries()) {

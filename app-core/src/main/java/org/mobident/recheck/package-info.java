@@ -7,7 +7,7 @@
  * <p>Units: mobility in 1e-9 m² V⁻¹ s⁻¹, signed (cations +, anions −); ionic strength in mol/L
  * in the API ({@code …Molar}) and mmol/L where a name says {@code …Mm}; temperature in °C; pH on
  * the operational (activity) scale. The physico-chemical model is {@link org.mobident.chem};
- * this package anchors it on measured library values ({@link org.mobident.recheck.Predictor}).
+ * this package anchors it on measured library values ({@link org.mobident.recheck.BufferTransfer}).
  *
  * <p>In the API, "A" is the old buffer and the library the earlier results were matched with,
  * "B" the new buffer and its library (measured, or predicted from A); text written for users

@@ -33,7 +33,7 @@ class PhScanTest {
      */
     @Test
     void comigrationIntervalOfAWeakAcidAndAStrongIon() throws InputException {
-        PhScan.Result r = PhScan.scan(Predictor.withoutReference(), library(), null, List.of(), 2.0, 8.0, 0.1, 0.0,
+        PhScan.Result r = PhScan.scan(BufferTransfer.withoutReference(), library(), null, List.of(), 2.0, 8.0, 0.1, 0.0,
                 25.0, new SeparationRule(1.0, 0.0));
         assertEquals(61, r.pH().size());
         assertEquals(8.0, r.pH().get(60), 0.0);
@@ -50,9 +50,9 @@ class PhScanTest {
 
     @Test
     void uncertaintyWidensTheInterval() throws InputException {
-        PhScan.Result fixed = PhScan.scan(Predictor.withoutReference(), library(), null, List.of("strong", "weak"),
+        PhScan.Result fixed = PhScan.scan(BufferTransfer.withoutReference(), library(), null, List.of("strong", "weak"),
                 2.0, 8.0, 0.1, 0.0, 25.0, new SeparationRule(1.0, 0.0));
-        PhScan.Result withK = PhScan.scan(Predictor.withoutReference(), library(), null, List.of("strong", "weak"),
+        PhScan.Result withK = PhScan.scan(BufferTransfer.withoutReference(), library(), null, List.of("strong", "weak"),
                 2.0, 8.0, 0.1, 0.0, 25.0, SeparationRule.DEFAULT);
         assertEquals("strong", withK.curves().get(0).name(), "the order asked for");
         assertTrue(withK.comigrations().get(0).interval().width() > fixed.comigrations().get(0).interval().width());
@@ -60,7 +60,7 @@ class PhScanTest {
 
     @Test
     void badArgumentsAreRejected() {
-        Predictor p = Predictor.withoutReference();
+        BufferTransfer p = BufferTransfer.withoutReference();
         assertThrows(IllegalArgumentException.class,
                 () -> PhScan.scan(p, library(), null, List.of(), 8, 2, 0.1, 0, 25, SeparationRule.DEFAULT));
         assertThrows(IllegalArgumentException.class,
@@ -79,7 +79,7 @@ class PhScanTest {
      */
     @Test
     void closestIsFoundOnTheIntervalNotOnTheGrid() throws InputException {
-        PhScan.Result r = PhScan.scan(Predictor.withoutReference(), library(), null, List.of(), 2.0, 8.0, 0.5, 0.0,
+        PhScan.Result r = PhScan.scan(BufferTransfer.withoutReference(), library(), null, List.of(), 2.0, 8.0, 0.5, 0.0,
                 25.0, new SeparationRule(3.0, 0.0));
         assertEquals(1, r.comigrations().size(), r.comigrations().toString());
         PhScan.Comigration c = r.comigrations().get(0);
@@ -94,7 +94,7 @@ class PhScanTest {
     /** A crossing between two grid points that are both resolved is still found (1-unit floor, step 0.5). */
     @Test
     void aCrossingBetweenResolvedGridPointsIsFound() throws InputException {
-        PhScan.Result r = PhScan.scan(Predictor.withoutReference(), library(), null, List.of(), 2.0, 8.0, 0.5, 0.0,
+        PhScan.Result r = PhScan.scan(BufferTransfer.withoutReference(), library(), null, List.of(), 2.0, 8.0, 0.5, 0.0,
                 25.0, new SeparationRule(1.0, 0.0));
         assertEquals(1, r.comigrations().size(), r.comigrations().toString());
         PhScan.Comigration c = r.comigrations().get(0);
@@ -106,7 +106,7 @@ class PhScanTest {
     /** Every reported interval has its closest value below the threshold; a clipped one says so. */
     @Test
     void intervalsTouchingTheScanEndsAreMarked() throws InputException {
-        PhScan.Result r = PhScan.scan(Predictor.withoutReference(), library(), null, List.of(), 4.3, 8.0, 0.1, 0.0,
+        PhScan.Result r = PhScan.scan(BufferTransfer.withoutReference(), library(), null, List.of(), 4.3, 8.0, 0.1, 0.0,
                 25.0, new SeparationRule(1.0, 0.0));
         assertEquals(1, r.comigrations().size(), r.comigrations().toString());
         PhScan.Comigration c = r.comigrations().get(0);
@@ -115,7 +115,7 @@ class PhScanTest {
         assertEquals(4 + Math.log10(21.0 / 9.0), c.interval().toPh(), 2e-4);
         assertFalse(c.toScanEnd());
         for (SeparationRule rule : List.of(SeparationRule.DEFAULT, new SeparationRule(1.0, 0.0))) {
-            for (PhScan.Comigration x : PhScan.scan(Predictor.withoutReference(), library(), null, List.of(), 2.0,
+            for (PhScan.Comigration x : PhScan.scan(BufferTransfer.withoutReference(), library(), null, List.of(), 2.0,
                     8.0, 0.37, 0.0, 25.0, rule).comigrations()) {
                 assertTrue(x.closestUnits() < x.thresholdUnits(), x.toString());
                 assertTrue(x.interval().width() > 0, x.toString());

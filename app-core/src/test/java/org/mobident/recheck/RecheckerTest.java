@@ -78,7 +78,7 @@ class RecheckerTest {
     @Test
     void eachVerdictFromAPredictedLibrary() throws InputException {
         RecheckResult r = Rechecker.withPredictedLibrary(table(), "peaks.csv", libraryA(), null, B,
-                Predictor.withoutReference(), RecheckSettings.DEFAULT);
+                BufferTransfer.withoutReference(), RecheckSettings.DEFAULT);
         assertTrue(r.predicted());
         assertEquals(4, r.assignments().size(), "the unassigned peak and the marker are not rechecked");
         Map<String, AssignmentCheck> c = byAnalyte(r);
@@ -114,7 +114,7 @@ class RecheckerTest {
     @Test
     void aPairBecomesUnresolvableAtThePkaOfOneMember() throws InputException {
         RecheckResult r = Rechecker.withPredictedLibrary(table(), "peaks.csv", libraryA(), null, B,
-                Predictor.withoutReference(), RecheckSettings.DEFAULT);
+                BufferTransfer.withoutReference(), RecheckSettings.DEFAULT);
         List<PairCheck> lost = r.newlyUnresolvable();
         assertEquals(1, lost.size(), lost.toString());
         PairCheck p = lost.get(0);
@@ -126,14 +126,14 @@ class RecheckerTest {
         assertFalse(p.resolvedB());
         // one pH unit above the pKa the same pair is still resolved
         RecheckResult above = Rechecker.withPredictedLibrary(table(), "peaks.csv", libraryA(), null,
-                B.withPh(5.76), Predictor.withoutReference(), RecheckSettings.DEFAULT);
+                B.withPh(5.76), BufferTransfer.withoutReference(), RecheckSettings.DEFAULT);
         assertTrue(above.newlyUnresolvable().isEmpty(), above.pairs().toString());
     }
 
     @Test
     void noChangeOfBufferNeedsNoAttention() throws InputException {
         RecheckResult r = Rechecker.withPredictedLibrary(table(), "peaks.csv", libraryA(), null, A,
-                Predictor.withoutReference(), RecheckSettings.DEFAULT);
+                BufferTransfer.withoutReference(), RecheckSettings.DEFAULT);
         assertTrue(r.assignments().stream().allMatch(a -> a.verdict() == Verdict.STILL_HOLDS), r.assignments().toString());
         assertTrue(r.pairs().isEmpty(), r.pairs().toString());
         assertFalse(r.needsAttention());
@@ -141,7 +141,7 @@ class RecheckerTest {
 
     @Test
     void measuredLibraryBReportsHowFarTheModelWasOff() throws InputException {
-        Predictor predictor = Predictor.withoutReference();
+        BufferTransfer predictor = BufferTransfer.withoutReference();
         Library a = libraryA();
         List<LibraryEntry> bEntries = new ArrayList<>();
         for (LibraryEntry e : a.entries()) {
@@ -187,7 +187,7 @@ class RecheckerTest {
     @Test
     void observableRangeAndSignChangeLoseAnAnalyte() throws InputException {
         RecheckResult r = Rechecker.withPredictedLibrary(table(), "peaks.csv", libraryA(), null, B,
-                Predictor.withoutReference(), RecheckSettings.DEFAULT.withObservableRange(-60, -10));
+                BufferTransfer.withoutReference(), RecheckSettings.DEFAULT.withObservableRange(-60, -10));
         AssignmentCheck chloride = byAnalyte(r).get("chloride");
         assertEquals(Verdict.LOST, chloride.verdict());
         assertTrue(chloride.reason().contains("observable range"), chloride.reason());
@@ -200,7 +200,7 @@ class RecheckerTest {
                 amph.limitingMobilities(), "A", 10, 0, 25, "invented")), "amph.csv", List.of());
         List<PeakTableRow> rows = List.of(row(2, 1, "amph", mu));
         RecheckResult flip = Rechecker.withPredictedLibrary(rows, "p.csv", lib, null, BufferSpec.of("B", 2.0, 0, 25),
-                Predictor.withoutReference(), RecheckSettings.DEFAULT);
+                BufferTransfer.withoutReference(), RecheckSettings.DEFAULT);
         assertEquals(Verdict.LOST, flip.assignments().get(0).verdict());
         assertTrue(flip.assignments().get(0).reason().contains("sign"), flip.assignments().get(0).reason());
     }
@@ -209,7 +209,7 @@ class RecheckerTest {
     void anAssignmentMissingFromLibraryAIsAnInputError() {
         List<PeakTableRow> rows = List.of(row(9, 1, "bromide", -77.0));
         InputException ex = assertThrows(InputException.class, () -> Rechecker.withPredictedLibrary(rows, "peaks.csv",
-                libraryA(), null, B, Predictor.withoutReference(), RecheckSettings.DEFAULT));
+                libraryA(), null, B, BufferTransfer.withoutReference(), RecheckSettings.DEFAULT));
         assertEquals(9, ex.line());
         assertEquals("assigned", ex.field());
         assertEquals("peaks.csv", ex.file());
@@ -218,7 +218,7 @@ class RecheckerTest {
     @Test
     void writersCarryVerdictsSafelyAndEndWithTheCaution() throws Exception {
         RecheckResult r = Rechecker.withPredictedLibrary(table(), "peaks.csv", libraryA(), null, B,
-                Predictor.withoutReference(), RecheckSettings.DEFAULT);
+                BufferTransfer.withoutReference(), RecheckSettings.DEFAULT);
         StringWriter assignments = new StringWriter();
         RecheckReportCsv.writeAssignments(r, assignments);
         String[] lines = assignments.toString().split("\n");
@@ -273,7 +273,7 @@ class RecheckerTest {
                 new PeakTableRow(3, "well", 1, "analyte", -69.87, 0.001, -69.87, "nitrate", 0.97, "identified"));
         RecheckSettings settings = RecheckSettings.DEFAULT.withMatch(org.mobident.matching.MatchSettings.ABSOLUTE);
         RecheckResult r = Rechecker.withMeasuredLibrary(rows, "peaks.csv", a, null, b, null,
-                Predictor.withoutReference(), settings);
+                BufferTransfer.withoutReference(), settings);
         AssignmentCheck spring = r.assignments().get(0);
         AssignmentCheck well = r.assignments().get(1);
         assertEquals(1.14, spring.shift(), 1e-9);
@@ -295,7 +295,7 @@ class RecheckerTest {
         List<PeakTableRow> rows = List.of(
                 new PeakTableRow(2, "r1", 1, "analyte", -30.9, 0.05, -30.9, "x1", 0.9, "identified"));
         RecheckResult r = Rechecker.withMeasuredLibrary(rows, "peaks.csv", a, null, b, null,
-                Predictor.withoutReference(),
+                BufferTransfer.withoutReference(),
                 RecheckSettings.DEFAULT.withMatch(org.mobident.matching.MatchSettings.ABSOLUTE));
         AssignmentCheck x = r.assignments().get(0);
         assertEquals(-35.9, x.newMobility(), 1e-9);
@@ -315,7 +315,7 @@ class RecheckerTest {
         List<PeakTableRow> near = List.of(
                 new PeakTableRow(2, "r1", 1, "analyte", -30.4, 0.05, -30.4, "x1", 0.9, "identified"));
         AssignmentCheck amb = Rechecker.withMeasuredLibrary(near, "peaks.csv", a, null, b, null,
-                Predictor.withoutReference(),
+                BufferTransfer.withoutReference(),
                 RecheckSettings.DEFAULT.withMatch(org.mobident.matching.MatchSettings.ABSOLUTE)).assignments().get(0);
         assertEquals(Verdict.NOW_AMBIGUOUS, amb.verdict(), amb.reason());
         assertEquals(List.of("y"), amb.collidesWith());

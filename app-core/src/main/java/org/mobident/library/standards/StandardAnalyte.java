@@ -1,0 +1,57 @@
+package org.mobident.library.standards;
+
+/**
+ * One analyte of a standard mix, as the standards sheet declares it.
+ *
+ * @param name           analyte name (as it will appear in the library)
+ * @param chargeNumber   signed charge number, 0 when not given or when only the sign is given
+ * @param chargeSign     sign of the charge: +1 cation, −1 anion, 0 unknown or neutral
+ * @param approxMobility expected effective mobility, 1e-9 m²/(V·s), signed; NaN when not given
+ * @param order          expected migration order within the mix, 1 = first to pass the detector;
+ *                       0 when not given
+ * @param line           1-based line of the standards sheet that declared it (0 when built in code)
+ */
+public record StandardAnalyte(String name, int chargeNumber, int chargeSign, double approxMobility, int order,
+                              long line) {
+    public StandardAnalyte {
+        if (name == null || name.isBlank()) {
+            throw new IllegalArgumentException("an analyte needs a name");
+        }
+        if (chargeSign < -1 || chargeSign > 1) {
+            throw new IllegalArgumentException("charge sign must be -1, 0 or +1, got " + chargeSign);
+        }
+        if (chargeNumber != 0 && Integer.signum(chargeNumber) != chargeSign) {
+            throw new IllegalArgumentException("charge number " + chargeNumber + " and sign " + chargeSign
+                    + " disagree");
+        }
+        if (order < 0) {
+            throw new IllegalArgumentException("order must be positive or 0 (not given), got " + order);
+        }
+    }
+
+    /** An analyte known only by name. */
+    public static StandardAnalyte named(String name) {
+        return new StandardAnalyte(name, 0, 0, Double.NaN, 0, 0);
+    }
+
+    /** True when an approximate mobility is given. */
+    public boolean hasApproxMobility() {
+        return !Double.isNaN(approxMobility);
+    }
+
+    /** True when an expected migration order is given. */
+    public boolean hasOrder() {
+        return order > 0;
+    }
+
+    /**
+     * The sign this analyte's mobility must have, from the charge or else the approximate mobility;
+     * 0 when neither tells.
+     */
+    public int expectedSign() {
+        if (chargeSign != 0) {
+            return chargeSign;
+        }
+        return hasApproxMobility() ? (int) Math.signum(approxMobility) : 0;
+    }
+}

@@ -1,0 +1,282 @@
+package org.mobident.library.standards;
+
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.HashMap;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import java.util.regex.Matcher;
+import java.util.regex.Pattern;
+import org.apache.commons.csv.CSVFormat;
+import org.mobident.InputException;
+
+/**
+ * Reads a standards sheet: one row per analyte of a standard mix.
+ *
+ * <h2>Format</h2>
+ * <ul>
+ *   <li>Columns (case-insensitive, any order; spaces and hyphens count as {@code _}):
+ *       {@code mix} and {@code analyte} are required; {@code charge}, {@code approx_mobility},
+ *       {@code order} and {@code note} are optional. Any other column is an error.</li>
+ *   <li>{@code charge}: a signed whole number ({@code -2}, {@code +1}, {@code 1}), the charge written
+ *       the chemist's way ({@code 2-}), or just the sign ({@code +}, {@code -}).</li>
+ *   <li>{@code approx_mobility}: expected effective mobility in 1e-9 m²/(V·s), signed (anions
+ *       negative); its sign must agree with {@code charge} when both are given.</li>
+ *   <li>{@code order}: expected migration order within the mix, a whole number from 1 (first to
+ *       pass the detector); each order at most once per mix.</li>
+ *   <li>An analyte appears at most once per mix (names compared without regard to case); the same
+ *       analyte may appear in several mixes.</li>
+ *   <li>Delimiter comma, semicolon or tab, taken from the header line; with semicolon or tab a
+ *       decimal comma is accepted. UTF-8 (a leading byte-order mark is skipped); blank lines and
+ *       lines starting with {@code #} are skipped. Each line holds one row.</li>
+ * </ul>
+ * Every problem raises an {@link InputException} naming the file, the 1-based line and the column.
+ */
+public final class StandardsSheetReader {
+
+    static final String MIX = "mix";
+    static final String ANALYTE = "analyte";
+    static final String CHARGE = "charge";
+    static final String APPROX_MOBILITY = "approx_mobility";
+    static final String ORDER = "order";
+    static final String NOTE = "note";
+
+    /** The known columns, in documentation order. */
+    public static final List<String> COLUMNS = List.of(MIX, ANALYTE, CHARGE, APPROX_MOBILITY, ORDER, NOTE);
+
+    private static final char BYTE_ORDER_MARK = '\uFEFF';
+    private static final char UNICODE_MINUS = '\u2212';
+    private static final Pattern DECIMAL = Pattern.compile("[+-]?(\\d+\\.?\\d*|\\.\\d+)([eE][+-]?\\d+)?");
+    /** {@code -2}, {@code +1}, {@code 3}: sign before the number. */
+    private static final Pattern CHARGE_SIGN_FIRST = Pattern.compile("([+-]?)(\\d+)");
+    /** {@code 2-}, {@code 1+}: the chemist's superscript order. */
+    private static final Pattern CHARGE_SIGN_LAST = Pattern.compile("(\\d+)([+-])");
+
+    private StandardsSheetReader() {
+    }
+
+    /**
+     * Reads a standards sheet.
+     *
+     * @param file the sheet; its name is used in messages and as {@link StandardsSheet#sourceFile()}
+     * @return the mixes in order of first appearance, each with its analytes in sheet order
+     * @throws InputException when the file cannot be read, or any line or column is invalid
+     */
+    public static StandardsSheet read(Path file) throws InputException {
+        String label = file.toString();
+        String text = org.mobident.io.TextFiles.readUtf8(file, "standards sheet");
+        return read(text, label);
+    }
+
+    /**
+     * Reads a standards sheet from text.
+     *
+     * @param text  the sheet's content
+     * @param label the name used in messages and as {@link StandardsSheet#sourceFile()}
+     * @throws InputException when any line or column is invalid
+     */
+    public static StandardsSheet read(String text, String label) throws InputException {
+        String t = !text.isEmpty() && text.charAt(0) == BYTE_ORDER_MARK ? text.substring(1) : text;
+        return new Parse(label).run(t);
+    }
+
+    /** State of one sheet parse; not shared. */
+    private static final class Parse {
+        private final String file;
+        private CSVFormat format;
+        private char delimiter;
+        private final List<String> columns = new ArrayList<>();
+        /** Mix key → analytes in sheet order. */
+        private final Map<String, List<StandardAnalyte>> analytesByMix = new LinkedHashMap<>();
+        /** Mix key → the mix name as first written. */
+        private final Map<String, String> mixNames = new HashMap<>();
+        /** "mix key / analyte key" → line of first declaration. */
+        private final Map<String, Long> analyteLines = new HashMap<>();
+        /** "mix key / order" → line of first use. */
+        private final Map<String, Long> orderLines = new HashMap<>();
+
+        Parse(String file) {
+            this.file = file;
+        }
+
+        StandardsSheet run(String text) throws InputException {
+            String[] lines = text.split("\r\n|\r|\n", -1);
+            boolean headerSeen = false;
+            for (int i = 0; i < lines.length; i++) {
+                String line = lines[i];
+                String stripped = line.strip();
+                if (stripped.isEmpty() || stripped.startsWith("#")) {
+                    continue;
+                }
+                long lineNo = i + 1L;
+                if (!headerSeen) {
+                    header(line, lineNo);
+                    headerSeen = true;
+                } else {
+                    row(line, lineNo);
+                }
+            }
+            if (!headerSeen) {
+                throw new InputException(file, 0, null, "the standards sheet is empty (no header line)");
+            }
+            if (analytesByMix.isEmpty()) {
+                throw new InputException(file, 0, null, "the standards sheet has a header but no analytes");
+            }
+            List<StandardsMix> mixes = new ArrayList<>();
+            for (Map.Entry<String, List<StandardAnalyte>> e : analytesByMix.entrySet()) {
+                mixes.add(new StandardsMix(mixNames.get(e.getKey()), e.getValue()));
+            }
+            return new StandardsSheet(file, mixes);
+        }
+
+        private void header(String line, long lineNo) throws InputException {
+            delimiter = line.indexOf(';') >= 0 ? ';' : line.indexOf('\t') >= 0 ? '\t' : ',';
+            format = CSVFormat.DEFAULT.builder().setDelimiter(delimiter).setTrim(true)
+                    .setIgnoreSurroundingSpaces(true).get();
+            for (String raw : cells(line, lineNo)) {
+                String c = raw.strip().toLowerCase(Locale.ROOT).replace(' ', '_').replace('-', '_');
+                if (!c.isEmpty() && !COLUMNS.contains(c)) {
+                    throw new InputException(file, lineNo, raw, "unknown column '" + raw + "'"
+                            + org.mobident.io.Suggestions.didYouMean(c, COLUMNS) + "; known columns: "
+                            + String.join(", ", COLUMNS));
+                }
+                if (!c.isEmpty() && columns.contains(c)) {
+                    throw new InputException(file, lineNo, raw, "column '" + raw + "' appears twice");
+                }
+                columns.add(c);
+            }
+            for (String required : List.of(MIX, ANALYTE)) {
+                if (!columns.contains(required)) {
+                    throw new InputException(file, lineNo, required, "the standards sheet has no '" + required
+                            + "' column");
+                }
+            }
+        }
+
+        private List<String> cells(String line, long lineNo) throws InputException {
+            return org.mobident.io.CsvLines.cells(line, format, file, lineNo);
+        }
+
+        private void row(String line, long lineNo) throws InputException {
+            List<String> cells = cells(line, lineNo);
+            Map<String, String> v = new HashMap<>();
+            for (int k = 0; k < cells.size(); k++) {
+                String cell = cells.get(k).strip();
+                if (k >= columns.size() || columns.get(k).isEmpty()) {
+                    if (!cell.isEmpty()) {
+                        throw new InputException(file, lineNo, "column " + (k + 1), "value '" + cell
+                                + "' stands in a column without a name in the header");
+                    }
+                    continue;
+                }
+                v.put(columns.get(k), cell);
+            }
+            String mix = v.getOrDefault(MIX, "");
+            if (mix.isEmpty()) {
+                throw new InputException(file, lineNo, MIX, "the mix name is empty");
+            }
+            String name = v.getOrDefault(ANALYTE, "");
+            if (name.isEmpty()) {
+                throw new InputException(file, lineNo, ANALYTE, "the analyte name is empty");
+            }
+            String mixKey = StandardsSheet.key(mix);
+            Long earlier = analyteLines.putIfAbsent(mixKey + "/" + name.toLowerCase(Locale.ROOT), lineNo);
+            if (earlier != null) {
+                throw new InputException(file, lineNo, ANALYTE, "duplicate analyte '" + name + "' in mix '" + mix
+                        + "' (lines " + earlier + " and " + lineNo + ")");
+            }
+            int[] charge = charge(v.getOrDefault(CHARGE, ""), lineNo);
+            double approx = approx(v.getOrDefault(APPROX_MOBILITY, ""), lineNo);
+            if (!Double.isNaN(approx) && approx != 0 && charge[1] != 0 && Math.signum(approx) != charge[1]) {
+                throw new InputException(file, lineNo, APPROX_MOBILITY, "approx_mobility " + v.get(APPROX_MOBILITY)
+                        + " has the opposite sign to charge " + v.get(CHARGE)
+                        + " (mobilities are signed: cations positive, anions negative)");
+            }
+            int order = order(v.getOrDefault(ORDER, ""), lineNo);
+            if (order > 0) {
+                Long first = orderLines.putIfAbsent(mixKey + "/" + order, lineNo);
+                if (first != null) {
+                    throw new InputException(file, lineNo, ORDER, "order " + order + " is already used in mix '"
+                            + mix + "' on line " + first);
+                }
+            }
+            mixNames.putIfAbsent(mixKey, mix);
+            analytesByMix.computeIfAbsent(mixKey, k -> new ArrayList<>())
+                    .add(new StandardAnalyte(name, charge[0], charge[1], approx, order, lineNo));
+        }
+
+        /** {charge number (0 when only the sign is given), sign}. */
+        private int[] charge(String raw, long lineNo) throws InputException {
+            String s = raw.replace(UNICODE_MINUS, '-').replace(" ", "");
+            if (s.isEmpty()) {
+                return new int[] {0, 0};
+            }
+            if (s.equals("+") || s.equals("-")) {
+                int sign = s.equals("+") ? 1 : -1;
+                return new int[] {0, sign};
+            }
+            Matcher first = CHARGE_SIGN_FIRST.matcher(s);
+            Matcher last = CHARGE_SIGN_LAST.matcher(s);
+            String digits;
+            String sign;
+            if (first.matches()) {
+                digits = first.group(2);
+                sign = first.group(1);
+            } else if (last.matches()) {
+                digits = last.group(1);
+                sign = last.group(2);
+            } else {
+                throw new InputException(file, lineNo, CHARGE, "'" + raw
+                        + "' is not a charge; write a signed whole number (-2, +1), 2- or just the sign (+, -)");
+            }
+            int magnitude;
+            try {
+                magnitude = Integer.parseInt(digits);
+            } catch (NumberFormatException e) {
+                throw new InputException(file, lineNo, CHARGE, "charge '" + raw + "' is too large", e);
+            }
+            int z = "-".equals(sign) ? -magnitude : magnitude;
+            return new int[] {z, Integer.signum(z)};
+        }
+
+        private double approx(String raw, long lineNo) throws InputException {
+            if (raw.isEmpty()) {
+                return Double.NaN;
+            }
+            String s = raw.replace(UNICODE_MINUS, '-');
+            if (delimiter != ',') {
+                s = s.replace(',', '.');
+            }
+            if (!DECIMAL.matcher(s).matches()) {
+                String hint = delimiter == ',' && raw.indexOf(',') >= 0
+                        ? " (a decimal comma needs a semicolon-delimited sheet)" : "";
+                throw new InputException(file, lineNo, APPROX_MOBILITY, "'" + raw + "' is not a number" + hint);
+            }
+            double d = Double.parseDouble(s);
+            if (!Double.isFinite(d)) {
+                throw new InputException(file, lineNo, APPROX_MOBILITY, "the number '" + raw + "' is out of range");
+            }
+            return d;
+        }
+
+        private int order(String raw, long lineNo) throws InputException {
+            if (raw.isEmpty()) {
+                return 0;
+            }
+            int n;
+            try {
+                n = Integer.parseInt(raw.startsWith("+") ? raw.substring(1) : raw);
+            } catch (NumberFormatException e) {
+                throw new InputException(file, lineNo, ORDER, "'" + raw
+                        + "' is not a migration order; write a whole number from 1 (first to pass the detector)", e);
+            }
+            if (n < 1) {
+                throw new InputException(file, lineNo, ORDER, "order must be 1 or more (1 = first to pass the"
+                        + " detector), got " + n);
+            }
+            return n;
+        }
+    }
+}

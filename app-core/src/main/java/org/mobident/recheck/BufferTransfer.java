@@ -1,0 +1,395 @@
+package org.mobident.recheck;
+
+import java.util.ArrayList;
+import java.util.HashMap;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import org.mobident.InputException;
+import org.mobident.chem.InputPropagation;
+import org.mobident.chem.BufferConditions;
+import org.mobident.chem.IonicStrengthCorrection;
+import org.mobident.chem.MobilityPredictor;
+import org.mobident.chem.PredictionUncertainty;
+import org.mobident.chem.ReferenceIons;
+import org.mobident.chem.SpeciesModel;
+import org.mobident.library.Library;
+import org.mobident.library.LibraryEntry;
+import org.mobident.matching.MatchSettings;
+import org.mobident.mobility.MobilityMath;
+
+/**
+ * Predicts each library analyte's effective mobility in a new buffer B from its value measured in
+ * buffer A, anchored on the measurement.
+ *
+ * <h2>Method</h2>
+ * The model μ_model(buffer) of {@link MobilityPredictor} (Σαᵢμᵢ over the protolytic forms,
+ * Tiselius 1930, Pospíchal, Gebauer &amp; Boček, Chem. Rev. 89 (1989) 419; Davies activity
+ * correction of the pKa; Debye–Hückel–Onsager lowering of the limiting mobilities; Walden's rule
+ * for temperature) is not used for its absolute value but for the <em>change</em> from A to B, so
+ * that whatever the model gets wrong in both buffers alike (a limiting mobility a few per cent off,
+ * the buffer's own viscosity, wall effects in the measured value) cancels:
+ * <ul>
+ *   <li><b>ratio transfer</b>: μ_B = μ_A,measured × μ_model(B)/μ_model(A). For a strong ion this
+ *       is the product of the viscosity ratio η(T_A)/η(T_B) and the ratio of the ionic-strength
+ *       factors; for a weak electrolyte the ratio also carries the change of the degree of
+ *       ionisation Σαᵢμᵢ, i.e. the measured value calibrates the limiting mobilities of the
+ *       model. (The same anchoring of a model on one measured point is the usual way of carrying
+ *       effective mobilities between buffers in CE modelling; see Friedl, Reijenga &amp;
+ *       Kenndler, J. Chromatogr. A 709 (1995) 163.)</li>
+ *   <li><b>difference transfer</b>: μ_B = μ_A,measured + (μ_model(B) − μ_model(A)), used
+ *       instead when the analyte is barely ionised in A (|μ_model(A)| below
+ *       {@value #MIN_ANCHOR_FRACTION} of the largest |mobility| of its forms in A) or when model
+ *       and measurement disagree in sign: the ratio would then multiply the measurement error (and
+ *       any pKa error) by a large factor. A modelling choice.</li>
+ *   <li><b>no model data</b> (no pKa/limiting mobility in the entry, none in the reference
+ *       library under its name, no charge): only the viscosity ratio and the ionic-strength factor
+ *       of a univalent ion are applied, a pH change is not taken into account, and the result is
+ *       flagged ({@link PredictionBasis#NO_MODEL}).</li>
+ * </ul>
+ * Model data are looked up in this order: the entry's own {@code pka}/{@code limiting_mobility}
+ * (with its {@code charge}, read as {@link ReferenceIons#model} reads it); the reference library
+ * by name (case-insensitive); the entry's charge alone (a strong ion whose limiting mobility is
+ * taken to be the measured one, which only matters for the small ionic-strength term).
+ *
+ * <h2>Uncertainty</h2>
+ * Combined in quadrature (JCGM 100:2008, GUM, eq. 10), each term as a standard uncertainty:
+ * <ul>
+ *   <li>the library spread s carried by the transfer: (∂μ_B/∂μ_A · s)²·(1 + 1/n), the
+ *       variance of a new run about a mean of n (1 when n is unknown); an entry without a
+ *       spread gets {@link #assumedSpread()};</li>
+ *   <li>the model inputs: each pKa (±{@link PredictionUncertainty#pKaSd()}, widened by
+ *       {@value #PKA_TEMPERATURE_SD_PER_K} per kelvin of distance from 25 °C because the model
+ *       ignores the temperature dependence of pKa) and each limiting mobility (relative
+ *       ±{@link PredictionUncertainty#relativeMobilitySd()}), propagated through the
+ *       <em>transfer</em> by central differences, so that errors common to A and B cancel as they
+ *       do in the ratio;</li>
+ *   <li>the form of the ionic-strength correction: {@value #UNIVALENT_IONIC_STRENGTH_RELATIVE_SD}
+ *       (univalent) or {@value #MULTIVALENT_IONIC_STRENGTH_RELATIVE_SD} (|z| ≥ 2 or unknown
+ *       charge) of the part of the shift that the correction makes;</li>
+ *   <li>the form of the temperature correction: {@value #WALDEN_RELATIVE_SD_PER_K} of |μ_B| per
+ *       kelvin of temperature change (deviations of ions from Walden's rule, and the buffer's
+ *       viscosity differing from water's). This term moves all analytes together, so it is kept
+ *       apart ({@link PredictedMobility#commonUncertainty()}) and left out where analytes are
+ *       compared with each other ({@link PredictedMobility#comparisonUncertainty()});</li>
+ *   <li>without model data, in addition {@value #NO_MODEL_RELATIVE_SD} of |μ_B|.</li>
+ * </ul>
+ * The numbers of the last three terms are modelling choices (common practice), stated here so
+ * that the reported uncertainty can be judged.
+ */
+public final class BufferTransfer {
+
+    /** Smallest |μ_model(A)| relative to the largest form mobility in A for a ratio transfer (modelling choice). */
+    public static final double MIN_ANCHOR_FRACTION = 0.1;
+    /** Relative uncertainty of the ionic-strength shift for univalent ions (common practice; the simple correction reproduces KCl within ~1 % of μ up to 0.1 mol/L). */
+    public static final double UNIVALENT_IONIC_STRENGTH_RELATIVE_SD = 0.1;
+    /** Relative uncertainty of the ionic-strength shift for multivalent or unknown charges (common practice; the correction underestimates their decrease). */
+    public static final double MULTIVALENT_IONIC_STRENGTH_RELATIVE_SD = 0.25;
+    /** Relative uncertainty per kelvin of the viscosity (Walden) scaling (common practice: ions' conductivity temperature coefficients differ from water's fluidity by ~0.1–0.3 %/K). */
+    public static final double WALDEN_RELATIVE_SD_PER_K = 0.002;
+    /** Extra pKa uncertainty per kelvin from 25 °C, pKa units/K (common practice: carboxylic acids 0.01–0.02 /K, amines more). */
+    public static final double PKA_TEMPERATURE_SD_PER_K = 0.015;
+    /** Extra relative uncertainty without model data (modelling choice). */
+    public static final double NO_MODEL_RELATIVE_SD = 0.05;
+
+    private static final double REFERENCE_C = BufferConditions.REFERENCE_TEMPERATURE_C;
+
+    private final Map<String, SpeciesModel> reference;
+    private final PredictionUncertainty inputs;
+    private final double assumedSpread;
+
+    private BufferTransfer(Map<String, SpeciesModel> reference, PredictionUncertainty inputs, double assumedSpread) {
+        this.reference = reference;
+        this.inputs = inputs;
+        this.assumedSpread = assumedSpread;
+    }
+
+    /** A predictor that knows only the model data inside the libraries it is given. */
+    public static BufferTransfer withoutReference() {
+        return new BufferTransfer(Map.of(), PredictionUncertainty.DEFAULT, MatchSettings.DEFAULT_ASSUMED_ENTRY_SD);
+    }
+
+    /**
+     * A predictor that falls back on reference models by analyte name (for example
+     * {@code ReferenceIons.read(Path.of(ReferenceIons.SHIPPED_LIBRARY))}).
+     *
+     * @param models reference species by name (not modified; copied)
+     */
+    public static BufferTransfer withReference(Map<String, SpeciesModel> models) {
+        Map<String, SpeciesModel> byKey = new HashMap<>();
+        for (Map.Entry<String, SpeciesModel> e : models.entrySet()) {
+            byKey.put(key(e.getKey()), e.getValue());
+        }
+        return new BufferTransfer(Map.copyOf(byKey), PredictionUncertainty.DEFAULT, MatchSettings.DEFAULT_ASSUMED_ENTRY_SD);
+    }
+
+    /** As {@link #withReference(Map)} with the models of a reference library. */
+    public static BufferTransfer withReference(Library referenceLibrary) throws InputException {
+        return withReference(ReferenceIons.models(referenceLibrary));
+    }
+
+    /** The same predictor with other model-input uncertainties. */
+    public BufferTransfer withInputUncertainty(PredictionUncertainty uncertainty) {
+        if (uncertainty == null) {
+            throw new IllegalArgumentException("uncertainty must not be null");
+        }
+        return new BufferTransfer(reference, uncertainty, assumedSpread);
+    }
+
+    /** The same predictor with another spread for entries that state none, mobility units, &gt; 0. */
+    public BufferTransfer withAssumedSpread(double spreadUnits) {
+        if (!(spreadUnits > 0) || Double.isInfinite(spreadUnits)) {
+            throw new IllegalArgumentException("assumed spread must be finite and > 0, got " + spreadUnits);
+        }
+        return new BufferTransfer(reference, inputs, spreadUnits);
+    }
+
+    /** Spread used for entries without {@code mobility_sd}, mobility units. */
+    public double assumedSpread() {
+        return assumedSpread;
+    }
+
+    /** The model-input uncertainties. */
+    public PredictionUncertainty inputUncertainty() {
+        return inputs;
+    }
+
+    private static String key(String name) {
+        return name.strip().toLowerCase(Locale.ROOT);
+    }
+
+    /**
+     * Predictions for every entry of library A.
+     *
+     * @param libraryA the measured library
+     * @param bufferA  the library's buffer, used where an entry states no conditions (may be null
+     *                 when every entry states its pH and ionic strength)
+     * @param bufferB  the new buffer
+     * @return one prediction per entry, in library order
+     * @throws InputException when an entry's buffer cannot be determined
+     */
+    public List<PredictedMobility> predictAll(Library libraryA, BufferSpec bufferA, BufferSpec bufferB)
+            throws InputException {
+        List<PredictedMobility> out = new ArrayList<>(libraryA.size());
+        for (LibraryEntry e : libraryA.entries()) {
+            out.add(predict(e, BufferSpec.forEntry(e, bufferA, libraryA.sourceFile()), bufferB,
+                    libraryA.sourceFile()));
+        }
+        return out;
+    }
+
+    /**
+     * The predicted library B: every entry of A with the predicted mobility and its comparison
+     * uncertainty ({@link PredictedMobility#comparisonUncertainty()}) as {@code mobility_sd} (n left unknown, since the uncertainty already is that of a new run),
+     * B's conditions, A's charge and model data, and no per-entry tolerance (the matching rule then
+     * works on the predicted uncertainty).
+     *
+     * @param predictions as from {@link #predictAll}
+     * @param libraryA    the library they came from
+     * @param bufferB     the new buffer
+     */
+    public static Library asLibrary(List<PredictedMobility> predictions, Library libraryA, BufferSpec bufferB) {
+        List<LibraryEntry> entries = new ArrayList<>(predictions.size());
+        for (PredictedMobility p : predictions) {
+            LibraryEntry a = libraryA.find(p.name()).orElseThrow(() ->
+                    new IllegalArgumentException("prediction for '" + p.name() + "' has no entry in the old library"));
+            entries.add(new LibraryEntry(p.name(), p.predicted(), p.comparisonUncertainty(), 0, a.charge(), Double.NaN,
+                    a.pKa(), a.limitingMobilities(), bufferB.label().isEmpty() ? null : bufferB.label(),
+                    bufferB.pH(), bufferB.ionicStrengthMm(), bufferB.temperatureC(),
+                    "predicted from " + libraryA.sourceFile() + " (" + p.method().label() + ", " + p.basis().label()
+                            + ")"));
+        }
+        return new Library(entries, libraryA.sourceFile() + " predicted for " + bufferB.describeConditions(),
+                List.of("Predicted for " + bufferB.describeConditions() + " from " + libraryA.sourceFile()
+                        + "; presumptive, confirm with standards"));
+    }
+
+    /**
+     * Prediction for one entry.
+     *
+     * @param entry        the measured entry (mobility at {@code bufferA}'s temperature)
+     * @param bufferA      the conditions it was measured in
+     * @param bufferB      the new conditions
+     * @param libraryLabel library file, for notes
+     */
+    public PredictedMobility predict(LibraryEntry entry, BufferSpec bufferA, BufferSpec bufferB, String libraryLabel) {
+        List<String> notes = new ArrayList<>();
+        double spread = Double.isFinite(entry.mobilitySd()) ? entry.mobilitySd() : assumedSpread;
+        if (!Double.isFinite(entry.mobilitySd())) {
+            notes.add(String.format(Locale.ROOT, "no mobility_sd in the library; %.2f assumed", assumedSpread));
+        }
+        Choice choice = choose(entry, libraryLabel, notes);
+        BufferConditions a = bufferA.conditions();
+        BufferConditions b = bufferB.conditions();
+        double mu = entry.mobility();
+        if (choice.model == null) {
+            return withoutModel(entry, bufferA, bufferB, spread, notes);
+        }
+        SpeciesModel m = choice.model;
+        double gA = MobilityPredictor.effectiveMobility(m, a);
+        double gB = MobilityPredictor.effectiveMobility(m, b);
+        PredictedMobility.Method method = anchorIsInformative(m, a, gA, mu)
+                ? PredictedMobility.Method.RATIO : PredictedMobility.Method.DIFFERENCE;
+        if (method == PredictedMobility.Method.DIFFERENCE) {
+            notes.add(Math.signum(gA) != Math.signum(mu) && gA != 0 && mu != 0
+                    ? "model and measurement disagree in sign in the old buffer; the model's change was added"
+                    : "barely ionised in the old buffer; the model's change was added instead of scaled");
+        }
+        double predicted = transfer(method, mu, gA, gB);
+        double slope = method == PredictedMobility.Method.RATIO ? gB / gA : 1.0;
+
+        double pKaSd = Math.hypot(inputs.pKaSd(), PKA_TEMPERATURE_SD_PER_K
+                * Math.max(Math.abs(a.temperatureC() - REFERENCE_C), Math.abs(b.temperatureC() - REFERENCE_C)));
+        double variance = inputVariance(m, a, b, mu, method, pKaSd);
+        double withoutIonic = transfer(method, mu,
+                MobilityPredictor.effectiveMobility(m, new BufferConditions(a.pH(), 0.0, a.temperatureC())),
+                MobilityPredictor.effectiveMobility(m, new BufferConditions(b.pH(), 0.0, b.temperatureC())));
+        double ionicRelative = maxAbsCharge(m) >= 2 ? MULTIVALENT_IONIC_STRENGTH_RELATIVE_SD
+                : UNIVALENT_IONIC_STRENGTH_RELATIVE_SD;
+        variance += square(ionicRelative * (predicted - withoutIonic));
+        double common = WALDEN_RELATIVE_SD_PER_K * Math.abs(b.temperatureC() - a.temperatureC()) * Math.abs(predicted);
+        variance += square(common);
+        double modelSd = Math.sqrt(variance);
+        double total = Math.sqrt(square(slope * spread) * predictiveFactor(entry.n()) + variance);
+        double meanCharge = MobilityPredictor.predict(m, b).meanCharge();
+        if (choice.note != null) {
+            notes.add(0, choice.note);
+        }
+        return new PredictedMobility(entry.name(), bufferA, bufferB, mu, spread, entry.n(), gA, gB, predicted, total,
+                modelSd, common, slope, meanCharge, choice.basis, method, String.join("; ", notes));
+    }
+
+    private PredictedMobility withoutModel(LibraryEntry entry, BufferSpec bufferA, BufferSpec bufferB, double spread,
+                                           List<String> notes) {
+        double mu = entry.mobility();
+        double tA = bufferA.temperatureC();
+        double tB = bufferB.temperatureC();
+        double viscous = MobilityMath.atTemperature(mu, tA, tB);
+        int z = (int) Math.signum(mu);
+        double predicted = mu == 0.0 ? 0.0
+                : viscous * ionicFactor(mu, z, tA, bufferB) / ionicFactor(mu, z, tA, bufferA);
+        double slope = mu == 0.0 ? MobilityMath.atTemperature(1.0, tA, tB) : predicted / mu;
+        double common = WALDEN_RELATIVE_SD_PER_K * Math.abs(tB - tA) * Math.abs(predicted);
+        double variance = square(MULTIVALENT_IONIC_STRENGTH_RELATIVE_SD * (predicted - viscous))
+                + square(common) + square(NO_MODEL_RELATIVE_SD * predicted);
+        double total = Math.sqrt(square(slope * spread) * predictiveFactor(entry.n()) + variance);
+        notes.add(0, "no model data (no pka/limiting_mobility, not in the reference library, no charge): "
+                + "only viscosity and univalent ionic-strength transfer");
+        if (Math.abs(bufferB.pH() - bufferA.pH()) > BufferSpec.SAME_VALUE_TOLERANCE) {
+            notes.add(1, "the pH change is NOT accounted for");
+        }
+        return new PredictedMobility(entry.name(), bufferA, bufferB, mu, spread, entry.n(), Double.NaN, Double.NaN,
+                predicted, total, Math.sqrt(variance), common, slope, Double.NaN, PredictionBasis.NO_MODEL,
+                PredictedMobility.Method.VISCOSITY_AND_IONIC_STRENGTH, String.join("; ", notes));
+    }
+
+    /**
+     * Ratio of the actual to the limiting mobility of a univalent ion at a buffer's ionic strength
+     * and temperature, the measured magnitude (brought to that temperature) standing in for the
+     * limiting mobility.
+     */
+    private static double ionicFactor(double mu, int z, double measuredAtC, BufferSpec buffer) {
+        double m = Math.abs(MobilityMath.atTemperature(mu, measuredAtC, buffer.temperatureC()));
+        return IonicStrengthCorrection.actualMobility(m, z, buffer.ionicStrengthMolar(), buffer.temperatureC()) / m;
+    }
+
+    /** 1 + 1/n: a new run about a mean of n (1 when n is unknown). */
+    private static double predictiveFactor(int n) {
+        return n > 0 ? 1.0 + 1.0 / n : 1.0;
+    }
+
+    private static double transfer(PredictedMobility.Method method, double measured, double gA, double gB) {
+        return method == PredictedMobility.Method.RATIO ? measured * gB / gA : measured + (gB - gA);
+    }
+
+    /** Whether μ_model(A) is large enough (and of the measured sign) to scale by. */
+    static boolean anchorIsInformative(SpeciesModel m, BufferConditions a, double gA, double measured) {
+        if (gA == 0.0 || measured == 0.0 || Math.signum(gA) != Math.signum(measured)) {
+            return false;
+        }
+        double largest = 0.0;
+        for (int i = 0; i < m.formCount(); i++) {
+            double mu0 = m.limitingMobilities().get(i);
+            if (mu0 == 0.0) {
+                continue;
+            }
+            double atT = MobilityMath.atTemperature(mu0, REFERENCE_C, a.temperatureC());
+            largest = Math.max(largest, Math.abs(IonicStrengthCorrection.actualMobility(atT, m.charge(i),
+                    a.ionicStrengthMolar(), a.temperatureC())));
+        }
+        return Math.abs(gA) >= MIN_ANCHOR_FRACTION * largest;
+    }
+
+    /** Variance of the transfer from the pKa and limiting-mobility inputs, by central differences. */
+    private double inputVariance(SpeciesModel m, BufferConditions a, BufferConditions b, double measured,
+                                 PredictedMobility.Method method, double pKaSd) {
+        return InputPropagation.variance((p, mu) -> transferOf(m, p, mu, a, b, measured, method),
+                m.pKaArray(), m.limitingMobilityArray(), pKaSd, inputs.relativeMobilitySd());
+    }
+
+    private static double transferOf(SpeciesModel m, double[] pKa, double[] mu, BufferConditions a,
+                                     BufferConditions b, double measured, PredictedMobility.Method method) {
+        List<Double> p = new ArrayList<>(pKa.length);
+        for (double v : pKa) {
+            p.add(v);
+        }
+        // keep the ascending order a perturbation of nearly equal pKa values could break
+        p.sort(null);
+        List<Double> u = new ArrayList<>(mu.length);
+        for (double v : mu) {
+            u.add(v);
+        }
+        SpeciesModel perturbed = new SpeciesModel(m.name(), m.highestCharge(), p, u);
+        return transfer(method, measured, MobilityPredictor.effectiveMobility(perturbed, a),
+                MobilityPredictor.effectiveMobility(perturbed, b));
+    }
+
+    private static int maxAbsCharge(SpeciesModel m) {
+        int max = 0;
+        for (int i = 0; i < m.formCount(); i++) {
+            max = Math.max(max, Math.abs(m.charge(i)));
+        }
+        return max;
+    }
+
+    /** The model chosen for an entry, with the reason when a better source was unusable. */
+    private record Choice(SpeciesModel model, PredictionBasis basis, String note) {
+    }
+
+    private Choice choose(LibraryEntry e, String libraryLabel, List<String> notes) {
+        boolean ownData = !e.pKa().isEmpty() || !e.limitingMobilities().isEmpty();
+        String problem = null;
+        if (ownData) {
+            if (e.charge() == 0) {
+                problem = "the entry's pka/limiting_mobility were not used: no charge is given";
+            } else {
+                try {
+                    return new Choice(ReferenceIons.model(e, libraryLabel), PredictionBasis.ENTRY_MODEL, null);
+                } catch (InputException ex) {
+                    problem = "the entry's pka/limiting_mobility were not used: " + ex.problem();
+                }
+            }
+        }
+        SpeciesModel ref = reference.get(key(e.name()));
+        if (ref != null) {
+            return new Choice(ref, PredictionBasis.REFERENCE_MODEL, problem == null
+                    ? "model data from the reference library" : problem + "; reference library used");
+        }
+        if (e.charge() != 0 && e.pKa().isEmpty()) {
+            try {
+                return new Choice(ReferenceIons.model(e, libraryLabel), PredictionBasis.CHARGE_ONLY, problem == null
+                        ? "strong ion of the stated charge assumed" : problem + "; strong ion of the stated charge assumed");
+            } catch (InputException | IllegalArgumentException ex) {
+                problem = problem == null ? ex.getMessage() : problem;
+            }
+        }
+        if (problem != null) {
+            notes.add(problem);
+        }
+        return new Choice(null, PredictionBasis.NO_MODEL, null);
+    }
+
+    private static double square(double v) {
+        return v * v;
+    }
+}
