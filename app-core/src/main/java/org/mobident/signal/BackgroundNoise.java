@@ -20,9 +20,9 @@ package org.mobident.signal;
  * SD low).
  *
  * <p><b>The run's SDs</b> are taken over every k-th sample outside the peaks (k chosen so that about
- * {@link SignalLimits#SCALE_SAMPLE_CAP} are used). Every step is linear in the number of points; the
- * levels are found once per run, the peaks once on every k-th sample (a first look) and once on
- * every sample.
+ * {@link SignalLimits#SCALE_SAMPLE_CAP} are used), the peaks traced on those samples alone; the
+ * samples inside peaks are traced on every sample once the baseline is final. Every step is linear
+ * in the number of points.
  */
 final class BackgroundNoise {
 
@@ -30,13 +30,6 @@ final class BackgroundNoise {
     private static final int LEVEL_NEIGHBOURS = 2;
     /** A block's SD is taken from at most this many of its samples, evenly strided. */
     private static final int BLOCK_SAMPLE_CAP = 64;
-
-    /**
-     * @param estimate the run's SDs (the sample count is that of the trace)
-     * @param inPeak   samples inside peaks
-     */
-    record Result(LocalNoise.Estimate estimate, boolean[] inPeak) {
-    }
 
     private BackgroundNoise() {
     }
@@ -65,31 +58,24 @@ final class BackgroundNoise {
     }
 
     /**
-     * The run's SDs outside the peaks and the samples inside peaks.
+     * The samples inside peaks, traced on every sample.
      *
-     * @param raw    baseline-corrected raw signal, peaks up
      * @param smooth baseline-corrected smoothed signal
      * @param levels the noise level along the run
      * @param margin samples added on each side of a peak
-     * @param floor  least raw SD; the least smoothed SD is {@code floor · gain}
-     * @param gain   noise gain of the smoothing
      */
-    static Result of(double[] raw, double[] smooth, Levels levels, int margin, double floor, double gain) {
-        int cap = SignalLimits.SCALE_SAMPLE_CAP;
-        boolean[] mask = mask(smooth, 1, levels, margin);
-        double smoothSd = Math.max(NoiseEstimator.marginalSd(smooth, mask, cap), floor * gain);
-        double rawSd = Math.max(NoiseEstimator.marginalSd(raw, mask, cap), floor);
-        return new Result(new LocalNoise.Estimate(rawSd, smoothSd, raw.length), mask);
+    static boolean[] peaks(double[] smooth, Levels levels, int margin) {
+        return mask(smooth, 1, levels, margin);
     }
 
     /**
-     * A first look at the run's SDs outside the peaks, on every k-th sample of the corrected
-     * signals {@code y − baseline} and {@code smooth − baseline} (k chosen so that about
-     * {@link SignalLimits#SCALE_SAMPLE_CAP} samples are used; no corrected copy of the run is made).
-     * A zone narrower than k samples is then left in, which the median absolute deviation does not
-     * notice.
+     * The run's SDs outside the peaks, on every k-th sample of the corrected signals
+     * {@code y − baseline} and {@code smooth − baseline} (k chosen so that about
+     * {@link SignalLimits#SCALE_SAMPLE_CAP} samples are used; no corrected copy of the run is made),
+     * the peaks traced on those samples alone. A zone narrower than k samples is then left in, which
+     * the median absolute deviation does not notice.
      */
-    static LocalNoise.Estimate firstLook(double[] y, double[] smooth, double[] baseline, Levels levels, int margin,
+    static LocalNoise.Estimate sds(double[] y, double[] smooth, double[] baseline, Levels levels, int margin,
                                          double floor, double gain) {
         int n = smooth.length;
         int cap = SignalLimits.SCALE_SAMPLE_CAP;

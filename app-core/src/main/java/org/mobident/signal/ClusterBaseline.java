@@ -51,16 +51,26 @@ final class ClusterBaseline {
         boolean dipInGroup = false;
         while (i < n) {
             double v = smooth[i] - baseline[i];
-            if (!(Math.abs(v) > returnLevel)) {
+            int j = i;
+            double top;
+            double sign;
+            if (v > returnLevel) {
+                sign = 1;
+                top = v;
+                while (j + 1 < n && smooth[j + 1] - baseline[j + 1] > returnLevel) {
+                    j++;
+                    top = Math.max(top, smooth[j] - baseline[j]);
+                }
+            } else if (v < -returnLevel) {
+                sign = -1;
+                top = -v;
+                while (j + 1 < n && baseline[j + 1] - smooth[j + 1] > returnLevel) {
+                    j++;
+                    top = Math.max(top, baseline[j] - smooth[j]);
+                }
+            } else {
                 i++;
                 continue;
-            }
-            double sign = Math.signum(v);
-            int j = i;
-            double top = sign * v;
-            while (j + 1 < n && sign * (smooth[j + 1] - baseline[j + 1]) > returnLevel) {
-                j++;
-                top = Math.max(top, sign * (smooth[j] - baseline[j]));
             }
             if (top >= detectLevel) {
                 double span = dipInGroup || sign < 0 ? SignalLimits.GROUP_DIP_SPAN_FACTOR * maxSpanS : maxSpanS;

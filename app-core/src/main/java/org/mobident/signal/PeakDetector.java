@@ -157,21 +157,22 @@ public final class PeakDetector {
         int typicalPoints = (int) Math.round(SignalLimits.PEAK_TO_PEAK_WINDOW_WIDTHS * typicalWidth / sampling) + 1;
         double typicalRange = NoiseEstimator.expectedNormalRange(Math.max(2, Math.min(n, typicalPoints)));
 
-        // first look at the corrected signal: the marginal noise of the raw and the smoothed signal
-        // (measured, not derived from first differences), for the thresholds of the common baseline;
-        // the mask found with the clipped baseline is refreshed once the common baseline is in
+        // the run's noise: the marginal SDs of the corrected raw and smoothed signal outside the peaks
+        // (measured, not derived from first differences); the common baseline then changes the
+        // baseline only under groups of zones, which leaves these SDs as they are, and the samples
+        // inside peaks are traced again on the final baseline
         double[] baseline = SnipBaseline.estimate(t, smooth, typicalWidth, sampling);
         int margin = (int) Math.ceil(SignalLimits.PEAK_MASK_MARGIN_WIDTHS * typicalWidth / sampling);
         int block = (int) Math.max(SignalLimits.LOCAL_NOISE_MIN_SAMPLES,
                 Math.round(SignalLimits.NOISE_SUPPORT_WIDTHS * typicalWidth / sampling));
         BackgroundNoise.Levels levels = BackgroundNoise.levels(smooth, baseline, block, floor * smoothGain);
-        LocalNoise.Estimate first = BackgroundNoise.firstLook(y, smooth, baseline, levels, margin, floor, smoothGain);
-        double firstSigma = Math.max(first.rawSd(), whiteSigma);
-        double firstSmoothSigma = first.smoothSd();
+        LocalNoise.Estimate background = BackgroundNoise.sds(y, smooth, baseline, levels, margin, floor, smoothGain);
+        double sigma = background.rawSd();
+        double smoothSigma = background.smoothSd();
         ClusterBaseline.bridge(t, smooth, baseline,
-                SignalLimits.RETURN_TO_BASELINE_SIGMAS * firstSmoothSigma,
+                SignalLimits.RETURN_TO_BASELINE_SIGMAS * smoothSigma,
                 Math.max(settings.minSignalToNoise(), Tolerances.DETECTION_LIMIT_SIGNAL_TO_NOISE)
-                        * typicalRange * firstSigma / 2,
+                        * typicalRange * Math.max(sigma, whiteSigma) / 2,
                 SignalLimits.GROUP_GAP_IN_WIDTHS * typicalWidth, SignalLimits.GROUP_EDGE_IN_WIDTHS * typicalWidth,
                 SignalLimits.GROUP_MAX_SPAN_IN_WIDTHS * typicalWidth);
         double[] raw = new double[n];
@@ -180,12 +181,9 @@ public final class PeakDetector {
             smooth[i] -= baseline[i];
         }
 
-        // the run's noise from its baseline stretches: the peaks (runs passing 5 smoothed-noise SDs,
-        // with their feet) are left out
-        BackgroundNoise.Result background = BackgroundNoise.of(raw, smooth, levels, margin, floor, smoothGain);
-        boolean[] inPeak = background.inPeak();
-        double sigma = background.estimate().rawSd();
-        double smoothSigma = background.estimate().smoothSd();
+        // the samples of the peaks (runs passing 5 noise levels, with their feet), left out of the
+        // local noise
+        boolean[] inPeak = BackgroundNoise.peaks(smooth, levels, margin);
         double correlation = lagOneCorrelation(whiteSigma, sigma);
         LocalNoise localNoise = new LocalNoise(raw, smooth, inPeak, correlation,
                 new LocalNoise.Estimate(sigma, smoothSigma, n), floor, floor * smoothGain);
