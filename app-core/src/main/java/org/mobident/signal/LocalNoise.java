@@ -4,9 +4,9 @@ package org.mobident.signal;
  * The background noise where a peak sits, measured on the baseline stretches around it.
  *
  * <p>Ph. Eur. 2.2.46 and USP &lt;621&gt; take the noise from a window centred on the place of the
- * peak (in a blank run). Here the run itself serves: the samples of the baseline-corrected signal in
- * a window around the peak, without the samples that belong to any peak ({@link #peakMask}), give
- * the robust SD (1.4826 · MAD about their median: Rousseeuw &amp; Croux, J. Am. Stat. Assoc. 88
+ * peak (in a blank run). Here the run itself serves: the samples of the baseline-corrected signal
+ * in a window around the peak, without the samples that belong to any peak
+ * ({@link BackgroundNoise#peaks}), give the robust SD (1.4826 · MAD about their median: Rousseeuw &amp; Croux, J. Am. Stat. Assoc. 88
  * (1993) 1273) of the raw signal and, on the same samples, of the smoothed signal. Both are SDs of
  * the values themselves, not of their differences, so correlated noise (a detector time constant)
  * is measured as it is: its first differences would understate it.
@@ -77,6 +77,14 @@ final class LocalNoise {
      * {@code halfWindow} samples of it (the window widened as needed, see the class notes).
      */
     Estimate around(int centre, int halfWindow) {
+        return around(centre, halfWindow, true);
+    }
+
+    /**
+     * As {@link #around(int, int)}; without {@code withSmooth} only the raw SD is found and the
+     * smoothed one is NaN (half the work, for peaks whose significance is plain without it).
+     */
+    Estimate around(int centre, int halfWindow, boolean withSmooth) {
         int n = raw.length;
         int half = Math.max(1, halfWindow);
         int from;
@@ -105,52 +113,7 @@ final class LocalNoise {
         if (m < 2) {
             return global;
         }
-        return new Estimate(Math.max(NoiseEstimator.madSdInPlace(workRaw, m), rawFloor),
-                Math.max(NoiseEstimator.madSdInPlace(workSmooth, m), smoothFloor), m);
-    }
-
-    /**
-     * The samples that belong to peaks: every run of the smoothed corrected signal beyond
-     * ±{@code returnLevel} (rises and dips alike) whose extreme passes ±{@code peakLevel}, widened
-     * by {@code margin} samples on each side for the feet. Noise rarely reaches the peak level, so
-     * the baseline samples keep the whole noise distribution (an exclusion at a low level would
-     * cut its tails and bias the SD low). Linear.
-     *
-     * @param smooth      baseline-corrected smoothed signal
-     * @param returnLevel a run starts and ends where |smooth| falls to this level, &gt; 0
-     * @param peakLevel   a run is a peak when its extreme passes this level
-     * @param margin      samples added on each side
-     */
-    static boolean[] peakMask(double[] smooth, double returnLevel, double peakLevel, int margin) {
-        return peakMask(smooth, returnLevel, peakLevel, margin, new boolean[smooth.length]);
-    }
-
-    /** {@link #peakMask(double[], double, double, int)} written into {@code mask} (cleared first). */
-    static boolean[] peakMask(double[] smooth, double returnLevel, double peakLevel, int margin, boolean[] mask) {
-        int n = smooth.length;
-        java.util.Arrays.fill(mask, false);
-        int i = 0;
-        while (i < n) {
-            if (!(Math.abs(smooth[i]) > returnLevel)) {
-                i++;
-                continue;
-            }
-            double sign = Math.signum(smooth[i]);
-            int j = i;
-            double extreme = sign * smooth[i];
-            while (j + 1 < n && sign * smooth[j + 1] > returnLevel) {
-                j++;
-                extreme = Math.max(extreme, sign * smooth[j]);
-            }
-            if (extreme > peakLevel) {
-                int a = Math.max(0, i - margin);
-                int b = Math.min(n - 1, j + margin);
-                for (int k = a; k <= b; k++) {
-                    mask[k] = true;
-                }
-            }
-            i = j + 1;
-        }
-        return mask;
+        double smoothSd = withSmooth ? Math.max(NoiseEstimator.madSdInPlace(workSmooth, m), smoothFloor) : Double.NaN;
+        return new Estimate(Math.max(NoiseEstimator.madSdInPlace(workRaw, m), rawFloor), smoothSd, m);
     }
 }

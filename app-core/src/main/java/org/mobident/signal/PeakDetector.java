@@ -151,9 +151,13 @@ public final class PeakDetector {
         int halfWidth = Math.max(1, (int) Math.round(0.5 * (windowS / sampling - 1)));
         halfWidth = Math.min(halfWidth, (n - 1) / 2);
         double[] smooth = SavitzkyGolay.smooth(y, halfWidth, SMOOTHING_ORDER);
-        double smoothGain = halfWidth >= 1 && SMOOTHING_ORDER < 2 * halfWidth
-                ? Math.sqrt(PeakWidthEstimator.sumOfSquares(SavitzkyGolay.weights(halfWidth, SMOOTHING_ORDER)))
-                : 1.0;
+        boolean smoothing = halfWidth >= 1 && SMOOTHING_ORDER < 2 * halfWidth;
+        double[] smoothWeights = smoothing ? SavitzkyGolay.weights(halfWidth, SMOOTHING_ORDER) : new double[] {1.0};
+        double smoothGain = Math.sqrt(PeakWidthEstimator.sumOfSquares(smoothWeights));
+        double smoothBound = 0;
+        for (double w : smoothWeights) {
+            smoothBound += Math.abs(w);
+        }
         int typicalPoints = (int) Math.round(SignalLimits.PEAK_TO_PEAK_WINDOW_WIDTHS * typicalWidth / sampling) + 1;
         double typicalRange = NoiseEstimator.expectedNormalRange(Math.max(2, Math.min(n, typicalPoints)));
 
@@ -235,7 +239,7 @@ public final class PeakDetector {
             s = e + 1;
         }
         Reporting reporting = new Reporting(t, raw, smooth, sampling, localNoise, correlation, significance,
-                settings.minSignalToNoise(), returnLevel);
+                smoothBound, settings.minSignalToNoise(), returnLevel);
         List<Measured> reported = new ArrayList<>(found.size());
         for (Measured m : found) {
             Measured r = reporting.judge(m);
@@ -275,21 +279,24 @@ public final class PeakDetector {
      * uncertainty of its centre time.
      */
     private record Reporting(double[] t, double[] raw, double[] smooth, double sampling, LocalNoise noise,
-                             double correlation, double significance, double minSignalToNoise,
-                             double returnLevel) {
+                             double correlation, double significance, double smoothBound,
+                             double minSignalToNoise, double returnLevel) {
 
         /** The peak with its S/N and centre uncertainty, or null when it is not to be reported. */
         Measured judge(Measured m) {
             int apex = nearestIndex(t, m.apexTimeS);
             int support = (int) Math.ceil(0.5 * SignalLimits.NOISE_SUPPORT_WIDTHS * m.widthHalfS / sampling);
-            LocalNoise.Estimate local = noise.around(apex, support);
+            LocalNoise.Estimate local = noise.around(apex, support, false);
             long points = Math.max(2, Math.round(SignalLimits.PEAK_TO_PEAK_WINDOW_WIDTHS * m.widthHalfS / sampling) + 1);
             double peakToPeak = NoiseEstimator.expectedNormalRange(points) * local.rawSd();
             double signalToNoise = 2 * m.height / peakToPeak;
             if (!(signalToNoise >= minSignalToNoise)) {
                 return null;
             }
-            if (!(m.smoothedHeight >= significance * local.smoothSd())) {
+            // the smoothed noise SD never exceeds Σ|w| times the raw one, whatever the correlation
+            // (|Cov| ≤ σ²): a peak above z·Σ|w|·σ_raw is significant without measuring it
+            if (!(m.smoothedHeight >= significance * smoothBound * local.rawSd())
+                    && !(m.smoothedHeight >= significance * noise.around(apex, support, true).smoothSd())) {
                 return null;
             }
             if (!m.fitted && m.widthHalfS < SignalLimits.SPIKE_CHECK_WIDTH_SAMPLES * sampling

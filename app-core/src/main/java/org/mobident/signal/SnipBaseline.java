@@ -163,7 +163,12 @@ final class SnipBaseline {
      *  passes bounds the total near 2|a|P², which the re-centring then removes. */
     private static final double WINDOW_RATIO = Math.sqrt(2.0);
 
-    /** Trimmed median of value − base: the level of the noise above the clipped baseline. */
+    /**
+     * Trimmed median of value − base: the level of the noise above the clipped baseline. On long
+     * series the trimmed medians are taken of an evenly strided subset of at most
+     * {@link SignalLimits#SCALE_SAMPLE_CAP} bins (the median of 2,048 values has a standard error of
+     * about 3 % of their SD).
+     */
     private static double residualCentre(double[] value, double[] base) {
         int bins = value.length;
         double[] r = new double[bins];
@@ -175,13 +180,19 @@ final class SnipBaseline {
         }
         double sd = NoiseEstimator.robustSd(r);
         double halfRange = SignalLimits.BASELINE_OFFSET_TRIM_SIGMAS * sd;
-        double centre = Selection.median(r);
-        double[] work = new double[bins];
+        int stride = Math.max(1, bins / SignalLimits.SCALE_SAMPLE_CAP);
+        int count = (bins + stride - 1) / stride;
+        double[] subset = new double[count];
+        for (int j = 0; j < count; j++) {
+            subset[j] = r[j * stride];
+        }
+        double centre = Selection.median(subset);
+        double[] work = new double[count];
         for (int it = 0; it < SignalLimits.BASELINE_OFFSET_ITERATIONS; it++) {
             int kept = 0;
-            for (int b = 0; b < bins; b++) {
-                if (Math.abs(r[b] - centre) <= halfRange) {
-                    work[kept++] = r[b];
+            for (int j = 0; j < count; j++) {
+                if (Math.abs(subset[j] - centre) <= halfRange) {
+                    work[kept++] = subset[j];
                 }
             }
             if (kept == 0) {
