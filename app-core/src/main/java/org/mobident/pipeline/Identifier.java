@@ -98,14 +98,17 @@ public final class Identifier {
         if (runs.isEmpty()) {
             return List.of();
         }
-        List<Detected> detected = parallel(runs, this::detect,
-                (spec, e) -> new Detected(spec, RunResult.failure(spec, e), List.of(), Double.NaN));
-        List<Finished> done = parallel(detected, d -> finishing(d, null),
-                (d, e) -> new Finished(RunResult.failure(d.run(), e), d));
+        // pass 1: each run read, detected and matched in one task, so that at most one trace per thread is held
+        List<Finished> done = parallel(runs, r -> finishing(detect(r), null),
+                (spec, e) -> new Finished(RunResult.failure(spec, e),
+                        new Detected(spec, RunResult.failure(spec, e), List.of(), Double.NaN)));
+        List<Detected> detected = new ArrayList<>(done.size());
+        for (Finished f : done) {
+            detected.add(f.settled());
+        }
         List<RunResult> first = new ArrayList<>(done.size());
-        for (int i = 0; i < done.size(); i++) {
-            first.add(done.get(i).result());
-            detected.set(i, done.get(i).settled());
+        for (Finished f : done) {
+            first.add(f.result());
         }
         Map<String, BatchScalePrior.Learned> learned = new HashMap<>();
         MatchSettings ms = settings.matchSettings();
