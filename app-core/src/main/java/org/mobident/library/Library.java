@@ -75,18 +75,26 @@ public record Library(List<LibraryEntry> entries, String sourceFile, List<String
 
     /**
      * The entries that apply to runs in {@code runBuffer} (those of that buffer and those without
-     * a label), as a library with the same notes and lines; the whole library when
-     * {@code runBuffer} is null.
+     * a label, unless the buffer has its own entry of that name), as a library with the same notes
+     * and lines; the whole library when {@code runBuffer} is null.
      */
     public Library forBuffer(String runBuffer) {
         if (runBuffer == null) {
             return this;
         }
+        Set<String> labelled = new HashSet<>();
+        for (LibraryEntry e : entries) {
+            if (e.buffer() != null && LibraryEntry.sameBuffer(e.buffer(), runBuffer)) {
+                labelled.add(e.name());
+            }
+        }
         List<LibraryEntry> kept = new ArrayList<>();
         List<Long> lines = new ArrayList<>();
         for (int i = 0; i < entries.size(); i++) {
             LibraryEntry e = entries.get(i);
-            if (e.appliesToBuffer(runBuffer)) {
+            // an entry measured in the run's own buffer replaces an unlabelled one of the same name
+            boolean replaced = e.buffer() == null && labelled.contains(e.name());
+            if (e.appliesToBuffer(runBuffer) && !replaced) {
                 kept.add(e);
                 if (!entryLines.isEmpty()) {
                     lines.add(entryLines.get(i));

@@ -252,4 +252,21 @@ class LibraryCsvTest {
         assertEquals(FILE, quote.file());
         assertTrue(quote.line() >= 3, quote.getMessage());
     }
+
+    @Test
+    void aRunsBufferSeesItsOwnEntriesAndTheUnlabelledOnes() throws InputException {
+        String csv = "name,mobility,buffer\nnitrate,-70.0,\nnitrate,-69.5,CHR-8\nchloride,-76.0,\n"
+                + "nitrate,-68.0,IMZ-4.5\n";
+        Library lib = LibraryCsv.read(new StringReader(csv), "l.csv");
+        assertEquals(List.of("CHR-8", "IMZ-4.5"), lib.bufferLabels());
+        Library chr = lib.forBuffer("chr-8");
+        // the buffer's own nitrate replaces the unlabelled one; the unlabelled chloride applies to every buffer
+        assertEquals(List.of("nitrate", "chloride"), chr.entries().stream().map(LibraryEntry::name).toList());
+        assertEquals(-69.5, chr.find("nitrate").orElseThrow().mobility(), 0.0);
+        assertEquals(List.of(3L, 4L), chr.entryLines());
+        assertEquals(lib, lib.forBuffer(null));
+        InputException twice = org.junit.jupiter.api.Assertions.assertThrows(InputException.class,
+                () -> LibraryCsv.read(new StringReader(csv + "nitrate,-69.4,chr-8\n"), "l.csv"));
+        assertEquals(6, twice.line());
+    }
 }
