@@ -160,6 +160,46 @@ record ApexFit(double apexTimeS, double height, double apexTimeSdS) {
         return Math.max(1.0, Math.sqrt(chi2 / dof));
     }
 
+    /**
+     * The sums of an unweighted least-squares parabola a + b·u + c·u², filled point by point
+     * ({@link #add}) and solved once ({@link #solve}); one per fit, not shared.
+     */
+    static final class QuadraticSums {
+        private double s0;
+        private double s1;
+        private double s2;
+        private double s3;
+        private double s4;
+        private double z0;
+        private double z1;
+        private double z2;
+
+        void add(double u, double v) {
+            double u2 = u * u;
+            s0 += 1;
+            s1 += u;
+            s2 += u2;
+            s3 += u2 * u;
+            s4 += u2 * u2;
+            z0 += v;
+            z1 += u * v;
+            z2 += u2 * v;
+        }
+
+        /** {a, b, c} of the least-squares parabola, or null when the normal equations are singular. */
+        double[] solve() {
+            double[][] inv = inverseSymmetric3(s0, s1, s2, s3, s4);
+            if (inv == null) {
+                return null;
+            }
+            double[] c = new double[3];
+            for (int r = 0; r < 3; r++) {
+                c[r] = inv[r][0] * z0 + inv[r][1] * z1 + inv[r][2] * z2;
+            }
+            return c;
+        }
+    }
+
     /** Inverse of [[s0,s1,s2],[s1,s2,s3],[s2,s3,s4]] by cofactors, or null when singular. */
     static double[][] inverseSymmetric3(double s0, double s1, double s2, double s3, double s4) {
         double c00 = s2 * s4 - s3 * s3;

@@ -673,28 +673,11 @@ public final class PeakDetector {
 
     /** Least-squares a + b u + c u² through (t − ref, v) over [lo, hi]; null when singular. */
     private static double[] quadraticFit(double[] t, double[] v, int lo, int hi, double ref) {
-        double s0 = 0, s1 = 0, s2 = 0, s3 = 0, s4 = 0, z0 = 0, z1 = 0, z2 = 0;
+        ApexFit.QuadraticSums sums = new ApexFit.QuadraticSums();
         for (int k = lo; k <= hi; k++) {
-            double u = t[k] - ref;
-            double u2 = u * u;
-            s0 += 1;
-            s1 += u;
-            s2 += u2;
-            s3 += u2 * u;
-            s4 += u2 * u2;
-            z0 += v[k];
-            z1 += u * v[k];
-            z2 += u2 * v[k];
+            sums.add(t[k] - ref, v[k]);
         }
-        double[][] inv = ApexFit.inverseSymmetric3(s0, s1, s2, s3, s4);
-        if (inv == null) {
-            return null;
-        }
-        double[] c = new double[3];
-        for (int r = 0; r < 3; r++) {
-            c[r] = inv[r][0] * z0 + inv[r][1] * z1 + inv[r][2] * z2;
-        }
-        return c;
+        return sums.solve();
     }
 
     /** The root of a u² + b u + c of smallest magnitude (a may be 0), by the cancellation-free

@@ -238,27 +238,18 @@ final class SpikeFilter {
         @Override
         public boolean residuals(double[] t, double[] y, int first, int width, double[] r) {
             double ref = t[first];
-            double s0 = 0, s1 = 0, s2 = 0, s3 = 0, s4 = 0, z0 = 0, z1 = 0, z2 = 0;
+            ApexFit.QuadraticSums sums = new ApexFit.QuadraticSums();
             for (int k = 0; k < 2 * ANCHORS_PER_SIDE; k++) {
                 int j = anchor(first, width, k);
-                double u = t[j] - ref;
-                double u2 = u * u;
-                s0 += 1;
-                s1 += u;
-                s2 += u2;
-                s3 += u2 * u;
-                s4 += u2 * u2;
-                z0 += y[j];
-                z1 += u * y[j];
-                z2 += u2 * y[j];
+                sums.add(t[j] - ref, y[j]);
             }
-            double[][] inv = ApexFit.inverseSymmetric3(s0, s1, s2, s3, s4);
-            if (inv == null) {
+            double[] fit = sums.solve();
+            if (fit == null) {
                 return false;
             }
-            double a = inv[0][0] * z0 + inv[0][1] * z1 + inv[0][2] * z2;
-            double b = inv[1][0] * z0 + inv[1][1] * z1 + inv[1][2] * z2;
-            double c = inv[2][0] * z0 + inv[2][1] * z1 + inv[2][2] * z2;
+            double a = fit[0];
+            double b = fit[1];
+            double c = fit[2];
             for (int k = 0; k < width + 2; k++) {
                 int j = k < width ? first + k : (k == width ? first - 1 : first + width);
                 double u = t[j] - ref;
