@@ -17,6 +17,8 @@ final class ScaleNotes {
     static final double NEGLIGIBLE_FACTOR = 0.002;
     /** The opposite voltage sign is suggested when it lets the library explain this many more peaks. */
     static final double SIGN_HINT_GAIN = 1.5;
+    /** Fewest analyte peaks for a voltage-sign hint (one peak says nothing about a sign). */
+    static final int MIN_PEAKS_FOR_SIGN_HINT = 2;
 
     private ScaleNotes() {
     }
@@ -77,7 +79,7 @@ final class ScaleNotes {
      */
     static String voltageSignHint(MarkerLocator.Hypothesis best, RunMatch match, MarkerLocator.Evaluator evaluator) {
         int n = best.analytes().length;
-        if (evaluator == null || n < 2 || match.explainedPeaks() >= 0.5 * n) {
+        if (evaluator == null || n < MIN_PEAKS_FOR_SIGN_HINT || match.explainedPeaks() >= MarkerLocator.WELL_EXPLAINED_SHARE * n) {
             return null;
         }
         double[] mirrored = new double[n];
@@ -85,7 +87,7 @@ final class ScaleNotes {
             mirrored[k] = -best.mobility()[k];
         }
         RunMatch other = evaluator.match(mirrored, best.mobilitySd());
-        if (other.explainedPeaks() >= match.explainedPeaks() + SIGN_HINT_GAIN && other.explainedPeaks() >= 0.5 * n) {
+        if (other.explainedPeaks() >= match.explainedPeaks() + SIGN_HINT_GAIN && other.explainedPeaks() >= MarkerLocator.WELL_EXPLAINED_SHARE * n) {
             return String.format(Locale.ROOT, "the library explains %.1f of %d peaks as measured but %.1f with the "
                     + "opposite voltage sign: check the sign of voltage_kv (negative when the inlet is at the "
                     + "negative potential)", match.explainedPeaks(), n, other.explainedPeaks());
