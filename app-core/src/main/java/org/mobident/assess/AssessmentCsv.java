@@ -34,7 +34,7 @@ public final class AssessmentCsv {
     public static final List<String> SCORE_COLUMNS = List.of("section", "subject", "measure", "value");
 
     /** Columns of the verdicts table. */
-    public static final List<String> VERDICT_COLUMNS = List.of("run", "peak", "role", "apex_time_s", "status",
+    public static final List<String> VERDICT_COLUMNS = List.of("run", "peak", "role", "time_s", "status",
             "assigned", "confidence", "known_line", "known_kind", "known_name", "known_time_s", "matched_by",
             "verdict");
 
@@ -134,7 +134,7 @@ public final class AssessmentCsv {
                     CsvCells.inert(v.run()),
                     p == null ? "" : Integer.toString(p.number()),
                     p == null ? "" : CsvCells.inert(p.role()),
-                    p == null ? "" : Figures.fixed(p.apexTimeS(), Figures.TABLE_TIME_DECIMALS, ""),
+                    p == null ? "" : Figures.fixed(p.timeS(), Figures.TABLE_TIME_DECIMALS, ""),
                     p == null ? "" : p.status().label(),
                     p == null ? "" : CsvCells.inert(p.assigned()),
                     p == null ? "" : Figures.fixed(p.confidence(), Figures.CONFIDENCE_DECIMALS, ""),

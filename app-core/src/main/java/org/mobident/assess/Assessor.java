@@ -146,7 +146,7 @@ public final class Assessor {
                 ReportedPeak peak = peaks.get(i);
                 ZoneMatching.Pair pair = byPeak.get(i);
                 KnownIdentity truth = pair == null ? null : pair.known();
-                if (!Double.isFinite(peak.apexTimeS())) {
+                if (!Double.isFinite(peak.timeS())) {
                     peaksWithoutTime++;
                 }
                 if (truth != null && truth.kind() == KnownKind.SPIKE) {
@@ -295,7 +295,7 @@ public final class Assessor {
             } else {
                 state = RunCheck.MarkerCheck.OFF;
                 note = String.format(Locale.ROOT, "the neutral marker chosen is at %.2f s; the known marker is at "
-                        + "%.2f s", chosen.apexTimeS(), knownMarker.timeS());
+                        + "%.2f s", chosen.timeS(), knownMarker.timeS());
             }
             runsMarkerOff += state.problem() ? 1 : 0;
             return new RunCheck(run.name(), false, run.mobilityKnown(), state, note);
@@ -309,7 +309,7 @@ public final class Assessor {
                           List<String> extraNotes) {
             List<String> allNotes = new ArrayList<>();
             if (peaksWithoutTime > 0) {
-                allNotes.add(peaksWithoutTime + " reported peak(s) have no apex time (no apex_time_s column?) and "
+                allNotes.add(peaksWithoutTime + " reported peak(s) have no time (no centre_time_s or apex_time_s column?) and "
                         + "can only be tied to known analytes by name");
             }
             if (unmatchableRows > 0) {

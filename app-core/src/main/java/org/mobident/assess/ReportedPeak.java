@@ -5,7 +5,8 @@ package org.mobident.assess;
  *
  * @param number        peak number within its run (1-based)
  * @param role          role label as written in the peak table ("analyte", "neutral marker", "mobility marker")
- * @param apexTimeS     apex time, s (NaN when unknown)
+ * @param timeS         the peak's migration time, s: its centre time where the table gives one (the time
+ *                      its mobility comes from), else its apex time (NaN when unknown)
  * @param widthHalfS    full width at half height, s (NaN when unknown)
  * @param signalToNoise signal-to-noise ratio (NaN when unknown)
  * @param mobility      the reported mobility compared with the truth, 1e-9 m²/(V s): the scale-corrected
@@ -16,7 +17,7 @@ package org.mobident.assess;
  *                      that it is none of the library analytes (NaN when not reported)
  * @param status        what the identification concluded
  */
-public record ReportedPeak(int number, String role, double apexTimeS, double widthHalfS, double signalToNoise,
+public record ReportedPeak(int number, String role, double timeS, double widthHalfS, double signalToNoise,
                            double mobility, String assigned, double confidence, Status status) {
 
     /** Role label of an analyte peak. */

@@ -85,7 +85,8 @@ public final class ReportedRuns {
 
     private static ReportedPeak peak(PeakTableRow r) {
         ReportedPeak.Status status = ReportedPeak.Status.valueOf(r.status().toUpperCase(Locale.ROOT));
-        return new ReportedPeak(r.peak(), r.role(), r.apexTimeS(), r.widthHalfS(), r.signalToNoise(),
+        double timeS = Double.isFinite(r.centreTimeS()) ? r.centreTimeS() : r.apexTimeS();
+        return new ReportedPeak(r.peak(), r.role(), timeS, r.widthHalfS(), r.signalToNoise(),
                 comparedMobility(r), r.assigned(), r.confidence(), status);
     }
 }

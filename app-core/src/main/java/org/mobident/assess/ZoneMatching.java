@@ -10,7 +10,7 @@ import java.util.Map;
  * Ties the reported peaks of one run to the rows of the known-identities table for that run.
  *
  * <ol>
- *   <li><b>By time.</b> A peak may belong to a row with a time when |apex − time| is at most
+ *   <li><b>By time.</b> A peak may belong to a row with a time when |t − time| is at most
  *       {@link #toleranceS}: max(2 × the peak's width at half height, 1 % of the row's time,
  *       0.5 s). Pairs are taken nearest first, each peak and each row at most once (ties broken
  *       by peak number, then by the row's line), so every row gets its nearest free peak.</li>
@@ -43,7 +43,9 @@ public final class ZoneMatching {
     }
 
     /**
-     * The largest apex-to-known-time distance at which a peak may belong to a row, s.
+     * The largest distance between a peak's migration time t (its centre time where reported, else its
+     * apex: the time its mobility comes from, which a skewed zone's apex is not) and a known time at
+     * which the peak may belong to the row, s.
      *
      * @param widthHalfS the peak's width at half height, s (NaN when unknown: that term is left out)
      * @param knownTimeS the row's migration time, s
@@ -66,7 +68,7 @@ public final class ZoneMatching {
         List<Candidate> candidates = new ArrayList<>();
         for (int p = 0; p < peaks.size(); p++) {
             ReportedPeak peak = peaks.get(p);
-            if (!Double.isFinite(peak.apexTimeS())) {
+            if (!Double.isFinite(peak.timeS())) {
                 continue;
             }
             for (int k = 0; k < known.size(); k++) {
@@ -74,7 +76,7 @@ public final class ZoneMatching {
                 if (!row.hasTime()) {
                     continue;
                 }
-                double d = Math.abs(peak.apexTimeS() - row.timeS());
+                double d = Math.abs(peak.timeS() - row.timeS());
                 if (d <= toleranceS(peak.widthHalfS(), row.timeS())) {
                     candidates.add(new Candidate(p, k, d));
                 }

@@ -28,7 +28,7 @@ import org.mobident.report.CsvCells;
  * Reads back the peak table CSV that Mobident writes ({@link org.mobident.report.PeakTableCsv}),
  * keeping only what a recheck or a scoring needs: run, peak, role, mobility, mobility_sd,
  * mobility_at_library_temp, assigned, confidence, status, and when present apex_time_s,
- * width_half_s, signal_to_noise and mobility_corrected.
+ * width_half_s, signal_to_noise, mobility_corrected and centre_time_s.
  *
  * <p>The header must name the required columns (any case, any order; the optional ones are read
  * when present, other columns are ignored). Text
@@ -45,7 +45,7 @@ public final class PeakTableReader {
 
     /** Columns read when the table has them; an empty or absent one reads as unknown (NaN). */
     public static final List<String> OPTIONAL = List.of("apex_time_s", "width_half_s", "signal_to_noise",
-            "mobility_corrected");
+            "mobility_corrected", "centre_time_s");
 
     /** Status values the writer produces. */
     public static final Set<String> STATUSES = Set.of("identified", "ambiguous", "unassigned", "marker", "failed",
@@ -250,7 +250,8 @@ public final class PeakTableReader {
                 number(rec, column, "mobility_at_library_temp", label, line), assigned, confidence, status,
                 optional(rec, column, "apex_time_s", label, line), optional(rec, column, "width_half_s", label, line),
                 optional(rec, column, "signal_to_noise", label, line),
-                optional(rec, column, "mobility_corrected", label, line));
+                optional(rec, column, "mobility_corrected", label, line),
+                optional(rec, column, "centre_time_s", label, line));
     }
 
     /** An optional numeric column: NaN when the table has no such column. */

@@ -19,16 +19,19 @@ package org.mobident.recheck;
  * @param signalToNoise         signal-to-noise ratio; NaN when empty or absent
  * @param mobilityCorrected     mobility after the run's scale correction, at the library temperature,
  *                              1e-9 m²/(V s); NaN when empty or absent (tables of earlier versions)
+ * @param centreTimeS           the zone's centre time (the time its mobility comes from), s; NaN when empty
+ *                              or absent
  */
 public record PeakTableRow(long line, String run, int peak, String role, double mobility, double mobilitySd,
                            double mobilityAtLibraryTemp, String assigned, double confidence, String status,
-                           double apexTimeS, double widthHalfS, double signalToNoise, double mobilityCorrected) {
+                           double apexTimeS, double widthHalfS, double signalToNoise, double mobilityCorrected,
+                           double centreTimeS) {
 
     /** A row without the peak measures and the corrected mobility (as a recheck needs it). */
     public PeakTableRow(long line, String run, int peak, String role, double mobility, double mobilitySd,
                         double mobilityAtLibraryTemp, String assigned, double confidence, String status) {
         this(line, run, peak, role, mobility, mobilitySd, mobilityAtLibraryTemp, assigned, confidence, status,
-                Double.NaN, Double.NaN, Double.NaN, Double.NaN);
+                Double.NaN, Double.NaN, Double.NaN, Double.NaN, Double.NaN);
     }
 
     /** Role label of an analyte peak. */

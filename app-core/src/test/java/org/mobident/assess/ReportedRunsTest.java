@@ -32,6 +32,26 @@ class ReportedRunsTest {
     }
 
     @Test
+    void aPeaksTimeIsItsCentreWhereTheTableGivesOne() throws Exception {
+        // two skewed zones: the first zone's apex (its sharp flank) lies nearer the second zone's
+        // centre than its own; the known times are centres, so the centres must pair them
+        String text = HEADER + ",centre_time_s\n"
+                + "r,1,analyte,107.1,3.3,-78.8,0.5,-78.8,bromide,0.8,identified,104.04\n"
+                + "r,2,analyte,105.4,1.7,-78.4,0.3,-78.4,iodide,0.8,identified,104.41\n"
+                + "r,3,analyte,120,0.5,-70.0,0.01,-70.0,nitrate,0.9,identified,\n";
+        List<ReportedPeak> peaks = ReportedRuns.fromTable(PeakTableReader.read(new StringReader(text), "t.csv"))
+                .get(0).peaks();
+        assertEquals(104.04, peaks.get(0).timeS(), 0);
+        assertEquals(104.41, peaks.get(1).timeS(), 0);
+        assertEquals(120.0, peaks.get(2).timeS(), 0, "the apex where no centre is given");
+        List<KnownIdentity> known = KnownIdentitiesReader.read(
+                "run,kind,analyte,time_s\nr,analyte,bromide,103.66\nr,analyte,iodide,104.70\n", "k.csv").rows();
+        List<ZoneMatching.Pair> pairs = ZoneMatching.match(known, peaks);
+        assertEquals("bromide", pairs.get(0).known().name());
+        assertEquals("iodide", pairs.get(1).known().name());
+    }
+
+    @Test
     void runStatesFromTheTable() throws Exception {
         String text = HEADER + "\n"
                 + "ok,1,analyte,100,0.5,-70.0,0.01,-70.0,nitrate,0.95,identified\n"
