@@ -42,7 +42,7 @@ final class ClusterBaseline {
      * @param maxSpanS    longest group that is bridged, s
      */
     static double[] bridge(double[] t, double[] smooth, double[] baseline, double returnLevel, double detectLevel,
-                           double mergeGapS, double edgeS, double maxSpanS) {
+                           double mergeGapS, double edgeS, double maxSpanS, double wideS) {
         int n = smooth.length;
         int i = 0;
         int groupStart = -1;
@@ -79,7 +79,7 @@ final class ClusterBaseline {
                     runsInGroup++;
                     dipInGroup |= sign < 0;
                 } else {
-                    if (runsInGroup >= 2) {
+                    if (runsInGroup >= 2 || (groupStart >= 0 && t[groupEnd] - t[groupStart] > wideS)) {
                         lower(t, smooth, baseline, groupStart, groupEnd, edgeS, spanOf(maxSpanS, dipInGroup),
                                 dipInGroup);
                     }
@@ -91,10 +91,52 @@ final class ClusterBaseline {
             }
             i = j + 1;
         }
-        if (runsInGroup >= 2) {
+        if (runsInGroup >= 2 || (groupStart >= 0 && t[groupEnd] - t[groupStart] > wideS)) {
             lower(t, smooth, baseline, groupStart, groupEnd, edgeS, spanOf(maxSpanS, dipInGroup), dipInGroup);
         }
         return baseline;
+    }
+
+    /**
+     * Where a group's outer flank reaches the floor of the signal: from {@code index}, steps of
+     * {@code edgeS} outwards while the mean smoothed signal of the next step lies lower than that of
+     * the current one, never beyond {@code limitS} (on the baseline's noise the walk stops after a step or two, the chance of
+     * going on halving with each step). A concentrated zone's diffuse flank
+     * (electromigration dispersion) runs on far beyond where the clipped baseline, which rose into
+     * it, lets it end; its chord must start where the signal stops falling.
+     */
+    private static int walkOut(double[] t, double[] smooth, int index, int direction, double edgeS, double limitS) {
+        int current = index;
+        double currentMean = stepMean(t, smooth, current, direction, edgeS);
+        while (true) {
+            int next = current;
+            while (next + direction >= 0 && next + direction < t.length
+                    && Math.abs(t[next + direction] - t[current]) <= edgeS) {
+                next += direction;
+            }
+            if (next == current || next == 0 || next == t.length - 1 || (t[next] - limitS) * direction > 0) {
+                return current;
+            }
+            double nextMean = stepMean(t, smooth, next, direction, edgeS);
+            if (!(nextMean < currentMean)) {
+                return current;
+            }
+            current = next;
+            currentMean = nextMean;
+        }
+    }
+
+    /** Mean of the smoothed signal over one step of {@code edgeS} outwards from {@code index}. */
+    private static double stepMean(double[] t, double[] smooth, int index, int direction, double edgeS) {
+        double sum = 0;
+        int count = 0;
+        int k = index;
+        while (k >= 0 && k < t.length && Math.abs(t[k] - t[index]) <= edgeS) {
+            sum += smooth[k];
+            count++;
+            k += direction;
+        }
+        return sum / count;
     }
 
     private static double spanOf(double maxSpanS, boolean dipInGroup) {
@@ -105,6 +147,13 @@ final class ClusterBaseline {
      *  itself when {@code replace} (a group holding a dip). */
     private static void lower(double[] t, double[] smooth, double[] baseline, int start, int end, double edgeS,
                               double maxSpanS, boolean replace) {
+        if (!replace) {
+            // steps a quarter of the group long: an exponential flank falls by a fifth or more per
+            // step, well above the noise of the step means
+            double step = Math.max(edgeS, SignalLimits.WALK_STEP_OF_GROUP * (t[end] - t[start]));
+            start = walkOut(t, smooth, start, -1, step, t[end] - maxSpanS);
+            end = walkOut(t, smooth, end, +1, step, t[start] + maxSpanS);
+        }
         if (t[end] - t[start] > maxSpanS || start == 0 || end == t.length - 1) {
             return;
         }

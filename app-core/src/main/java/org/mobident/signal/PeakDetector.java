@@ -178,7 +178,8 @@ public final class PeakDetector {
                 Math.max(settings.minSignalToNoise(), Tolerances.DETECTION_LIMIT_SIGNAL_TO_NOISE)
                         * typicalRange * Math.max(sigma, whiteSigma) / 2,
                 SignalLimits.GROUP_GAP_IN_WIDTHS * typicalWidth, SignalLimits.GROUP_EDGE_IN_WIDTHS * typicalWidth,
-                SignalLimits.GROUP_MAX_SPAN_IN_WIDTHS * typicalWidth);
+                SignalLimits.GROUP_MAX_SPAN_IN_WIDTHS * typicalWidth,
+                SignalLimits.WIDE_ZONE_IN_WIDTHS * typicalWidth);
         double[] raw = new double[n];
         for (int i = 0; i < n; i++) {
             raw[i] = y[i] - baseline[i];
@@ -211,7 +212,7 @@ public final class PeakDetector {
                 SignalLimits.SHOULDER_MIN_CONCAVITY_SIGMAS * concavitySd,
                 SignalLimits.SHOULDER_PROMINENCE_SIGMAS * concavitySd,
                 Math.max(1, (int) Math.round(SignalLimits.SHOULDER_REACH_IN_WIDTHS * typicalWidth / sampling)),
-                typicalWidth / GaussianClusterFit.HALF_WIDTH_PER_SIGMA, minHeight, minWidth);
+                typicalWidth / GaussianClusterFit.HALF_WIDTH_PER_SIGMA, minHeight, minWidth, sigma);
 
         List<int[]> segments = PeakSegmenter.segments(smooth, returnLevel, hysteresis);
         List<Measured> found = new ArrayList<>();
@@ -423,7 +424,7 @@ public final class PeakDetector {
      */
     private record Cluster(double[] t, double[] raw, double[] smooth, double[] concavity,
                            double level, double prominence, int reach, double typicalSigmaS,
-                           double minHeight, double minWidth) {
+                           double minHeight, double minWidth, double noiseSd) {
 
         /** The measured zones of a confirmed cluster, or null to keep the valley segments. */
         List<Measured> resolve(List<int[]> region) {
@@ -474,6 +475,7 @@ public final class PeakDetector {
             GaussianClusterFit.Result fewer = GaussianClusterFit.fit(t, raw, first, last, fewerStart,
                     typicalSigmaS, minSigma, maxSigma);
             GaussianClusterFit.Result chosen = null;
+            double[] chosenStart = fewerStart;
             if (shoulder && fewer != null) {
                 double[] start = new double[moreStart.size()];
                 for (int k = 0; k < start.length; k++) {
@@ -485,13 +487,38 @@ public final class PeakDetector {
                 if (more != null && plausible(more)
                         && GaussianClusterFit.extraZonesPValue(fewer, more) <= SignalLimits.SHOULDER_F_TEST_ALPHA) {
                     chosen = more;
+                    chosenStart = start;
                 }
-                if (chosen != null && region.size() == 1 && oneSkewedZone(first, last, more, minSigma, maxSigma)) {
-                    return null; // a shoulder that is the diffuse flank of one skewed zone
+                if (chosen != null && region.size() == 1) {
+                    SkewedZoneFit one = SkewedZoneFit.fit(t, raw, first, last, minSigma, maxSigma);
+                    if (oneSkewedZone(one, more)) {
+                        // the shoulder may be the diffuse flank of one skewed zone, or a second
+                        // skewed zone: the split must beat one skewed zone on its own
+                        SkewedClusterFit.Result split = SkewedClusterFit.fit(t, raw, first, last, start,
+                                typicalSigmaS, minSigma, maxSigma);
+                        if (split != null && plausible(split) && GaussianClusterFit.extraParametersPValue(
+                                one.residualSumOfSquares(), split.residualSumOfSquares(),
+                                split.parameters() - SkewedZoneFit.PARAMETERS, split.points() - split.parameters())
+                                <= SignalLimits.SKEWED_SPLIT_F_TEST_ALPHA) {
+                            return skewedZones(split, first, last);
+                        }
+                        return null;
+                    }
                 }
             }
             if (chosen == null && overlapped && fewer != null && plausible(fewer)) {
                 chosen = fewer;
+            }
+            // skewed zones instead of Gaussians, started from the same tops as the Gaussians (the
+            // maxima of the data: a skewed zone's top is its sharp flank, where Gaussians do not put
+            // their apexes)
+            GaussianClusterFit.Result reference = chosen != null ? chosen : overlapped ? fewer : null;
+            if (reference != null) {
+                SkewedClusterFit.Result skewed = skewedAlternative(reference, chosenStart, first, last, minSigma,
+                        maxSigma);
+                if (skewed != null) {
+                    return skewedZones(skewed, first, last);
+                }
             }
             if (chosen == null) {
                 return null;
@@ -539,11 +566,71 @@ public final class PeakDetector {
          * dispersion gives a zone one long flank, which a sum of Gaussians follows with a false extra
          * zone.
          */
-        private boolean oneSkewedZone(int first, int last, GaussianClusterFit.Result zones, double minSigma,
-                                      double maxSigma) {
-            SkewedZoneFit skewed = SkewedZoneFit.fit(t, raw, first, last, minSigma, maxSigma);
+        private static boolean oneSkewedZone(SkewedZoneFit skewed, GaussianClusterFit.Result zones) {
             return skewed != null && zones.parameters() > SkewedZoneFit.PARAMETERS
                     && skewed.pValueAgainst(zones) > SignalLimits.SHOULDER_F_TEST_ALPHA;
+        }
+
+        /**
+         * The same zones as skewed ones ({@link SkewedClusterFit}) when they describe the cluster
+         * clearly better than the Gaussians: a lower Bayesian information criterion
+         * n ln(RSS/n) + p ln n (Schwarz, Ann. Statist. 6 (1978) 461) by at least
+         * {@link SignalLimits#SKEWED_CLUSTER_MIN_GAIN}, and every zone reportable; null otherwise.
+         * Zones of electromigration dispersion have long diffuse flanks that run into the
+         * neighbour, and Gaussians put both the zones and their shares of the signal in the wrong
+         * places.
+         */
+        private SkewedClusterFit.Result skewedAlternative(GaussianClusterFit.Result gaussians, double[] start,
+                                                         int first, int last, double minSigma, double maxSigma) {
+            double residualVariance = gaussians.residualSumOfSquares() / (gaussians.points() - gaussians.parameters());
+            if (!(residualVariance > SignalLimits.SKEWED_CLUSTER_MISFIT_RATIO * noiseSd * noiseSd)) {
+                return null; // the Gaussians fit to the noise: nothing for skewed zones to explain
+            }
+            SkewedClusterFit.Result skewed = SkewedClusterFit.fit(t, raw, first, last, start, typicalSigmaS,
+                    minSigma, maxSigma);
+            if (skewed == null || !plausible(skewed)) {
+                return null;
+            }
+            int n = gaussians.points();
+            double bicGaussians = n * Math.log(gaussians.residualSumOfSquares() / n) + gaussians.parameters() * Math.log(n);
+            double bicSkewed = n * Math.log(skewed.residualSumOfSquares() / n) + skewed.parameters() * Math.log(n);
+            return bicSkewed <= bicGaussians - SignalLimits.SKEWED_CLUSTER_MIN_GAIN ? skewed : null;
+        }
+
+        /** The measured zones of a skewed-cluster fit; the centre of each is its first moment μ + τ. */
+        private List<Measured> skewedZones(SkewedClusterFit.Result fit, int first, int last) {
+            List<SkewedClusterFit.Zone> zones = fit.zones();
+            List<Measured> out = new ArrayList<>(zones.size());
+            double start = t[first];
+            for (int k = 0; k < zones.size(); k++) {
+                SkewedClusterFit.Zone z = zones.get(k);
+                double end = k + 1 < zones.size() ? fit.dominanceBoundaryS(k) : t[last];
+                double apex = z.apexTimeS();
+                double height = z.value(apex);
+                double shape = SignalLimits.CENTRE_SHAPE_FACTOR * Math.abs(z.firstMomentS() - apex);
+                double centreSd = Math.hypot(z.firstMomentSdS(), shape);
+                out.add(new Measured(apex, z.centreSdS(), height, start, end, z.areaTimesS(), z.widthHalfS(), true,
+                        height, null, z.firstMomentS(), centreSd, Double.NaN));
+                start = end;
+            }
+            return out;
+        }
+
+        /** Every skewed zone reportable (height and width) and no two closer than the minimum separation. */
+        private boolean plausible(SkewedClusterFit.Result fit) {
+            List<SkewedClusterFit.Zone> zones = fit.zones();
+            for (int k = 0; k < zones.size(); k++) {
+                SkewedClusterFit.Zone z = zones.get(k);
+                double apex = z.apexTimeS();
+                if (!(z.value(apex) >= minHeight) || !(z.widthHalfS() >= minWidth)) {
+                    return false;
+                }
+                if (k > 0 && z.firstMomentS() - zones.get(k - 1).firstMomentS()
+                        < SignalLimits.SHOULDER_MIN_SEPARATION_SIGMAS * z.sigmaS()) {
+                    return false;
+                }
+            }
+            return true;
         }
 
         /** Every zone reportable (height and width) and no two closer than the minimum separation. */

@@ -58,6 +58,14 @@ final class SignalLimits {
      *  clipping reach would cut across real baseline curvature). */
     static final double GROUP_MAX_SPAN_IN_WIDTHS = 40.0;
 
+    /** A single zone that stands above the clipped baseline over more than this many typical widths
+     *  gets the chord of a group too (a concentrated zone with a long diffuse flank; a Gaussian
+     *  zone a thousand noise SDs tall stands about 3.1 widths above the baseline's noise). */
+    static final double WIDE_ZONE_IN_WIDTHS = 4.0;
+
+    /** Step of the walk down a group's outer flanks, as a fraction of the group's length. */
+    static final double WALK_STEP_OF_GROUP = 0.25;
+
     /** A group holding a dip (see {@code ClusterBaseline}) may span this many times the longest
      *  group: the sagging clipped baseline beside a dip is known to be wrong, a long chord only
      *  possibly so (common practice). */
@@ -230,6 +238,22 @@ final class SignalLimits {
     /** Significance level of the extra-sum-of-squares F-test that accepts the extra zones
      *  (common practice: a strict level, since the curvature has already flagged the cluster). */
     static final double SHOULDER_F_TEST_ALPHA = 1e-3;
+
+    /** Significance level at which two skewed zones replace one skewed zone that already explains
+     *  a shoulder as well as Gaussians do (a modelling choice, stricter than
+     *  {@link #SHOULDER_F_TEST_ALPHA}: real dispersion profiles are only roughly exponential, and
+     *  their misfit must not pass for a second zone). */
+    static final double SKEWED_SPLIT_F_TEST_ALPHA = 1e-6;
+
+    /** Skewed zones are tried on a cluster only where the Gaussians leave a residual variance above
+     *  this multiple of the noise variance (a modelling choice: Gaussian zones that fit leave about
+     *  the noise variance, and the skewed fit costs several non-linear fits). */
+    static final double SKEWED_CLUSTER_MISFIT_RATIO = 2.0;
+
+    /** Least fall of the Bayesian information criterion (nats) for which skewed zones replace the
+     *  Gaussians of a cluster (a modelling choice: Kass &amp; Raftery, J. Am. Stat. Assoc. 90 (1995)
+     *  773 call a difference above 10 very strong evidence; from memory). */
+    static final double SKEWED_CLUSTER_MIN_GAIN = 10.0;
 
     /** Fitted zones closer than this many SDs (the larger of the two) are one zone whose shape
      *  the Gaussian does not fit, not two (two equal zones 1σ apart show no curvature minimum

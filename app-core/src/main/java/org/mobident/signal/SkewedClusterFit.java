@@ -1,0 +1,409 @@
+package org.mobident.signal;
+
+import java.util.ArrayList;
+import java.util.List;
+import org.apache.commons.math3.exception.MathIllegalStateException;
+import org.apache.commons.math3.fitting.leastsquares.LeastSquaresBuilder;
+import org.apache.commons.math3.fitting.leastsquares.LeastSquaresOptimizer;
+import org.apache.commons.math3.fitting.leastsquares.LeastSquaresProblem;
+import org.apache.commons.math3.fitting.leastsquares.LevenbergMarquardtOptimizer;
+import org.apache.commons.math3.fitting.leastsquares.MultivariateJacobianFunction;
+import org.apache.commons.math3.fitting.leastsquares.ParameterValidator;
+import org.apache.commons.math3.linear.Array2DRowRealMatrix;
+import org.apache.commons.math3.linear.ArrayRealVector;
+import org.apache.commons.math3.linear.RealMatrix;
+import org.apache.commons.math3.linear.SingularMatrixException;
+import org.apache.commons.math3.util.Pair;
+
+/**
+ * Least-squares fit of a sum of skewed zones to one cluster: K exponentially modified Gaussians
+ * (Grushka, Anal. Chem. 44 (1972) 1733) that share their Gaussian SD σ and their skew direction,
+ * each with its own area A_k, Gaussian centre μ_k and exponential time constant a_k = |τ_k|.
+ *
+ * <p><b>Why.</b> Two analytes one or two per cent apart in mobility, one of them concentrated, give
+ * two zones whose diffuse flanks (electromigration dispersion: Mikkers, Everaerts &amp; Verheggen,
+ * J. Chromatogr. 169 (1979) 1) run into each other. A sum of Gaussians follows such a pair with
+ * zones at the wrong places, and the moments of the samples on either side of the valley mix the
+ * two zones; the sum of skewed zones recovers each zone and its first moment μ_k + τ_k (Grushka
+ * 1972), the time that belongs to its mobility.
+ *
+ * <p><b>Model.</b> {@code f(t) = Σ_k A_k g(t − μ_k; σ, s·a_k)} with g the unit-area EMG of
+ * {@link SkewedZoneFit#shape} and s = ±1 the common direction (tailing +1, fronting −1; both are
+ * fitted and the better kept): zones one or two per cent apart sit on the same side of the
+ * background co-ion's mobility, so their dispersion has the same direction. The
+ * zones are close in time, so diffusion gives them the same σ (a modelling choice that takes a
+ * parameter per extra zone away). Parameters by Levenberg–Marquardt (Apache Commons Math) with
+ * the analytic Jacobian of {@link SkewedZoneFit}; a_k is kept at least
+ * {@link SkewedZoneFit#MIN_TAU_FRACTION} of the starting σ.
+ *
+ * <p><b>Uncertainty.</b> s²(JᵀJ)⁻¹ at the optimum with s² = RSS/(n − p) (Bates &amp; Watts 1988
+ * §2.3; from memory); the centre's variance is Var(μ) + Var(a) + 2s·Cov(μ, a).
+ */
+final class SkewedClusterFit {
+
+    /** Up to this many zones, every owner of the long flank is tried as a start (2^K starts). */
+    private static final int MAX_ZONES_FOR_ALL_STARTS = 3;
+    /** τ of a zone started as nearly symmetric, as a fraction of the starting σ. */
+    private static final double SMALL_TAU_FRACTION = 0.5;
+    /** Caps of one fit. */
+    private static final int MAX_EVALUATIONS = 1500;
+    private static final int MAX_ITERATIONS = 300;
+    /** Relative threshold below which (JᵀJ) is treated as singular. */
+    private static final double SINGULARITY_THRESHOLD = 1e-14;
+    /** Steps per σ of the search for a zone's apex and half-height points. */
+    private static final int STEPS_PER_SIGMA = 8;
+    /** Bisection steps for a crossing (2⁻⁴⁰ of the bracket). */
+    private static final int BISECTION_STEPS = 40;
+    private static final double SQRT_2PI = Math.sqrt(2 * Math.PI);
+
+    /**
+     * One fitted skewed zone.
+     *
+     * @param areaTimesS A, signal units × s
+     * @param centreS    μ, the Gaussian part's centre, s
+     * @param sigmaS     σ, s
+     * @param tauS       τ, s, signed (negative: fronting)
+     * @param firstMomentSdS standard uncertainty of μ + τ, s
+     * @param centreSdS  standard uncertainty of μ, s
+     */
+    record Zone(double areaTimesS, double centreS, double sigmaS, double tauS, double firstMomentSdS,
+                double centreSdS) {
+
+        /** The first moment μ + τ (Grushka 1972), s. */
+        double firstMomentS() {
+            return centreS + tauS;
+        }
+
+        /** The zone's value at a time. */
+        double value(double timeS) {
+            return areaTimesS * SkewedZoneFit.shape(timeS - centreS, sigmaS, tauS);
+        }
+
+        /** The time of the zone's maximum (between μ and the first moment for an EMG), s. */
+        double apexTimeS() {
+            double s = Math.signum(tauS);
+            double step = sigmaS / STEPS_PER_SIGMA;
+            double reach = Math.min(Math.abs(tauS), 3 * sigmaS) + sigmaS;
+            double best = centreS;
+            double bestValue = value(centreS);
+            for (double x = -sigmaS; x <= reach; x += step) {
+                double time = centreS + s * x;
+                double v = value(time);
+                if (v > bestValue) {
+                    bestValue = v;
+                    best = time;
+                }
+            }
+            // parabola through the best grid point and its neighbours
+            double l = value(best - step);
+            double r = value(best + step);
+            double denominator = l - 2 * bestValue + r;
+            if (denominator < 0) {
+                double shift = 0.5 * (l - r) / denominator;
+                if (Math.abs(shift) <= 1) {
+                    best += shift * step;
+                }
+            }
+            return best;
+        }
+
+        /** The zone's full width at half its maximum, s. */
+        double widthHalfS() {
+            double apex = apexTimeS();
+            double half = 0.5 * value(apex);
+            return crossing(apex, half, +1) - crossing(apex, half, -1);
+        }
+
+        private double crossing(double apex, double level, int direction) {
+            double step = sigmaS / 2;
+            double inside = apex;
+            double outside = apex + direction * step;
+            int guard = 0;
+            while (value(outside) > level && guard++ < 10_000) {
+                inside = outside;
+                outside += direction * step;
+            }
+            for (int k = 0; k < BISECTION_STEPS; k++) {
+                double mid = 0.5 * (inside + outside);
+                if (value(mid) > level) {
+                    inside = mid;
+                } else {
+                    outside = mid;
+                }
+            }
+            return 0.5 * (inside + outside);
+        }
+    }
+
+    /**
+     * A converged fit.
+     *
+     * @param zones                zones in order of first moment
+     * @param residualSumOfSquares RSS, signal units²
+     * @param points               samples fitted
+     */
+    record Result(List<Zone> zones, double residualSumOfSquares, int points) {
+        Result {
+            zones = List.copyOf(zones);
+        }
+
+        int parameters() {
+            return 1 + 3 * zones.size();
+        }
+
+        /** Where zone k+1 starts to dominate zone k: the crossing of their values between their apexes. */
+        double dominanceBoundaryS(int k) {
+            Zone a = zones.get(k);
+            Zone b = zones.get(k + 1);
+            double lo = a.apexTimeS();
+            double hi = b.apexTimeS();
+            if (!(hi > lo)) {
+                return 0.5 * (a.firstMomentS() + b.firstMomentS());
+            }
+            if (a.value(lo) - b.value(lo) <= 0 || a.value(hi) - b.value(hi) >= 0) {
+                return lo + (hi - lo) * a.sigmaS() / (a.sigmaS() + b.sigmaS());
+            }
+            for (int i = 0; i < BISECTION_STEPS; i++) {
+                double mid = 0.5 * (lo + hi);
+                if (a.value(mid) > b.value(mid)) {
+                    lo = mid;
+                } else {
+                    hi = mid;
+                }
+            }
+            return 0.5 * (lo + hi);
+        }
+    }
+
+    private SkewedClusterFit() {
+    }
+
+    /**
+     * Fits {@code startApexS.length} skewed zones to {@code v[first..last]}.
+     *
+     * @param t           sample times, s
+     * @param v           baseline-corrected signal, peaks up
+     * @param first       first sample (inclusive)
+     * @param last        last sample (inclusive)
+     * @param startApexS  starting apex times, one per zone, increasing
+     * @param startSigmaS starting σ, s
+     * @param minSigmaS   least σ, s (&gt; 0)
+     * @param maxSigmaS   largest σ, s
+     * @return the fit, or null when the samples show no skew, are too few, or the fit fails
+     */
+    static Result fit(double[] t, double[] v, int first, int last, double[] startApexS, double startSigmaS,
+                      double minSigmaS, double maxSigmaS) {
+        int k = startApexS.length;
+        int n = last - first + 1;
+        int parameters = 1 + 3 * k;
+        if (k == 0 || n <= parameters + 1) {
+            return null;
+        }
+        double ref = t[first];
+        double span = t[last] - ref;
+        double[] u = new double[n];
+        double[] target = new double[n];
+        double[] w = new double[n];
+        double area = 0;
+        for (int i = 0; i < n; i++) {
+            u[i] = t[first + i] - ref;
+            target[i] = v[first + i];
+        }
+        for (int i = 0; i < n; i++) {
+            double left = i > 0 ? u[i] - u[i - 1] : 0;
+            double right = i < n - 1 ? u[i + 1] - u[i] : 0;
+            w[i] = 0.5 * (left + right) * Math.max(0.0, target[i]);
+            area += w[i];
+        }
+        if (!(area > 0)) {
+            return null;
+        }
+        Result tailing = fit(u, target, w, area, ref, span, +1, startApexS, startSigmaS, minSigmaS, maxSigmaS);
+        Result fronting = fit(u, target, w, area, ref, span, -1, startApexS, startSigmaS, minSigmaS, maxSigmaS);
+        if (tailing == null || fronting == null) {
+            return tailing == null ? fronting : tailing;
+        }
+        return tailing.residualSumOfSquares() <= fronting.residualSumOfSquares() ? tailing : fronting;
+    }
+
+    /** One fit with the skew direction {@code sign} (+1 tailing, −1 fronting); offsets u from {@code ref}. */
+    private static Result fit(double[] u, double[] target, double[] w, double area, double ref, double span,
+                              double sign, double[] startApexS, double startSigmaS, double minSigmaS,
+                              double maxSigmaS) {
+        int k = startApexS.length;
+        int n = u.length;
+        int parameters = 1 + 3 * k;
+        double sigma0 = Math.min(maxSigmaS, Math.max(minSigmaS, startSigmaS));
+        double minTau = SkewedZoneFit.MIN_TAU_FRACTION * sigma0;
+        // two starts, the better fit kept: τ of each zone from the spread of the samples nearest to
+        // its apex, and one common τ from the spread of the whole cluster (a long diffuse flank runs
+        // under the neighbour's apex, where the nearest samples give it to the wrong zone); the
+        // Gaussian centres at the apexes, the areas by linear least squares for those shapes
+        double[] shareArea = new double[k];
+        double[] shareMoment = new double[k];
+        double moment = 0;
+        int tallest = 0;
+        for (int i = 0; i < n; i++) {
+            int nearest = 0;
+            for (int j = 1; j < k; j++) {
+                if (Math.abs(u[i] - (startApexS[j] - ref)) < Math.abs(u[i] - (startApexS[nearest] - ref))) {
+                    nearest = j;
+                }
+            }
+            shareArea[nearest] += w[i];
+            shareMoment[nearest] += w[i] * u[i];
+            moment += w[i] * u[i];
+            if (target[i] > target[tallest]) {
+                tallest = i;
+            }
+        }
+        double commonTau = Math.max(minTau, Math.min(span, Math.abs(moment / area - u[tallest])));
+        double[] byShares = new double[parameters];
+        double[] common = new double[parameters];
+        byShares[0] = sigma0;
+        common[0] = sigma0;
+        for (int j = 0; j < k; j++) {
+            double apex = Math.min(span, Math.max(0, startApexS[j] - ref));
+            double centroid = shareArea[j] > 0 ? shareMoment[j] / shareArea[j] : apex;
+            byShares[2 + 3 * j] = apex;
+            byShares[3 + 3 * j] = Math.max(minTau, Math.min(span, Math.abs(centroid - apex)));
+            common[2 + 3 * j] = apex;
+            common[3 + 3 * j] = commonTau;
+        }
+        List<double[]> starts = new ArrayList<>();
+        starts.add(byShares);
+        starts.add(common);
+        if (k <= MAX_ZONES_FOR_ALL_STARTS) {
+            // every zone either nearly symmetric or with the common τ: the long flank belongs to one
+            // of the zones, and a local search from the wrong owner does not find the right one
+            // (an owner's τ reaches from its apex to the centre of the whole cluster)
+            double centroid = moment / area;
+            for (int mask = 1; mask < (1 << k); mask++) {
+                double[] start = common.clone();
+                for (int j = 0; j < k; j++) {
+                    double owner = Math.max(minTau, Math.min(span, Math.abs(centroid - start[2 + 3 * j])));
+                    start[3 + 3 * j] = (mask & (1 << j)) != 0 ? owner : Math.max(minTau, SMALL_TAU_FRACTION * sigma0);
+                }
+                starts.add(start);
+            }
+        }
+        Result best = null;
+        for (double[] start : starts) {
+            if (!startAreas(u, target, sign, start, k, area)) {
+                continue;
+            }
+            Result r = solve(u, target, ref, span, sign, start, k, area, minTau, minSigmaS, maxSigmaS);
+            if (r != null && (best == null || r.residualSumOfSquares() < best.residualSumOfSquares())) {
+                best = r;
+            }
+        }
+        return best;
+    }
+
+    /** Sets the starting areas of {@code start} by linear least squares for its shapes, floored at a
+     *  twentieth of the cluster's area; false when the shapes are not independent. */
+    private static boolean startAreas(double[] u, double[] target, double sign, double[] start, int k, double area) {
+        int n = u.length;
+        double[][] x = new double[n][k];
+        for (int i = 0; i < n; i++) {
+            for (int j = 0; j < k; j++) {
+                x[i][j] = SkewedZoneFit.shape(u[i] - start[2 + 3 * j], start[0], sign * start[3 + 3 * j]);
+            }
+        }
+        double[] a;
+        try {
+            a = new org.apache.commons.math3.linear.QRDecomposition(new Array2DRowRealMatrix(x, false)).getSolver()
+                    .solve(new ArrayRealVector(target, false)).toArray();
+        } catch (SingularMatrixException e) {
+            return false;
+        }
+        for (int j = 0; j < k; j++) {
+            start[1 + 3 * j] = Double.isFinite(a[j]) ? Math.max(a[j], 0.05 * area) : 0.05 * area;
+        }
+        return true;
+    }
+
+    /** Levenberg–Marquardt from one start; null when it fails. */
+    private static Result solve(double[] u, double[] target, double ref, double span, double sign, double[] start,
+                                int k, double area, double minTau, double minSigmaS, double maxSigmaS) {
+        int n = u.length;
+        int parameters = 1 + 3 * k;
+        double minArea = 1e-6 * area;
+        ParameterValidator validator = p -> {
+            double[] q = p.toArray();
+            q[0] = Math.min(maxSigmaS, Math.max(minSigmaS, q[0]));
+            for (int j = 0; j < k; j++) {
+                q[1 + 3 * j] = Math.max(minArea, q[1 + 3 * j]);
+                q[2 + 3 * j] = Math.min(span, Math.max(0, q[2 + 3 * j]));
+                q[3 + 3 * j] = Math.min(span, Math.max(minTau, q[3 + 3 * j]));
+            }
+            return new ArrayRealVector(q, false);
+        };
+        LeastSquaresProblem problem = new LeastSquaresBuilder()
+                .start(start)
+                .model(model(u, k, sign))
+                .target(target)
+                .parameterValidator(validator)
+                .lazyEvaluation(false)
+                .maxEvaluations(MAX_EVALUATIONS)
+                .maxIterations(MAX_ITERATIONS)
+                .build();
+        LeastSquaresOptimizer.Optimum optimum;
+        RealMatrix covariance;
+        try {
+            optimum = new LevenbergMarquardtOptimizer().optimize(problem);
+            covariance = optimum.getCovariances(SINGULARITY_THRESHOLD);
+        } catch (MathIllegalStateException | SingularMatrixException e) {
+            return null;
+        }
+        double[] p = optimum.getPoint().toArray();
+        double rss = optimum.getCost() * optimum.getCost();
+        if (!Double.isFinite(rss)) {
+            return null;
+        }
+        double residualVariance = rss / (n - parameters);
+        List<Zone> zones = new ArrayList<>(k);
+        for (int j = 0; j < k; j++) {
+            int c = 2 + 3 * j;
+            int a = 3 + 3 * j;
+            double varCentre = covariance.getEntry(c, c) * residualVariance;
+            double varMoment = (covariance.getEntry(c, c) + covariance.getEntry(a, a)
+                    + 2 * sign * covariance.getEntry(c, a)) * residualVariance;
+            if (!(varCentre >= 0) || !(varMoment >= 0) || !Double.isFinite(p[c])) {
+                return null;
+            }
+            zones.add(new Zone(p[1 + 3 * j], ref + p[c], p[0], sign * p[a], Math.sqrt(varMoment),
+                    Math.sqrt(varCentre)));
+        }
+        zones.sort(java.util.Comparator.comparingDouble(Zone::firstMomentS));
+        return new Result(zones, rss, n);
+    }
+
+    /** The sum of EMGs and its Jacobian (parameters σ, then A, μ, a per zone). */
+    private static MultivariateJacobianFunction model(double[] u, int k, double s) {
+        return point -> {
+            double[] p = point.toArray();
+            double sigma = p[0];
+            int n = u.length;
+            double[] value = new double[n];
+            double[][] jacobian = new double[n][1 + 3 * k];
+            for (int j = 0; j < k; j++) {
+                double area = p[1 + 3 * j];
+                double mu = p[2 + 3 * j];
+                double a = p[3 + 3 * j];
+                for (int i = 0; i < n; i++) {
+                    double x = s * (u[i] - mu);
+                    double g = SkewedZoneFit.shape(u[i] - mu, sigma, s * a);
+                    double phi = Math.exp(-0.5 * (x / sigma) * (x / sigma)) / (sigma * SQRT_2PI);
+                    value[i] += area * g;
+                    jacobian[i][0] += area * ((sigma / (a * a)) * (g - phi) - phi * x / (sigma * a));
+                    jacobian[i][1 + 3 * j] = g;
+                    jacobian[i][2 + 3 * j] = -s * area * (phi - g) / a;
+                    jacobian[i][3 + 3 * j] = area * (g * (x / (a * a) - 1 / a - sigma * sigma / (a * a * a))
+                            + phi * sigma * sigma / (a * a * a));
+                }
+            }
+            return new Pair<>(new ArrayRealVector(value, false), new Array2DRowRealMatrix(jacobian, false));
+        };
+    }
+}

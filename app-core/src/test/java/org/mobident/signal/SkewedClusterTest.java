@@ -1,0 +1,109 @@
+package org.mobident.signal;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertNotNull;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.util.List;
+import org.junit.jupiter.api.Test;
+import org.mobident.trace.Detection;
+
+/**
+ * Pairs of skewed zones (electromigration dispersion) one or two per cent apart, and single zones
+ * with a long diffuse flank: the zones and their first moments must be recovered.
+ *
+ * <p>Check values: the first moment of an exponentially modified Gaussian is t_G + τ and its area
+ * the area parameter (Grushka, Anal. Chem. 44 (1972) 1733); the zones below are built from those
+ * definitions, so the expected centre of each is known exactly.
+ */
+class SkewedClusterTest {
+
+    private static void addEmg(double[] t, double[] y, double area, double firstMomentS, double sigmaS, double tauS) {
+        double centre = firstMomentS - tauS; // Grushka 1972: first moment = t_G + τ
+        for (int i = 0; i < t.length; i++) {
+            y[i] += area * SkewedZoneFit.shape(t[i] - centre, sigmaS, tauS);
+        }
+    }
+
+    @Test
+    void twoFrontingZonesAreRecoveredByTheFit() {
+        double[] t = Synthetic.regularTimes(85, 0.04, 750);
+        double[] y = new double[t.length];
+        // a concentrated zone with a long diffuse front and a smaller one 1 % later
+        addEmg(t, y, 2.4, 103.66, 0.30, -3.6);
+        addEmg(t, y, 0.30, 104.70, 0.30, -1.0);
+        Synthetic.addNoise(y, 0.002, 11);
+        SkewedClusterFit.Result fit = SkewedClusterFit.fit(t, y, 0, t.length - 1, new double[] {105.24, 106.72},
+                0.4, 0.05, 4.0);
+        assertNotNull(fit);
+        assertEquals(2, fit.zones().size());
+        List<SkewedClusterFit.Zone> z = fit.zones();
+        assertEquals(103.66, z.get(0).firstMomentS(), 0.05);
+        assertEquals(104.70, z.get(1).firstMomentS(), 0.05);
+        assertEquals(2.4, z.get(0).areaTimesS(), 0.05);
+        assertEquals(0.30, z.get(1).areaTimesS(), 0.02);
+        assertTrue(z.get(0).tauS() < 0 && z.get(1).tauS() < 0, "both fronting");
+        // the uncertainties reflect the noise: a few hundredths of a second here, not zero
+        assertTrue(z.get(0).firstMomentSdS() > 0 && z.get(0).firstMomentSdS() < 0.05);
+        // the larger zone's apex lies at its sharp flank, after its first moment
+        assertTrue(z.get(0).apexTimeS() > z.get(0).firstMomentS() + 2.0);
+    }
+
+    @Test
+    void aTailingPairIsFittedAsTailing() {
+        double[] t = Synthetic.regularTimes(40, 0.05, 600);
+        double[] y = new double[t.length];
+        addEmg(t, y, 1.0, 50.0, 0.25, 1.5);
+        addEmg(t, y, 0.6, 51.0, 0.25, 0.8);
+        Synthetic.addNoise(y, 0.001, 5);
+        SkewedClusterFit.Result fit = SkewedClusterFit.fit(t, y, 0, t.length - 1, new double[] {48.6, 50.3},
+                0.3, 0.05, 3.0);
+        assertNotNull(fit);
+        assertEquals(50.0, fit.zones().get(0).firstMomentS(), 0.05);
+        assertEquals(51.0, fit.zones().get(1).firstMomentS(), 0.05);
+        assertTrue(fit.zones().get(0).tauS() > 0);
+    }
+
+    @Test
+    void theDetectorReportsBothZonesOfAnOverlappedSkewedPairAtTheirCentres() {
+        double[] t = Synthetic.regularTimes(60, 0.04, 2000);
+        double[] y = new double[t.length];
+        addEmg(t, y, 2.4, 103.66, 0.30, -3.6);
+        addEmg(t, y, 0.30, 104.70, 0.30, -1.0);
+        // an isolated reference zone elsewhere sets the typical width
+        Synthetic.addGaussian(t, y, 125.0, 0.3, 0.30);
+        Synthetic.addNoise(y, 0.002, 3);
+        List<Peak> peaks = PeakDetector.analyse(Synthetic.trace(t, y), Detection.DIRECT, PeakSettings.DEFAULT).peaks();
+        Peak big = nearest(peaks, 103.66);
+        Peak small = nearest(peaks, 104.70);
+        assertTrue(big != small, "two peaks: " + peaks);
+        assertEquals(103.66, big.centreTimeS(), 0.15);
+        assertEquals(104.70, small.centreTimeS(), 0.15);
+    }
+
+    @Test
+    void aLongDiffuseFlankIsNotTakenIntoTheBaseline() {
+        // one concentrated zone, τ = 4 s against a typical width of 0.7 s: the clipped baseline rises
+        // into its front; the zone's own chord restores it, and the centre stays the first moment
+        double[] t = Synthetic.regularTimes(50, 0.04, 3000);
+        double[] y = new double[t.length];
+        addEmg(t, y, 2.0, 100.0, 0.30, -4.0);
+        Synthetic.addGaussian(t, y, 140.0, 0.2, 0.30);
+        Synthetic.addGaussian(t, y, 70.0, 0.2, 0.30);
+        Synthetic.addNoise(y, 0.002, 9);
+        List<Peak> peaks = PeakDetector.analyse(Synthetic.trace(t, y), Detection.DIRECT, PeakSettings.DEFAULT).peaks();
+        Peak zone = nearest(peaks, 100.0);
+        assertEquals(100.0, zone.centreTimeS(), 0.3, "centre of the skewed zone");
+        assertEquals(2.0, zone.area(), 0.2, "area of the skewed zone");
+    }
+
+    private static Peak nearest(List<Peak> peaks, double timeS) {
+        Peak best = null;
+        for (Peak p : peaks) {
+            if (best == null || Math.abs(p.migrationTimeS() - timeS) < Math.abs(best.migrationTimeS() - timeS)) {
+                best = p;
+            }
+        }
+        return best;
+    }
+}
