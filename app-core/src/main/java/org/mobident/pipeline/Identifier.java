@@ -42,6 +42,10 @@ public final class Identifier {
 
     /** Lowest S/N of the targeted search for a weak marker inside its window (a modelling choice). */
     static final double MARKER_SEARCH_MIN_SN = 1.5;
+    /** A zone found by the targeted marker search must be within this factor of the width a zone has
+     *  at its time (the median w½/t of the run's peaks of S/N 10 or more times its time; zones of
+     *  one run have about the same plate number, so w½ grows in proportion to t; a modelling choice). */
+    static final double MARKER_SEARCH_WIDTH_FACTOR = 2.5;
     /** The window must hold this many samples for the targeted search. */
     static final int MARKER_SEARCH_MIN_POINTS = 50;
 
@@ -303,12 +307,19 @@ public final class Identifier {
         List<Peak> weak = PeakDetector.analyse(window, c.detectionOrDirect(),
                 settings.peakSettings().withMinSignalToNoise(MARKER_SEARCH_MIN_SN)).peaks();
         List<Peak> out = new ArrayList<>(peaks);
+        double widthPerTime = typicalWidthPerTime(peaks);
         for (Peak w : weak) {
             boolean known = false;
             for (Peak p : peaks) {
                 known |= Math.abs(p.apexTimeS() - w.apexTimeS()) < Math.max(p.widthHalfS(), w.widthHalfS());
             }
-            if (!known) {
+            // a zone this faint must also be as wide as a zone there would be: noise found at S/N 1.5
+            // is mostly narrower or wider than that
+            double expected = widthPerTime * w.apexTimeS();
+            boolean zoneLike = !(expected > 0)
+                    || (w.widthHalfS() >= expected / MARKER_SEARCH_WIDTH_FACTOR
+                    && w.widthHalfS() <= expected * MARKER_SEARCH_WIDTH_FACTOR);
+            if (!known && zoneLike) {
                 out.add(w);
             }
         }
@@ -480,6 +491,22 @@ public final class Identifier {
             per.add(pos < 0 || h.match() == null ? null : h.match().matches().get(pos));
         }
         return LibraryMatcher.mix(per, choice.weights(), own, ms);
+    }
+
+    /** Median w½/t of the peaks of S/N 10 or more (NaN when there are none). */
+    private static double typicalWidthPerTime(List<Peak> peaks) {
+        double[] ratio = new double[peaks.size()];
+        int m = 0;
+        for (Peak p : peaks) {
+            if (p.signalToNoise() >= org.mobident.Tolerances.QUANTITATION_LIMIT_SIGNAL_TO_NOISE && p.apexTimeS() > 0) {
+                ratio[m++] = p.widthHalfS() / p.apexTimeS();
+            }
+        }
+        if (m == 0) {
+            return Double.NaN;
+        }
+        java.util.Arrays.sort(ratio, 0, m);
+        return m % 2 == 1 ? ratio[m / 2] : 0.5 * (ratio[m / 2 - 1] + ratio[m / 2]);
     }
 
     /** The temperature most library entries refer to (25 °C when none states one). */
