@@ -83,7 +83,7 @@ public final class BufferTransfer {
     public static final double MIN_ANCHOR_FRACTION = 0.1;
     /** Relative uncertainty of the ionic-strength shift for univalent ions (common practice; the simple correction reproduces KCl within ~1 % of μ up to 0.1 mol/L). */
     public static final double UNIVALENT_IONIC_STRENGTH_RELATIVE_SD = 0.1;
-    /** Relative uncertainty of the ionic-strength shift for multivalent or unknown charges (common practice; the correction underestimates their decrease). */
+    /** Relative uncertainty of the ionic-strength shift for multivalent or unknown charges (common practice; for |z| ≥ 2 the correction lowers more than the empirical exp(−0.77·√(|z|I)) of Friedl et al. 1995, by up to a third at I = 0.05 mol/L for z = 3, see IonicStrengthCorrection). */
     public static final double MULTIVALENT_IONIC_STRENGTH_RELATIVE_SD = 0.25;
     /** Relative uncertainty per kelvin of the viscosity (Walden) scaling (common practice: ions' conductivity temperature coefficients differ from water's fluidity by ~0.1–0.3 %/K). */
     public static final double WALDEN_RELATIVE_SD_PER_K = 0.002;
