@@ -82,18 +82,25 @@ public final class PredictCommand implements Callable<Integer> {
                 shown.add(p);
             }
         }
-        boolean remarks = shown.stream().anyMatch(p -> p.note() != null && !p.note().isBlank());
+        // per row only what is particular to that analyte; what the basis implies is said once below
+        boolean remarks = shown.stream().anyMatch(p -> !p.specificNote().isBlank());
         int basisWidth = shown.stream().mapToInt(p -> p.basis().description().length()).max().orElse(5);
         String layout = "%-16s %9s %9s %7s  " + (remarks ? "%-" + basisWidth + "s  %s" : "%s");
         o.println(String.format(Locale.ROOT, layout, "analyte", "measured", "predicted", "+/-", "basis", "remark")
                 .stripTrailing());
         for (PredictedMobility p : shown) {
             o.println(String.format(Locale.ROOT, layout, p.name(), num(p.measuredA()), num(p.predicted()),
-                    num(p.uncertainty()), p.basis().description(), p.note() == null ? "" : p.note()).stripTrailing());
+                    num(p.uncertainty()), p.basis().description(), p.specificNote()).stripTrailing());
         }
         o.println("basis: own pKa data = the library entry's pKa and limiting mobilities; reference pKa data = "
                 + "taken from --reference by name; charge only = a strong ion; no model = the pH change is not "
                 + "accounted for.");
+        List<String> missing = shown.stream().filter(p -> p.basis() == org.mobident.recheck.PredictionBasis.NO_MODEL)
+                .map(PredictedMobility::name).toList();
+        if (!missing.isEmpty()) {
+            o.println("No model data for " + String.join(", ", missing) + ". To fix: for each, "
+                    + org.mobident.recheck.ModelCoverage.HOW_TO_FIX + ".");
+        }
         o.println("Predictions are estimates: measure standards in the new buffer before relying on them.");
         if (out != null) {
             Library predicted = BufferTransfer.asLibrary(predictions, library, buffers.newBufferForLibrary());
@@ -103,8 +110,9 @@ public final class PredictCommand implements Callable<Integer> {
         return ExitCodes.OK;
     }
 
-    private static String num(double v) {
-        return String.format(Locale.ROOT, "%.2f", v);
+    /** Two decimals; "-" for a value that is not known (never "NaN" on a terminal). */
+    static String num(double v) {
+        return Double.isFinite(v) ? String.format(Locale.ROOT, "%.2f", v) : "-";
     }
 
     /**

@@ -94,6 +94,23 @@ public final class BufferTransfer {
 
     private static final double REFERENCE_C = BufferConditions.REFERENCE_TEMPERATURE_C;
 
+    /** Note of a prediction from the reference library's data (implied by {@link PredictionBasis#REFERENCE_MODEL}). */
+    static final String NOTE_REFERENCE = "model data from the reference library";
+    /** Note when the entry's own data were unusable and the reference library stood in. */
+    static final String NOTE_REFERENCE_USED = "reference library used";
+    /** Note of a charge-only prediction (implied by {@link PredictionBasis#CHARGE_ONLY}). */
+    static final String NOTE_STRONG = "strong ion of the stated charge assumed";
+    /** Note of a prediction without model data (implied by {@link PredictionBasis#NO_MODEL}). */
+    static final String NOTE_NO_MODEL = "no model data (no pka/limiting_mobility, not in the reference library, "
+            + "no charge): only viscosity and univalent ionic-strength transfer";
+    /** Start of the note when the entry's own model data could not be used. */
+    static final String NOTE_OWN_DATA_UNUSED = "the entry's pka/limiting_mobility were not used";
+    /** Note when the pH changes and nothing models it. */
+    static final String NOTE_PH_IGNORED = "the pH change is NOT accounted for";
+    /** The notes above: what the basis column already says. */
+    static final java.util.Set<String> BASIS_NOTES = java.util.Set.of(NOTE_REFERENCE, NOTE_REFERENCE_USED, NOTE_STRONG,
+            NOTE_NO_MODEL, NOTE_PH_IGNORED);
+
     private final Map<String, SpeciesModel> reference;
     private final PredictionUncertainty inputs;
     private final double assumedSpread;
@@ -273,10 +290,9 @@ public final class BufferTransfer {
         double variance = square(MULTIVALENT_IONIC_STRENGTH_RELATIVE_SD * (predicted - viscous))
                 + square(common) + square(NO_MODEL_RELATIVE_SD * predicted);
         double total = Math.sqrt(square(slope * spread) * predictiveFactor(entry.n()) + variance);
-        notes.add(0, "no model data (no pka/limiting_mobility, not in the reference library, no charge): "
-                + "only viscosity and univalent ionic-strength transfer");
+        notes.add(0, NOTE_NO_MODEL);
         if (Math.abs(bufferB.pH() - bufferA.pH()) > BufferSpec.SAME_VALUE_TOLERANCE) {
-            notes.add(1, "the pH change is NOT accounted for");
+            notes.add(1, NOTE_PH_IGNORED);
         }
         return new PredictedMobility(entry.name(), bufferA, bufferB, mu, spread, entry.n(), Double.NaN, Double.NaN,
                 predicted, total, Math.sqrt(variance), common, slope, Double.NaN, PredictionBasis.NO_MODEL,
@@ -352,6 +368,41 @@ public final class BufferTransfer {
         return max;
     }
 
+    /**
+     * What a prediction for the entry would rest on, and why a better source was not usable
+     * (null when nothing stood in the way), without predicting anything.
+     *
+     * @param e            the entry
+     * @param libraryLabel its library's file name, for messages
+     */
+    public Coverage coverage(LibraryEntry e, String libraryLabel) {
+        List<String> notes = new ArrayList<>();
+        Choice c = choose(e, libraryLabel, notes);
+        String problem = null;
+        List<String> said = new ArrayList<>(notes);
+        if (c.note != null) {
+            said.add(0, c.note);
+        }
+        for (String n : said) {
+            String first = n.split("; ")[0];
+            if (first.startsWith(NOTE_OWN_DATA_UNUSED)) {
+                problem = first;
+                break;
+            }
+        }
+        return new Coverage(e.name(), c.basis, problem);
+    }
+
+    /**
+     * What an entry's prediction rests on.
+     *
+     * @param name    the analyte
+     * @param basis   the model data that would be used
+     * @param problem why the entry's own pka/limiting_mobility could not be used, or null
+     */
+    public record Coverage(String name, PredictionBasis basis, String problem) {
+    }
+
     /** The model chosen for an entry, with the reason when a better source was unusable. */
     private record Choice(SpeciesModel model, PredictionBasis basis, String note) {
     }
@@ -361,24 +412,24 @@ public final class BufferTransfer {
         String problem = null;
         if (ownData) {
             if (e.charge() == 0) {
-                problem = "the entry's pka/limiting_mobility were not used: no charge is given";
+                problem = NOTE_OWN_DATA_UNUSED + ": no charge is given";
             } else {
                 try {
                     return new Choice(ReferenceIons.model(e, libraryLabel), PredictionBasis.ENTRY_MODEL, null);
                 } catch (InputException ex) {
-                    problem = "the entry's pka/limiting_mobility were not used: " + ex.problem();
+                    problem = NOTE_OWN_DATA_UNUSED + ": " + ex.problem();
                 }
             }
         }
         SpeciesModel ref = reference.get(key(e.name()));
         if (ref != null) {
             return new Choice(ref, PredictionBasis.REFERENCE_MODEL, problem == null
-                    ? "model data from the reference library" : problem + "; reference library used");
+                    ? NOTE_REFERENCE : problem + "; " + NOTE_REFERENCE_USED);
         }
         if (e.charge() != 0 && e.pKa().isEmpty()) {
             try {
                 return new Choice(ReferenceIons.model(e, libraryLabel), PredictionBasis.CHARGE_ONLY, problem == null
-                        ? "strong ion of the stated charge assumed" : problem + "; strong ion of the stated charge assumed");
+                        ? NOTE_STRONG : problem + "; " + NOTE_STRONG);
             } catch (InputException | IllegalArgumentException ex) {
                 problem = problem == null ? ex.getMessage() : problem;
             }

@@ -163,12 +163,21 @@ public final class Rechecker {
         Library libraryB = BufferTransfer.asLibrary(predictions, libraryA, bufferB);
         Map<String, Transfer> transfers = new LinkedHashMap<>();
         List<String> notes = new ArrayList<>();
+        List<String> withoutModel = new ArrayList<>();
         for (PredictedMobility p : predictions) {
             transfers.put(p.name(), new Transfer(p.predicted(), p.comparisonUncertainty(), p.shiftUncertainty(),
                     p.comparisonModelUncertainty(), p.basis()));
             if (p.basis() == PredictionBasis.NO_MODEL) {
-                notes.add("'" + p.name() + "' has no model data: " + p.note());
+                withoutModel.add(p.name());
             }
+        }
+        if (!withoutModel.isEmpty()) {
+            // once for all of them, not per peak or per analyte
+            notes.add("No model data for " + String.join(", ", withoutModel) + ": only temperature and ionic "
+                    + "strength are carried over" + (predictions.stream().anyMatch(p -> p.basis() == PredictionBasis.NO_MODEL
+                    && Math.abs(p.bufferB().pH() - p.bufferA().pH()) > BufferSpec.SAME_VALUE_TOLERANCE)
+                    ? ", the pH change is not accounted for" : "")
+                    + ". To fix: for each, " + ModelCoverage.HOW_TO_FIX + ".");
         }
         return check(rows, tableLabel, libraryA, libraryB, bufferB, true, transfers, predictions, List.of(), notes,
                 predictor, settings);
