@@ -68,12 +68,11 @@ public final class PredictCommand implements Callable<Integer> {
         PrintWriter o = spec.commandLine().getOut();
         Outputs.checkFree(overwrite, out);
         Library library = LibraryCsv.read(libraryFile);
-        BufferTransfer predictor = referenceFile == null ? BufferTransfer.withoutReference()
-                : BufferTransfer.withReference(LibraryCsv.read(referenceFile));
+        BufferTransfer predictor = ReferenceData.transfer(referenceFile);
         if (scan != null) {
             return scan(library, predictor, o);
         }
-        var bufferB = buffers.newBuffer();
+        var bufferB = ReferenceData.adjusted(buffers.newBuffer(), buffers, referenceFile, o);
         List<PredictedMobility> predictions = predictor.predictAll(library, buffers.oldBuffer(), bufferB);
         o.println("Predicted effective mobilities in " + bufferB.describe() + " (1e-9 m^2/(V s)).");
         List<PredictedMobility> shown = new ArrayList<>();

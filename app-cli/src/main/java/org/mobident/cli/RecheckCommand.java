@@ -77,16 +77,17 @@ public final class RecheckCommand implements Callable<Integer> {
         Outputs.checkFree(overwrite, csvOut, pairsOut);
         List<PeakTableRow> rows = PeakTableReader.read(tableFile);
         Library libraryA = LibraryCsv.read(libraryFile);
-        BufferTransfer predictor = referenceFile == null ? BufferTransfer.withoutReference()
-                : BufferTransfer.withReference(LibraryCsv.read(referenceFile));
+        BufferTransfer predictor = ReferenceData.transfer(referenceFile);
         RecheckResult result;
         if (newLibraryFile != null) {
             Library libraryB = LibraryCsv.read(newLibraryFile);
             result = Rechecker.withMeasuredLibrary(rows, tableFile.toString(), libraryA, buffers.oldBuffer(), libraryB,
-                    buffers.newGiven() ? buffers.newBuffer() : null, predictor, RecheckSettings.DEFAULT);
+                    buffers.newGiven() ? ReferenceData.adjusted(buffers.newBuffer(), buffers, referenceFile,
+                            spec.commandLine().getOut()) : null, predictor, RecheckSettings.DEFAULT);
         } else {
             result = Rechecker.withPredictedLibrary(rows, tableFile.toString(), libraryA, buffers.oldBuffer(),
-                    buffers.newBuffer(), predictor, RecheckSettings.DEFAULT);
+                    ReferenceData.adjusted(buffers.newBuffer(), buffers, referenceFile, spec.commandLine().getOut()),
+                    predictor, RecheckSettings.DEFAULT);
         }
         RecheckSummaryText.write(result, spec.commandLine().getOut());
         if (csvOut != null) {

@@ -9,6 +9,8 @@ import org.mobident.InputException;
 import org.mobident.chem.InputPropagation;
 import org.mobident.chem.BufferConditions;
 import org.mobident.chem.IonicStrengthCorrection;
+import org.mobident.chem.IonisationEnthalpies;
+import org.mobident.chem.PkaTemperature;
 import org.mobident.chem.MobilityPredictor;
 import org.mobident.chem.PredictionUncertainty;
 import org.mobident.chem.ReferenceIons;
@@ -26,7 +28,9 @@ import org.mobident.mobility.MobilityMath;
  * The model μ_model(buffer) of {@link MobilityPredictor} (Σαᵢμᵢ over the protolytic forms,
  * Tiselius 1930, Pospíchal, Gebauer &amp; Boček, Chem. Rev. 89 (1989) 419; Davies activity
  * correction of the pKa; Debye–Hückel–Onsager lowering of the limiting mobilities; Walden's rule
- * for temperature) is not used for its absolute value but for the <em>change</em> from A to B, so
+ * for the mobilities' temperature dependence; the pKa values moved to each buffer's temperature by
+ * the van 't Hoff equation, {@link PkaTemperature}, with the enthalpies of {@link #withEnthalpies})
+ * is not used for its absolute value but for the <em>change</em> from A to B, so
  * that whatever the model gets wrong in both buffers alike (a limiting mobility a few per cent off,
  * the buffer's own viscosity, wall effects in the measured value) cancels:
  * <ul>
@@ -58,9 +62,10 @@ import org.mobident.mobility.MobilityMath;
  *   <li>the library spread s carried by the transfer: (∂μ_B/∂μ_A · s)²·(1 + 1/n), the
  *       variance of a new run about a mean of n (1 when n is unknown); an entry without a
  *       spread gets {@link #assumedSpread()};</li>
- *   <li>the model inputs: each pKa (±{@link PredictionUncertainty#pKaSd()}, widened by
- *       {@value #PKA_TEMPERATURE_SD_PER_K} per kelvin of distance from 25 °C because the model
- *       ignores the temperature dependence of pKa) and each limiting mobility (relative
+ *   <li>the model inputs: each pKa (±{@link PredictionUncertainty#pKaSd()}, widened by the uncertainty of
+ *       its change between the two temperatures from the uncertainty of the enthalpy of
+ *       ionisation, {@link PkaTemperature#shiftSd}: small for a tabulated enthalpy, larger for
+ *       the class value that stands in for a missing one) and each limiting mobility (relative
  *       ±{@link PredictionUncertainty#relativeMobilitySd()}), propagated through the
  *       <em>transfer</em> by central differences, so that errors common to A and B cancel as they
  *       do in the ratio;</li>
@@ -87,8 +92,6 @@ public final class BufferTransfer {
     public static final double MULTIVALENT_IONIC_STRENGTH_RELATIVE_SD = 0.25;
     /** Relative uncertainty per kelvin of the viscosity (Walden) scaling (common practice: ions' conductivity temperature coefficients differ from water's fluidity by ~0.1–0.3 %/K). */
     public static final double WALDEN_RELATIVE_SD_PER_K = 0.002;
-    /** Extra pKa uncertainty per kelvin from 25 °C, pKa units/K (common practice: carboxylic acids 0.01–0.02 /K, amines more). */
-    public static final double PKA_TEMPERATURE_SD_PER_K = 0.015;
     /** Extra relative uncertainty without model data (modelling choice). */
     public static final double NO_MODEL_RELATIVE_SD = 0.05;
 
@@ -114,11 +117,34 @@ public final class BufferTransfer {
     private final Map<String, SpeciesModel> reference;
     private final PredictionUncertainty inputs;
     private final double assumedSpread;
+    private final IonisationEnthalpies enthalpies;
 
     private BufferTransfer(Map<String, SpeciesModel> reference, PredictionUncertainty inputs, double assumedSpread) {
+        this(reference, inputs, assumedSpread, IonisationEnthalpies.none());
+    }
+
+    private BufferTransfer(Map<String, SpeciesModel> reference, PredictionUncertainty inputs, double assumedSpread,
+                           IonisationEnthalpies enthalpies) {
         this.reference = reference;
         this.inputs = inputs;
         this.assumedSpread = assumedSpread;
+        this.enthalpies = enthalpies;
+    }
+
+    /**
+     * The same predictor with a table of enthalpies of ionisation for the temperature dependence of
+     * pKa (by analyte name; steps the table lacks get the class values of {@link PkaTemperature}).
+     */
+    public BufferTransfer withEnthalpies(IonisationEnthalpies table) {
+        if (table == null) {
+            throw new IllegalArgumentException("table must not be null");
+        }
+        return new BufferTransfer(reference, inputs, assumedSpread, table);
+    }
+
+    /** The enthalpies of ionisation in use. */
+    public IonisationEnthalpies enthalpies() {
+        return enthalpies;
     }
 
     /** A predictor that knows only the model data inside the libraries it is given. */
@@ -150,7 +176,7 @@ public final class BufferTransfer {
         if (uncertainty == null) {
             throw new IllegalArgumentException("uncertainty must not be null");
         }
-        return new BufferTransfer(reference, uncertainty, assumedSpread);
+        return new BufferTransfer(reference, uncertainty, assumedSpread, enthalpies);
     }
 
     /** The same predictor with another spread for entries that state none, mobility units, &gt; 0. */
@@ -158,7 +184,7 @@ public final class BufferTransfer {
         if (!(spreadUnits > 0) || Double.isInfinite(spreadUnits)) {
             throw new IllegalArgumentException("assumed spread must be finite and > 0, got " + spreadUnits);
         }
-        return new BufferTransfer(reference, inputs, spreadUnits);
+        return new BufferTransfer(reference, inputs, spreadUnits, enthalpies);
     }
 
     /** Spread used for entries without {@code mobility_sd}, mobility units. */
@@ -243,9 +269,12 @@ public final class BufferTransfer {
             return withoutModel(entry, bufferA, bufferB, spread, notes);
         }
         SpeciesModel m = choice.model;
-        double gA = MobilityPredictor.effectiveMobility(m, a);
-        double gB = MobilityPredictor.effectiveMobility(m, b);
-        PredictedMobility.Method method = anchorIsInformative(m, a, gA, mu)
+        // pKa values at each buffer's temperature (van 't Hoff), limiting mobilities still at 25 °C
+        SpeciesModel mA = enthalpies.atTemperature(m, a.temperatureC());
+        SpeciesModel mB = enthalpies.atTemperature(m, b.temperatureC());
+        double gA = MobilityPredictor.effectiveMobility(mA, a);
+        double gB = MobilityPredictor.effectiveMobility(mB, b);
+        PredictedMobility.Method method = anchorIsInformative(mA, a, gA, mu)
                 ? PredictedMobility.Method.RATIO : PredictedMobility.Method.DIFFERENCE;
         if (method == PredictedMobility.Method.DIFFERENCE) {
             notes.add(Math.signum(gA) != Math.signum(mu) && gA != 0 && mu != 0
@@ -254,13 +283,16 @@ public final class BufferTransfer {
         }
         double predicted = transfer(method, mu, gA, gB);
         double slope = method == PredictedMobility.Method.RATIO ? gB / gA : 1.0;
+        boolean warmer = !m.pKa().isEmpty() && (a.temperatureC() != REFERENCE_C || b.temperatureC() != REFERENCE_C);
+        if (warmer && enthalpies.steps(m).stream().anyMatch(st -> !st.tabulated())) {
+            notes.add("pKa moved to the method temperature with an assumed enthalpy of ionisation");
+        }
 
-        double pKaSd = Math.hypot(inputs.pKaSd(), PKA_TEMPERATURE_SD_PER_K
-                * Math.max(Math.abs(a.temperatureC() - REFERENCE_C), Math.abs(b.temperatureC() - REFERENCE_C)));
-        double variance = inputVariance(m, a, b, mu, method, pKaSd);
+        double pKaSd = Math.hypot(inputs.pKaSd(), enthalpies.shiftSd(m, a.temperatureC(), b.temperatureC()));
+        double variance = inputVariance(m, mA, mB, a, b, mu, method, pKaSd);
         double withoutIonic = transfer(method, mu,
-                MobilityPredictor.effectiveMobility(m, new BufferConditions(a.pH(), 0.0, a.temperatureC())),
-                MobilityPredictor.effectiveMobility(m, new BufferConditions(b.pH(), 0.0, b.temperatureC())));
+                MobilityPredictor.effectiveMobility(mA, new BufferConditions(a.pH(), 0.0, a.temperatureC())),
+                MobilityPredictor.effectiveMobility(mB, new BufferConditions(b.pH(), 0.0, b.temperatureC())));
         double ionicRelative = maxAbsCharge(m) >= 2 ? MULTIVALENT_IONIC_STRENGTH_RELATIVE_SD
                 : UNIVALENT_IONIC_STRENGTH_RELATIVE_SD;
         variance += square(ionicRelative * (predicted - withoutIonic));
@@ -268,7 +300,7 @@ public final class BufferTransfer {
         variance += square(common);
         double modelSd = Math.sqrt(variance);
         double total = Math.sqrt(square(slope * spread) * predictiveFactor(entry.n()) + variance);
-        double meanCharge = MobilityPredictor.predict(m, b).meanCharge();
+        double meanCharge = MobilityPredictor.predict(mB, b).meanCharge();
         if (choice.note != null) {
             notes.add(0, choice.note);
         }
@@ -336,28 +368,46 @@ public final class BufferTransfer {
         return Math.abs(gA) >= MIN_ANCHOR_FRACTION * largest;
     }
 
-    /** Variance of the transfer from the pKa and limiting-mobility inputs, by central differences. */
-    private double inputVariance(SpeciesModel m, BufferConditions a, BufferConditions b, double measured,
-                                 PredictedMobility.Method method, double pKaSd) {
-        return InputPropagation.variance((p, mu) -> transferOf(m, p, mu, a, b, measured, method),
-                m.pKaArray(), m.limitingMobilityArray(), pKaSd, inputs.relativeMobilitySd());
+    /**
+     * Variance of the transfer from the pKa and limiting-mobility inputs, by central differences: a
+     * perturbation of a pKa of {@code m} (25 °C) moves that pKa alike at both temperatures.
+     */
+    private double inputVariance(SpeciesModel m, SpeciesModel mA, SpeciesModel mB, BufferConditions a,
+                                 BufferConditions b, double measured, PredictedMobility.Method method, double pKaSd) {
+        double[] base = m.pKaArray();
+        // the propagation perturbs its own array in place; the differences are taken against this copy
+        double[] perturbed = base.clone();
+        return InputPropagation.variance((p, mu) -> transferOf(m, shifted(mA, base, p), shifted(mB, base, p), mu, a,
+                b, measured, method), perturbed, m.limitingMobilityArray(), pKaSd, inputs.relativeMobilitySd());
     }
 
-    private static double transferOf(SpeciesModel m, double[] pKa, double[] mu, BufferConditions a,
+    /** The pKa values of {@code atT} moved by the perturbation {@code p − base}. */
+    private static double[] shifted(SpeciesModel atT, double[] base, double[] p) {
+        double[] out = atT.pKaArray();
+        for (int i = 0; i < out.length; i++) {
+            out[i] += p[i] - base[i];
+        }
+        return out;
+    }
+
+    private static double transferOf(SpeciesModel m, double[] pKaA, double[] pKaB, double[] mu, BufferConditions a,
                                      BufferConditions b, double measured, PredictedMobility.Method method) {
+        List<Double> u = new ArrayList<>(mu.length);
+        for (double v : mu) {
+            u.add(v);
+        }
+        return transfer(method, measured, MobilityPredictor.effectiveMobility(species(m, pKaA, u), a),
+                MobilityPredictor.effectiveMobility(species(m, pKaB, u), b));
+    }
+
+    private static SpeciesModel species(SpeciesModel m, double[] pKa, List<Double> mu) {
         List<Double> p = new ArrayList<>(pKa.length);
         for (double v : pKa) {
             p.add(v);
         }
         // keep the ascending order a perturbation of nearly equal pKa values could break
         p.sort(null);
-        List<Double> u = new ArrayList<>(mu.length);
-        for (double v : mu) {
-            u.add(v);
-        }
-        SpeciesModel perturbed = new SpeciesModel(m.name(), m.highestCharge(), p, u);
-        return transfer(method, measured, MobilityPredictor.effectiveMobility(perturbed, a),
-                MobilityPredictor.effectiveMobility(perturbed, b));
+        return new SpeciesModel(m.name(), m.highestCharge(), p, mu);
     }
 
     private static int maxAbsCharge(SpeciesModel m) {
