@@ -225,7 +225,35 @@ public final class Rechecker {
             }
         }
         return new RecheckResult(libraryA.sourceFile(), libraryB.sourceFile(), bufferB, predicted, ordered,
-                pairs(libraryA, transfers, predictor, s.separation()), predictions, errors, notes);
+                pairs(libraryA, transfers, predictor, s.separation()), predictions, errors, notes,
+                analytes(libraryA, libraryB, transfers, ordered, s));
+    }
+
+    /** One summary per analyte of library A: its shift, its window in library B and its verdicts. */
+    private static List<AnalyteRecheck> analytes(Library libraryA, Library libraryB, Map<String, Transfer> transfers,
+                                                 List<AssignmentCheck> checks, RecheckSettings s) {
+        List<AnalyteRecheck> out = new ArrayList<>(libraryA.size());
+        for (LibraryEntry a : libraryA.entries()) {
+            Transfer t = transfers.get(a.name());
+            LibraryEntry b = libraryB.find(a.name()).orElse(null);
+            double muB = t != null ? t.mobilityB() : b != null ? b.mobility() : Double.NaN;
+            double window = b == null ? Double.NaN : oldWindowHalfWidth(libraryB, b, 0.0, s);
+            Map<Verdict, Integer> verdicts = new java.util.EnumMap<>(Verdict.class);
+            Map<String, Integer> collisions = new LinkedHashMap<>();
+            for (AssignmentCheck c : checks) {
+                if (c.analyte().equals(a.name())) {
+                    verdicts.merge(c.verdict(), 1, Integer::sum);
+                    for (String other : c.collidesWith()) {
+                        collisions.merge(other, 1, Integer::sum);
+                    }
+                }
+            }
+            List<String> collide = collisions.entrySet().stream()
+                    .sorted((x, y) -> Integer.compare(y.getValue(), x.getValue())).map(Map.Entry::getKey).toList();
+            out.add(new AnalyteRecheck(a.name(), a.mobility(), muB, t == null ? Double.NaN : t.shiftSd(), window,
+                    t == null ? null : t.basis(), verdicts, collide));
+        }
+        return out;
     }
 
     private static void checkRun(List<PeakTableRow> run, Library libraryA, Library libraryB,
