@@ -178,4 +178,24 @@ class PredictRecheckCommandTest {
                 .map(v -> Math.abs(v - -69.5)).min().orElse(Double.POSITIVE_INFINITY);
         assertTrue(worstInside < bestOutside, worstInside + " vs " + bestOutside);
     }
+
+    /**
+     * A Tris buffer adjusted to pH 8.10 at 25 °C and run at 37 °C: its pH falls with its pKa, by
+     * 0.32 (ΔrH° 47.45 kJ/mol, Goldberg, Kishore &amp; Lennen 2002, from memory; checked against a read
+     * value in PkaTemperatureTest), and the predictions are made at the shifted pH.
+     */
+    @Test
+    void buffersOwnPhFollowsTheMethodTemperature() {
+        String[] r = run("predict", "--library", DEMO.resolve("library.csv").toString(), "--ph", "8.10",
+                "--ionic-strength-mm", "20", "--temperature-c", "37", "--reference", REFERENCE.toString(),
+                "--buffer-substance", "Tris", "--ph-measured-at-c", "25");
+        assertEquals("0", r[0], r[2]);
+        assertTrue(r[1].contains("Buffer pH: Tris at pH 8.10 (measured at 25 °C) is at pH 7.78"), r[1]);
+        assertTrue(r[1].contains("tabulated enthalpy"), r[1]);
+        assertTrue(r[1].contains("in pH 7.78, I 20.0 mmol/L, 37.0 °C"), r[1]);
+        String[] unknown = run("predict", "--library", DEMO.resolve("library.csv").toString(), "--ph", "8.10",
+                "--ionic-strength-mm", "20", "--temperature-c", "37", "--reference", REFERENCE.toString(),
+                "--buffer-substance", "no such buffer", "--ph-measured-at-c", "25");
+        assertEquals("3", unknown[0], unknown[1] + unknown[2]);
+    }
 }
