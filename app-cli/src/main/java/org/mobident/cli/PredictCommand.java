@@ -94,6 +94,13 @@ public final class PredictCommand implements Callable<Integer> {
         o.println("basis: own pKa data = the library entry's pKa and limiting mobilities; reference pKa data = "
                 + "taken from --reference by name; charge only = a strong ion; no model = the pH change is not "
                 + "accounted for.");
+        List<String> assumed = shown.stream().filter(p -> p.note().contains(BufferTransfer.NOTE_ASSUMED_ENTHALPY))
+                .map(PredictedMobility::name).toList();
+        if (!assumed.isEmpty()) {
+            o.println("pKa values moved to the method temperature with an assumed enthalpy of ionisation (no tabulated "
+                    + "value; ±10 kJ/mol for acids, ±15 for protonated amines, in the uncertainty): "
+                    + String.join(", ", assumed) + ".");
+        }
         List<String> missing = shown.stream().filter(p -> p.basis() == org.mobident.recheck.PredictionBasis.NO_MODEL)
                 .map(PredictedMobility::name).toList();
         if (!missing.isEmpty()) {

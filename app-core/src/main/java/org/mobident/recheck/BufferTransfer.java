@@ -110,9 +110,12 @@ public final class BufferTransfer {
     static final String NOTE_OWN_DATA_UNUSED = "the entry's pka/limiting_mobility were not used";
     /** Note when the pH changes and nothing models it. */
     static final String NOTE_PH_IGNORED = "the pH change is NOT accounted for";
-    /** The notes above: what the basis column already says. */
+    /** Note when a pKa was moved to another temperature with the class value of the enthalpy. */
+    public static final String NOTE_ASSUMED_ENTHALPY = "pKa moved to the method temperature with an assumed enthalpy "
+            + "of ionisation";
+    /** The notes above: what the basis column already says, or what is said once for all analytes. */
     static final java.util.Set<String> BASIS_NOTES = java.util.Set.of(NOTE_REFERENCE, NOTE_REFERENCE_USED, NOTE_STRONG,
-            NOTE_NO_MODEL, NOTE_PH_IGNORED);
+            NOTE_NO_MODEL, NOTE_PH_IGNORED, NOTE_ASSUMED_ENTHALPY);
 
     private final Map<String, SpeciesModel> reference;
     private final PredictionUncertainty inputs;
@@ -285,7 +288,7 @@ public final class BufferTransfer {
         double slope = method == PredictedMobility.Method.RATIO ? gB / gA : 1.0;
         boolean warmer = !m.pKa().isEmpty() && (a.temperatureC() != REFERENCE_C || b.temperatureC() != REFERENCE_C);
         if (warmer && enthalpies.steps(m).stream().anyMatch(st -> !st.tabulated())) {
-            notes.add("pKa moved to the method temperature with an assumed enthalpy of ionisation");
+            notes.add(NOTE_ASSUMED_ENTHALPY);
         }
 
         double pKaSd = Math.hypot(inputs.pKaSd(), enthalpies.shiftSd(m, a.temperatureC(), b.temperatureC()));

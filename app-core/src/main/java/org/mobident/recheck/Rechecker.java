@@ -171,6 +171,12 @@ public final class Rechecker {
                 withoutModel.add(p.name());
             }
         }
+        List<String> assumed = predictions.stream().filter(p -> p.note().contains(BufferTransfer.NOTE_ASSUMED_ENTHALPY))
+                .map(PredictedMobility::name).toList();
+        if (!assumed.isEmpty()) {
+            notes.add("pKa values moved to the new temperature with an assumed enthalpy of ionisation (none "
+                    + "tabulated; its uncertainty is included): " + String.join(", ", assumed));
+        }
         if (!withoutModel.isEmpty()) {
             // once for all of them, not per peak or per analyte
             notes.add("No model data for " + String.join(", ", withoutModel) + ": only temperature and ionic "
