@@ -21,6 +21,17 @@ public final class BufferOptions {
                     + "(default: its conditions, e.g. 'predicted: pH 7.00, I 20 mM, 25 °C').")
     String label;
 
+    @Option(names = "--buffer-substance", paramLabel = "NAME",
+            description = "The new buffer's buffering substance as the reference library names it (e.g. Tris, "
+                    + "imidazole, phosphate); with --ph-measured-at-c the new pH is moved to the method temperature "
+                    + "by the substance's enthalpy of ionisation.")
+    String bufferSubstance;
+
+    @Option(names = "--ph-measured-at-c", paramLabel = "C",
+            description = "Temperature at which the new buffer's pH was measured, °C (default: the method temperature, "
+                    + "i.e. no shift). Needs --buffer-substance and --reference.")
+    Double phMeasuredAtC;
+
     @Option(names = "--old-ph", paramLabel = "PH", description = "pH of the library's buffer, where its entries do not state it.")
     Double oldPh;
 

@@ -68,12 +68,11 @@ public final class PredictCommand implements Callable<Integer> {
         PrintWriter o = spec.commandLine().getOut();
         Outputs.checkFree(overwrite, out);
         Library library = LibraryCsv.read(libraryFile);
-        BufferTransfer predictor = referenceFile == null ? BufferTransfer.withoutReference()
-                : BufferTransfer.withReference(LibraryCsv.read(referenceFile));
+        BufferTransfer predictor = ReferenceData.transfer(referenceFile);
         if (scan != null) {
             return scan(library, predictor, o);
         }
-        var bufferB = buffers.newBuffer();
+        var bufferB = ReferenceData.adjusted(buffers.newBuffer(), buffers, referenceFile, o);
         List<PredictedMobility> predictions = predictor.predictAll(library, buffers.oldBuffer(), bufferB);
         o.println("Predicted effective mobilities in " + bufferB.describe() + " (1e-9 m^2/(V s)).");
         List<PredictedMobility> shown = new ArrayList<>();
@@ -82,18 +81,32 @@ public final class PredictCommand implements Callable<Integer> {
                 shown.add(p);
             }
         }
-        boolean remarks = shown.stream().anyMatch(p -> p.note() != null && !p.note().isBlank());
+        // per row only what is particular to that analyte; what the basis implies is said once below
+        boolean remarks = shown.stream().anyMatch(p -> !p.specificNote().isBlank());
         int basisWidth = shown.stream().mapToInt(p -> p.basis().description().length()).max().orElse(5);
         String layout = "%-16s %9s %9s %7s  " + (remarks ? "%-" + basisWidth + "s  %s" : "%s");
         o.println(String.format(Locale.ROOT, layout, "analyte", "measured", "predicted", "+/-", "basis", "remark")
                 .stripTrailing());
         for (PredictedMobility p : shown) {
             o.println(String.format(Locale.ROOT, layout, p.name(), num(p.measuredA()), num(p.predicted()),
-                    num(p.uncertainty()), p.basis().description(), p.note() == null ? "" : p.note()).stripTrailing());
+                    num(p.uncertainty()), p.basis().description(), p.specificNote()).stripTrailing());
         }
         o.println("basis: own pKa data = the library entry's pKa and limiting mobilities; reference pKa data = "
                 + "taken from --reference by name; charge only = a strong ion; no model = the pH change is not "
                 + "accounted for.");
+        List<String> assumed = shown.stream().filter(p -> p.note().contains(BufferTransfer.NOTE_ASSUMED_ENTHALPY))
+                .map(PredictedMobility::name).toList();
+        if (!assumed.isEmpty()) {
+            o.println("pKa values moved to the method temperature with an assumed enthalpy of ionisation (no tabulated "
+                    + "value; ±10 kJ/mol for acids, ±15 for protonated amines, in the uncertainty): "
+                    + String.join(", ", assumed) + ".");
+        }
+        List<String> missing = shown.stream().filter(p -> p.basis() == org.mobident.recheck.PredictionBasis.NO_MODEL)
+                .map(PredictedMobility::name).toList();
+        if (!missing.isEmpty()) {
+            o.println("No model data for " + String.join(", ", missing) + ". To fix: for each, "
+                    + org.mobident.recheck.ModelCoverage.HOW_TO_FIX + ".");
+        }
         o.println("Predictions are estimates: measure standards in the new buffer before relying on them.");
         if (out != null) {
             Library predicted = BufferTransfer.asLibrary(predictions, library, buffers.newBufferForLibrary());
@@ -103,8 +116,9 @@ public final class PredictCommand implements Callable<Integer> {
         return ExitCodes.OK;
     }
 
-    private static String num(double v) {
-        return String.format(Locale.ROOT, "%.2f", v);
+    /** Two decimals; "-" for a value that is not known (never "NaN" on a terminal). */
+    static String num(double v) {
+        return Double.isFinite(v) ? String.format(Locale.ROOT, "%.2f", v) : "-";
     }
 
     /**
@@ -135,6 +149,62 @@ public final class PredictCommand implements Callable<Integer> {
                 + "asks for %.2f)", c.first(), c.second(), range, closest, c.thresholdUnits());
     }
 
+    /** Most rows of the terminal table; a finer scan is shown at a whole multiple of its step. */
+    static final int MAX_SCAN_ROWS = 30;
+    /** Widest analyte column of the terminal table; longer names are cut. */
+    private static final int SCAN_COLUMN_WIDTH = 10;
+
+    /** The scan as CSV: a pH column and one column per analyte, three decimals. */
+    static String scanCsv(PhScan.Result r) {
+        StringBuilder table = new StringBuilder("ph");
+        for (PhScan.Curve c : r.curves()) {
+            table.append(',').append(org.mobident.report.CsvCells.inert(c.name()));
+        }
+        table.append('\n');
+        for (int i = 0; i < r.pH().size(); i++) {
+            table.append(String.format(Locale.ROOT, "%.3f", r.pH().get(i)));
+            for (PhScan.Curve c : r.curves()) {
+                table.append(String.format(Locale.ROOT, ",%.3f", c.mobility().get(i)));
+            }
+            table.append('\n');
+        }
+        return table.toString();
+    }
+
+    /**
+     * The scan for a person: a units line, a header of analyte names, then pH rows (every k-th step
+     * so that at most {@value #MAX_SCAN_ROWS} rows are shown, and always the last), two decimals.
+     */
+    static void writeScanTable(PhScan.Result r, double ionicStrengthMm, double temperatureC, PrintWriter o) {
+        int n = r.pH().size();
+        int every = Math.max(1, (int) Math.ceil((n - 1) / (double) (MAX_SCAN_ROWS - 1)));
+        o.println(String.format(Locale.ROOT, "Predicted effective mobility against pH, 1e-9 m^2/(V s), at I = %s mmol/L "
+                        + "and %s °C%s:", plainNumber(ionicStrengthMm), plainNumber(temperatureC),
+                every > 1 ? " (one row per " + plainNumber(r.pH().get(every) - r.pH().get(0))
+                        + " pH; --out writes every step)" : ""));
+        StringBuilder header = new StringBuilder(String.format(Locale.ROOT, "%6s", "pH"));
+        for (PhScan.Curve c : r.curves()) {
+            String name = c.name().length() <= SCAN_COLUMN_WIDTH ? c.name()
+                    : c.name().substring(0, SCAN_COLUMN_WIDTH - 1) + "…";
+            header.append(String.format(Locale.ROOT, " %" + SCAN_COLUMN_WIDTH + "s", name));
+        }
+        o.println(header);
+        for (int i = 0; i < n; i++) {
+            if (i % every != 0 && i != n - 1) {
+                continue;
+            }
+            StringBuilder row = new StringBuilder(String.format(Locale.ROOT, "%6.2f", r.pH().get(i)));
+            for (PhScan.Curve c : r.curves()) {
+                row.append(String.format(Locale.ROOT, " %" + SCAN_COLUMN_WIDTH + "s", num(c.mobility().get(i))));
+            }
+            o.println(row);
+        }
+    }
+
+    private static String plainNumber(double v) {
+        return new java.math.BigDecimal(String.format(Locale.ROOT, "%.3f", v)).stripTrailingZeros().toPlainString();
+    }
+
     private int scan(Library library, BufferTransfer predictor, PrintWriter o) throws InputException, OutputException {
         String[] p = scan.split(":");
         double from;
@@ -157,24 +227,13 @@ public final class PredictCommand implements Callable<Integer> {
         } catch (IllegalArgumentException e) {
             throw new InputException("command line", 0, "--scan", e.getMessage());
         }
-        StringBuilder table = new StringBuilder("ph");
-        for (PhScan.Curve c : r.curves()) {
-            table.append(',').append(org.mobident.report.CsvCells.inert(c.name()));
-        }
-        table.append('\n');
-        for (int i = 0; i < r.pH().size(); i++) {
-            table.append(String.format(Locale.ROOT, "%.3f", r.pH().get(i)));
-            for (PhScan.Curve c : r.curves()) {
-                table.append(String.format(Locale.ROOT, ",%.3f", c.mobility().get(i)));
-            }
-            table.append('\n');
-        }
         if (out != null) {
-            String text = table.toString();
-            Outputs.write(out, overwrite, w -> w.write(text));
-            o.println("mobility-vs-pH table written to " + out);
-        } else {
-            o.print(table);
+            String csv = scanCsv(r);
+            Outputs.write(out, overwrite, w -> w.write(csv));
+        }
+        writeScanTable(r, buffers.ionicStrengthMm, buffers.temperatureC, o);
+        if (out != null) {
+            o.println("full mobility-vs-pH table (CSV, every step) written to " + out);
         }
         if (r.comigrations().isEmpty()) {
             o.println("No pair comes closer than the separation rule allows anywhere in pH " + from + "–" + to + ".");

@@ -33,7 +33,9 @@ import picocli.CommandLine.Model.CommandSpec;
                 + "ambiguous (and with what), reassigned (would now be taken for another analyte) or lost. It also "
                 + "lists which library pairs can no longer be told apart and, with a measured new library, which "
                 + "old analytes it lacks. With a measured new "
-                + "library it also reports how far the model's prediction was off.",
+                + "library it also reports how far the model's prediction was off. The terminal summary has one line "
+                + "per library analyte (its verdict over all its peaks, shift ± SD, peaks affected, window in the new "
+                + "buffer); the per-peak verdicts and reasons go to --csv.",
         footer = {"", "Exit codes: 0 nothing needs attention; 1 something needs attention (see the summary); "
                 + "2 bad command line; 3 unusable input; 4 output not written."})
 public final class RecheckCommand implements Callable<Integer> {
@@ -64,6 +66,10 @@ public final class RecheckCommand implements Callable<Integer> {
     @Option(names = "--pairs-csv", paramLabel = "FILE", description = "Write the pair checks as CSV.")
     Path pairsOut;
 
+    @Option(names = "--analytes-csv", paramLabel = "FILE",
+            description = "Write the per-analyte predictions (new mobility, uncertainty, basis, model error) as CSV.")
+    Path analytesOut;
+
     @Option(names = "--overwrite", description = "Replace output files that already exist.")
     boolean overwrite;
 
@@ -74,19 +80,20 @@ public final class RecheckCommand implements Callable<Integer> {
                     + "--ionic-strength-mm.");
             return ExitCodes.USAGE;
         }
-        Outputs.checkFree(overwrite, csvOut, pairsOut);
+        Outputs.checkFree(overwrite, csvOut, pairsOut, analytesOut);
         List<PeakTableRow> rows = PeakTableReader.read(tableFile);
         Library libraryA = LibraryCsv.read(libraryFile);
-        BufferTransfer predictor = referenceFile == null ? BufferTransfer.withoutReference()
-                : BufferTransfer.withReference(LibraryCsv.read(referenceFile));
+        BufferTransfer predictor = ReferenceData.transfer(referenceFile);
         RecheckResult result;
         if (newLibraryFile != null) {
             Library libraryB = LibraryCsv.read(newLibraryFile);
             result = Rechecker.withMeasuredLibrary(rows, tableFile.toString(), libraryA, buffers.oldBuffer(), libraryB,
-                    buffers.newGiven() ? buffers.newBuffer() : null, predictor, RecheckSettings.DEFAULT);
+                    buffers.newGiven() ? ReferenceData.adjusted(buffers.newBuffer(), buffers, referenceFile,
+                            spec.commandLine().getOut()) : null, predictor, RecheckSettings.DEFAULT);
         } else {
             result = Rechecker.withPredictedLibrary(rows, tableFile.toString(), libraryA, buffers.oldBuffer(),
-                    buffers.newBuffer(), predictor, RecheckSettings.DEFAULT);
+                    ReferenceData.adjusted(buffers.newBuffer(), buffers, referenceFile, spec.commandLine().getOut()),
+                    predictor, RecheckSettings.DEFAULT);
         }
         RecheckSummaryText.write(result, spec.commandLine().getOut());
         if (csvOut != null) {
@@ -94,6 +101,9 @@ public final class RecheckCommand implements Callable<Integer> {
         }
         if (pairsOut != null) {
             Outputs.write(pairsOut, overwrite, w -> RecheckReportCsv.writePairs(result, w));
+        }
+        if (analytesOut != null) {
+            Outputs.write(analytesOut, overwrite, w -> RecheckReportCsv.writeAnalytes(result, w));
         }
         return result.needsAttention() ? ExitCodes.SOME_RUNS_FAILED : ExitCodes.OK;
     }

@@ -172,4 +172,31 @@ class LibraryCommandsTest {
                 && l.contains(String.format(java.util.Locale.ROOT, "%.3f ", w[4]))), r.out());
         assertTrue(r.out().contains("4 warning(s)"), r.out());
     }
+
+    /** {@code library check} ends by saying, once per analyte, which cannot be predicted and how to fix that. */
+    @Test
+    void checkSaysWhichAnalytesCannotBePredictedAndHow() throws IOException {
+        Path lib = dir.resolve("own.csv");
+        Files.writeString(lib, """
+                name,mobility,mobility_sd,n,charge,pka,limiting_mobility
+                drug acid,-25.0,0.2,5,-1,4.5,0 -30.0
+                chloride,-75.0,0.2,5,,,
+                mystery,-20.0,0.2,5,,,
+                strong one,-40.0,0.2,5,-1,,
+                """);
+        Run r = run("library", "check", lib.toString(), "--reference", "../reference-libraries/ions-25C.csv");
+        assertTrue(r.out().contains("1 with their own pKa data, 1 with reference data, 1 as strong ions"), r.out());
+        String cannot = r.out().lines().filter(l -> l.contains("Cannot be predicted")).findFirst().orElseThrow();
+        assertTrue(cannot.contains("mystery") && !cannot.contains("chloride") && !cannot.contains("drug acid"), cannot);
+        assertEquals(1, r.out().lines().filter(l -> l.contains("To fix")).count(), r.out());
+        assertTrue(r.out().contains("strong one"), r.out());
+        assertFalse(r.out().contains("NaN"), r.out());
+        // predict says it once, below the table, not in every row
+        Run p = run("predict", "--library", lib.toString(), "--old-ph", "6", "--old-ionic-strength-mm", "10",
+                "--ph", "4", "--ionic-strength-mm", "10", "--reference", "../reference-libraries/ions-25C.csv");
+        assertEquals(0, p.code(), p.err());
+        assertFalse(p.out().contains("no model data (no pka"), p.out());
+        assertEquals(1, p.out().lines().filter(l -> l.contains("To fix")).count(), p.out());
+        assertFalse(p.out().contains("NaN"), p.out());
+    }
 }

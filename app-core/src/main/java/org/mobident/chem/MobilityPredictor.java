@@ -15,9 +15,10 @@ import org.mobident.mobility.MobilityMath;
  *   <li>μᵢ(I, T) is the limiting mobility of form i at 25 °C, scaled to T by the viscosity of water
  *       ({@link MobilityMath#atTemperature}, Walden's rule), then lowered to ionic strength I by
  *       {@link IonicStrengthCorrection} (Debye–Hückel–Onsager with ion size);</li>
- *   <li>pKa'(I, T) are the mixed constants of {@link Activity#mixedPka} (Davies equation, A at T);
- *       the thermodynamic pKa values themselves are used as given for 25 °C at every temperature
- *       (their temperature dependence is ignored);</li>
+ *   <li>pKa'(I, T) are the mixed constants of {@link Activity#mixedPka} (Davies equation, A at T)
+ *       of the thermodynamic pKa values <em>as given</em>: pass a model whose pKa values hold at the
+ *       buffer's temperature ({@link PkaTemperature#atTemperature},
+ *       {@link IonisationEnthalpies#atTemperature}) when it is not 25 °C;</li>
  *   <li>αᵢ are the mole fractions of {@link IonicForms}.</li>
  * </ul>
  *

@@ -9,6 +9,8 @@ import org.mobident.InputException;
 import org.mobident.chem.InputPropagation;
 import org.mobident.chem.BufferConditions;
 import org.mobident.chem.IonicStrengthCorrection;
+import org.mobident.chem.IonisationEnthalpies;
+import org.mobident.chem.PkaTemperature;
 import org.mobident.chem.MobilityPredictor;
 import org.mobident.chem.PredictionUncertainty;
 import org.mobident.chem.ReferenceIons;
@@ -26,7 +28,9 @@ import org.mobident.mobility.MobilityMath;
  * The model μ_model(buffer) of {@link MobilityPredictor} (Σαᵢμᵢ over the protolytic forms,
  * Tiselius 1930, Pospíchal, Gebauer &amp; Boček, Chem. Rev. 89 (1989) 419; Davies activity
  * correction of the pKa; Debye–Hückel–Onsager lowering of the limiting mobilities; Walden's rule
- * for temperature) is not used for its absolute value but for the <em>change</em> from A to B, so
+ * for the mobilities' temperature dependence; the pKa values moved to each buffer's temperature by
+ * the van 't Hoff equation, {@link PkaTemperature}, with the enthalpies of {@link #withEnthalpies})
+ * is not used for its absolute value but for the <em>change</em> from A to B, so
  * that whatever the model gets wrong in both buffers alike (a limiting mobility a few per cent off,
  * the buffer's own viscosity, wall effects in the measured value) cancels:
  * <ul>
@@ -58,9 +62,10 @@ import org.mobident.mobility.MobilityMath;
  *   <li>the library spread s carried by the transfer: (∂μ_B/∂μ_A · s)²·(1 + 1/n), the
  *       variance of a new run about a mean of n (1 when n is unknown); an entry without a
  *       spread gets {@link #assumedSpread()};</li>
- *   <li>the model inputs: each pKa (±{@link PredictionUncertainty#pKaSd()}, widened by
- *       {@value #PKA_TEMPERATURE_SD_PER_K} per kelvin of distance from 25 °C because the model
- *       ignores the temperature dependence of pKa) and each limiting mobility (relative
+ *   <li>the model inputs: each pKa (±{@link PredictionUncertainty#pKaSd()}, widened by the uncertainty of
+ *       its change between the two temperatures from the uncertainty of the enthalpy of
+ *       ionisation, {@link PkaTemperature#shiftSd}: small for a tabulated enthalpy, larger for
+ *       the class value that stands in for a missing one) and each limiting mobility (relative
  *       ±{@link PredictionUncertainty#relativeMobilitySd()}), propagated through the
  *       <em>transfer</em> by central differences, so that errors common to A and B cancel as they
  *       do in the ratio;</li>
@@ -83,25 +88,66 @@ public final class BufferTransfer {
     public static final double MIN_ANCHOR_FRACTION = 0.1;
     /** Relative uncertainty of the ionic-strength shift for univalent ions (common practice; the simple correction reproduces KCl within ~1 % of μ up to 0.1 mol/L). */
     public static final double UNIVALENT_IONIC_STRENGTH_RELATIVE_SD = 0.1;
-    /** Relative uncertainty of the ionic-strength shift for multivalent or unknown charges (common practice; the correction underestimates their decrease). */
+    /** Relative uncertainty of the ionic-strength shift for multivalent or unknown charges (common practice; for |z| ≥ 2 the correction lowers more than the empirical exp(−0.77·√(|z|I)) of Friedl et al. 1995, by up to a third at I = 0.05 mol/L for z = 3, see IonicStrengthCorrection). */
     public static final double MULTIVALENT_IONIC_STRENGTH_RELATIVE_SD = 0.25;
     /** Relative uncertainty per kelvin of the viscosity (Walden) scaling (common practice: ions' conductivity temperature coefficients differ from water's fluidity by ~0.1–0.3 %/K). */
     public static final double WALDEN_RELATIVE_SD_PER_K = 0.002;
-    /** Extra pKa uncertainty per kelvin from 25 °C, pKa units/K (common practice: carboxylic acids 0.01–0.02 /K, amines more). */
-    public static final double PKA_TEMPERATURE_SD_PER_K = 0.015;
     /** Extra relative uncertainty without model data (modelling choice). */
     public static final double NO_MODEL_RELATIVE_SD = 0.05;
 
     private static final double REFERENCE_C = BufferConditions.REFERENCE_TEMPERATURE_C;
 
+    /** Note of a prediction from the reference library's data (implied by {@link PredictionBasis#REFERENCE_MODEL}). */
+    static final String NOTE_REFERENCE = "model data from the reference library";
+    /** Note when the entry's own data were unusable and the reference library stood in. */
+    static final String NOTE_REFERENCE_USED = "reference library used";
+    /** Note of a charge-only prediction (implied by {@link PredictionBasis#CHARGE_ONLY}). */
+    static final String NOTE_STRONG = "strong ion of the stated charge assumed";
+    /** Note of a prediction without model data (implied by {@link PredictionBasis#NO_MODEL}). */
+    static final String NOTE_NO_MODEL = "no model data (no pka/limiting_mobility, not in the reference library, "
+            + "no charge): only viscosity and univalent ionic-strength transfer";
+    /** Start of the note when the entry's own model data could not be used. */
+    static final String NOTE_OWN_DATA_UNUSED = "the entry's pka/limiting_mobility were not used";
+    /** Note when the pH changes and nothing models it. */
+    static final String NOTE_PH_IGNORED = "the pH change is NOT accounted for";
+    /** Note when a pKa was moved to another temperature with the class value of the enthalpy. */
+    public static final String NOTE_ASSUMED_ENTHALPY = "pKa moved to the method temperature with an assumed enthalpy "
+            + "of ionisation";
+    /** The notes above: what the basis column already says, or what is said once for all analytes. */
+    static final java.util.Set<String> BASIS_NOTES = java.util.Set.of(NOTE_REFERENCE, NOTE_REFERENCE_USED, NOTE_STRONG,
+            NOTE_NO_MODEL, NOTE_PH_IGNORED, NOTE_ASSUMED_ENTHALPY);
+
     private final Map<String, SpeciesModel> reference;
     private final PredictionUncertainty inputs;
     private final double assumedSpread;
+    private final IonisationEnthalpies enthalpies;
 
     private BufferTransfer(Map<String, SpeciesModel> reference, PredictionUncertainty inputs, double assumedSpread) {
+        this(reference, inputs, assumedSpread, IonisationEnthalpies.none());
+    }
+
+    private BufferTransfer(Map<String, SpeciesModel> reference, PredictionUncertainty inputs, double assumedSpread,
+                           IonisationEnthalpies enthalpies) {
         this.reference = reference;
         this.inputs = inputs;
         this.assumedSpread = assumedSpread;
+        this.enthalpies = enthalpies;
+    }
+
+    /**
+     * The same predictor with a table of enthalpies of ionisation for the temperature dependence of
+     * pKa (by analyte name; steps the table lacks get the class values of {@link PkaTemperature}).
+     */
+    public BufferTransfer withEnthalpies(IonisationEnthalpies table) {
+        if (table == null) {
+            throw new IllegalArgumentException("table must not be null");
+        }
+        return new BufferTransfer(reference, inputs, assumedSpread, table);
+    }
+
+    /** The enthalpies of ionisation in use. */
+    public IonisationEnthalpies enthalpies() {
+        return enthalpies;
     }
 
     /** A predictor that knows only the model data inside the libraries it is given. */
@@ -133,7 +179,7 @@ public final class BufferTransfer {
         if (uncertainty == null) {
             throw new IllegalArgumentException("uncertainty must not be null");
         }
-        return new BufferTransfer(reference, uncertainty, assumedSpread);
+        return new BufferTransfer(reference, uncertainty, assumedSpread, enthalpies);
     }
 
     /** The same predictor with another spread for entries that state none, mobility units, &gt; 0. */
@@ -141,7 +187,7 @@ public final class BufferTransfer {
         if (!(spreadUnits > 0) || Double.isInfinite(spreadUnits)) {
             throw new IllegalArgumentException("assumed spread must be finite and > 0, got " + spreadUnits);
         }
-        return new BufferTransfer(reference, inputs, spreadUnits);
+        return new BufferTransfer(reference, inputs, spreadUnits, enthalpies);
     }
 
     /** Spread used for entries without {@code mobility_sd}, mobility units. */
@@ -226,9 +272,12 @@ public final class BufferTransfer {
             return withoutModel(entry, bufferA, bufferB, spread, notes);
         }
         SpeciesModel m = choice.model;
-        double gA = MobilityPredictor.effectiveMobility(m, a);
-        double gB = MobilityPredictor.effectiveMobility(m, b);
-        PredictedMobility.Method method = anchorIsInformative(m, a, gA, mu)
+        // pKa values at each buffer's temperature (van 't Hoff), limiting mobilities still at 25 °C
+        SpeciesModel mA = enthalpies.atTemperature(m, a.temperatureC());
+        SpeciesModel mB = enthalpies.atTemperature(m, b.temperatureC());
+        double gA = MobilityPredictor.effectiveMobility(mA, a);
+        double gB = MobilityPredictor.effectiveMobility(mB, b);
+        PredictedMobility.Method method = anchorIsInformative(mA, a, gA, mu)
                 ? PredictedMobility.Method.RATIO : PredictedMobility.Method.DIFFERENCE;
         if (method == PredictedMobility.Method.DIFFERENCE) {
             notes.add(Math.signum(gA) != Math.signum(mu) && gA != 0 && mu != 0
@@ -237,13 +286,16 @@ public final class BufferTransfer {
         }
         double predicted = transfer(method, mu, gA, gB);
         double slope = method == PredictedMobility.Method.RATIO ? gB / gA : 1.0;
+        boolean warmer = !m.pKa().isEmpty() && (a.temperatureC() != REFERENCE_C || b.temperatureC() != REFERENCE_C);
+        if (warmer && enthalpies.steps(m).stream().anyMatch(st -> !st.tabulated())) {
+            notes.add(NOTE_ASSUMED_ENTHALPY);
+        }
 
-        double pKaSd = Math.hypot(inputs.pKaSd(), PKA_TEMPERATURE_SD_PER_K
-                * Math.max(Math.abs(a.temperatureC() - REFERENCE_C), Math.abs(b.temperatureC() - REFERENCE_C)));
-        double variance = inputVariance(m, a, b, mu, method, pKaSd);
+        double pKaSd = Math.hypot(inputs.pKaSd(), enthalpies.shiftSd(m, a.temperatureC(), b.temperatureC()));
+        double variance = inputVariance(m, mA, mB, a, b, mu, method, pKaSd);
         double withoutIonic = transfer(method, mu,
-                MobilityPredictor.effectiveMobility(m, new BufferConditions(a.pH(), 0.0, a.temperatureC())),
-                MobilityPredictor.effectiveMobility(m, new BufferConditions(b.pH(), 0.0, b.temperatureC())));
+                MobilityPredictor.effectiveMobility(mA, new BufferConditions(a.pH(), 0.0, a.temperatureC())),
+                MobilityPredictor.effectiveMobility(mB, new BufferConditions(b.pH(), 0.0, b.temperatureC())));
         double ionicRelative = maxAbsCharge(m) >= 2 ? MULTIVALENT_IONIC_STRENGTH_RELATIVE_SD
                 : UNIVALENT_IONIC_STRENGTH_RELATIVE_SD;
         variance += square(ionicRelative * (predicted - withoutIonic));
@@ -251,7 +303,7 @@ public final class BufferTransfer {
         variance += square(common);
         double modelSd = Math.sqrt(variance);
         double total = Math.sqrt(square(slope * spread) * predictiveFactor(entry.n()) + variance);
-        double meanCharge = MobilityPredictor.predict(m, b).meanCharge();
+        double meanCharge = MobilityPredictor.predict(mB, b).meanCharge();
         if (choice.note != null) {
             notes.add(0, choice.note);
         }
@@ -273,10 +325,9 @@ public final class BufferTransfer {
         double variance = square(MULTIVALENT_IONIC_STRENGTH_RELATIVE_SD * (predicted - viscous))
                 + square(common) + square(NO_MODEL_RELATIVE_SD * predicted);
         double total = Math.sqrt(square(slope * spread) * predictiveFactor(entry.n()) + variance);
-        notes.add(0, "no model data (no pka/limiting_mobility, not in the reference library, no charge): "
-                + "only viscosity and univalent ionic-strength transfer");
+        notes.add(0, NOTE_NO_MODEL);
         if (Math.abs(bufferB.pH() - bufferA.pH()) > BufferSpec.SAME_VALUE_TOLERANCE) {
-            notes.add(1, "the pH change is NOT accounted for");
+            notes.add(1, NOTE_PH_IGNORED);
         }
         return new PredictedMobility(entry.name(), bufferA, bufferB, mu, spread, entry.n(), Double.NaN, Double.NaN,
                 predicted, total, Math.sqrt(variance), common, slope, Double.NaN, PredictionBasis.NO_MODEL,
@@ -320,28 +371,46 @@ public final class BufferTransfer {
         return Math.abs(gA) >= MIN_ANCHOR_FRACTION * largest;
     }
 
-    /** Variance of the transfer from the pKa and limiting-mobility inputs, by central differences. */
-    private double inputVariance(SpeciesModel m, BufferConditions a, BufferConditions b, double measured,
-                                 PredictedMobility.Method method, double pKaSd) {
-        return InputPropagation.variance((p, mu) -> transferOf(m, p, mu, a, b, measured, method),
-                m.pKaArray(), m.limitingMobilityArray(), pKaSd, inputs.relativeMobilitySd());
+    /**
+     * Variance of the transfer from the pKa and limiting-mobility inputs, by central differences: a
+     * perturbation of a pKa of {@code m} (25 °C) moves that pKa alike at both temperatures.
+     */
+    private double inputVariance(SpeciesModel m, SpeciesModel mA, SpeciesModel mB, BufferConditions a,
+                                 BufferConditions b, double measured, PredictedMobility.Method method, double pKaSd) {
+        double[] base = m.pKaArray();
+        // the propagation perturbs its own array in place; the differences are taken against this copy
+        double[] perturbed = base.clone();
+        return InputPropagation.variance((p, mu) -> transferOf(m, shifted(mA, base, p), shifted(mB, base, p), mu, a,
+                b, measured, method), perturbed, m.limitingMobilityArray(), pKaSd, inputs.relativeMobilitySd());
     }
 
-    private static double transferOf(SpeciesModel m, double[] pKa, double[] mu, BufferConditions a,
+    /** The pKa values of {@code atT} moved by the perturbation {@code p − base}. */
+    private static double[] shifted(SpeciesModel atT, double[] base, double[] p) {
+        double[] out = atT.pKaArray();
+        for (int i = 0; i < out.length; i++) {
+            out[i] += p[i] - base[i];
+        }
+        return out;
+    }
+
+    private static double transferOf(SpeciesModel m, double[] pKaA, double[] pKaB, double[] mu, BufferConditions a,
                                      BufferConditions b, double measured, PredictedMobility.Method method) {
+        List<Double> u = new ArrayList<>(mu.length);
+        for (double v : mu) {
+            u.add(v);
+        }
+        return transfer(method, measured, MobilityPredictor.effectiveMobility(species(m, pKaA, u), a),
+                MobilityPredictor.effectiveMobility(species(m, pKaB, u), b));
+    }
+
+    private static SpeciesModel species(SpeciesModel m, double[] pKa, List<Double> mu) {
         List<Double> p = new ArrayList<>(pKa.length);
         for (double v : pKa) {
             p.add(v);
         }
         // keep the ascending order a perturbation of nearly equal pKa values could break
         p.sort(null);
-        List<Double> u = new ArrayList<>(mu.length);
-        for (double v : mu) {
-            u.add(v);
-        }
-        SpeciesModel perturbed = new SpeciesModel(m.name(), m.highestCharge(), p, u);
-        return transfer(method, measured, MobilityPredictor.effectiveMobility(perturbed, a),
-                MobilityPredictor.effectiveMobility(perturbed, b));
+        return new SpeciesModel(m.name(), m.highestCharge(), p, mu);
     }
 
     private static int maxAbsCharge(SpeciesModel m) {
@@ -350,6 +419,41 @@ public final class BufferTransfer {
             max = Math.max(max, Math.abs(m.charge(i)));
         }
         return max;
+    }
+
+    /**
+     * What a prediction for the entry would rest on, and why a better source was not usable
+     * (null when nothing stood in the way), without predicting anything.
+     *
+     * @param e            the entry
+     * @param libraryLabel its library's file name, for messages
+     */
+    public Coverage coverage(LibraryEntry e, String libraryLabel) {
+        List<String> notes = new ArrayList<>();
+        Choice c = choose(e, libraryLabel, notes);
+        String problem = null;
+        List<String> said = new ArrayList<>(notes);
+        if (c.note != null) {
+            said.add(0, c.note);
+        }
+        for (String n : said) {
+            String first = n.split("; ")[0];
+            if (first.startsWith(NOTE_OWN_DATA_UNUSED)) {
+                problem = first;
+                break;
+            }
+        }
+        return new Coverage(e.name(), c.basis, problem);
+    }
+
+    /**
+     * What an entry's prediction rests on.
+     *
+     * @param name    the analyte
+     * @param basis   the model data that would be used
+     * @param problem why the entry's own pka/limiting_mobility could not be used, or null
+     */
+    public record Coverage(String name, PredictionBasis basis, String problem) {
     }
 
     /** The model chosen for an entry, with the reason when a better source was unusable. */
@@ -361,24 +465,24 @@ public final class BufferTransfer {
         String problem = null;
         if (ownData) {
             if (e.charge() == 0) {
-                problem = "the entry's pka/limiting_mobility were not used: no charge is given";
+                problem = NOTE_OWN_DATA_UNUSED + ": no charge is given";
             } else {
                 try {
                     return new Choice(ReferenceIons.model(e, libraryLabel), PredictionBasis.ENTRY_MODEL, null);
                 } catch (InputException ex) {
-                    problem = "the entry's pka/limiting_mobility were not used: " + ex.problem();
+                    problem = NOTE_OWN_DATA_UNUSED + ": " + ex.problem();
                 }
             }
         }
         SpeciesModel ref = reference.get(key(e.name()));
         if (ref != null) {
             return new Choice(ref, PredictionBasis.REFERENCE_MODEL, problem == null
-                    ? "model data from the reference library" : problem + "; reference library used");
+                    ? NOTE_REFERENCE : problem + "; " + NOTE_REFERENCE_USED);
         }
         if (e.charge() != 0 && e.pKa().isEmpty()) {
             try {
                 return new Choice(ReferenceIons.model(e, libraryLabel), PredictionBasis.CHARGE_ONLY, problem == null
-                        ? "strong ion of the stated charge assumed" : problem + "; strong ion of the stated charge assumed");
+                        ? NOTE_STRONG : problem + "; " + NOTE_STRONG);
             } catch (InputException | IllegalArgumentException ex) {
                 problem = problem == null ? ex.getMessage() : problem;
             }

@@ -1,5 +1,6 @@
 package org.mobident.recheck;
 
+import java.util.List;
 import java.util.Locale;
 
 /**
@@ -61,6 +62,21 @@ public record PredictedMobility(String name, BufferSpec bufferA, BufferSpec buff
     /** {@code modelUncertainty} without the common part. */
     public double comparisonModelUncertainty() {
         return Math.sqrt(Math.max(0.0, modelUncertainty * modelUncertainty - commonUncertainty * commonUncertainty));
+    }
+
+    /**
+     * The remarks that say more than the basis does: {@link #note()} without the parts that only
+     * restate what the prediction rests on (reference data, strong ion, no model data, pH change
+     * not modelled), joined with "; "; empty when nothing is left.
+     */
+    public String specificNote() {
+        List<String> kept = new java.util.ArrayList<>();
+        for (String part : note.split("; ")) {
+            if (!part.isBlank() && !BufferTransfer.BASIS_NOTES.contains(part)) {
+                kept.add(part);
+            }
+        }
+        return String.join("; ", kept);
     }
 
     /** predicted − measuredA. */

@@ -14,11 +14,12 @@ import java.util.List;
  * @param predictions      the per-analyte predictions behind library B (or behind the prediction errors; may be empty)
  * @param predictionErrors measured − predicted per modelled analyte, when a measured library B was compared
  * @param notes            remarks for the analyst
+ * @param analytes         one summary per analyte of library A, in its order
  */
 public record RecheckResult(String libraryA, String libraryB, BufferSpec bufferB, boolean predicted,
                             List<AssignmentCheck> assignments, List<PairCheck> pairs,
                             List<PredictedMobility> predictions, List<PredictionError> predictionErrors,
-                            List<String> notes) {
+                            List<String> notes, List<AnalyteRecheck> analytes) {
 
     /** The caution a report ends with when the new library was predicted ({@link #caution()}). */
     public static final String CAUTION = "Identification by effective mobility is presumptive, and so is this "
@@ -38,6 +39,7 @@ public record RecheckResult(String libraryA, String libraryB, BufferSpec bufferB
         predictions = List.copyOf(predictions);
         predictionErrors = List.copyOf(predictionErrors);
         notes = List.copyOf(notes);
+        analytes = List.copyOf(analytes);
     }
 
     /** The closing caution: {@link #CAUTION} for a predicted new library, {@link #CAUTION_MEASURED} for a measured one. */
@@ -49,6 +51,11 @@ public record RecheckResult(String libraryA, String libraryB, BufferSpec bufferB
     public boolean needsAttention() {
         return assignments.stream().anyMatch(a -> a.verdict() != Verdict.STILL_HOLDS)
                 || pairs.stream().anyMatch(PairCheck::becameUnresolvable);
+    }
+
+    /** The pairs not resolved in A but resolved in B. */
+    public List<PairCheck> newlyResolvable() {
+        return pairs.stream().filter(PairCheck::becameResolvable).toList();
     }
 
     /** The pairs resolved in A but not in B. */

@@ -163,12 +163,27 @@ public final class Rechecker {
         Library libraryB = BufferTransfer.asLibrary(predictions, libraryA, bufferB);
         Map<String, Transfer> transfers = new LinkedHashMap<>();
         List<String> notes = new ArrayList<>();
+        List<String> withoutModel = new ArrayList<>();
         for (PredictedMobility p : predictions) {
             transfers.put(p.name(), new Transfer(p.predicted(), p.comparisonUncertainty(), p.shiftUncertainty(),
                     p.comparisonModelUncertainty(), p.basis()));
             if (p.basis() == PredictionBasis.NO_MODEL) {
-                notes.add("'" + p.name() + "' has no model data: " + p.note());
+                withoutModel.add(p.name());
             }
+        }
+        List<String> assumed = predictions.stream().filter(p -> p.note().contains(BufferTransfer.NOTE_ASSUMED_ENTHALPY))
+                .map(PredictedMobility::name).toList();
+        if (!assumed.isEmpty()) {
+            notes.add("pKa values moved to the new temperature with an assumed enthalpy of ionisation (none "
+                    + "tabulated; its uncertainty is included): " + String.join(", ", assumed));
+        }
+        if (!withoutModel.isEmpty()) {
+            // once for all of them, not per peak or per analyte
+            notes.add("No model data for " + String.join(", ", withoutModel) + ": only temperature and ionic "
+                    + "strength are carried over" + (predictions.stream().anyMatch(p -> p.basis() == PredictionBasis.NO_MODEL
+                    && Math.abs(p.bufferB().pH() - p.bufferA().pH()) > BufferSpec.SAME_VALUE_TOLERANCE)
+                    ? ", the pH change is not accounted for" : "")
+                    + ". To fix: for each, " + ModelCoverage.HOW_TO_FIX + ".");
         }
         return check(rows, tableLabel, libraryA, libraryB, bufferB, true, transfers, predictions, List.of(), notes,
                 predictor, settings);
@@ -216,7 +231,35 @@ public final class Rechecker {
             }
         }
         return new RecheckResult(libraryA.sourceFile(), libraryB.sourceFile(), bufferB, predicted, ordered,
-                pairs(libraryA, transfers, predictor, s.separation()), predictions, errors, notes);
+                pairs(libraryA, transfers, predictor, s.separation()), predictions, errors, notes,
+                analytes(libraryA, libraryB, transfers, ordered, s));
+    }
+
+    /** One summary per analyte of library A: its shift, its window in library B and its verdicts. */
+    private static List<AnalyteRecheck> analytes(Library libraryA, Library libraryB, Map<String, Transfer> transfers,
+                                                 List<AssignmentCheck> checks, RecheckSettings s) {
+        List<AnalyteRecheck> out = new ArrayList<>(libraryA.size());
+        for (LibraryEntry a : libraryA.entries()) {
+            Transfer t = transfers.get(a.name());
+            LibraryEntry b = libraryB.find(a.name()).orElse(null);
+            double muB = t != null ? t.mobilityB() : b != null ? b.mobility() : Double.NaN;
+            double window = b == null ? Double.NaN : oldWindowHalfWidth(libraryB, b, 0.0, s);
+            Map<Verdict, Integer> verdicts = new java.util.EnumMap<>(Verdict.class);
+            Map<String, Integer> collisions = new LinkedHashMap<>();
+            for (AssignmentCheck c : checks) {
+                if (c.analyte().equals(a.name())) {
+                    verdicts.merge(c.verdict(), 1, Integer::sum);
+                    for (String other : c.collidesWith()) {
+                        collisions.merge(other, 1, Integer::sum);
+                    }
+                }
+            }
+            List<String> collide = collisions.entrySet().stream()
+                    .sorted((x, y) -> Integer.compare(y.getValue(), x.getValue())).map(Map.Entry::getKey).toList();
+            out.add(new AnalyteRecheck(a.name(), a.mobility(), muB, t == null ? Double.NaN : t.shiftSd(), window,
+                    t == null ? null : t.basis(), verdicts, collide));
+        }
+        return out;
     }
 
     private static void checkRun(List<PeakTableRow> run, Library libraryA, Library libraryB,

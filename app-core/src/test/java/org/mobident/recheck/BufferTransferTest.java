@@ -181,4 +181,32 @@ class BufferTransferTest {
         assertEquals("B", ac.buffer());
         assertFalse(lb.notes().isEmpty());
     }
+
+    /**
+     * A Tris-like base measured at its pKa at 25 °C and predicted at 37 °C: with the shipped
+     * enthalpy its pKa falls to 8.072 − 0.3249 (see PkaTemperatureTest for the outside check), so
+     * the cation fraction falls from ½ to 1/(1 + 10^0.3249), on top of the viscosity ratio (written
+     * out here at I = 0, where activities play no part).
+     */
+    @Test
+    void warmerMethodMovesThePkaOfAnAmineBuffer() throws InputException {
+        Path table = Path.of("..").resolve(org.mobident.chem.IonisationEnthalpies.SHIPPED_TABLE);
+        org.mobident.chem.IonisationEnthalpies h = org.mobident.chem.IonisationEnthalpies.read(Files.exists(table)
+                ? table : Path.of(org.mobident.chem.IonisationEnthalpies.SHIPPED_TABLE));
+        LibraryEntry tris = entry("Tris", 14.75, 0.2, 6, 1, List.of(8.072), List.of(29.5, 0.0), 8.072, 0, 25);
+        BufferSpec a = BufferSpec.of("A", 8.072, 0, 25);
+        BufferSpec b = BufferSpec.of("B", 8.072, 0, 37);
+        PredictedMobility p = BufferTransfer.withoutReference().withEnthalpies(h).predict(tris, a, b, "lib");
+        double pKa37 = org.mobident.chem.PkaTemperature.pKaAt(8.072, 47.45, -59, 37.0);
+        double alpha37 = 1.0 / (1.0 + Math.pow(10, 8.072 - pKa37));
+        double viscosity = org.mobident.mobility.MobilityMath.atTemperature(1.0, 25, 37);
+        assertEquals(14.75 * alpha37 / 0.5 * viscosity, p.predicted(), 1e-6);
+        assertEquals(0.321, alpha37, 0.005);
+        // without the table the class value (45 kJ/mol) stands in, with a wider uncertainty and a remark
+        PredictedMobility q = BufferTransfer.withoutReference().predict(tris, a, b, "lib");
+        assertEquals(p.predicted(), q.predicted(), 0.5);
+        assertTrue(q.modelUncertainty() > p.modelUncertainty(), q.modelUncertainty() + " vs " + p.modelUncertainty());
+        assertTrue(q.note().contains("assumed enthalpy"), q.note());
+        assertFalse(p.note().contains("assumed enthalpy"), p.note());
+    }
 }

@@ -8,6 +8,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.io.PrintWriter;
 import java.io.StringWriter;
+import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
@@ -243,7 +244,12 @@ class RecheckerTest {
         RecheckSummaryText.write(r, new PrintWriter(text));
         String s = text.toString();
         assertTrue(s.contains("1 still hold, 1 moved but still unique, 0 now ambiguous, 1 reassigned, 1 lost"), s);
-        assertTrue(s.contains("formate: moved but still unique ("), s);
+        // one line per analyte: its verdict, shift ± SD, affected/assigned peaks, new window
+        String formate = s.lines().filter(l -> l.startsWith("formate ")).findFirst().orElseThrow();
+        assertTrue(formate.contains("moved but still unique") && formate.contains("1/1"), formate);
+        String acetate = s.lines().filter(l -> l.startsWith("acetate ")).findFirst().orElseThrow();
+        assertTrue(acetate.contains("reassigned to strong21"), acetate);
+        assertFalse(s.contains("NaN"), s);
         assertFalse(s.contains("moved still unique"), s);
         assertFalse(s.matches("(?s).*\\b(library|buffer) [AB]\\b.*"), "no bare A/B: " + s);
         assertTrue(s.contains("acetate / strong21"), s);
@@ -309,7 +315,8 @@ class RecheckerTest {
         StringWriter text = new StringWriter();
         RecheckSummaryText.write(r, new PrintWriter(text));
         assertTrue(text.toString().contains("1 reassigned"), text.toString());
-        assertTrue(text.toString().contains("r1 peak 1, x1: reassigned"), text.toString());
+        assertTrue(text.toString().lines().anyMatch(l -> l.startsWith("x1 ") && l.contains("reassigned to y")),
+                text.toString());
 
         // nearer to x1 (residual 0.4) than to y (0.6) in the new library: still x1, but not uniquely
         List<PeakTableRow> near = List.of(
@@ -319,5 +326,40 @@ class RecheckerTest {
                 RecheckSettings.DEFAULT.withMatch(org.mobident.matching.MatchSettings.ABSOLUTE)).assignments().get(0);
         assertEquals(Verdict.NOW_AMBIGUOUS, amb.verdict(), amb.reason());
         assertEquals(List.of("y"), amb.collidesWith());
+    }
+
+    /**
+     * A day of 30 runs against the demo library (16 analytes, invented values) fits one screen: at
+     * most 40 lines, one per analyte, no "NaN" anywhere (the per-peak detail goes to the CSV).
+     */
+    @Test
+    void thirtyRunsFitOneScreenPerAnalyte() throws Exception {
+        Library demo = org.mobident.library.LibraryCsv.read(Path.of("..", "demo-data", "library.csv"));
+        List<PeakTableRow> rows = new ArrayList<>();
+        long line = 2;
+        java.util.SplittableRandom random = new java.util.SplittableRandom(12);
+        for (int run = 1; run <= 30; run++) {
+            int peak = 1;
+            for (LibraryEntry e : demo.entries()) {
+                if (random.nextDouble() < 0.2) {
+                    continue; // not every analyte in every sample
+                }
+                double mu = e.mobility() + 0.1 * random.nextGaussian();
+                rows.add(new PeakTableRow(line++, "run" + run, peak++, "analyte", mu, 0.1, mu, e.name(), 0.95,
+                        "identified"));
+            }
+        }
+        Path ref = Path.of("..").resolve(org.mobident.chem.ReferenceIons.SHIPPED_LIBRARY);
+        RecheckResult r = Rechecker.withPredictedLibrary(rows, "day.csv", demo, null, BufferSpec.of("new", 5.2, 15, 30),
+                BufferTransfer.withReference(org.mobident.library.LibraryCsv.read(ref)), RecheckSettings.DEFAULT);
+        StringWriter text = new StringWriter();
+        RecheckSummaryText.write(r, new PrintWriter(text));
+        List<String> lines = text.toString().lines().toList();
+        assertTrue(lines.size() <= 40, lines.size() + " lines:\n" + text);
+        assertTrue(rows.size() > 300, "a day's worth of assignments: " + rows.size());
+        for (LibraryEntry e : demo.entries()) {
+            assertEquals(1, lines.stream().filter(l -> l.startsWith(e.name() + " ")).count(), e.name() + "\n" + text);
+        }
+        assertFalse(text.toString().contains("NaN"), text.toString());
     }
 }

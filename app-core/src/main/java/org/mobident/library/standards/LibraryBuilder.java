@@ -5,6 +5,7 @@ import java.math.BigDecimal;
 import java.nio.file.NoSuchFileException;
 import java.time.Instant;
 import java.util.ArrayList;
+import java.util.HashMap;
 import java.util.LinkedHashMap;
 import java.util.LinkedHashSet;
 import java.util.List;
@@ -158,6 +159,8 @@ public final class LibraryBuilder {
         private final Map<String, List<RunResult>> runsByMix = new LinkedHashMap<>();
         /** Analyte key (lower case) → the pooled data of that analyte. */
         private final Map<String, Pool> pools = new LinkedHashMap<>();
+        /** Analyte name (lower case) → the pool that carries the sheet's pKa and limiting mobilities. */
+        private final Map<String, Pool> modelData = new HashMap<>();
 
         /** Everything found for one analyte across mixes. */
         private static final class Pool {
@@ -167,6 +170,9 @@ public final class LibraryBuilder {
             NamingBasis basis;
             int chargeNumber;
             int chargeSign;
+            /** The sheet's model data for the analyte (empty when none). */
+            List<Double> pKa = List.of();
+            List<Double> limitingMobilities = List.of();
 
             Pool(String name) {
                 this.name = name;
@@ -357,6 +363,11 @@ public final class LibraryBuilder {
                     }
                     if (p.chargeSign == 0) {
                         p.chargeSign = a.chargeSign();
+                    }
+                    if (p.limitingMobilities.isEmpty() && a.hasModelData()) {
+                        p.pKa = a.pKa();
+                        p.limitingMobilities = a.limitingMobilities();
+                        modelData.put(a.name().toLowerCase(Locale.ROOT), p);
                     }
                 }
             }
@@ -593,8 +604,22 @@ public final class LibraryBuilder {
                 }
                 temperature = sum / n;
             }
-            return new LibraryEntry(s.name(), s.mean(), s.sd(), s.n(), s.charge(), s.tolerance(), List.of(), List.of(),
-                    buffer, Double.NaN, Double.NaN, temperature, source(s.runs()));
+            Pool model = modelData.get(s.name().toLowerCase(Locale.ROOT));
+            List<Double> pKa = model == null ? List.of() : model.pKa;
+            List<Double> limiting = model == null ? List.of() : model.limitingMobilities;
+            if (!limiting.isEmpty() && Double.isFinite(temperature)
+                    && temperature != org.mobident.chem.BufferConditions.REFERENCE_TEMPERATURE_C) {
+                // the sheet states them at 25 °C; the library column holds them at the entry's temperature
+                List<Double> atT = new ArrayList<>(limiting.size());
+                for (double mu : limiting) {
+                    atT.add(org.mobident.mobility.MobilityMath.atTemperature(mu,
+                            org.mobident.chem.BufferConditions.REFERENCE_TEMPERATURE_C, temperature));
+                }
+                limiting = atT;
+            }
+            return new LibraryEntry(s.name(), s.mean(), s.sd(), s.n(), s.charge(), s.tolerance(), pKa, limiting,
+                    buffer, Double.NaN, Double.NaN, temperature, source(s.runs())
+                            + (model == null ? "" : "; pka and limiting_mobility from the standards sheet"));
         }
 
         private String source(List<String> runs) {

@@ -1,5 +1,7 @@
 package org.mobident.library.standards;
 
+import java.util.List;
+
 /**
  * One analyte of a standard mix, as the standards sheet declares it.
  *
@@ -10,10 +12,22 @@ package org.mobident.library.standards;
  * @param order          expected migration order within the mix, 1 = first to pass the detector;
  *                       0 when not given
  * @param line           1-based line of the standards sheet that declared it (0 when built in code)
+ * @param pKa            the lab's thermodynamic pKa values at 25 °C, ascending (empty when not given)
+ * @param limitingMobilities the lab's limiting mobilities, one per form, most protonated first, signed,
+ *                       1e-9 m²/(V·s) at 25 °C (empty when not given); read as the library's
+ *                       {@code limiting_mobility} column is read
  */
 public record StandardAnalyte(String name, int chargeNumber, int chargeSign, double approxMobility, int order,
-                              long line) {
+                              long line, List<Double> pKa, List<Double> limitingMobilities) {
+
+    /** An analyte without model data. */
+    public StandardAnalyte(String name, int chargeNumber, int chargeSign, double approxMobility, int order, long line) {
+        this(name, chargeNumber, chargeSign, approxMobility, order, line, List.of(), List.of());
+    }
+
     public StandardAnalyte {
+        pKa = pKa == null ? List.of() : List.copyOf(pKa);
+        limitingMobilities = limitingMobilities == null ? List.of() : List.copyOf(limitingMobilities);
         if (name == null || name.isBlank()) {
             throw new IllegalArgumentException("an analyte needs a name");
         }
@@ -32,6 +46,11 @@ public record StandardAnalyte(String name, int chargeNumber, int chargeSign, dou
     /** An analyte known only by name. */
     public static StandardAnalyte named(String name) {
         return new StandardAnalyte(name, 0, 0, Double.NaN, 0, 0);
+    }
+
+    /** True when the sheet gives pKa values or limiting mobilities for the mobility model. */
+    public boolean hasModelData() {
+        return !pKa.isEmpty() || !limitingMobilities.isEmpty();
     }
 
     /** True when an approximate mobility is given. */

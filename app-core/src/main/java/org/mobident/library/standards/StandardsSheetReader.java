@@ -19,7 +19,16 @@ import org.mobident.InputException;
  * <ul>
  *   <li>Columns (case-insensitive, any order; spaces and hyphens count as {@code _}):
  *       {@code mix} and {@code analyte} are required; {@code charge}, {@code approx_mobility},
- *       {@code order} and {@code note} are optional. Any other column is an error.</li>
+ *       {@code order}, {@code pka}, {@code limiting_mobility} and {@code note} are optional. Any other
+ *       column is an error.</li>
+ *   <li>{@code pka} and {@code limiting_mobility}: the lab's own model data for the analyte, as the
+ *       library's columns of the same names hold them (space-separated numbers; pKa values at 25 °C
+ *       in ascending order; one signed limiting mobility per form at 25 °C, most protonated form
+ *       first, 0 for a neutral form). They need the charge number of the most charged form in
+ *       {@code charge}, and must describe a consistent set of forms
+ *       ({@link org.mobident.chem.ReferenceIons#model}); an analyte listed in several mixes may give
+ *       them once or repeat them, but not differently. {@code library build} writes them into the
+ *       library so that {@code predict} and {@code recheck} can model the analyte.</li>
  *   <li>{@code charge}: a signed whole number ({@code -2}, {@code +1}, {@code 1}), the charge written
  *       the chemist's way ({@code 2-}), or just the sign ({@code +}, {@code -}).</li>
  *   <li>{@code approx_mobility}: expected effective mobility in 1e-9 m²/(V·s), signed (anions
@@ -42,9 +51,12 @@ public final class StandardsSheetReader {
     static final String APPROX_MOBILITY = "approx_mobility";
     static final String ORDER = "order";
     static final String NOTE = "note";
+    static final String PKA = "pka";
+    static final String LIMITING_MOBILITY = "limiting_mobility";
 
     /** The known columns, in documentation order. */
-    public static final List<String> COLUMNS = List.of(MIX, ANALYTE, CHARGE, APPROX_MOBILITY, ORDER, NOTE);
+    public static final List<String> COLUMNS = List.of(MIX, ANALYTE, CHARGE, APPROX_MOBILITY, ORDER, PKA,
+            LIMITING_MOBILITY, NOTE);
 
     private static final char BYTE_ORDER_MARK = '\uFEFF';
     private static final char UNICODE_MINUS = '\u2212';
@@ -96,6 +108,8 @@ public final class StandardsSheetReader {
         private final Map<String, Long> analyteLines = new HashMap<>();
         /** "mix key / order" → line of first use. */
         private final Map<String, Long> orderLines = new HashMap<>();
+        /** analyte key → the first row that gave model data for it. */
+        private final Map<String, StandardAnalyte> modelRows = new HashMap<>();
 
         Parse(String file) {
             this.file = file;
@@ -202,9 +216,75 @@ public final class StandardsSheetReader {
                             + mix + "' on line " + first);
                 }
             }
+            List<Double> pKa = numbers(v.getOrDefault(PKA, ""), PKA, lineNo);
+            List<Double> limiting = numbers(v.getOrDefault(LIMITING_MOBILITY, ""), LIMITING_MOBILITY, lineNo);
+            StandardAnalyte analyte = new StandardAnalyte(name, charge[0], charge[1], approx, order, lineNo, pKa,
+                    limiting);
+            if (analyte.hasModelData()) {
+                checkModel(analyte, lineNo);
+            }
             mixNames.putIfAbsent(mixKey, mix);
-            analytesByMix.computeIfAbsent(mixKey, k -> new ArrayList<>())
-                    .add(new StandardAnalyte(name, charge[0], charge[1], approx, order, lineNo));
+            analytesByMix.computeIfAbsent(mixKey, k -> new ArrayList<>()).add(analyte);
+        }
+
+        /** The model data must make a consistent species, and agree with an earlier row of the same analyte. */
+        private void checkModel(StandardAnalyte a, long lineNo) throws InputException {
+            if (a.chargeNumber() == 0) {
+                throw new InputException(file, lineNo, CHARGE, "analyte '" + a.name() + "' gives pka or "
+                        + "limiting_mobility, so it needs the charge number of its most charged form in 'charge' "
+                        + "(e.g. -2 for a dicarboxylic acid, +1 for an amine)");
+            }
+            org.mobident.library.LibraryEntry probe = new org.mobident.library.LibraryEntry(a.name(),
+                    a.limitingMobilities().isEmpty() ? Double.NaN : mostCharged(a), Double.NaN, 0, a.chargeNumber(),
+                    Double.NaN, a.pKa(), a.limitingMobilities(), null, Double.NaN, Double.NaN, Double.NaN, null);
+            if (a.limitingMobilities().isEmpty()) {
+                throw new InputException(file, lineNo, LIMITING_MOBILITY, "analyte '" + a.name()
+                        + "' has pKa values but no limiting mobilities (one per form, most protonated first; "
+                        + "0 for a neutral form)");
+            }
+            try {
+                org.mobident.chem.ReferenceIons.model(probe, file);
+            } catch (InputException e) {
+                throw new InputException(file, lineNo, e.field(), e.problem(), e);
+            }
+            String key = a.name().toLowerCase(Locale.ROOT);
+            StandardAnalyte earlier = modelRows.putIfAbsent(key, a);
+            if (earlier != null && (!earlier.pKa().equals(a.pKa())
+                    || !earlier.limitingMobilities().equals(a.limitingMobilities())
+                    || earlier.chargeNumber() != a.chargeNumber())) {
+                throw new InputException(file, lineNo, PKA, "analyte '" + a.name() + "' has other charge, pka or "
+                        + "limiting_mobility values than on line " + earlier.line() + "; give them once, or the same");
+            }
+        }
+
+        /** The limiting mobility of the most charged form: the last for anions, the first for cations. */
+        private static double mostCharged(StandardAnalyte a) {
+            List<Double> mu = a.limitingMobilities();
+            return a.chargeNumber() < 0 ? mu.get(mu.size() - 1) : mu.get(0);
+        }
+
+        /** Space-separated numbers (a decimal comma in semicolon or tab sheets); empty when the cell is. */
+        private List<Double> numbers(String raw, String column, long lineNo) throws InputException {
+            List<Double> out = new ArrayList<>();
+            if (raw.isBlank()) {
+                return out;
+            }
+            for (String part : raw.strip().split("\\s+")) {
+                String s = part.replace(UNICODE_MINUS, '-');
+                if (delimiter != ',') {
+                    s = s.replace(',', '.');
+                }
+                if (!DECIMAL.matcher(s).matches()) {
+                    throw new InputException(file, lineNo, column, "'" + part + "' in '" + raw + "' is not a number; "
+                            + "write the values separated by spaces, e.g. 3.40 5.20");
+                }
+                double d = Double.parseDouble(s);
+                if (!Double.isFinite(d)) {
+                    throw new InputException(file, lineNo, column, "the number '" + part + "' is out of range");
+                }
+                out.add(d);
+            }
+            return out;
         }
 
         /** {charge number (0 when only the sign is given), sign}. */

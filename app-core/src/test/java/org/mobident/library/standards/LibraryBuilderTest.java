@@ -146,6 +146,38 @@ class LibraryBuilderTest {
         assertEquals("standards: 3 runs, cat1 ... cat3", shortSource.library().find("sodium").orElseThrow().source());
     }
 
+    /**
+     * The standards sheet's pKa values and limiting mobilities (invented numbers) reach the library
+     * entry, and only that entry; the library then models it (ReferenceIons reads it back).
+     */
+    @Test
+    void labsModelDataFromTheSheetReachTheLibrary() throws Exception {
+        StandardsSheet sheet = StandardsSheetReader.read("""
+                mix,analyte,order,charge,pka,limiting_mobility
+                cations,potassium,1,,,
+                cations,calcium,2,+2,,61.64
+                cations,magnesium,3,,,
+                cations,sodium,4,+1,9.3,53.1 0
+                cations,lithium,5,,,
+                """, "sheet.csv");
+        BuildResult b = build(cationRuns(), sheet, DEFAULTS, null);
+        LibraryEntry na = b.library().find("sodium").orElseThrow();
+        assertEquals(List.of(9.3), na.pKa());
+        assertEquals(List.of(53.1, 0.0), na.limitingMobilities());
+        assertEquals(1, na.charge());
+        assertTrue(na.source().contains("standards sheet"), na.source());
+        assertEquals(List.of(61.64), b.library().find("calcium").orElseThrow().limitingMobilities());
+        assertTrue(b.library().find("potassium").orElseThrow().pKa().isEmpty());
+        // through the file format and back into a model
+        java.io.StringWriter w = new java.io.StringWriter();
+        LibraryCsv.write(b.library(), w);
+        Library read = LibraryCsv.read(new StringReader(w.toString()), "built.csv");
+        org.mobident.chem.SpeciesModel m = org.mobident.chem.ReferenceIons.model(read.find("sodium").orElseThrow(),
+                "built.csv");
+        assertEquals(1, m.highestCharge());
+        assertEquals(List.of(9.3), m.pKa());
+    }
+
     @Test
     void namesByApproxMobilityOneToOne() {
         // Approximate values 1–3 units off, listed out of order; potassium and calcium without order.

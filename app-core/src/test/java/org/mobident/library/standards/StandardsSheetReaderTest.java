@@ -167,4 +167,52 @@ class StandardsSheetReaderTest {
                 () -> s.requireMixes(List.of(bad), Map.of()));
         assertEquals(3, none.line());
     }
+
+    /**
+     * The lab's own model data: pKa values and limiting mobilities per form, space-separated as in
+     * the library. The numbers are invented (a dicarboxylic acid and an amine of typical size).
+     */
+    @Test
+    void readsTheLabsPkaAndLimitingMobilities() throws InputException {
+        StandardsSheet s = StandardsSheetReader.read("""
+                mix,analyte,charge,order,pka,limiting_mobility
+                A,drug acid,-2,1,3.1 5.4,0 -30.5 -55.2
+                A,drug base,+1,2,9.1,25.0 0
+                A,plain,,3,,
+                B,drug acid,-2,1,3.1 5.4,0 -30.5 -55.2
+                B,other,,2,,
+                """, "sheet.csv");
+        StandardAnalyte acid = s.mixes().get(0).analytes().get(0);
+        assertEquals(List.of(3.1, 5.4), acid.pKa());
+        assertEquals(List.of(0.0, -30.5, -55.2), acid.limitingMobilities());
+        assertTrue(acid.hasModelData());
+        assertEquals(List.of(9.1), s.mixes().get(0).analytes().get(1).pKa());
+        assertFalse(s.mixes().get(0).analytes().get(2).hasModelData());
+        // semicolon sheet with decimal commas
+        StandardsSheet semi = StandardsSheetReader.read("mix;analyte;charge;pka;limiting_mobility\nA;x;-1;4,2;0 -33,5\n",
+                "semi.csv");
+        assertEquals(List.of(4.2), semi.mixes().get(0).analytes().get(0).pKa());
+        assertEquals(List.of(0.0, -33.5), semi.mixes().get(0).analytes().get(0).limitingMobilities());
+    }
+
+    @Test
+    void inconsistentModelDataAreInputErrorsNamingLineAndColumn() {
+        InputException noCharge = assertThrows(InputException.class, () -> StandardsSheetReader.read(
+                "mix,analyte,pka,limiting_mobility\nA,x,4.2,0 -33\n", "s.csv"));
+        assertEquals("charge", noCharge.field());
+        assertEquals(2, noCharge.line());
+        InputException count = assertThrows(InputException.class, () -> StandardsSheetReader.read(
+                "mix,analyte,charge,pka,limiting_mobility\nA,x,-2,3 5,0 -33\n", "s.csv"));
+        assertEquals("limiting_mobility", count.field());
+        InputException sign = assertThrows(InputException.class, () -> StandardsSheetReader.read(
+                "mix,analyte,charge,pka,limiting_mobility\nA,x,-1,4.2,0 33\n", "s.csv"));
+        assertEquals("limiting_mobility", sign.field());
+        InputException notNumber = assertThrows(InputException.class, () -> StandardsSheetReader.read(
+                "mix,analyte,charge,pka,limiting_mobility\nA,x,-1,4.2a,0 -33\n", "s.csv"));
+        assertEquals("pka", notNumber.field());
+        InputException differs = assertThrows(InputException.class, () -> StandardsSheetReader.read(
+                "mix,analyte,charge,pka,limiting_mobility\nA,x,-1,4.2,0 -33\nB,x,-1,4.3,0 -33\n", "s.csv"));
+        assertEquals(3, differs.line());
+        assertTrue(differs.getMessage().contains("line 2"), differs.getMessage());
+    }
 }
