@@ -24,6 +24,7 @@ import org.mobident.matching.RunScale;
 import org.mobident.matching.SpreadModel;
 import org.mobident.mobility.MobilityMath;
 import org.mobident.mobility.MobilityScale;
+import org.mobident.mobility.NeutralMarkerScale;
 import org.mobident.mobility.PhysicalBounds;
 import org.mobident.signal.Peak;
 import org.mobident.signal.PeakDetector;
@@ -46,6 +47,17 @@ public final class Identifier {
      *  at its time (the median w½/t of the run's peaks of S/N 10 or more times its time; zones of
      *  one run have about the same plate number, so w½ grows in proportion to t; a modelling choice). */
     static final double MARKER_SEARCH_WIDTH_FACTOR = 2.5;
+    /** Pairs of these many of the tallest peaks with every library entry vote for the marker time. */
+    static final int MARKER_VOTE_PEAKS = 12;
+    /** Votes within this relative distance of a common centre agree. A capillary a factor a off in
+     *  mobility (about 2.3 % per K) moves the vote of an analyte of mobility μ by (a − 1)·μ/μ_eof
+     *  relative to the others, about 2 % for a 1.5 K error and analytes 40 units apart on an EOF
+     *  of 50 (a modelling choice). */
+    static final double MARKER_VOTE_TOLERANCE = 0.02;
+    /** At least this many different peaks must agree on the marker time. */
+    static final int MARKER_VOTE_MIN_PEAKS = 3;
+    /** Half-width of the search around a predicted marker time, relative. */
+    static final double MARKER_SEARCH_REACH = 0.05;
     /** The window must hold this many samples for the targeted search. */
     static final int MARKER_SEARCH_MIN_POINTS = 50;
 
@@ -269,8 +281,74 @@ public final class Identifier {
         }
         TraceAnalysis analysis = PeakDetector.analyse(trace, run.conditions().detectionOrDirect(),
                 settings.peakSettings());
-        return new Detected(run, null, analysis.peaks(), analysis.noiseSd(),
-                markerWindow(run.conditions(), trace, analysis.peaks()));
+        RunConditions c = run.conditions();
+        Trace window = c.hasMarkerWindow() ? markerWindow(c, trace, analysis.peaks())
+                : settings.peakSettings().minSignalToNoise() > MARKER_SEARCH_MIN_SN && c.hasGeometry() ? trace : null;
+        return new Detected(run, null, analysis.peaks(), analysis.noiseSd(), window);
+    }
+
+    /**
+     * Where the library and the run's peaks put the neutral marker when no window was given: every
+     * pair of one of the run's tallest peaks and one library entry puts it at the time t_m with
+     * μ_entry = A/t' − A/t_m' (A = Ld·Lt/V, t' the ramp-corrected time); the time that the most
+     * pairs agree on within {@value #MARKER_VOTE_TOLERANCE} (relative) wins when at least
+     * {@value #MARKER_VOTE_MIN_PEAKS} different peaks agree. NaN when none does.
+     */
+    static double predictedMarkerTimeS(RunConditions c, List<Peak> peaks, Library library) {
+        if (peaks.isEmpty() || library.size() == 0) {
+            return Double.NaN;
+        }
+        double ramp = c.rampOrZeroS();
+        double t1 = peaks.get(0).migrationTimeS();
+        double t2 = peaks.get(peaks.size() - 1).migrationTimeS();
+        if (!(t2 > t1 && t1 > ramp)) {
+            return Double.NaN;
+        }
+        MobilityScale probe = new NeutralMarkerScale(c.detectorLengthCm(), c.totalLengthCm(), c.voltageKv(), ramp,
+                2 * t2, 0.0);
+        double a = (probe.mobility(t1) - probe.mobility(t2)) / (1 / (t1 - ramp / 2) - 1 / (t2 - ramp / 2));
+        List<Peak> tallest = new ArrayList<>(peaks);
+        tallest.sort(Comparator.comparingDouble((Peak p) -> -p.height()));
+        tallest = tallest.subList(0, Math.min(MARKER_VOTE_PEAKS, tallest.size()));
+        List<double[]> votes = new ArrayList<>();
+        for (int i = 0; i < tallest.size(); i++) {
+            double inverse = 1 / (tallest.get(i).migrationTimeS() - ramp / 2);
+            for (LibraryEntry e : library.entries()) {
+                double inverseMarker = inverse - e.mobility() / a;
+                if (inverseMarker > 0) {
+                    votes.add(new double[] {Math.log(1 / inverseMarker + ramp / 2), i});
+                }
+            }
+        }
+        votes.sort(Comparator.comparingDouble(v -> v[0]));
+        double best = Double.NaN;
+        int bestPeaks = MARKER_VOTE_MIN_PEAKS - 1;
+        int from = 0;
+        for (int to = 0; to < votes.size(); to++) {
+            while (votes.get(to)[0] - votes.get(from)[0] > 2 * MARKER_VOTE_TOLERANCE) {
+                from++;
+            }
+            java.util.BitSet agreeing = new java.util.BitSet();
+            for (int k = from; k <= to; k++) {
+                agreeing.set((int) votes.get(k)[1]);
+            }
+            if (agreeing.cardinality() > bestPeaks) {
+                bestPeaks = agreeing.cardinality();
+                best = Math.exp(0.5 * (votes.get(from)[0] + votes.get(to)[0]));
+            }
+        }
+        return best;
+    }
+
+    /** The stretch of {@code trace} within {@value #MARKER_SEARCH_REACH} (relative) of a time; null when too short. */
+    private static Trace around(Trace trace, double timeS) {
+        int from = Math.max(0, trace.indexAtOrAfter(timeS * (1 - MARKER_SEARCH_REACH)));
+        int to = Math.min(trace.size(), trace.indexAtOrAfter(timeS * (1 + MARKER_SEARCH_REACH)));
+        if (to - from < MARKER_SEARCH_MIN_POINTS) {
+            return null;
+        }
+        return new Trace(trace.name(), trace.sourceFile(), java.util.Arrays.copyOfRange(trace.timesS(), from, to),
+                java.util.Arrays.copyOfRange(trace.signals(), from, to));
     }
 
     /**
@@ -388,8 +466,15 @@ public final class Identifier {
                 : (mob, sd) -> LibraryMatcher.matchRun(mob, sd, prepared.library(), prepared.spread(), ms, adjuster);
         MarkerLocator locator = new MarkerLocator(prepared.library().size() == 0);
         MarkerLocator.Choice choice = locator.locate(c, peaks, evaluator);
-        if (d.markerWindow() != null && !MarkerLocator.settled(choice, c)) {
-            List<Peak> more = withWeakMarkers(c, d.markerWindow(), peaks);
+        Trace searchWindow = d.markerWindow();
+        if (searchWindow != null && !c.hasMarkerWindow() && !MarkerLocator.settled(choice, c)) {
+            // no window given and the peaks at hand leave the run unexplained: search where the
+            // library and the peaks put the marker
+            double predicted = predictedMarkerTimeS(c, peaks, prepared.library());
+            searchWindow = Double.isFinite(predicted) ? around(searchWindow, predicted) : null;
+        }
+        if (searchWindow != null && !MarkerLocator.settled(choice, c)) {
+            List<Peak> more = withWeakMarkers(c, searchWindow, peaks);
             if (more.size() > peaks.size()) {
                 peaks = more;
                 choice = locator.locate(c, peaks, evaluator);
