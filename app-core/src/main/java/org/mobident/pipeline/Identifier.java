@@ -28,6 +28,7 @@ import org.mobident.mobility.NeutralMarkerScale;
 import org.mobident.mobility.PhysicalBounds;
 import org.mobident.signal.Peak;
 import org.mobident.signal.PeakDetector;
+import org.mobident.signal.PeakSettings;
 import org.mobident.signal.TraceAnalysis;
 import org.mobident.trace.RunConditions;
 import org.mobident.trace.RunSpec;
@@ -49,11 +50,14 @@ public final class Identifier {
     static final double MARKER_SEARCH_WIDTH_FACTOR = 2.5;
     /** Pairs of these many of the tallest peaks with every library entry vote for the marker time. */
     static final int MARKER_VOTE_PEAKS = 12;
-    /** Votes within this relative distance of a common centre agree. A capillary a factor a off in
-     *  mobility (about 2.3 % per K) moves the vote of an analyte of mobility μ by (a − 1)·μ/μ_eof
-     *  relative to the others, about 2 % for a 1.5 K error and analytes 40 units apart on an EOF
-     *  of 50 (a modelling choice). */
-    static final double MARKER_VOTE_TOLERANCE = 0.02;
+    /** Votes within this relative distance of a common centre agree (a modelling choice: peak times
+     *  and library mobilities agree to a few tenths of a per cent once the run's scale factor is
+     *  right). */
+    static final double MARKER_VOTE_TOLERANCE = 0.004;
+    /** The run's mobility scale factor a is searched over 1 ± this (about ±2.5 K of temperature)... */
+    static final double MARKER_VOTE_FACTOR_REACH = 0.06;
+    /** ... in steps of this. */
+    static final double MARKER_VOTE_FACTOR_STEP = 0.004;
     /** At least this many different peaks must agree on the marker time. */
     static final int MARKER_VOTE_MIN_PEAKS = 3;
     /** Half-width of the search around a predicted marker time, relative. */
@@ -288,11 +292,13 @@ public final class Identifier {
     }
 
     /**
-     * Where the library and the run's peaks put the neutral marker when no window was given: every
-     * pair of one of the run's tallest peaks and one library entry puts it at the time t_m with
-     * μ_entry = A/t' − A/t_m' (A = Ld·Lt/V, t' the ramp-corrected time); the time that the most
-     * pairs agree on within {@value #MARKER_VOTE_TOLERANCE} (relative) wins when at least
-     * {@value #MARKER_VOTE_MIN_PEAKS} different peaks agree. NaN when none does.
+     * Where the library and the run's peaks put the neutral marker when no window was given: for a
+     * run scale factor a (all mobilities of the run a times the library's: temperature, field),
+     * every pair of one of the run's tallest peaks and one library entry puts the marker at the
+     * time t_m with a·μ_entry = A/t' − A/t_m' (A = Ld·Lt/V, t' the ramp-corrected time); over a grid
+     * of a, the time that the most different peaks agree on within
+     * {@value #MARKER_VOTE_TOLERANCE} (relative) wins, the a nearest 1 on ties, when at least
+     * {@value #MARKER_VOTE_MIN_PEAKS} peaks agree. NaN when none does (a Hough-type vote).
      */
     static double predictedMarkerTimeS(RunConditions c, List<Peak> peaks, Library library) {
         if (peaks.isEmpty() || library.size() == 0) {
@@ -310,31 +316,40 @@ public final class Identifier {
         List<Peak> tallest = new ArrayList<>(peaks);
         tallest.sort(Comparator.comparingDouble((Peak p) -> -p.height()));
         tallest = tallest.subList(0, Math.min(MARKER_VOTE_PEAKS, tallest.size()));
-        List<double[]> votes = new ArrayList<>();
-        for (int i = 0; i < tallest.size(); i++) {
-            double inverse = 1 / (tallest.get(i).migrationTimeS() - ramp / 2);
-            for (LibraryEntry e : library.entries()) {
-                double inverseMarker = inverse - e.mobility() / a;
-                if (inverseMarker > 0) {
-                    votes.add(new double[] {Math.log(1 / inverseMarker + ramp / 2), i});
+        double best = Double.NaN;
+        int bestPeaks = 0;
+        double bestDistance = Double.POSITIVE_INFINITY;
+        int steps = (int) Math.round(MARKER_VOTE_FACTOR_REACH / MARKER_VOTE_FACTOR_STEP);
+        for (int step = -steps; step <= steps; step++) {
+            double factor = 1 + step * MARKER_VOTE_FACTOR_STEP;
+            List<double[]> votes = new ArrayList<>();
+            for (int i = 0; i < tallest.size(); i++) {
+                double inverse = 1 / (tallest.get(i).migrationTimeS() - ramp / 2);
+                for (LibraryEntry e : library.entries()) {
+                    double inverseMarker = inverse - factor * e.mobility() / a;
+                    if (inverseMarker > 0) {
+                        votes.add(new double[] {Math.log(1 / inverseMarker + ramp / 2), i});
+                    }
                 }
             }
-        }
-        votes.sort(Comparator.comparingDouble(v -> v[0]));
-        double best = Double.NaN;
-        int bestPeaks = MARKER_VOTE_MIN_PEAKS - 1;
-        int from = 0;
-        for (int to = 0; to < votes.size(); to++) {
-            while (votes.get(to)[0] - votes.get(from)[0] > 2 * MARKER_VOTE_TOLERANCE) {
-                from++;
-            }
-            java.util.BitSet agreeing = new java.util.BitSet();
-            for (int k = from; k <= to; k++) {
-                agreeing.set((int) votes.get(k)[1]);
-            }
-            if (agreeing.cardinality() > bestPeaks) {
-                bestPeaks = agreeing.cardinality();
-                best = Math.exp(0.5 * (votes.get(from)[0] + votes.get(to)[0]));
+            votes.sort(Comparator.comparingDouble(v -> v[0]));
+            int from = 0;
+            for (int to = 0; to < votes.size(); to++) {
+                while (votes.get(to)[0] - votes.get(from)[0] > 2 * MARKER_VOTE_TOLERANCE) {
+                    from++;
+                }
+                java.util.BitSet agreeing = new java.util.BitSet();
+                for (int k = from; k <= to; k++) {
+                    agreeing.set((int) votes.get(k)[1]);
+                }
+                int count = agreeing.cardinality();
+                double distance = Math.abs(factor - 1);
+                if (count >= MARKER_VOTE_MIN_PEAKS
+                        && (count > bestPeaks || (count == bestPeaks && distance < bestDistance))) {
+                    bestPeaks = count;
+                    bestDistance = distance;
+                    best = Math.exp(0.5 * (votes.get(from)[0] + votes.get(to)[0]));
+                }
             }
         }
         return best;
@@ -382,22 +397,30 @@ public final class Identifier {
      * marker choice still has to make the library explain the run.
      */
     private List<Peak> withWeakMarkers(RunConditions c, Trace window, List<Peak> peaks) {
-        List<Peak> weak = PeakDetector.analyse(window, c.detectionOrDirect(),
-                settings.peakSettings().withMinSignalToNoise(MARKER_SEARCH_MIN_SN)).peaks();
-        List<Peak> out = new ArrayList<>(peaks);
         double widthPerTime = typicalWidthPerTime(peaks);
-        for (Peak w : weak) {
-            boolean known = false;
-            for (Peak p : peaks) {
-                known |= Math.abs(p.apexTimeS() - w.apexTimeS()) < Math.max(p.widthHalfS(), w.widthHalfS());
-            }
+        double middleS = 0.5 * (window.startTimeS() + window.endTimeS());
+        PeakSettings search = settings.peakSettings().withMinSignalToNoise(MARKER_SEARCH_MIN_SN);
+        // the stretch analysed as it is, and as a stretch of this run's zones (its own width estimate
+        // comes from its noise when it holds no clear zone; a zone narrower than the run's trend is
+        // found by the first)
+        List<Peak> found = new ArrayList<>(PeakDetector.analyse(window, c.detectionOrDirect(), search).peaks());
+        if (Double.isFinite(widthPerTime)) {
+            found.addAll(PeakDetector.analyse(window, c.detectionOrDirect(),
+                    search.forZonesOfWidth(widthPerTime * middleS)).peaks());
+        }
+        List<Peak> out = new ArrayList<>(peaks);
+        for (Peak w : found) {
             // a zone this faint must also be as wide as a zone there would be: noise found at S/N 1.5
             // is mostly narrower or wider than that
             double expected = widthPerTime * w.apexTimeS();
             boolean zoneLike = !(expected > 0)
                     || (w.widthHalfS() >= expected / MARKER_SEARCH_WIDTH_FACTOR
                     && w.widthHalfS() <= expected * MARKER_SEARCH_WIDTH_FACTOR);
-            if (!known && zoneLike) {
+            boolean known = false;
+            for (Peak p : out) {
+                known |= Math.abs(p.apexTimeS() - w.apexTimeS()) < Math.max(p.widthHalfS(), w.widthHalfS());
+            }
+            if (zoneLike && !known) {
                 out.add(w);
             }
         }

@@ -143,7 +143,8 @@ public final class PeakDetector {
         double floor = noiseFloor(y);
         double whiteSigma = Math.max(NoiseEstimator.robustSd(y), floor);
         double sampling = medianInterval(t);
-        double typicalWidth = PeakWidthEstimator.typicalWidthS(t, y, whiteSigma, sampling);
+        double typicalWidth = Double.isFinite(settings.zoneWidthS()) && settings.zoneWidthS() > 0
+                ? settings.zoneWidthS() : PeakWidthEstimator.typicalWidthS(t, y, whiteSigma, sampling);
 
         double windowS = Double.isFinite(settings.smoothingWindowS()) && settings.smoothingWindowS() > 0
                 ? settings.smoothingWindowS()

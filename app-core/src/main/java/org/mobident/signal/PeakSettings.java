@@ -10,11 +10,18 @@ import org.mobident.Tolerances;
  *                          peak must also stand significantly above the smoothed noise around it
  * @param smoothingWindowS  width of the smoothing window in s; NaN chooses it from the data
  * @param minWidthS         narrower features (spikes) are not peaks, s; NaN chooses from the data
+ * @param zoneWidthS        typical width at half height of the zones, s, which sets the smoothing,
+ *                          the baseline's reach and the noise windows; NaN measures it on the trace
  */
-public record PeakSettings(double minSignalToNoise, double smoothingWindowS, double minWidthS) {
+public record PeakSettings(double minSignalToNoise, double smoothingWindowS, double minWidthS, double zoneWidthS) {
 
     public static final PeakSettings DEFAULT =
             new PeakSettings(Tolerances.DEFAULT_MIN_SIGNAL_TO_NOISE, Double.NaN, Double.NaN);
+
+    /** Settings whose typical zone width is measured on the trace. */
+    public PeakSettings(double minSignalToNoise, double smoothingWindowS, double minWidthS) {
+        this(minSignalToNoise, smoothingWindowS, minWidthS, Double.NaN);
+    }
 
     public PeakSettings {
         if (!(minSignalToNoise > 0)) {
@@ -22,7 +29,20 @@ public record PeakSettings(double minSignalToNoise, double smoothingWindowS, dou
         }
     }
 
+    /**
+     * These settings for a stretch of a run whose zones are known to be about {@code widthHalfS}
+     * wide: smoothed, clipped and judged as the whole run would be, not by the stretch's own width
+     * estimate, which comes from its noise when it holds no clear zone. Unchanged when the width is
+     * unknown.
+     */
+    public PeakSettings forZonesOfWidth(double widthHalfS) {
+        if (!(widthHalfS > 0) || !Double.isFinite(widthHalfS)) {
+            return this;
+        }
+        return new PeakSettings(minSignalToNoise, smoothingWindowS, minWidthS, widthHalfS);
+    }
+
     public PeakSettings withMinSignalToNoise(double sn) {
-        return new PeakSettings(sn, smoothingWindowS, minWidthS);
+        return new PeakSettings(sn, smoothingWindowS, minWidthS, zoneWidthS);
     }
 }
