@@ -13,7 +13,9 @@ import java.util.Map;
  *   <li><b>By time.</b> A peak may belong to a row with a time when |t − time| is at most
  *       {@link #toleranceS}: max(2 × the peak's width at half height, 1 % of the row's time,
  *       0.5 s). Pairs are taken nearest first, each peak and each row at most once (ties broken
- *       by peak number, then by the row's line), so every row gets its nearest free peak.</li>
+ *       by peak number, then by the row's line), so every row gets its nearest free peak; rows of
+ *       real zones are served before spike rows, so a spike that sits on a zone does not take the
+ *       zone's peak (a spike counts as reported only for a peak no zone claims).</li>
  *   <li><b>By name.</b> An analyte row without a time then takes the first still free analyte
  *       peak (in table order) that was called (identified or ambiguous) by that name.</li>
  * </ol>
@@ -82,7 +84,10 @@ public final class ZoneMatching {
                 }
             }
         }
-        candidates.sort(Comparator.comparingDouble(Candidate::distanceS).thenComparingInt(Candidate::peak)
+        // real zones first: a spike on top of a zone (removed before the zone was measured) does not
+        // take the zone's peak from it
+        candidates.sort(Comparator.comparing((Candidate c) -> known.get(c.row()).kind() == KnownKind.SPIKE)
+                .thenComparingDouble(Candidate::distanceS).thenComparingInt(Candidate::peak)
                 .thenComparingLong(c -> known.get(c.row()).line()).thenComparingInt(Candidate::row));
         Map<Integer, Pair> byPeak = new HashMap<>();
         boolean[] rowTaken = new boolean[known.size()];

@@ -78,6 +78,20 @@ class ZoneMatchingTest {
     }
 
     @Test
+    void aSpikeOnAZoneDoesNotTakeTheZonesPeak() {
+        // the spike (101.25 s) is nearer the peak (101.27 s) than the zone's own time (101.16 s)
+        KnownIdentity zone = analyte(3, "iodide", 101.16);
+        KnownIdentity spike = new KnownIdentity(9, "r", KnownKind.SPIKE, "", 101.25, Double.NaN, Double.NaN);
+        List<ZoneMatching.Pair> pairs = ZoneMatching.match(List.of(zone, spike),
+                List.of(peak(1, 101.27, 1.1, "iodide", ReportedPeak.Status.IDENTIFIED)));
+        assertEquals(1, pairs.size());
+        assertEquals(zone, pairs.get(0).known());
+        // with no zone there, the spike does take a peak at its time: a spike reported
+        pairs = ZoneMatching.match(List.of(spike), List.of(unassigned(1, 101.27, 0.1)));
+        assertEquals(spike, pairs.get(0).known());
+    }
+
+    @Test
     void rowsWithoutTimeAreMatchedByTheNameOfAFreeCall() {
         KnownIdentity nitrate = new KnownIdentity(2, "r", KnownKind.ANALYTE, "Nitrate", Double.NaN, Double.NaN,
                 Double.NaN);
