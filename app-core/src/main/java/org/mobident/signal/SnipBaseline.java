@@ -59,12 +59,30 @@ final class SnipBaseline {
         double[] sum = new double[bins];
         double[] timeSum = new double[bins];
         int[] count = new int[bins];
+        // times increase, so each bin's samples are consecutive: sum them in registers and store
+        // once per bin (the same additions in the same order as summing into the arrays)
+        int current = 0;
+        double s = 0;
+        double ts = 0;
+        int c = 0;
         for (int i = 0; i < n; i++) {
             int b = Math.min(bins - 1, (int) ((timeS[i] - t0) / binS));
-            sum[b] += y[i];
-            timeSum[b] += timeS[i];
-            count[b]++;
+            if (b != current) {
+                sum[current] = s;
+                timeSum[current] = ts;
+                count[current] = c;
+                current = b;
+                s = 0;
+                ts = 0;
+                c = 0;
+            }
+            s += y[i];
+            ts += timeS[i];
+            c++;
         }
+        sum[current] = s;
+        timeSum[current] = ts;
+        count[current] = c;
         double[] value = new double[bins];
         double[] centre = new double[bins];
         fillBins(sum, timeSum, count, t0, binS, value, centre);

@@ -271,7 +271,8 @@ public final class DelimitedTraceReader {
                     int digits = 0;
                     int fraction = 0;
                     int c;
-                    while (i < n && (c = b[i] - '0') >= 0 && c <= 9) {
+                    // (char) maps the bytes below '0' (and the negative ones) above 9: one test per byte
+                    while (i < n && (c = (char) (b[i] - '0')) <= 9) {
                         m = m * 10 + c;
                         digits++;
                         i++;
@@ -279,7 +280,7 @@ public final class DelimitedTraceReader {
                     if (i < n && (b[i] == '.' || b[i] == decimal)) {
                         i++;
                         int before = i;
-                        while (i < n && (c = b[i] - '0') >= 0 && c <= 9) {
+                        while (i < n && (c = (char) (b[i] - '0')) <= 9) {
                             m = m * 10 + c;
                             i++;
                         }
