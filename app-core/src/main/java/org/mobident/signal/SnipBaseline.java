@@ -226,20 +226,25 @@ final class SnipBaseline {
         int n = timeS.length;
         int bins = centre.length;
         double[] out = new double[n];
-        int b = 0;
-        for (int i = 0; i < n; i++) {
-            double t = timeS[i];
-            while (b < bins - 1 && centre[b + 1] <= t) {
-                b++;
+        // the times increase: first those up to the first centre, then bin by bin the times from a
+        // centre (inclusive) to the next, then those from the last centre on
+        int i = 0;
+        while (i < n && timeS[i] <= centre[0]) {
+            out[i++] = base[0];
+        }
+        for (int b = 0; b < bins - 1 && i < n; b++) {
+            double from = centre[b];
+            double to = centre[b + 1];
+            double span = to - from;
+            double level = base[b];
+            double rise = base[b + 1] - level;
+            while (i < n && timeS[i] < to) {
+                double f = (timeS[i] - from) / span;
+                out[i++] = level + f * rise;
             }
-            if (t <= centre[0]) {
-                out[i] = base[0];
-            } else if (b >= bins - 1) {
-                out[i] = base[bins - 1];
-            } else {
-                double f = (t - centre[b]) / (centre[b + 1] - centre[b]);
-                out[i] = base[b] + f * (base[b + 1] - base[b]);
-            }
+        }
+        while (i < n) {
+            out[i++] = base[bins - 1];
         }
         return out;
     }
