@@ -46,11 +46,16 @@ public final class BatchOptions {
     }
 
     Batch identify() throws InputException {
+        return identify(org.mobident.pipeline.BatchProgress.NONE);
+    }
+
+    /** Loads the inputs and identifies the runs, telling {@code progress} as runs are done. */
+    Batch identify(org.mobident.pipeline.BatchProgress progress) throws InputException {
         Library library = LibraryCsv.read(libraryFile);
         org.mobident.library.standards.LibraryCheck.requirePlausible(library);
         RunInputs.Loaded loaded = inputs.load();
         IdentifySettings settings = inputs.settings(matching.toSettings(MatchSettings.DEFAULT));
-        List<RunResult> results = new ArrayList<>(new Identifier(library, settings).identifyAll(loaded.runs()));
+        List<RunResult> results = new ArrayList<>(new Identifier(library, settings).identifyAll(loaded.runs(), progress));
         results.addAll(loaded.rejected());
         return new Batch(library, results, settings);
     }

@@ -51,7 +51,8 @@ public final class IdentifyCommand implements Callable<Integer> {
     @Option(names = "--overwrite", description = "Replace output files that already exist.")
     boolean overwrite;
 
-    @Option(names = "--quiet", description = "Do not print the per-run summary.")
+    @Option(names = "--quiet", description = "Print neither the per-run summary, nor the progress bar, nor the "
+            + "closing totals line.")
     boolean quiet;
 
     @Override
@@ -62,9 +63,13 @@ public final class IdentifyCommand implements Callable<Integer> {
             err.println("mobident identify: give either a run sheet (--runs SHEET) or trace files, not both or neither.");
             return ExitCodes.USAGE;
         }
+        long start = System.nanoTime();
         Outputs.checkFree(overwrite, csvOut, jsonOut, htmlOut);
         KnownScores known = KnownScores.read(knownFile);
-        BatchOptions.Batch done = batch.identify();
+        BatchOptions.Batch done;
+        try (ProgressDisplay progress = ProgressDisplay.on(err, !quiet && ProgressDisplay.stderrIsTerminal())) {
+            done = batch.identify(progress);
+        }
         var results = done.results();
         KnownScores scored = known == null ? null : known.score(results, done.library());
         if (!quiet) {
@@ -84,6 +89,11 @@ public final class IdentifyCommand implements Callable<Integer> {
             Outputs.write(htmlOut, overwrite, w -> HtmlReport.write(results, traces, done.library(),
                     Outputs.htmlOptions(), KnownScores.sections(scored), w));
         }
-        return Outputs.reportRunProblems(results, err);
+        int code = Outputs.reportRunProblems(results, err);
+        if (!quiet) {
+            err.println(BatchTotals.line(results, (System.nanoTime() - start) / 1e9));
+            err.flush();
+        }
+        return code;
     }
 }

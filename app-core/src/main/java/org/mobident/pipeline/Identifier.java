@@ -115,11 +115,17 @@ public final class Identifier {
      * the certainty of the others.
      */
     public List<RunResult> identifyAll(List<RunSpec> runs) {
+        return identifyAll(runs, BatchProgress.NONE);
+    }
+
+    /** As {@link #identifyAll(List)}, telling {@code progress} as runs are done. */
+    public List<RunResult> identifyAll(List<RunSpec> runs, BatchProgress progress) {
         if (runs.isEmpty()) {
             return List.of();
         }
         // pass 1: each run read, detected and matched in one task, so that at most one trace per thread is held
-        List<Finished> done = parallel(runs, r -> finishing(detect(r), null),
+        progress.passStarted(1, runs.size());
+        List<Finished> done = parallel(runs, r -> counted(progress, 1, finishing(detect(r), null)),
                 (spec, e) -> new Finished(RunResult.failure(spec, e),
                         new Detected(spec, RunResult.failure(spec, e), List.of(), Double.NaN)));
         List<Detected> detected = new ArrayList<>(done.size());
@@ -154,8 +160,9 @@ public final class Identifier {
                 again.add(i);
             }
         }
-        List<RunResult> second = parallel(again, i -> finish(detected.get(i),
-                        learned.get(bufferKey(detected.get(i).run().conditions().buffer()))),
+        progress.passStarted(2, again.size());
+        List<RunResult> second = parallel(again, i -> counted(progress, 2, finish(detected.get(i),
+                        learned.get(bufferKey(detected.get(i).run().conditions().buffer())))),
                 (i, e) -> first.get(i));
         List<RunResult> out = new ArrayList<>(first);
         for (int k = 0; k < again.size(); k++) {
@@ -186,6 +193,12 @@ public final class Identifier {
             }
         }
         return false;
+    }
+
+    /** Tells {@code progress} that a run of {@code pass} is done; returns its result. */
+    private static <R> R counted(BatchProgress progress, int pass, R result) {
+        progress.runDone(pass);
+        return result;
     }
 
     /** Confidence above which a call needs no second pass. */

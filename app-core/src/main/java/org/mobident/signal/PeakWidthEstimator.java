@@ -96,16 +96,22 @@ final class PeakWidthEstimator {
             int from = j * k;
             int to = Math.min(n, from + k);
             double e = x[from];
-            for (int i = from + 1; i < to; i++) {
-                e = closing ? Math.max(e, x[i]) : Math.min(e, x[i]);
+            if (closing) {
+                for (int i = from + 1; i < to; i++) {
+                    e = Math.max(e, x[i]);
+                }
+            } else {
+                for (int i = from + 1; i < to; i++) {
+                    e = Math.min(e, x[i]);
+                }
             }
             b[j] = e;
         }
         int blockRadius = (radius + k - 1) / k;
         double[] coarse = movingExtreme(movingExtreme(b, blockRadius, closing), blockRadius, !closing);
         double[] out = new double[n];
-        for (int i = 0; i < n; i++) {
-            out[i] = coarse[i / k];
+        for (int j = 0; j < blocks; j++) {
+            java.util.Arrays.fill(out, j * k, Math.min(n, j * k + k), coarse[j]);
         }
         return out;
     }

@@ -59,12 +59,30 @@ final class SnipBaseline {
         double[] sum = new double[bins];
         double[] timeSum = new double[bins];
         int[] count = new int[bins];
+        // times increase, so each bin's samples are consecutive: sum them in registers and store
+        // once per bin (the same additions in the same order as summing into the arrays)
+        int current = 0;
+        double s = 0;
+        double ts = 0;
+        int c = 0;
         for (int i = 0; i < n; i++) {
             int b = Math.min(bins - 1, (int) ((timeS[i] - t0) / binS));
-            sum[b] += y[i];
-            timeSum[b] += timeS[i];
-            count[b]++;
+            if (b != current) {
+                sum[current] = s;
+                timeSum[current] = ts;
+                count[current] = c;
+                current = b;
+                s = 0;
+                ts = 0;
+                c = 0;
+            }
+            s += y[i];
+            ts += timeS[i];
+            c++;
         }
+        sum[current] = s;
+        timeSum[current] = ts;
+        count[current] = c;
         double[] value = new double[bins];
         double[] centre = new double[bins];
         fillBins(sum, timeSum, count, t0, binS, value, centre);
@@ -208,20 +226,25 @@ final class SnipBaseline {
         int n = timeS.length;
         int bins = centre.length;
         double[] out = new double[n];
-        int b = 0;
-        for (int i = 0; i < n; i++) {
-            double t = timeS[i];
-            while (b < bins - 1 && centre[b + 1] <= t) {
-                b++;
+        // the times increase: first those up to the first centre, then bin by bin the times from a
+        // centre (inclusive) to the next, then those from the last centre on
+        int i = 0;
+        while (i < n && timeS[i] <= centre[0]) {
+            out[i++] = base[0];
+        }
+        for (int b = 0; b < bins - 1 && i < n; b++) {
+            double from = centre[b];
+            double to = centre[b + 1];
+            double span = to - from;
+            double level = base[b];
+            double rise = base[b + 1] - level;
+            while (i < n && timeS[i] < to) {
+                double f = (timeS[i] - from) / span;
+                out[i++] = level + f * rise;
             }
-            if (t <= centre[0]) {
-                out[i] = base[0];
-            } else if (b >= bins - 1) {
-                out[i] = base[bins - 1];
-            } else {
-                double f = (t - centre[b]) / (centre[b + 1] - centre[b]);
-                out[i] = base[b] + f * (base[b + 1] - base[b]);
-            }
+        }
+        while (i < n) {
+            out[i++] = base[bins - 1];
         }
         return out;
     }

@@ -21,11 +21,12 @@ import org.mobident.signal.TraceAnalysis;
  *
  * <pre>
  * java -cp app-cli/target/mobident.jar:app-core/target/test-classes org.mobident.bench.TraceBench \
- *     [--direct] [--rounds N] trace.csv [more.csv ...]
+ *     [--direct] [--parse-only] [--rounds N] trace.csv [more.csv ...]
  * </pre>
  * Each round reads every file given (distinct files, as in a real batch, so that nothing stays in
  * the caches); the second half of the rounds is reported, per trace: wall time of reading the
- * bytes, of parsing and of the analysis, and the bytes allocated by each step.
+ * bytes, of parsing and of the analysis, the thread's CPU time of each (less disturbed by a busy
+ * machine) and the bytes allocated by each step; {@code --parse-only} leaves the analysis out.
  */
 public final class TraceBench {
 
@@ -34,23 +35,26 @@ public final class TraceBench {
 
     public static void main(String[] args) throws Exception {
         int rounds = 10;
+        boolean parseOnly = false;
         Detection detection = Detection.INDIRECT;
         List<Path> files = new ArrayList<>();
         for (int i = 0; i < args.length; i++) {
             switch (args[i]) {
                 case "--rounds" -> rounds = Integer.parseInt(args[++i]);
                 case "--direct" -> detection = Detection.DIRECT;
+                case "--parse-only" -> parseOnly = true;
                 default -> files.add(Paths.get(args[i]));
             }
         }
         if (files.isEmpty()) {
-            System.err.println("usage: TraceBench [--direct] [--rounds N] trace.csv [more.csv ...]");
+            System.err.println("usage: TraceBench [--direct] [--parse-only] [--rounds N] trace.csv [more.csv ...]");
             return;
         }
         com.sun.management.ThreadMXBean threads =
                 (com.sun.management.ThreadMXBean) ManagementFactory.getThreadMXBean();
         long self = Thread.currentThread().getId();
         long[] nanos = new long[3];
+        long[] cpu = new long[3];
         long[] bytes = new long[3];
         int measured = 0;
         int peaks = 0;
@@ -58,21 +62,30 @@ public final class TraceBench {
             boolean count = round >= rounds / 2;
             for (Path f : files) {
                 long a0 = threads.getThreadAllocatedBytes(self);
+                long c0 = threads.getCurrentThreadCpuTime();
                 long t0 = System.nanoTime();
                 byte[] raw = Files.readAllBytes(f);
                 long t1 = System.nanoTime();
+                long c1 = threads.getCurrentThreadCpuTime();
                 long a1 = threads.getThreadAllocatedBytes(self);
                 Trace trace = DelimitedTraceReader.parse(raw, "bench", f.toString(), null);
                 long t2 = System.nanoTime();
+                long c2 = threads.getCurrentThreadCpuTime();
                 long a2 = threads.getThreadAllocatedBytes(self);
-                TraceAnalysis analysis = PeakDetector.analyse(trace, detection, PeakSettings.DEFAULT);
+                if (!parseOnly) {
+                    TraceAnalysis analysis = PeakDetector.analyse(trace, detection, PeakSettings.DEFAULT);
+                    peaks += analysis.peaks().size();
+                }
                 long t3 = System.nanoTime();
+                long c3 = threads.getCurrentThreadCpuTime();
                 long a3 = threads.getThreadAllocatedBytes(self);
-                peaks += analysis.peaks().size();
                 if (count) {
                     nanos[0] += t1 - t0;
                     nanos[1] += t2 - t1;
                     nanos[2] += t3 - t2;
+                    cpu[0] += c1 - c0;
+                    cpu[1] += c2 - c1;
+                    cpu[2] += c3 - c2;
                     bytes[0] += a1 - a0;
                     bytes[1] += a2 - a1;
                     bytes[2] += a3 - a2;
@@ -81,9 +94,9 @@ public final class TraceBench {
             }
         }
         String[] names = {"read bytes", "parse", "analyse"};
-        for (int k = 0; k < 3; k++) {
-            System.out.printf(Locale.ROOT, "%-10s %7.2f ms %7.2f MB per trace%n", names[k],
-                    nanos[k] / 1e6 / measured, bytes[k] / 1e6 / measured);
+        for (int k = 0; k < (parseOnly ? 2 : 3); k++) {
+            System.out.printf(Locale.ROOT, "%-10s %7.2f ms wall %7.2f ms CPU %7.2f MB per trace%n", names[k],
+                    nanos[k] / 1e6 / measured, cpu[k] / 1e6 / measured, bytes[k] / 1e6 / measured);
         }
         System.out.printf(Locale.ROOT, "%d traces measured, %d peaks found in all rounds%n", measured, peaks);
     }

@@ -43,10 +43,30 @@ public final class DelimitedTraceReader {
      * per row so far, so that a long file is neither grown step by step nor over-allocated.
      */
     private static final int ROWS_BEFORE_ESTIMATE = 256;
-    /** Outcomes of {@code Parse.simpleRow}. */
+    /** Outcomes of {@code Parse.simpleRow} and {@code Parse.plainRow}. */
+    private static final int PLAIN_ROW = 2;
     private static final int SIMPLE_ROW = 1;
     private static final int GENERAL_ROW = 0;
     private static final int END_OF_BYTES = -1;
+    /**
+     * Most digits a number of {@code Parse.plainRow} may have: up to 18 digits a long holds them
+     * exactly, so the row's significand is the one {@link FastDoubleParser} keeps (it drops digits
+     * only beyond 18).
+     */
+    private static final int PLAIN_MAX_DIGITS = 18;
+    /** Largest significand of {@code Parse.plainRow}: 2^53, as in {@link FastDoubleParser}'s exact path. */
+    private static final long PLAIN_MAX_SIGNIFICAND = 1L << 53;
+    /** 10^0 … 10^18, each exact in a double (5^k &lt; 2^53 for k ≤ 22). */
+    private static final double[] PLAIN_POWERS_OF_TEN = new double[PLAIN_MAX_DIGITS + 1];
+
+    static {
+        double p = 1.0;
+        for (int i = 0; i <= PLAIN_MAX_DIGITS; i++) {
+            PLAIN_POWERS_OF_TEN[i] = p;
+            p *= 10.0;
+        }
+    }
+
     /** Largest array length the JVM allows, with a margin (the bytes of one file bound the rows anyway). */
     private static final int MAX_ROWS = Integer.MAX_VALUE - 8;
     /** Headroom of that estimate: later rows are usually a little longer (times gain digits). */
@@ -202,6 +222,123 @@ public final class DelimitedTraceReader {
             return SIMPLE_ROW;
         }
 
+        /** Time (as written, before the unit) and signal of the row {@link #plainRow} read last. */
+        private double plainTime;
+        private double plainSignal;
+
+        /**
+         * The common row in a single pass over its bytes: splits the row and parses its time and
+         * signal fields as it goes, for rows whose two numbers are plain decimals (optional minus,
+         * digits with at most one decimal separator, no exponent, at most {@value #PLAIN_MAX_DIGITS}
+         * digits and a significand of at most 2^53). Such a number is {@code m} or {@code m / 10^k}
+         * with exact operands, one correctly rounded division: the same value, bit for bit, as
+         * {@link FastDoubleParser} and {@link Double#parseDouble} give. Anything else (a blank, a
+         * quote, a sign '+', an exponent, a comment, a row of the wrong shape) leaves the row
+         * untouched for {@link #simpleRow} and the general path.
+         *
+         * @return {@link #PLAIN_ROW} with {@link #plainTime} and {@link #plainSignal} set,
+         *         {@link #GENERAL_ROW} when another path must read the row, {@link #END_OF_BYTES}
+         */
+        private int plainRow(int timeIndex, int signalIndex, boolean decimalComma) {
+            if (pos >= n) {
+                return END_OF_BYTES;
+            }
+            final byte[] b = this.b;
+            final int n = this.n;
+            int i = pos;
+            byte first = b[i];
+            if (first == ' ' || first == '\t' || first == '#' || first == '"' || first == '\n' || first == '\r') {
+                return GENERAL_ROW;
+            }
+            final byte d = delimiter;
+            final byte decimal = decimalComma ? (byte) ',' : (byte) '.';
+            final int capacity = fieldStart.length;
+            int count = 0;
+            double time = 0;
+            double signal = 0;
+            while (true) {
+                if (count == capacity) {
+                    return GENERAL_ROW;
+                }
+                int start = i;
+                if (count == timeIndex || count == signalIndex) {
+                    boolean negative = false;
+                    if (i < n && b[i] == '-') {
+                        negative = true;
+                        i++;
+                    }
+                    long m = 0;
+                    int digits = 0;
+                    int fraction = 0;
+                    int c;
+                    // (char) maps the bytes below '0' (and the negative ones) above 9: one test per byte
+                    while (i < n && (c = (char) (b[i] - '0')) <= 9) {
+                        m = m * 10 + c;
+                        digits++;
+                        i++;
+                    }
+                    if (i < n && (b[i] == '.' || b[i] == decimal)) {
+                        i++;
+                        int before = i;
+                        while (i < n && (c = (char) (b[i] - '0')) <= 9) {
+                            m = m * 10 + c;
+                            i++;
+                        }
+                        fraction = i - before;
+                        digits += fraction;
+                    }
+                    if (digits == 0 || digits > PLAIN_MAX_DIGITS || m > PLAIN_MAX_SIGNIFICAND) {
+                        return GENERAL_ROW;
+                    }
+                    if (i < n && b[i] != d && b[i] != '\n' && b[i] != '\r') {
+                        return GENERAL_ROW;
+                    }
+                    double v = m == 0 ? 0.0 : fraction == 0 ? (double) m : m / PLAIN_POWERS_OF_TEN[fraction];
+                    if (negative) {
+                        v = -v;
+                    }
+                    if (count == timeIndex) {
+                        time = v;
+                    } else {
+                        signal = v;
+                    }
+                } else {
+                    byte c;
+                    while (i < n && (c = b[i]) != d && c != '\n' && c != '\r') {
+                        if (c == '"') {
+                            return GENERAL_ROW;
+                        }
+                        i++;
+                    }
+                }
+                fieldStart[count] = start;
+                fieldEnd[count] = i;
+                count++;
+                if (i < n && b[i] == d) {
+                    i++;
+                } else {
+                    break;
+                }
+            }
+            if (count < namedCount) {
+                return GENERAL_ROW;
+            }
+            line++;
+            lineStart = pos;
+            lineEnd = i;
+            if (i < n && b[i] == '\r' && i + 1 < n && b[i + 1] == '\n') {
+                i++;
+            }
+            pos = i < n ? i + 1 : n;
+            for (int k = count; k < capacity; k++) {
+                fieldStart[k] = lineStart;
+                fieldEnd[k] = lineStart;
+            }
+            plainTime = time;
+            plainSignal = signal;
+            return PLAIN_ROW;
+        }
+
         /** True for a line of spaces and tabs only, or a comment line. */
         private boolean skippable() {
             int i = lineStart;
@@ -243,19 +380,26 @@ public final class DelimitedTraceReader {
             double previousRaw = Double.NaN;
             long previousLine = 0;
             while (true) {
-                int fast = simpleRow();
-                if (fast == END_OF_BYTES) {
+                int plain = plainRow(timeIndex, signalIndex, decimalComma);
+                if (plain == END_OF_BYTES) {
                     break;
                 }
-                if (fast == GENERAL_ROW) {
-                    nextLine(); // there are bytes left, so there is a line
-                    if (skippable()) {
-                        continue;
+                double t;
+                double y;
+                if (plain == PLAIN_ROW) {
+                    t = plainTime;
+                    y = plainSignal;
+                } else {
+                    if (simpleRow() == GENERAL_ROW) {
+                        nextLine(); // there are bytes left, so there is a line
+                        if (skippable()) {
+                            continue;
+                        }
+                        splitRow();
                     }
-                    splitRow();
+                    t = value(timeIndex, timeName, decimalComma);
+                    y = value(signalIndex, signalName, decimalComma);
                 }
-                double t = value(timeIndex, timeName, decimalComma);
-                double y = value(signalIndex, signalName, decimalComma);
                 double tS = scale.toSeconds(t);
                 if (!Double.isFinite(tS)) {
                     throw new InputException(file, line, timeName, "time " + quote(timeIndex)
