@@ -85,9 +85,10 @@ class AssessCommandTest {
         assertEquals(ExitCodes.OK, identify.code(), identify.err());
     }
 
-    /** Confidences of the identified analyte peaks in identify's own table, as written (3 decimals). */
+    /** Confidences of the called (identified or ambiguous) analyte peaks in identify's own table, as written. */
     private List<Double> callConfidences() throws IOException {
-        return csv(Files.readString(peaks)).stream().filter(r -> r.get("status").equals("identified"))
+        return csv(Files.readString(peaks)).stream()
+                .filter(r -> r.get("status").equals("identified") || r.get("status").equals("ambiguous"))
                 .map(r -> Double.parseDouble(r.get("confidence"))).collect(Collectors.toList());
     }
 
@@ -100,14 +101,17 @@ class AssessCommandTest {
                 demo("library.csv"), "--csv", scores.toString(), "--peaks-csv", verdicts.toString(), "--html",
                 page.toString());
         assertEquals(ExitCodes.OK, r.code(), r.err());
-        assertTrue(r.out().contains("recall of the analytes present   100.0 %  35 of 35"), r.out());
+        assertTrue(r.out().contains("recall counting ambiguous calls  100.0 %  35 of 35"), r.out());
         List<CSVRecord> rows = csv(Files.readString(scores));
-        // TRUTH.md: every library analyte of the demo is identified under its own name
+        // TRUTH.md: every library analyte of the demo is called under its own name; spring-03's
+        // bromide is only 0.80 likely, below the 4:1 odds an identification needs, so it is ambiguous
         assertEquals(DEMO_ANALYTES, (int) number(rows, "identification", "all", "analytes_present"));
-        assertEquals(DEMO_ANALYTES, (int) number(rows, "identification", "all", "identified_calls"));
+        assertEquals(DEMO_ANALYTES, (int) number(rows, "identification", "all", "calls_right"));
+        assertEquals(DEMO_ANALYTES - 1, (int) number(rows, "identification", "all", "identified_calls"));
         assertEquals("1.0000", value(rows, "identification", "all", "precision"));
-        assertEquals("1.0000", value(rows, "identification", "all", "recall"));
-        assertEquals("1.0000", value(rows, "identification", "all", "recall_height_sd_10_up"));
+        assertEquals("1.0000", value(rows, "identification", "all", "recall_with_ambiguous"));
+        assertEquals(String.format(java.util.Locale.ROOT, "%.4f", (DEMO_ANALYTES - 1) / (double) DEMO_ANALYTES),
+                value(rows, "identification", "all", "recall"));
         for (String count : List.of("wrong_names", "called_absent", "missed")) {
             assertEquals("0", value(rows, "identification", "all", count), count);
         }
@@ -187,15 +191,16 @@ class AssessCommandTest {
                 "--csv", scores.toString());
         assertEquals(ExitCodes.SOME_RUNS_FAILED, failing.code());
         assertTrue(failing.err().contains("acceptance limit was not met"), failing.err());
-        // 34 of 35 identified calls right = 0.971 < 0.98
-        assertTrue(failing.out().contains("precision >= 0.98: NOT MET (measured 0.9714)"), failing.out());
+        // 33 of 34 identified calls right (spring-03's bromide is ambiguous) = 0.9706 < 0.98
+        assertTrue(failing.out().contains("precision >= 0.98: NOT MET (measured 0.9706)"), failing.out());
         List<CSVRecord> rows = csv(Files.readString(scores));
         assertEquals("1", value(rows, "identification", "all", "wrong_names"));
         assertEquals("1", value(rows, "identification", "all", "missed"));
         assertEquals("1", value(rows, "analyte", "chloride", "wrong_calls"));
         assertEquals("no", value(rows, "limit", "precision", "met"));
+        // recall: 33 of 35 present identified by their right name = 0.943
         Run passing = run("assess", "-k", swapped.toString(), "-t", peaks.toString(), "--min-precision", "0.97",
-                "--min-recall", "0.97", "--quiet");
+                "--min-recall", "0.94", "--quiet");
         assertEquals(ExitCodes.OK, passing.code(), passing.err());
     }
 

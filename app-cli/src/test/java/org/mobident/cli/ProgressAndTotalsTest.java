@@ -56,10 +56,11 @@ class ProgressAndTotalsTest {
         StringWriter out = new StringWriter();
         StringWriter err = new StringWriter();
         assertEquals(ExitCodes.OK, Main.run(args, new PrintWriter(out, true), new PrintWriter(err, true)));
-        // the demo's seven runs: 35 analyte peaks identified (see the summary's own count on stdout)
-        assertTrue(Pattern.compile("^7 runs: 7 ok, 0 failed, 35 peaks identified in \\d+\\.\\d s$", Pattern.MULTILINE)
+        // the demo's seven runs: 34 analyte peaks identified, spring-03's bromide ambiguous (0.80 likely:
+        // below the 4:1 odds an identification needs); the summary's own count on stdout agrees
+        assertTrue(Pattern.compile("^7 runs: 7 ok, 0 failed, 34 peaks identified in \\d+\\.\\d s$", Pattern.MULTILINE)
                 .matcher(err.toString()).find(), err.toString());
-        assertTrue(out.toString().contains("Analyte peaks: 35 identified"), out.toString());
+        assertTrue(out.toString().contains("Analyte peaks: 34 identified, 1 ambiguous"), out.toString());
         assertFalse(err.toString().contains("\r"), "no progress bar when standard error is not a terminal");
 
         String[] quiet = java.util.Arrays.copyOf(args, args.length + 1);

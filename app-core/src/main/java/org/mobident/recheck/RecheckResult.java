@@ -47,9 +47,14 @@ public record RecheckResult(String libraryA, String libraryB, BufferSpec bufferB
         return predicted ? CAUTION : CAUTION_MEASURED;
     }
 
-    /** True when any assignment does not simply hold, or any pair became unresolvable. */
+    /**
+     * True when any assignment does not simply hold, or any pair became unresolvable. A call that
+     * was ambiguous already and stays ambiguous is no change the new buffer brings.
+     */
     public boolean needsAttention() {
-        return assignments.stream().anyMatch(a -> a.verdict() != Verdict.STILL_HOLDS)
+        return assignments.stream().anyMatch(a -> a.verdict() != Verdict.STILL_HOLDS
+                        && !(a.verdict() == Verdict.NOW_AMBIGUOUS
+                        && PeakTableRow.STATUS_AMBIGUOUS.equals(a.oldStatus())))
                 || pairs.stream().anyMatch(PairCheck::becameUnresolvable);
     }
 

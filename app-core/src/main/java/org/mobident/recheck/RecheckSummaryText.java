@@ -66,8 +66,11 @@ public final class RecheckSummaryText {
         }
         out.println("Per-peak verdicts with their reasons: --csv FILE; pairs: --pairs-csv FILE; per-analyte "
                 + "predictions: --analytes-csv FILE.");
+        long stillAmbiguous = r.assignments().stream().filter(a -> a.verdict() == Verdict.NOW_AMBIGUOUS).count();
         out.println(r.needsAttention() ? "Attention needed: some assignments or pairs change in the new buffer."
-                : "All assignments still hold in the new buffer.");
+                : stillAmbiguous == 0 ? "All assignments still hold in the new buffer."
+                : String.format(Locale.ROOT, "Nothing changes in the new buffer: the %d call(s) ambiguous before "
+                        + "stay ambiguous, all others still hold.", stillAmbiguous));
         out.println(r.caution());
         out.flush();
     }
