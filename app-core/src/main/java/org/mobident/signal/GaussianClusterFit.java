@@ -4,10 +4,6 @@ import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.List;
 import org.apache.commons.math3.distribution.FDistribution;
-import org.apache.commons.math3.exception.MathIllegalStateException;
-import org.apache.commons.math3.fitting.leastsquares.LeastSquaresBuilder;
-import org.apache.commons.math3.fitting.leastsquares.LeastSquaresOptimizer;
-import org.apache.commons.math3.fitting.leastsquares.LeastSquaresProblem;
 import org.apache.commons.math3.fitting.leastsquares.LevenbergMarquardtOptimizer;
 import org.apache.commons.math3.fitting.leastsquares.MultivariateJacobianFunction;
 import org.apache.commons.math3.fitting.leastsquares.ParameterValidator;
@@ -61,8 +57,6 @@ final class GaussianClusterFit {
     private static final int MAX_EVALUATIONS = 2000;
     /** Cap on Levenberg–Marquardt iterations of one fit. */
     private static final int MAX_ITERATIONS = 400;
-    /** Relative threshold below which (JᵀJ) is treated as singular when it is inverted. */
-    private static final double SINGULARITY_THRESHOLD = 1e-14;
     /** Starting heights are floored at this fraction of the largest sample of the cluster. */
     private static final double MIN_START_HEIGHT_FRACTION = 0.05;
     /** Heights are kept at least this fraction of the largest sample (a zero height leaves the
@@ -170,25 +164,14 @@ final class GaussianClusterFit {
             }
             return new ArrayRealVector(q, false);
         };
-        LeastSquaresProblem problem = new LeastSquaresBuilder()
-                .start(start)
-                .model(model(u, k))
-                .target(target)
-                .parameterValidator(validator)
-                .lazyEvaluation(false)
-                .maxEvaluations(MAX_EVALUATIONS)
-                .maxIterations(MAX_ITERATIONS)
-                .build();
-        LeastSquaresOptimizer.Optimum optimum;
-        RealMatrix covariance;
-        try {
-            optimum = new LevenbergMarquardtOptimizer().optimize(problem);
-            covariance = optimum.getCovariances(SINGULARITY_THRESHOLD);
-        } catch (MathIllegalStateException | SingularMatrixException e) {
+        LevenbergMarquardt.Solution solution = LevenbergMarquardt.fit(start, model(u, k), target, validator,
+                MAX_EVALUATIONS, MAX_ITERATIONS, true);
+        if (solution == null) {
             return null; // no convergence within the caps, or parameters not determined
         }
-        double[] p = optimum.getPoint().toArray();
-        double rss = optimum.getCost() * optimum.getCost();
+        double[] p = solution.point();
+        double rss = solution.rss();
+        RealMatrix covariance = solution.covariance();
         int dof = n - 3 * k;
         double residualVariance = rss / dof;
         List<Component> components = new ArrayList<>(k);

@@ -2,11 +2,6 @@ package org.mobident.signal;
 
 import java.util.ArrayList;
 import java.util.List;
-import org.apache.commons.math3.exception.MathIllegalStateException;
-import org.apache.commons.math3.fitting.leastsquares.LeastSquaresBuilder;
-import org.apache.commons.math3.fitting.leastsquares.LeastSquaresOptimizer;
-import org.apache.commons.math3.fitting.leastsquares.LeastSquaresProblem;
-import org.apache.commons.math3.fitting.leastsquares.LevenbergMarquardtOptimizer;
 import org.apache.commons.math3.fitting.leastsquares.MultivariateJacobianFunction;
 import org.apache.commons.math3.fitting.leastsquares.ParameterValidator;
 import org.apache.commons.math3.linear.Array2DRowRealMatrix;
@@ -48,8 +43,6 @@ final class SkewedClusterFit {
     /** Caps of one fit. */
     private static final int MAX_EVALUATIONS = 1500;
     private static final int MAX_ITERATIONS = 300;
-    /** Relative threshold below which (JᵀJ) is treated as singular. */
-    private static final double SINGULARITY_THRESHOLD = 1e-14;
     /** Steps per σ of the search for a zone's apex and half-height points. */
     private static final int STEPS_PER_SIGMA = 8;
     /** Bisection steps for a crossing (2⁻⁴⁰ of the bracket). */
@@ -339,28 +332,14 @@ final class SkewedClusterFit {
             }
             return new ArrayRealVector(q, false);
         };
-        LeastSquaresProblem problem = new LeastSquaresBuilder()
-                .start(start)
-                .model(model(u, k, sign))
-                .target(target)
-                .parameterValidator(validator)
-                .lazyEvaluation(false)
-                .maxEvaluations(MAX_EVALUATIONS)
-                .maxIterations(MAX_ITERATIONS)
-                .build();
-        LeastSquaresOptimizer.Optimum optimum;
-        RealMatrix covariance;
-        try {
-            optimum = new LevenbergMarquardtOptimizer().optimize(problem);
-            covariance = optimum.getCovariances(SINGULARITY_THRESHOLD);
-        } catch (MathIllegalStateException | SingularMatrixException e) {
+        LevenbergMarquardt.Solution solution = LevenbergMarquardt.fit(start, model(u, k, sign), target, validator,
+                MAX_EVALUATIONS, MAX_ITERATIONS, true);
+        if (solution == null) {
             return null;
         }
-        double[] p = optimum.getPoint().toArray();
-        double rss = optimum.getCost() * optimum.getCost();
-        if (!Double.isFinite(rss)) {
-            return null;
-        }
+        double[] p = solution.point();
+        double rss = solution.rss();
+        RealMatrix covariance = solution.covariance();
         double residualVariance = rss / (n - parameters);
         List<Zone> zones = new ArrayList<>(k);
         for (int j = 0; j < k; j++) {

@@ -1,10 +1,5 @@
 package org.mobident.signal;
 
-import org.apache.commons.math3.exception.MathIllegalStateException;
-import org.apache.commons.math3.fitting.leastsquares.LeastSquaresBuilder;
-import org.apache.commons.math3.fitting.leastsquares.LeastSquaresOptimizer;
-import org.apache.commons.math3.fitting.leastsquares.LeastSquaresProblem;
-import org.apache.commons.math3.fitting.leastsquares.LevenbergMarquardtOptimizer;
 import org.apache.commons.math3.fitting.leastsquares.MultivariateJacobianFunction;
 import org.apache.commons.math3.fitting.leastsquares.ParameterValidator;
 import org.apache.commons.math3.linear.Array2DRowRealMatrix;
@@ -128,26 +123,13 @@ record SkewedZoneFit(double areaTimesS, double centreS, double sigmaS, double ta
             q[3] = sign * Math.min(span, Math.max(minTau, sign * q[3]));
             return new ArrayRealVector(q, false);
         };
-        LeastSquaresProblem problem = new LeastSquaresBuilder()
-                .start(start)
-                .model(model(u))
-                .target(target)
-                .parameterValidator(validator)
-                .lazyEvaluation(false)
-                .maxEvaluations(MAX_EVALUATIONS)
-                .maxIterations(MAX_ITERATIONS)
-                .build();
-        LeastSquaresOptimizer.Optimum optimum;
-        try {
-            optimum = new LevenbergMarquardtOptimizer().optimize(problem);
-        } catch (MathIllegalStateException e) {
+        LevenbergMarquardt.Solution solution = LevenbergMarquardt.fit(start, model(u), target, validator,
+                MAX_EVALUATIONS, MAX_ITERATIONS, false);
+        if (solution == null) {
             return null;
         }
-        double[] p = optimum.getPoint().toArray();
-        double rss = optimum.getCost() * optimum.getCost();
-        if (!Double.isFinite(rss)) {
-            return null;
-        }
+        double[] p = solution.point();
+        double rss = solution.rss();
         return new SkewedZoneFit(p[0], ref + p[1], p[2], p[3], rss, n);
     }
 

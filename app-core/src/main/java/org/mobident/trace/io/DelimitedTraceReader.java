@@ -208,18 +208,26 @@ public final class DelimitedTraceReader {
             if (count < namedCount) {
                 return GENERAL_ROW;
             }
+            acceptRow(i, count);
+            return SIMPLE_ROW;
+        }
+
+        /** Takes the row that ends at {@code end} (its line break or the end of the text) with
+         *  {@code count} fields: the line's bounds, the position after its line break, and the
+         *  fields it lacks set empty. */
+        private void acceptRow(int end, int count) {
             line++;
             lineStart = pos;
-            lineEnd = i;
+            lineEnd = end;
+            int i = end;
             if (i < n && b[i] == '\r' && i + 1 < n && b[i + 1] == '\n') {
                 i++;
             }
             pos = i < n ? i + 1 : n;
-            for (int k = count; k < capacity; k++) {
+            for (int k = count; k < fieldStart.length; k++) {
                 fieldStart[k] = lineStart;
                 fieldEnd[k] = lineStart;
             }
-            return SIMPLE_ROW;
         }
 
         /** Time (as written, before the unit) and signal of the row {@link #plainRow} read last. */
@@ -323,17 +331,7 @@ public final class DelimitedTraceReader {
             if (count < namedCount) {
                 return GENERAL_ROW;
             }
-            line++;
-            lineStart = pos;
-            lineEnd = i;
-            if (i < n && b[i] == '\r' && i + 1 < n && b[i + 1] == '\n') {
-                i++;
-            }
-            pos = i < n ? i + 1 : n;
-            for (int k = count; k < capacity; k++) {
-                fieldStart[k] = lineStart;
-                fieldEnd[k] = lineStart;
-            }
+            acceptRow(i, count);
             plainTime = time;
             plainSignal = signal;
             return PLAIN_ROW;
