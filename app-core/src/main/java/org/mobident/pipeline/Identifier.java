@@ -45,8 +45,9 @@ public final class Identifier {
     /** Lowest S/N of the targeted search for a weak marker inside its window (a modelling choice). */
     static final double MARKER_SEARCH_MIN_SN = 1.5;
     /** A zone found by the targeted marker search must be within this factor of the width a zone has
-     *  at its time (the median w½/t of the run's peaks of S/N 10 or more times its time; zones of
-     *  one run have about the same plate number, so w½ grows in proportion to t; a modelling choice). */
+     *  at its time (the lower quartile of w½/t over the run's peaks of S/N 10 or more, times its time;
+     *  zones of one run have about the same plate number, so w½ grows in proportion to t; a
+     *  modelling choice). */
     static final double MARKER_SEARCH_WIDTH_FACTOR = 2.5;
     /** Pairs of these many of the tallest peaks with every library entry vote for the marker time. */
     static final int MARKER_VOTE_PEAKS = 12;
@@ -614,7 +615,9 @@ public final class Identifier {
         return LibraryMatcher.mix(per, choice.weights(), own, ms);
     }
 
-    /** Median w½/t of the peaks of S/N 10 or more (NaN when there are none). */
+    /** Lower quartile of w½/t over the peaks of S/N 10 or more (NaN when there are none): the
+     *  narrowest zones are the ones shaped by diffusion alone, as a neutral marker is; concentrated
+     *  zones are widened by electromigration dispersion. */
     private static double typicalWidthPerTime(List<Peak> peaks) {
         double[] ratio = new double[peaks.size()];
         int m = 0;
@@ -627,7 +630,7 @@ public final class Identifier {
             return Double.NaN;
         }
         java.util.Arrays.sort(ratio, 0, m);
-        return m % 2 == 1 ? ratio[m / 2] : 0.5 * (ratio[m / 2 - 1] + ratio[m / 2]);
+        return ratio[(m - 1) / 4];
     }
 
     /** The temperature most library entries refer to (25 °C when none states one). */
