@@ -9,7 +9,9 @@ import org.mobident.io.SafeFiles;
 import org.mobident.pipeline.RunResult;
 import org.mobident.report.PeakTableCsv;
 import org.mobident.report.PeakTableJson;
+import org.mobident.report.ResultsWorkbook;
 import org.mobident.report.RunSummaryText;
+import org.mobident.summary.RecurringUnknowns;
 import org.mobident.report.html.HtmlReport;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
@@ -43,6 +45,11 @@ public final class IdentifyCommand implements Callable<Integer> {
     @Option(names = "--html", paramLabel = "FILE", description = "Write a self-contained HTML report with plots.")
     Path htmlOut;
 
+    @Option(names = "--xlsx", paramLabel = "FILE",
+            description = "Write a results workbook (.xlsx): samples x analytes first, then the peak table, each "
+                    + "analyte over the batch, recurring unknowns, run facts and the library used.")
+    Path xlsxOut;
+
     @Option(names = "--known", paramLabel = "FILE",
             description = "Known-identities table: score the results against it as 'assess' does, print the scores "
                     + "and add them to the --html report.")
@@ -64,7 +71,7 @@ public final class IdentifyCommand implements Callable<Integer> {
             return ExitCodes.USAGE;
         }
         long start = System.nanoTime();
-        Outputs.checkFree(overwrite, csvOut, jsonOut, htmlOut);
+        Outputs.checkFree(overwrite, csvOut, jsonOut, htmlOut, xlsxOut);
         KnownScores known = KnownScores.read(knownFile);
         BatchOptions.Batch done;
         try (ProgressDisplay progress = ProgressDisplay.on(err, !quiet && ProgressDisplay.stderrIsTerminal())) {
@@ -88,6 +95,11 @@ public final class IdentifyCommand implements Callable<Integer> {
             var traces = done.traces();
             Outputs.write(htmlOut, overwrite, w -> HtmlReport.write(results, traces, done.library(),
                     Outputs.htmlOptions(), KnownScores.sections(scored), w));
+        }
+        if (xlsxOut != null) {
+            var unknowns = RecurringUnknowns.of(results, done.library());
+            Outputs.writeBytes(xlsxOut, overwrite, o -> ResultsWorkbook.write(results, done.library(), unknowns,
+                    Outputs.workbookOptions(), o));
         }
         int code = Outputs.reportRunProblems(results, err);
         if (!quiet) {
