@@ -9,6 +9,7 @@ import org.mobident.matching.PeakMatch;
 import org.mobident.pipeline.PeakResult;
 import org.mobident.pipeline.PeakRole;
 import org.mobident.pipeline.RunResult;
+import org.mobident.summary.RecurringUnknowns;
 
 /**
  * A readable terminal summary of processed runs, in plain ASCII.
@@ -45,6 +46,14 @@ public final class RunSummaryText {
 
     /** Writes the summary of {@code runs} to {@code out} (flushed, not closed). */
     public static void write(List<RunResult> runs, PrintWriter out) {
+        write(runs, List.of(), out);
+    }
+
+    /**
+     * Writes the summary of {@code runs} to {@code out} (flushed, not closed), with the block of
+     * recurring unknowns ({@link RecurringUnknownsText}) before the closing counts.
+     */
+    public static void write(List<RunResult> runs, List<RecurringUnknowns.Group> unknowns, PrintWriter out) {
         out.println("Effective mobilities in 1e-9 m^2/(V s), as compared with the library: converted to its");
         out.println("temperature and corrected for the run's scale (see each run's note). +/- is the standard");
         out.println("uncertainty from the zone and marker times only; the run-to-run spread and the scale's");
@@ -97,6 +106,10 @@ public final class RunSummaryText {
             }
         }
         out.println();
+        if (!unknowns.isEmpty()) {
+            RecurringUnknownsText.write(unknowns, out);
+            out.println();
+        }
         out.println(String.format(Locale.ROOT,
                 "%d run%s: %d ok%s, %d failed. Analyte peaks: %d identified, %d ambiguous, %d unassigned%s.",
                 runs.size(), runs.size() == 1 ? "" : "s", ok,
