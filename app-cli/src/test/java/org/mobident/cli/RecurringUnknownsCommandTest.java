@@ -31,7 +31,8 @@ class RecurringUnknownsCommandTest {
         Path library = Files.writeString(dir.resolve("lib.csv"), lib);
         Path csv = dir.resolve("unknowns.csv");
         BadInputCatalogueTest.Run r = BadInputCatalogueTest.run("identify", "--runs", DEMO.resolve("runs.csv").toString(),
-                "--library", library.toString(), "--unknowns-csv", csv.toString());
+                "--library", library.toString(), "--unknowns-csv", csv.toString(), "--html",
+                dir.resolve("report.html").toString());
         assertTrue(r.code() == ExitCodes.OK || r.code() == ExitCodes.SOME_RUNS_FAILED, r.err());
         List<CSVRecord> rows = CSVFormat.DEFAULT.builder().setHeader().setSkipHeaderRecord(true).get()
                 .parse(new StringReader(Files.readString(csv, StandardCharsets.UTF_8))).getRecords();
@@ -45,5 +46,10 @@ class RecurringUnknownsCommandTest {
         assertTrue(r.out().contains("unknown-1 at "), r.out());
         assertTrue(r.out().contains(": " + listed), "the terminal names its runs: " + listed + "\n" + r.out());
         assertEquals(1, r.out().split("unknown-1 at ", -1).length - 1, "reported once");
+        String page = Files.readString(dir.resolve("report.html"), StandardCharsets.UTF_8);
+        int section = page.indexOf("<section id=\"recurring-unknowns\">");
+        assertTrue(section > 0, "the HTML report has the section");
+        String rest = page.substring(section, page.indexOf("</section>", section));
+        assertTrue(rest.contains("<td>unknown-1</td>") && rest.contains(listed), rest);
     }
 }
