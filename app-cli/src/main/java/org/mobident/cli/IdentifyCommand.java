@@ -93,8 +93,9 @@ public final class IdentifyCommand implements Callable<Integer> {
         var results = done.results();
         KnownScores scored = known == null ? null : known.score(results, done.library());
         List<RecurringUnknowns.Group> unknowns = RecurringUnknowns.of(results, done.library());
+        SampleCalls samples = SampleCalls.of(results, done.library());
         if (!quiet) {
-            RunSummaryText.write(results, unknowns, out);
+            RunSummaryText.write(results, samples, unknowns, out);
             if (scored != null) {
                 scored.print(out);
             }
@@ -111,8 +112,7 @@ public final class IdentifyCommand implements Callable<Integer> {
                     Outputs.htmlOptions(), KnownScores.sections(scored), w));
         }
         if (summaryCsvOut != null) {
-            Outputs.write(summaryCsvOut, overwrite, w -> BatchSummaryCsv.writeSamples(
-                    SampleCalls.of(results, done.library()), w));
+            Outputs.write(summaryCsvOut, overwrite, w -> BatchSummaryCsv.writeSamples(samples, w));
         }
         if (unknownsCsvOut != null) {
             Outputs.write(unknownsCsvOut, overwrite, w -> BatchSummaryCsv.writeUnknowns(unknowns, w));

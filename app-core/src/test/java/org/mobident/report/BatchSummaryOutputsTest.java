@@ -70,4 +70,28 @@ class BatchSummaryOutputsTest {
         assertEquals("spring-01,,chromate pH 8,'=bad,not found,,,,", lines[2]);
         assertEquals("well-09,,chromate pH 8,chloride,run failed,,,,", lines[3]);
     }
+
+    @Test
+    void terminalSummaryOpensWithTheAnalytesFoundPerRun() {
+        Library lib = new Library(List.of(LibraryEntry.of("chloride", -71.6, 0.2), LibraryEntry.of("nitrate", -69.6, 0.2)),
+                "lib.csv", List.of());
+        var runs = List.of(ReportFixtures.okRun(), ReportFixtures.failedRun(), ReportFixtures.noMarkerRun());
+        StringWriter s = new StringWriter();
+        RunSummaryText.write(runs, SampleCalls.of(runs, lib), List.of(), new PrintWriter(s));
+        String[] lines = s.toString().split("\n");
+        assertEquals("Analytes found per run (confidence; '?' marks an ambiguous call):", lines[0]);
+        assertEquals("  spring-01  chloride 97 %, nitrate 62 % ?", lines[1]);
+        assertEquals("  well-09    run failed", lines[2]);
+        assertEquals("  spring-02  no mobility scale", lines[3]);
+    }
+
+    @Test
+    void anUnassignedPeakShowsItsConfidenceOfNoneAsTheHtmlDoes() {
+        StringWriter s = new StringWriter();
+        RunSummaryText.write(List.of(ReportFixtures.okRun()), new PrintWriter(s));
+        // the fixture's third peak is unassigned with probability 0.99 of being none of the analytes
+        String row = s.toString().lines().filter(l -> l.contains("unassigned") && l.contains("-59.60")).findFirst()
+                .orElseThrow();
+        assertTrue(row.contains("99 % none"), row);
+    }
 }
