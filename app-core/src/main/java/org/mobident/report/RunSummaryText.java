@@ -247,11 +247,17 @@ public final class RunSummaryText {
         return sb.toString();
     }
 
-    /** Text on a single line: line breaks and tabs become spaces. */
-    private static String oneLine(String text) {
+    /**
+     * Text on a single line: line breaks and tabs become spaces, and the unit and sign characters the
+     * engine's notes use are written as the rest of this summary writes them (m^2, mu, +/-, -), so one
+     * output does not say "m^2" in one line and "m²" in the next.
+     */
+    static String oneLine(String text) {
         if (text == null) {
             return "";
         }
-        return text.replace("\r\n", " ").replace('\n', ' ').replace('\r', ' ').replace('\t', ' ');
+        return text.replace("\r\n", " ").replace('\n', ' ').replace('\r', ' ').replace('\t', ' ')
+                .replace("m²", "m^2").replace("μ", "mu").replace("±", "+/-").replace('\u2212', '-')
+                .replace("–", "-");
     }
 }

@@ -94,4 +94,13 @@ class BatchSummaryOutputsTest {
                 .orElseThrow();
         assertTrue(row.contains("99 % none"), row);
     }
+
+    @Test
+    void theTerminalSummaryWritesUnitsOneWay() {
+        assertEquals("EOF mobility +41.00e-9 m^2/(V s); (mu - b)/a with a = 1.0012 +/- 0.0085, b = -0.01",
+                RunSummaryText.oneLine("EOF mobility +41.00e-9 m²/(V s); (μ − b)/a with a = 1.0012 ± 0.0085, b = -0.01"));
+        StringWriter s = new StringWriter();
+        RunSummaryText.write(List.of(ReportFixtures.okRun()), new PrintWriter(s));
+        assertTrue(s.toString().chars().allMatch(c -> c < 128), "plain ASCII: " + s);
+    }
 }
