@@ -57,7 +57,7 @@ public final class BatchOptions {
         IdentifySettings settings = inputs.settings(matching.toSettings(MatchSettings.DEFAULT));
         List<RunResult> results = new ArrayList<>(new Identifier(library, settings).identifyAll(loaded.runs(), progress));
         results.addAll(loaded.rejected());
-        return new Batch(library, results, settings);
+        return new Batch(library, OptionNames.forCommandLine(results), settings);
     }
 
     /** Re-reads the traces of processed runs, for plots; a trace that vanished meanwhile is left out. */

@@ -16,8 +16,8 @@ public final class BufferOptions {
     @Option(names = "--temperature-c", paramLabel = "C", description = "Temperature of the new method, °C (default 25).")
     double temperatureC = 25.0;
 
-    @Option(names = "--buffer-label", paramLabel = "TEXT",
-            description = "Label of the new buffer, written into the predicted library's buffer column "
+    @Option(names = {"--buffer", "--buffer-label"}, paramLabel = "LABEL",
+            description = "Label of the new buffer (the same option as the runs' buffer label elsewhere), written into the predicted library's buffer column "
                     + "(default: its conditions, e.g. 'predicted: pH 7.00, I 20 mM, 25 °C').")
     String label;
 

@@ -7,6 +7,11 @@ import picocli.CommandLine.Option;
 
 /** Run conditions given on the command line; they fill what the run sheet leaves empty. */
 public final class ConditionOptions {
+    @Option(names = "--method", paramLabel = "FILE",
+            description = "Method file: the conditions below as 'name = value' lines (e.g. 'voltage-kv = -20', "
+                    + "'marker-window = 450:700'; '#' starts a comment). An option given as well wins.")
+    java.nio.file.Path methodFile;
+
     @Option(names = "--total-length-cm", paramLabel = "CM", description = "Capillary total length Lt in cm.")
     Double totalLengthCm;
 
@@ -46,6 +51,20 @@ public final class ConditionOptions {
 
     /** The conditions given here; unset values stay unset. */
     RunConditions toConditions() throws InputException {
+        if (methodFile != null) {
+            MethodFile method = MethodFile.read(methodFile);
+            totalLengthCm = totalLengthCm != null ? totalLengthCm : method.number("total-length-cm");
+            detectorLengthCm = detectorLengthCm != null ? detectorLengthCm : method.number("detector-length-cm");
+            voltageKv = voltageKv != null ? voltageKv : method.number("voltage-kv");
+            rampS = rampS != null ? rampS : method.number("ramp-s");
+            temperatureC = temperatureC != null ? temperatureC : method.number("temperature-c");
+            buffer = buffer != null ? buffer : method.text("buffer");
+            markerWindow = markerWindow != null ? markerWindow : method.text("marker-window");
+            detection = detection != null ? detection : method.text("detection");
+            refMobility = refMobility != null ? refMobility : method.number("ref-mobility");
+            refWindow = refWindow != null ? refWindow : method.text("ref-window");
+            methodFile = null; // read once: the values now stand as if given as options
+        }
         double[] marker = window(markerWindow, "--marker-window");
         double[] ref = window(refWindow, "--ref-window");
         Detection det = null;

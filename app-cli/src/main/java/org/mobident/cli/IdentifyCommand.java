@@ -4,12 +4,17 @@ import java.io.IOException;
 import java.io.PrintWriter;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.List;
 import java.util.concurrent.Callable;
 import org.mobident.io.SafeFiles;
 import org.mobident.pipeline.RunResult;
+import org.mobident.report.BatchSummaryCsv;
 import org.mobident.report.PeakTableCsv;
 import org.mobident.report.PeakTableJson;
+import org.mobident.report.ResultsWorkbook;
 import org.mobident.report.RunSummaryText;
+import org.mobident.summary.RecurringUnknowns;
+import org.mobident.summary.SampleCalls;
 import org.mobident.report.html.HtmlReport;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
@@ -43,6 +48,21 @@ public final class IdentifyCommand implements Callable<Integer> {
     @Option(names = "--html", paramLabel = "FILE", description = "Write a self-contained HTML report with plots.")
     Path htmlOut;
 
+    @Option(names = "--xlsx", paramLabel = "FILE",
+            description = "Write a results workbook (.xlsx): samples x analytes first, then the peak table, each "
+                    + "analyte over the batch, recurring unknowns, run facts and the library used.")
+    Path xlsxOut;
+
+    @Option(names = "--summary-csv", paramLabel = "FILE",
+            description = "Write the samples x analytes summary as CSV: one row per run and library analyte "
+                    + "(result, confidence, corrected area, mobility).")
+    Path summaryCsvOut;
+
+    @Option(names = "--unknowns-csv", paramLabel = "FILE",
+            description = "Write the recurring unknowns as CSV: unassigned peaks at one mobility in two or more "
+                    + "runs of a buffer, one row per peak.")
+    Path unknownsCsvOut;
+
     @Option(names = "--known", paramLabel = "FILE",
             description = "Known-identities table: score the results against it as 'assess' does, print the scores "
                     + "and add them to the --html report.")
@@ -64,7 +84,7 @@ public final class IdentifyCommand implements Callable<Integer> {
             return ExitCodes.USAGE;
         }
         long start = System.nanoTime();
-        Outputs.checkFree(overwrite, csvOut, jsonOut, htmlOut);
+        Outputs.checkFree(overwrite, csvOut, jsonOut, htmlOut, xlsxOut, summaryCsvOut, unknownsCsvOut);
         KnownScores known = KnownScores.read(knownFile);
         BatchOptions.Batch done;
         try (ProgressDisplay progress = ProgressDisplay.on(err, !quiet && ProgressDisplay.stderrIsTerminal())) {
@@ -72,8 +92,10 @@ public final class IdentifyCommand implements Callable<Integer> {
         }
         var results = done.results();
         KnownScores scored = known == null ? null : known.score(results, done.library());
+        List<RecurringUnknowns.Group> unknowns = RecurringUnknowns.of(results, done.library());
+        SampleCalls samples = SampleCalls.of(results, done.library());
         if (!quiet) {
-            RunSummaryText.write(results, out);
+            RunSummaryText.write(results, samples, unknowns, out);
             if (scored != null) {
                 scored.print(out);
             }
@@ -88,6 +110,16 @@ public final class IdentifyCommand implements Callable<Integer> {
             var traces = done.traces();
             Outputs.write(htmlOut, overwrite, w -> HtmlReport.write(results, traces, done.library(),
                     Outputs.htmlOptions(), KnownScores.sections(scored), w));
+        }
+        if (summaryCsvOut != null) {
+            Outputs.write(summaryCsvOut, overwrite, w -> BatchSummaryCsv.writeSamples(samples, w));
+        }
+        if (unknownsCsvOut != null) {
+            Outputs.write(unknownsCsvOut, overwrite, w -> BatchSummaryCsv.writeUnknowns(unknowns, w));
+        }
+        if (xlsxOut != null) {
+            Outputs.writeBytes(xlsxOut, overwrite, o -> ResultsWorkbook.write(results, done.library(), unknowns,
+                    Outputs.workbookOptions(), o));
         }
         int code = Outputs.reportRunProblems(results, err);
         if (!quiet) {

@@ -60,8 +60,27 @@ public final class LibraryAddCommand implements Callable<Integer> {
         for (BuildWarning w : merged.warnings()) {
             out.println("  - " + w.message());
         }
+        printWritten(merged, out);
         out.println("library " + libraryFile + " updated; previous version kept as " + libraryFile + ".prev");
         return BuildWarning.anyWarning(fresh.warnings()) || BuildWarning.anyWarning(merged.warnings())
                 ? ExitCodes.SOME_RUNS_FAILED : ExitCodes.OK;
+    }
+
+    /**
+     * The entries this call changed as they now stand in the library (the pooled mean, SD and n, not
+     * the new runs' own statistics printed above them).
+     */
+    private static void printWritten(MergeResult merged, java.io.PrintWriter out) {
+        java.util.List<String> names = new java.util.ArrayList<>(merged.pooled());
+        names.addAll(merged.added());
+        names.addAll(merged.replaced());
+        if (names.isEmpty()) {
+            return;
+        }
+        out.println("Entries as written (mobility +/- SD in 1e-9 m^2/(V s), n):");
+        for (String name : names) {
+            merged.library().find(name).ifPresent(e -> out.println(String.format(java.util.Locale.ROOT,
+                    "  %-16s %9.2f +/- %.2f  n = %d", e.name(), e.mobility(), e.mobilitySd(), e.n())));
+        }
     }
 }

@@ -47,6 +47,12 @@ public final class LibraryBuildCommand implements Callable<Integer> {
         Outputs.checkFree(overwrite, out);
         BuildResult result = standards.build();
         BuildText.write(result, spec.commandLine().getOut());
+        if (result.library().entries().isEmpty()) {
+            err.println("mobident library build: no analyte could be named, so no library was written to " + out
+                    + ". Say which peak is which: an approx_mobility or order column in the --mixes sheet, or "
+                    + "--reference FILE (with --ph and --ionic-strength-mm of the standards' buffer).");
+            return ExitCodes.BAD_INPUT;
+        }
         writeLibrary(out, overwrite, result.library());
         spec.commandLine().getOut().println("library written to " + out + " (" + result.library().size() + " analytes)");
         return BuildWarning.anyWarning(result.warnings()) ? ExitCodes.SOME_RUNS_FAILED : ExitCodes.OK;

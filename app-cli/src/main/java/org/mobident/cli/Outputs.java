@@ -33,6 +33,20 @@ final class Outputs {
         }
     }
 
+    /** Writes binary content through a temp file and an atomic move. */
+    static void writeBytes(Path target, boolean overwrite, SafeFiles.ByteWriter content) throws OutputException {
+        try {
+            SafeFiles.writeBytes(target, overwrite, "add --overwrite to replace it", content);
+        } catch (IOException e) {
+            throw new OutputException(target + ": " + e.getMessage(), e);
+        }
+    }
+
+    /** Options of a results workbook made now by this version. */
+    static org.mobident.report.ResultsWorkbook.Options workbookOptions() {
+        return new org.mobident.report.ResultsWorkbook.Options(VersionProvider.version(), timestamp());
+    }
+
     /** The time stamp put in reports, to the second, UTC. */
     static String timestamp() {
         return Instant.now().truncatedTo(ChronoUnit.SECONDS).toString();

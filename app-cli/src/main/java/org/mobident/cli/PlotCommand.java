@@ -35,14 +35,15 @@ public final class PlotCommand implements Callable<Integer> {
     @Mixin
     BatchOptions batch;
 
-    @Option(names = "--run", paramLabel = "NAME", description = "Run to draw (repeat for several; default all).")
+    @Option(names = {"--show", "--run"}, paramLabel = "RUN", split = ",",
+            description = "Runs to draw, by name, comma-separated or repeated (default all), as in 'view'.")
     List<String> runNames = new ArrayList<>();
 
-    @Option(names = "--axis", paramLabel = "AXIS", description = "mobility (default) or time.")
-    String axis = "mobility";
+    @Option(names = "--axis", paramLabel = "AXIS", description = AxisWords.DESCRIPTION)
+    Axis axis = Axis.MOBILITY;
 
     @Option(names = {"-o", "--out"}, required = true, paramLabel = "FILE",
-            description = "Image to write; .svg gives SVG, anything else PNG.")
+            description = "Image to write: a name ending in .png or .svg.")
     Path out;
 
     @Option(names = "--size", paramLabel = "WxH", description = "Image size in pixels (default ${DEFAULT-VALUE}).")
@@ -54,6 +55,20 @@ public final class PlotCommand implements Callable<Integer> {
     @Option(names = "--overwrite", description = "Replace the file if it exists.")
     boolean overwrite;
 
+    /** The image formats written, chosen by the name's extension. */
+    enum ImageKind {
+        PNG, SVG;
+
+        /** The kind a file name asks for, or null when it names no format written here. */
+        static ImageKind of(Path file) {
+            String name = file.getFileName() == null ? "" : file.getFileName().toString().toLowerCase(Locale.ROOT);
+            if (name.endsWith(".png")) {
+                return PNG;
+            }
+            return name.endsWith(".svg") ? SVG : null;
+        }
+    }
+
     @Override
     public Integer call() throws Exception {
         var err = spec.commandLine().getErr();
@@ -61,17 +76,12 @@ public final class PlotCommand implements Callable<Integer> {
             err.println("mobident plot: give either a run sheet (--runs SHEET) or trace files, not both or neither.");
             return ExitCodes.USAGE;
         }
-        Axis ax;
-        switch (axis.toLowerCase(Locale.ROOT)) {
-            case "mobility":
-                ax = Axis.MOBILITY;
-                break;
-            case "time":
-                ax = Axis.TIME;
-                break;
-            default:
-                err.println("mobident plot: --axis must be 'mobility' or 'time', got '" + axis + "'");
-                return ExitCodes.USAGE;
+        Axis ax = axis;
+        ImageKind kind = ImageKind.of(out);
+        if (kind == null) {
+            err.println("mobident plot: --out must name a .png or .svg file, got '" + out.getFileName()
+                    + "'; other image formats are not written");
+            return ExitCodes.USAGE;
         }
         String[] wh = size.toLowerCase(Locale.ROOT).split("x");
         int w;
@@ -93,7 +103,7 @@ public final class PlotCommand implements Callable<Integer> {
         PlotModel.Builder b = PlotModel.builder(ax);
         int drawn = 0;
         for (RunResult r : done.results()) {
-            if (!runNames.isEmpty() && !runNames.contains(r.spec().name())) {
+            if (!runNames.isEmpty() && runNames.stream().noneMatch(n -> n.trim().equals(r.spec().name()))) {
                 continue;
             }
             Trace t = traces.get(r.spec().name());
@@ -103,8 +113,8 @@ public final class PlotCommand implements Callable<Integer> {
             }
         }
         for (String n : runNames) {
-            if (done.results().stream().noneMatch(r -> r.spec().name().equals(n))) {
-                err.println("mobident plot: no run named '" + n + "'");
+            if (done.results().stream().noneMatch(r -> r.spec().name().equals(n.trim()))) {
+                err.println("mobident plot: --show: no run is named '" + n.trim() + "'");
                 return ExitCodes.BAD_INPUT;
             }
         }
@@ -119,13 +129,13 @@ public final class PlotCommand implements Callable<Integer> {
         // labels of many overlaid runs would pile up: markers alone then, the status in their shape
         b.peakLabels(drawn <= 2);
         if (drawn == 1) {
-            b.title(runNames.isEmpty() ? done.results().get(0).spec().name() : runNames.get(0));
+            b.title(runNames.isEmpty() ? done.results().get(0).spec().name() : runNames.get(0).trim());
         } else {
             b.title(drawn + " runs");
         }
         PlotModel model = b.build();
         try {
-            if (out.getFileName().toString().toLowerCase(Locale.ROOT).endsWith(".svg")) {
+            if (kind == ImageKind.SVG) {
                 String svg = SvgPlot.render(model, w, h);
                 SafeFiles.write(out, overwrite, "add --overwrite to replace it", wr -> wr.write(svg));
             } else {

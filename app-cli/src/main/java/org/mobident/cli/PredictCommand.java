@@ -66,6 +66,12 @@ public final class PredictCommand implements Callable<Integer> {
     @Override
     public Integer call() throws Exception {
         PrintWriter o = spec.commandLine().getOut();
+        if (scan == null && !buffers.newGiven()) {
+            // a usage mistake, exit 2 as in 'recheck'
+            spec.commandLine().getErr().println("mobident predict: give the new buffer's --ph and "
+                    + "--ionic-strength-mm (or --scan FROM:TO:STEP with --ionic-strength-mm).");
+            return ExitCodes.USAGE;
+        }
         Outputs.checkFree(overwrite, out);
         Library library = LibraryCsv.read(libraryFile);
         BufferTransfer predictor = ReferenceData.transfer(referenceFile);

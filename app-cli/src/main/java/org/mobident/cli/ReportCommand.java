@@ -2,7 +2,9 @@ package org.mobident.cli;
 
 import java.nio.file.Path;
 import java.util.concurrent.Callable;
+import org.mobident.report.ResultsWorkbook;
 import org.mobident.report.html.HtmlReport;
+import org.mobident.summary.RecurringUnknowns;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
@@ -27,6 +29,10 @@ public final class ReportCommand implements Callable<Integer> {
     @Option(names = {"-o", "--out"}, required = true, paramLabel = "FILE", description = "The HTML file to write.")
     Path out;
 
+    @Option(names = "--xlsx", paramLabel = "FILE",
+            description = "Also write the results workbook (.xlsx), as 'identify --xlsx' does.")
+    Path xlsxOut;
+
     @Option(names = "--overwrite", description = "Replace the file if it exists.")
     boolean overwrite;
 
@@ -37,11 +43,16 @@ public final class ReportCommand implements Callable<Integer> {
             err.println("mobident report: give either a run sheet (--runs SHEET) or trace files, not both or neither.");
             return ExitCodes.USAGE;
         }
-        Outputs.checkFree(overwrite, out);
+        Outputs.checkFree(overwrite, out, xlsxOut);
         BatchOptions.Batch done = batch.identify();
         var traces = done.traces();
         Outputs.write(out, overwrite, w -> HtmlReport.write(done.results(), traces, done.library(),
                 Outputs.htmlOptions(), w));
+        if (xlsxOut != null) {
+            var unknowns = RecurringUnknowns.of(done.results(), done.library());
+            Outputs.writeBytes(xlsxOut, overwrite, o -> ResultsWorkbook.write(done.results(), done.library(),
+                    unknowns, Outputs.workbookOptions(), o));
+        }
         spec.commandLine().getOut().println("report written to " + out + " (" + done.results().size() + " runs)");
         return Outputs.reportRunProblems(done.results(), err);
     }

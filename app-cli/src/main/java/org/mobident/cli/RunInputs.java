@@ -59,7 +59,7 @@ public final class RunInputs {
             try {
                 runs.add(RunSheetReader.single(t, defaults));
             } catch (InputException e) {
-                rejected.add(RunResult.failure(new RunSpec(RunSpec.runNameOf(t), null, defaults, "command line", 0), e));
+                rejected.add(RunResult.failure(new RunSpec(RunSpec.runNameOf(t), null, defaults, OptionNames.COMMAND_LINE, 0), e));
             }
         }
         return new Loaded(runs, rejected, Map.of(), Map.of());

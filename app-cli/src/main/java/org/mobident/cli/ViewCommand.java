@@ -44,12 +44,12 @@ public final class ViewCommand implements Callable<Integer> {
     @Option(names = {"-l", "--library"}, required = true, paramLabel = "FILE", description = "Mobility library (CSV).")
     Path libraryFile;
 
-    @Option(names = "--axis", paramLabel = "AXIS",
-            description = "Axis shown first: ${COMPLETION-CANDIDATES} (default ${DEFAULT-VALUE}).")
+    @Option(names = "--axis", paramLabel = "AXIS", description = AxisWords.DESCRIPTION)
     Axis axis = Axis.MOBILITY;
 
-    @Option(names = "--show", paramLabel = "RUN", split = ",",
-            description = "Runs ticked when the window opens, by name (default: the first run).")
+    @Option(names = {"--show", "--run"}, paramLabel = "RUN", split = ",",
+            description = "Runs ticked when the window opens, by name, comma-separated or repeated (default: the "
+                    + "first run), as in 'plot'.")
     List<String> shown = new ArrayList<>();
 
     @Mixin

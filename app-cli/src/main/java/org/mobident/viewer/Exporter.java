@@ -43,14 +43,24 @@ final class Exporter {
     private Exporter() {
     }
 
+    /**
+     * The file the save dialog proposes: the suggested name in the folder the viewer was started
+     * from (where the command's other outputs go), not the home folder the dialog would open in.
+     */
+    static File initialFile(String suggestedName, Format format) {
+        File folder = Path.of("").toAbsolutePath().toFile();
+        return new File(folder, new File(withExtension(suggestedName, format)).getName());
+    }
+
     /** Asks for a file and writes {@code model} at {@code size}; reports the outcome through {@code status}. */
     static void export(Component parent, PlotModel model, Dimension size, Format format, String suggestedName,
                        Consumer<String> status) {
-        JFileChooser chooser = new JFileChooser();
+        File start = initialFile(suggestedName, format);
+        JFileChooser chooser = new JFileChooser(start.getParentFile());
         chooser.setDialogTitle("Save the plot as " + format.description);
         chooser.setFileFilter(new FileNameExtensionFilter(format.description + " (*." + format.extension + ")",
                 format.extension));
-        chooser.setSelectedFile(new File(withExtension(suggestedName, format)));
+        chooser.setSelectedFile(start);
         if (chooser.showSaveDialog(parent) != JFileChooser.APPROVE_OPTION) {
             return;
         }

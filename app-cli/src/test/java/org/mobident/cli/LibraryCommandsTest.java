@@ -119,6 +119,38 @@ class LibraryCommandsTest {
     }
 
     @Test
+    void addPrintsThePooledEntryItWrites() throws IOException {
+        // mix A's runs 1-2 make the library, runs 3-4 are pooled into it: chloride ends with n = 4, not 2
+        Path first = dir.resolve("runs-1.csv");
+        Path second = dir.resolve("runs-2.csv");
+        StringBuilder a = new StringBuilder();
+        StringBuilder b = new StringBuilder();
+        for (String line : Files.readAllLines(DEMO.resolve("standards/standards-runs.csv"))) {
+            String fixed = line.replace("std-mix", DEMO.resolve("standards").toAbsolutePath() + "/std-mix");
+            if (line.startsWith("file,")) {
+                a.append(line).append('\n');
+                b.append(line).append('\n');
+            } else if (line.contains("std-mixA-1") || line.contains("std-mixA-2")) {
+                a.append(fixed).append('\n');
+            } else if (line.contains("std-mixA-3") || line.contains("std-mixA-4")) {
+                b.append(fixed).append('\n');
+            }
+        }
+        Files.writeString(first, a.toString());
+        Files.writeString(second, b.toString());
+        Path lib = dir.resolve("lib.csv");
+        Run built = run("library", "build", "--runs", first.toString(), "--mixes", demo("standards/mixes.csv"),
+                "--out", lib.toString());
+        assertTrue(built.code() <= ExitCodes.SOME_RUNS_FAILED, built.out() + built.err());
+        Run add = run("library", "add", "--library", lib.toString(), "--runs", second.toString(), "--mixes",
+                demo("standards/mixes.csv"));
+        assertTrue(add.code() <= ExitCodes.SOME_RUNS_FAILED, add.out() + add.err());
+        String written = add.out().substring(add.out().indexOf("Entries as written"));
+        String chloride = written.lines().filter(l -> l.strip().startsWith("chloride ")).findFirst().orElseThrow();
+        assertTrue(chloride.endsWith("n = 4"), chloride);
+    }
+
+    @Test
     void addPrintsOnlyNonEmptyLists() throws IOException {
         // a library holding only mix A's runs; mix B's are then added: nothing pooled, five added
         Path sheetA = dir.resolve("runs-a.csv");

@@ -61,4 +61,11 @@ class ExporterTest {
         assertEquals(new Dimension(Exporter.MIN_SIZE.width, 500), Exporter.usable(new Dimension(100, 500)));
         assertEquals(new Dimension(1000, 700), Exporter.usable(new Dimension(1000, 700)));
     }
+
+    @Test
+    void theSaveDialogProposesTheWorkingFolder() {
+        java.io.File f = Exporter.initialFile("spring-01", Exporter.Format.SVG);
+        assertEquals(Path.of("").toAbsolutePath().toFile(), f.getParentFile(), "not the home folder");
+        assertEquals("spring-01.svg", f.getName());
+    }
 }

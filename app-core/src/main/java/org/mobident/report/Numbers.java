@@ -13,6 +13,9 @@ import java.util.Locale;
  */
 final class Numbers {
 
+    /** Significant digits of library model values (pKa, limiting mobilities) written as text. */
+    static final int LIBRARY_DIGITS = 6;
+
     private Numbers() {
     }
 

@@ -9,6 +9,8 @@ import org.mobident.matching.PeakMatch;
 import org.mobident.pipeline.PeakResult;
 import org.mobident.pipeline.PeakRole;
 import org.mobident.pipeline.RunResult;
+import org.mobident.summary.RecurringUnknowns;
+import org.mobident.summary.SampleCalls;
 
 /**
  * A readable terminal summary of processed runs, in plain ASCII.
@@ -45,6 +47,27 @@ public final class RunSummaryText {
 
     /** Writes the summary of {@code runs} to {@code out} (flushed, not closed). */
     public static void write(List<RunResult> runs, PrintWriter out) {
+        write(runs, List.of(), out);
+    }
+
+    /**
+     * Writes the summary of {@code runs} to {@code out} (flushed, not closed), with the block of
+     * recurring unknowns ({@link RecurringUnknownsText}) before the closing counts.
+     */
+    public static void write(List<RunResult> runs, List<RecurringUnknowns.Group> unknowns, PrintWriter out) {
+        write(runs, null, unknowns, out);
+    }
+
+    /**
+     * As {@link #write(List, List, PrintWriter)}, opening with one line per run that names the
+     * library analytes called in it ({@code samples} may be null: no such block).
+     */
+    public static void write(List<RunResult> runs, SampleCalls samples, List<RecurringUnknowns.Group> unknowns,
+                             PrintWriter out) {
+        if (samples != null && !samples.runs().isEmpty()) {
+            writeSamples(samples, out);
+            out.println();
+        }
         out.println("Effective mobilities in 1e-9 m^2/(V s), as compared with the library: converted to its");
         out.println("temperature and corrected for the run's scale (see each run's note). +/- is the standard");
         out.println("uncertainty from the zone and marker times only; the run-to-run spread and the scale's");
@@ -97,6 +120,10 @@ public final class RunSummaryText {
             }
         }
         out.println();
+        if (!unknowns.isEmpty()) {
+            RecurringUnknownsText.write(unknowns, out);
+            out.println();
+        }
         out.println(String.format(Locale.ROOT,
                 "%d run%s: %d ok%s, %d failed. Analyte peaks: %d identified, %d ambiguous, %d unassigned%s.",
                 runs.size(), runs.size() == 1 ? "" : "s", ok,
@@ -104,6 +131,35 @@ public final class RunSummaryText {
                 identified, ambiguous, unassigned, noMobility > 0 ? ", " + noMobility + " without mobility" : ""));
         out.println(CAUTION);
         out.flush();
+    }
+
+    /** One line per run: the analytes called in it with their confidence, ambiguous calls marked. */
+    static void writeSamples(SampleCalls samples, PrintWriter out) {
+        out.println("Analytes found per run (confidence; '?' marks an ambiguous call):");
+        int width = 0;
+        for (SampleCalls.RunRow row : samples.runs()) {
+            width = Math.max(width, row.run().spec().name().length());
+        }
+        for (SampleCalls.RunRow row : samples.runs()) {
+            StringBuilder sb = new StringBuilder(TABLE_INDENT).append(row.run().spec().name());
+            sb.append(" ".repeat(width - row.run().spec().name().length())).append("  ");
+            if (row.run().failed()) {
+                sb.append("run failed");
+            } else if (!row.run().mobilityKnown()) {
+                sb.append("no mobility scale");
+            } else {
+                List<String> found = new ArrayList<>();
+                for (int a = 0; a < samples.analytes().size(); a++) {
+                    SampleCalls.Call c = row.calls().get(a);
+                    if (c.outcome().called()) {
+                        found.add(samples.analytes().get(a) + " " + percent(c.confidence())
+                                + (c.outcome() == SampleCalls.Outcome.AMBIGUOUS ? " ?" : ""));
+                    }
+                }
+                sb.append(found.isEmpty() ? "no library analyte found" : String.join(", ", found));
+            }
+            out.println(sb);
+        }
     }
 
     private static String heading(RunResult run) {
@@ -132,7 +188,8 @@ public final class RunSummaryText {
             mobility = Numbers.fixed(compared, MOBILITY_DECIMALS) + " +/- " + (sd == null ? "?" : sd);
         }
         boolean assigned = known && m.assigned() != null;
-        String confidence = assigned ? percent(m.confidence()) : NONE;
+        // an unassigned peak's confidence is that it is none of the library's analytes, shown as in the HTML report
+        String confidence = assigned ? percent(m.confidence()) : known ? percent(m.confidence()) + " none" : NONE;
         String status = !known ? "no mobility"
                 : m.status() == null ? MatchStatus.UNASSIGNED.label() : m.status().label();
         if (m.status() == MatchStatus.AMBIGUOUS && m.runnerUp() != null) {
@@ -190,11 +247,17 @@ public final class RunSummaryText {
         return sb.toString();
     }
 
-    /** Text on a single line: line breaks and tabs become spaces. */
-    private static String oneLine(String text) {
+    /**
+     * Text on a single line: line breaks and tabs become spaces, and the unit and sign characters the
+     * engine's notes use are written as the rest of this summary writes them (m^2, mu, +/-, -), so one
+     * output does not say "m^2" in one line and "m²" in the next.
+     */
+    static String oneLine(String text) {
         if (text == null) {
             return "";
         }
-        return text.replace("\r\n", " ").replace('\n', ' ').replace('\r', ' ').replace('\t', ' ');
+        return text.replace("\r\n", " ").replace('\n', ' ').replace('\r', ' ').replace('\t', ' ')
+                .replace("m²", "m^2").replace("μ", "mu").replace("±", "+/-").replace('\u2212', '-')
+                .replace("–", "-");
     }
 }

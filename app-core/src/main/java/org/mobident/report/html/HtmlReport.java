@@ -10,6 +10,8 @@ import java.util.Map;
 import java.util.Objects;
 import org.mobident.io.SafeFiles;
 import org.mobident.library.Library;
+import org.mobident.summary.RecurringUnknowns;
+import org.mobident.summary.SampleCalls;
 import org.mobident.matching.PeakMatch;
 import org.mobident.pipeline.PeakResult;
 import org.mobident.pipeline.RunResult;
@@ -170,7 +172,13 @@ public final class HtmlReport {
 
         header(sb, results, library, options);
         sb.append("<main>\n");
+        if (library != null && !results.isEmpty()) {
+            samples(sb, SampleCalls.of(results, library));
+        }
         summary(sb, results);
+        if (library != null) {
+            unknowns(sb, RecurringUnknowns.of(results, library));
+        }
         for (HtmlSection section : sections) {
             sb.append(section.markup());
         }
@@ -231,6 +239,77 @@ public final class HtmlReport {
             }
             sb.append("<td>").append(r.failed() ? "failed: " + esc(r.error().getMessage()) : "processed")
                     .append("</td></tr>\n");
+        }
+        sb.append("</tbody>\n</table>\n</section>\n");
+    }
+
+    /**
+     * Which library analytes were called in which run: the first section, what a lab reports. A
+     * cell holds the call's confidence; an ambiguous call is marked, an analyte looked for and not
+     * called shows a dot, one not in the library for the run's buffer stays empty.
+     */
+    private static void samples(StringBuilder sb, SampleCalls table) {
+        List<Integer> shown = new ArrayList<>();
+        for (int a = 0; a < table.analytes().size(); a++) {
+            for (SampleCalls.RunRow row : table.runs()) {
+                SampleCalls.Outcome o = row.calls().get(a).outcome();
+                if (o != SampleCalls.Outcome.NOT_LOOKED_FOR && o != SampleCalls.Outcome.RUN_FAILED) {
+                    shown.add(a);
+                    break;
+                }
+            }
+        }
+        sb.append("<section id=\"samples\">\n<h2>Analytes found in each sample</h2>\n");
+        sb.append("<p>Each cell gives the confidence of the call; <strong>?</strong> marks an ambiguous call "
+                + "(another analyte is nearly as likely), a dot an analyte looked for and not found; an empty "
+                + "cell means the library has no entry for it in that run's buffer.</p>\n");
+        sb.append("<table class=\"summary\">\n<thead><tr><th>Run</th><th>Sample</th>");
+        for (int a : shown) {
+            sb.append("<th>").append(esc(table.analytes().get(a))).append("</th>");
+        }
+        sb.append("</tr></thead>\n<tbody>\n");
+        for (SampleCalls.RunRow row : table.runs()) {
+            RunResult r = row.run();
+            sb.append(r.failed() ? "<tr class=\"failed\">" : "<tr>");
+            sb.append("<td><a href=\"#run-").append(row.order()).append("\">").append(esc(runName(r)))
+                    .append("</a></td><td>").append(esc(sampleText(r))).append("</td>");
+            for (int a : shown) {
+                SampleCalls.Call c = row.calls().get(a);
+                sb.append("<td class=\"num\">");
+                switch (c.outcome()) {
+                    case IDENTIFIED -> sb.append(percent(c.confidence()));
+                    case AMBIGUOUS -> sb.append(percent(c.confidence())).append(" ?");
+                    case NOT_FOUND -> sb.append("·");
+                    case NO_SCALE -> sb.append("no scale");
+                    case RUN_FAILED -> sb.append("failed");
+                    default -> { }
+                }
+                sb.append("</td>");
+            }
+            sb.append("</tr>\n");
+        }
+        sb.append("</tbody>\n</table>\n</section>\n");
+    }
+
+    /** Unassigned peaks recurring at one mobility, one line each with its runs. */
+    private static void unknowns(StringBuilder sb, List<RecurringUnknowns.Group> groups) {
+        if (groups.isEmpty()) {
+            return;
+        }
+        sb.append("<section id=\"recurring-unknowns\">\n<h2>Recurring unknowns</h2>\n");
+        sb.append("<p>Unassigned peaks at one mobility (as compared with the library) in ")
+                .append(RecurringUnknowns.DEFAULT_MIN_RUNS).append(" or more runs of a buffer: a contaminant, a "
+                        + "degradant or an analyte missing from the library.</p>\n");
+        sb.append("<table class=\"summary\">\n<thead><tr><th>Unknown</th><th>Buffer</th>"
+                + "<th>Mobility (10⁻⁹ m² V⁻¹ s⁻¹)</th><th>SD over runs</th><th>Runs</th><th>Seen in</th></tr></thead>\n"
+                + "<tbody>\n");
+        for (RecurringUnknowns.Group g : groups) {
+            sb.append("<tr><td>").append(esc(g.name())).append("</td><td>")
+                    .append(esc(g.buffer() == null ? MISSING : g.buffer())).append("</td><td class=\"num\">")
+                    .append(fixed(g.meanMobility(), 2)).append("</td><td class=\"num\">")
+                    .append(fixed(g.mobilitySd(), 2)).append("</td><td class=\"num\">").append(g.runs().size())
+                    .append(" of ").append(g.runsInBuffer()).append("</td><td>")
+                    .append(esc(String.join(", ", g.runs()))).append("</td></tr>\n");
         }
         sb.append("</tbody>\n</table>\n</section>\n");
     }

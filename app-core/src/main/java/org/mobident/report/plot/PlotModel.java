@@ -407,13 +407,16 @@ public record PlotModel(Axis axis, String title, List<Series> series, List<PeakM
         return trace.signal(j - 1) + f * (trace.signal(j) - trace.signal(j - 1));
     }
 
-    /** The label of a peak: "analyte 97%", "?" when unassigned, "EOF" or "ref." for markers. */
+    /**
+     * The label of a peak: "analyte 97%", "?" when unassigned, "marker" for the neutral marker (the
+     * legend's word for it) and "ref. marker" for a charged marker of known mobility.
+     */
     public static String labelOf(PeakResult pr) {
         if (pr.role() == PeakRole.NEUTRAL_MARKER) {
-            return "EOF";
+            return PeakStatus.MARKER.label();
         }
         if (pr.role() == PeakRole.MOBILITY_MARKER) {
-            return "ref.";
+            return "ref. " + PeakStatus.MARKER.label();
         }
         if (pr.match() == null || pr.match().assigned() == null || PeakStatus.of(pr) == PeakStatus.UNASSIGNED) {
             return "?";

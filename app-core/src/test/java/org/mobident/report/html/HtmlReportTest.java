@@ -92,6 +92,39 @@ class HtmlReportTest {
         assertTrue(doc.getDocumentElement().getTextContent().contains(EVIL), "shown as text");
     }
 
+    /** The {@code <section>} with that id. */
+    static Element section(Document doc, String id) {
+        NodeList sections = doc.getElementsByTagName("section");
+        for (int i = 0; i < sections.getLength(); i++) {
+            Element e = (Element) sections.item(i);
+            if (id.equals(e.getAttribute("id"))) {
+                return e;
+            }
+        }
+        throw new AssertionError("no section " + id);
+    }
+
+    @Test
+    void opensWithTheAnalytesFoundInEachSample() throws Exception {
+        Document doc = parseXhtml(page(null));
+        Element first = (Element) doc.getElementsByTagName("section").item(0);
+        assertEquals("samples", first.getAttribute("id"));
+        Element table = (Element) first.getElementsByTagName("table").item(0);
+        NodeList heads = table.getElementsByTagName("th");
+        assertEquals("Run", heads.item(0).getTextContent());
+        assertEquals(2 + PlotFixtures.library().entries().stream().map(e -> e.name()).distinct().count(),
+                heads.getLength(), "run, sample and every analyte of the library");
+        NodeList rows = table.getElementsByTagName("tbody").item(0).getChildNodes();
+        int tr = 0;
+        for (int i = 0; i < rows.getLength(); i++) {
+            if (rows.item(i) instanceof Element) {
+                tr++;
+            }
+        }
+        assertEquals(4, tr, "one row per run, the failed one too");
+        assertTrue(table.getTextContent().contains("failed"), table.getTextContent());
+    }
+
     @Test
     void carriesTheCautionAndTheSummary() throws Exception {
         String html = page(null);
@@ -100,7 +133,7 @@ class HtmlReportTest {
         assertTrue(html.contains("validated procedures"));
         assertTrue(html.contains("<strong>Generated at:</strong> not recorded"));
         Document doc = parseXhtml(html);
-        Element summary = (Element) doc.getElementsByTagName("table").item(0);
+        Element summary = (Element) section(doc, "summary").getElementsByTagName("table").item(0);
         NodeList rows = summary.getElementsByTagName("tbody").item(0).getChildNodes();
         int tr = 0;
         for (int i = 0; i < rows.getLength(); i++) {

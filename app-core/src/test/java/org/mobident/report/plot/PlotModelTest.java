@@ -34,7 +34,7 @@ class PlotModelTest {
         assertEquals(4, p.size());
         assertEquals("lithium 55%", p.get(0).label());
         assertEquals(PeakStatus.AMBIGUOUS, p.get(0).status());
-        assertEquals("EOF", p.get(1).label());
+        assertEquals("marker", p.get(1).label(), "the legend's word for the marker");
         assertEquals(PeakStatus.MARKER, p.get(1).status());
         assertEquals("?", p.get(2).label());
         assertEquals(PeakStatus.UNASSIGNED, p.get(2).status());
