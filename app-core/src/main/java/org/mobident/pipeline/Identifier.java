@@ -510,7 +510,7 @@ public final class Identifier {
             double predicted = predictedMarkerTimeS(c, peaks, prepared.library());
             searchWindow = Double.isFinite(predicted) ? around(searchWindow, predicted) : null;
         }
-        if (searchWindow != null && !MarkerLocator.settled(choice, c)) {
+        if (searchWindow != null && (!MarkerLocator.settled(choice, c) || faintMarker(choice, peaks))) {
             List<Peak> more = withWeakMarkers(c, searchWindow, peaks);
             if (more.size() > peaks.size()) {
                 peaks = more;
@@ -613,6 +613,15 @@ public final class Identifier {
             per.add(pos < 0 || h.match() == null ? null : h.match().matches().get(pos));
         }
         return LibraryMatcher.mix(per, choice.weights(), own, ms);
+    }
+
+    /** True when the chosen neutral marker is itself faint (S/N below the quantitation limit): then a
+     *  zone of about the same size elsewhere in the window may as well be the marker, and the window
+     *  is searched even when the choice looks settled. */
+    private static boolean faintMarker(MarkerLocator.Choice choice, List<Peak> peaks) {
+        MarkerLocator.Hypothesis best = choice.best();
+        return best != null && best.neutralIndex() >= 0
+                && peaks.get(best.neutralIndex()).signalToNoise() < org.mobident.Tolerances.QUANTITATION_LIMIT_SIGNAL_TO_NOISE;
     }
 
     /** Lower quartile of w½/t over the peaks of S/N 10 or more (NaN when there are none): the

@@ -279,6 +279,18 @@ class IdentifierEndToEndTest {
     }
 
     @Test
+    void aFaintMarkerBesideAFaintNearlyNeutralZoneIsFoundByTheWindowSearch() {
+        // the marker about 7 noise SDs tall; a foreign zone of mobility +2.9 (nearly neutral, moving
+        // against the anions) about 12 noise SDs tall, both inside the window 380–800 s
+        List<Truth> zones = draw(ANIONS, new SplittableRandom(63), 0);
+        Trace t = anionTrace("faint", -48.0, 0.028, zones, new double[][] {{2.9, 0.05}}, 63);
+        RunConditions c = conditions(80, 72, -20, 0, Detection.INDIRECT, 380, 800);
+        RunResult r = new Identifier(ANIONS, IdentifySettings.defaults().withThreads(1))
+                .identify(new RunSpec("faint", Path.of("faint.csv"), c, "test", 0), t);
+        assertEquals(-48.0, r.eofMobility(), 0.1, "the real marker: EOF mobility used to synthesise; " + r.notes());
+    }
+
+    @Test
     void aWeakMarkerStillGivesTheScale() {
         // the marker at a tenth of its usual height (0.1 against analytes of 0.8, noise 0.004: 25 noise SDs)
         List<Truth> zones = draw(ANIONS, new SplittableRandom(62), 0);
