@@ -164,6 +164,14 @@ final class MarkerLocator {
                     + "the capillary lengths", PhysicalBounds.MAX_EOF_MOBILITY));
         }
         Hypothesis best = best(tried);
+        if (c.hasMarkerWindow() && inWindow.isEmpty() && (best.analytes().length == 0 || !explainsWell(best))) {
+            // nothing in the window, and no peak outside it lets the library explain the run: a scale
+            // from one of them would be a guess, and wrong mobilities are worse than none
+            return failed(String.format(Locale.ROOT, "no peak in the marker window %.1f–%.1f s (not even a faint "
+                    + "one), and no other peak taken as marker lets the library explain the run: mobilities not "
+                    + "computed; check the marker window and whether the marker was injected",
+                    c.markerFromS(), c.markerToS()));
+        }
         double[] weights = weights(tried);
         int bestIndex = tried.indexOf(best);
         return new Choice(best, tried, weights, note(c, peaks, inWindow, best, weights[bestIndex], tried.size()));

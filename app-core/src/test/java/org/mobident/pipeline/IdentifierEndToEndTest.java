@@ -291,6 +291,19 @@ class IdentifierEndToEndTest {
     }
 
     @Test
+    void anEmptyMarkerWindowAndNoPeakThatExplainsTheRunGiveNoScaleRatherThanAGuess() {
+        // one analyte zone and no marker at all (injected without it): the window 380–800 s is empty,
+        // and the only peak taken as marker would leave nothing to explain
+        List<Truth> zones = List.of(new Truth("chloride", -76.2));
+        Trace t = anionTrace("nomarker", -48.0, 1e-6, zones, new double[0][], 64);
+        RunConditions c = conditions(80, 72, -20, 0, Detection.INDIRECT, 380, 800);
+        RunResult r = new Identifier(ANIONS, IdentifySettings.defaults().withThreads(1))
+                .identify(new RunSpec("nomarker", Path.of("nomarker.csv"), c, "test", 0), t);
+        assertFalse(r.mobilityKnown(), r.notes().toString());
+        assertTrue(r.notes().toString().contains("no peak in the marker window 380.0–800.0 s"), r.notes().toString());
+    }
+
+    @Test
     void aWeakMarkerStillGivesTheScale() {
         // the marker at a tenth of its usual height (0.1 against analytes of 0.8, noise 0.004: 25 noise SDs)
         List<Truth> zones = draw(ANIONS, new SplittableRandom(62), 0);
