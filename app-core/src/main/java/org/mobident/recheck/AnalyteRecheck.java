@@ -36,14 +36,15 @@ public record AnalyteRecheck(String name, double mobilityA, double mobilityB, do
         return verdicts.values().stream().mapToInt(Integer::intValue).sum();
     }
 
-    /** Number of its assignments that do not simply hold. */
+    /** Number of its assignments that change (neither hold nor stay as ambiguous as they were). */
     public int affected() {
-        return peaks() - verdicts.getOrDefault(Verdict.STILL_HOLDS, 0);
+        return peaks() - verdicts.getOrDefault(Verdict.STILL_HOLDS, 0)
+                - verdicts.getOrDefault(Verdict.STILL_AMBIGUOUS, 0);
     }
 
     /**
      * The verdict that matters most for the analyte: the worst among its assignments (in the
-     * order still holds &lt; moved but still unique &lt; now ambiguous &lt; reassigned &lt; lost), or
+     * order still holds &lt; moved but still unique &lt; still ambiguous &lt; now ambiguous &lt; reassigned &lt; lost), or
      * null when it was not assigned to any peak.
      */
     public Verdict worst() {

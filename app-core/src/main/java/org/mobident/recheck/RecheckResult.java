@@ -47,14 +47,10 @@ public record RecheckResult(String libraryA, String libraryB, BufferSpec bufferB
         return predicted ? CAUTION : CAUTION_MEASURED;
     }
 
-    /**
-     * True when any assignment does not simply hold, or any pair became unresolvable. A call that
-     * was ambiguous already and stays ambiguous is no change the new buffer brings.
-     */
+    /** True when any assignment changes (it neither holds nor stays as ambiguous as it was), or any
+     *  pair became unresolvable. */
     public boolean needsAttention() {
-        return assignments.stream().anyMatch(a -> a.verdict() != Verdict.STILL_HOLDS
-                        && !(a.verdict() == Verdict.NOW_AMBIGUOUS
-                        && PeakTableRow.STATUS_AMBIGUOUS.equals(a.oldStatus())))
+        return assignments.stream().anyMatch(a -> !a.verdict().unchanged())
                 || pairs.stream().anyMatch(PairCheck::becameUnresolvable);
     }
 

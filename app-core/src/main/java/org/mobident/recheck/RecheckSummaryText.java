@@ -43,10 +43,10 @@ public final class RecheckSummaryText {
         Set<String> runs = new LinkedHashSet<>();
         r.assignments().forEach(a -> runs.add(a.run()));
         out.printf(Locale.ROOT, "Assignments: %d checked in %d run(s); %d still hold, %d moved but still unique, "
-                        + "%d now ambiguous, %d reassigned, %d lost%n",
+                        + "%d still ambiguous, %d now ambiguous, %d reassigned, %d lost%n",
                 r.assignments().size(), runs.size(), r.count(Verdict.STILL_HOLDS),
-                r.count(Verdict.MOVED_BUT_STILL_UNIQUE), r.count(Verdict.NOW_AMBIGUOUS), r.count(Verdict.REASSIGNED),
-                r.count(Verdict.LOST));
+                r.count(Verdict.MOVED_BUT_STILL_UNIQUE), r.count(Verdict.STILL_AMBIGUOUS),
+                r.count(Verdict.NOW_AMBIGUOUS), r.count(Verdict.REASSIGNED), r.count(Verdict.LOST));
         out.println();
         analyteTable(r, out);
         out.println();
@@ -66,7 +66,7 @@ public final class RecheckSummaryText {
         }
         out.println("Per-peak verdicts with their reasons: --csv FILE; pairs: --pairs-csv FILE; per-analyte "
                 + "predictions: --analytes-csv FILE.");
-        long stillAmbiguous = r.assignments().stream().filter(a -> a.verdict() == Verdict.NOW_AMBIGUOUS).count();
+        long stillAmbiguous = r.count(Verdict.STILL_AMBIGUOUS);
         out.println(r.needsAttention() ? "Attention needed: some assignments or pairs change in the new buffer."
                 : stillAmbiguous == 0 ? "All assignments still hold in the new buffer."
                 : String.format(Locale.ROOT, "Nothing changes in the new buffer: the %d call(s) ambiguous before "
@@ -111,7 +111,8 @@ public final class RecheckSummaryText {
             return Double.isFinite(a.mobilityB()) ? "no peaks assigned" : "no peaks; not in new library";
         }
         String text = worst.text();
-        if ((worst == Verdict.REASSIGNED || worst == Verdict.NOW_AMBIGUOUS) && !a.collidesWith().isEmpty()) {
+        if ((worst == Verdict.REASSIGNED || worst == Verdict.NOW_AMBIGUOUS
+                || worst == Verdict.STILL_AMBIGUOUS) && !a.collidesWith().isEmpty()) {
             text += (worst == Verdict.REASSIGNED ? " to " : " with ") + a.collidesWith().get(0)
                     + (a.collidesWith().size() > 1 ? " +" + (a.collidesWith().size() - 1) : "");
         }

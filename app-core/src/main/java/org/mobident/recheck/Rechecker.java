@@ -39,7 +39,8 @@ import org.mobident.matching.PeakMatch;
  *       ("would now be taken for Y"), whatever its status;</li>
  *   <li>{@link Verdict#NOW_AMBIGUOUS} when the re-match does not identify X uniquely otherwise (X is
  *       ambiguous, or X is taken by another peak); the other analytes within the moved peak's
- *       windows are listed;</li>
+ *       windows are listed; {@link Verdict#STILL_AMBIGUOUS} instead when the call was ambiguous
+ *       before too;</li>
  *   <li>otherwise X is still the only match, and the verdict says whether the analyst's old window
  *       still catches the peak: {@link Verdict#STILL_HOLDS} when the <em>moved</em> peak (with the
  *       peak's own uncertainty) falls inside X's candidate window of <em>library A</em> (the old
@@ -361,7 +362,8 @@ public final class Rechecker {
                     reason = shiftText + String.format(Locale.ROOT, "; %s only %.2f likely", x, own.probability());
                 }
                 if (PeakTableRow.STATUS_AMBIGUOUS.equals(r.status())) {
-                    reason += " (already ambiguous before)";
+                    verdict = Verdict.STILL_AMBIGUOUS;
+                    reason += " (ambiguous before too)";
                 }
             } else if (inOldWindow) {
                 verdict = Verdict.STILL_HOLDS;
@@ -373,7 +375,8 @@ public final class Rechecker {
             }
             out.put(r, new AssignmentCheck(r.run(), r.peak(), x, r.status(), r.confidence(), r.comparedMobility(),
                     r.mobilitySd(), muA, muB, shift, shiftSd, moved[i], own == null ? Double.NaN : own.probability(),
-                    verdict, verdict == Verdict.NOW_AMBIGUOUS || verdict == Verdict.REASSIGNED ? others : List.of(), basis,
+                    verdict, verdict == Verdict.NOW_AMBIGUOUS || verdict == Verdict.STILL_AMBIGUOUS
+                            || verdict == Verdict.REASSIGNED ? others : List.of(), basis,
                     reason));
         }
     }

@@ -18,6 +18,11 @@ public enum Verdict {
      * window of the old library: the window must move with the new buffer.
      */
     MOVED_BUT_STILL_UNIQUE,
+    /**
+     * Ambiguous before, and the re-match still does not identify the analyte uniquely: nothing the
+     * new buffer changes.
+     */
+    STILL_AMBIGUOUS,
     /** The moved peak is still taken for the analyte, or could be, but other analytes are (nearly) as likely. */
     NOW_AMBIGUOUS,
     /** The moved peak would now be taken for a different analyte. */
@@ -27,6 +32,11 @@ public enum Verdict {
      * sign-reversed mobility, outside the run's mobility range, or no analyte's window reaches the moved peak.
      */
     LOST;
+
+    /** True for the verdicts that mean the new buffer changes nothing for the assignment. */
+    public boolean unchanged() {
+        return this == STILL_HOLDS || this == STILL_AMBIGUOUS;
+    }
 
     /** snake_case label for reports. */
     public String label() {

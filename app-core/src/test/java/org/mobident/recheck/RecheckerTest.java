@@ -243,7 +243,7 @@ class RecheckerTest {
         StringWriter text = new StringWriter();
         RecheckSummaryText.write(r, new PrintWriter(text));
         String s = text.toString();
-        assertTrue(s.contains("1 still hold, 1 moved but still unique, 0 now ambiguous, 1 reassigned, 1 lost"), s);
+        assertTrue(s.contains("1 still hold, 1 moved but still unique, 0 still ambiguous, 0 now ambiguous, 1 reassigned, 1 lost"), s);
         // one line per analyte: its verdict, shift ± SD, affected/assigned peaks, new window
         String formate = s.lines().filter(l -> l.startsWith("formate ")).findFirst().orElseThrow();
         assertTrue(formate.contains("moved but still unique") && formate.contains("1/1"), formate);
@@ -326,6 +326,16 @@ class RecheckerTest {
                 RecheckSettings.DEFAULT.withMatch(org.mobident.matching.MatchSettings.ABSOLUTE)).assignments().get(0);
         assertEquals(Verdict.NOW_AMBIGUOUS, amb.verdict(), amb.reason());
         assertEquals(List.of("y"), amb.collidesWith());
+
+        // the same peak called ambiguous already: it stays so, which the new buffer does not change
+        List<PeakTableRow> before = List.of(
+                new PeakTableRow(2, "r1", 1, "analyte", -30.4, 0.05, -30.4, "x1", 0.6, "ambiguous"));
+        RecheckResult same = Rechecker.withMeasuredLibrary(before, "peaks.csv", a, null, b, null,
+                BufferTransfer.withoutReference(),
+                RecheckSettings.DEFAULT.withMatch(org.mobident.matching.MatchSettings.ABSOLUTE));
+        assertEquals(Verdict.STILL_AMBIGUOUS, same.assignments().get(0).verdict(), same.assignments().get(0).reason());
+        assertEquals(List.of("y"), same.assignments().get(0).collidesWith());
+        assertFalse(same.needsAttention());
     }
 
     /**
