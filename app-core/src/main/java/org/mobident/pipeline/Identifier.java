@@ -376,8 +376,7 @@ public final class Identifier {
         if (to - from < MARKER_SEARCH_MIN_POINTS) {
             return null;
         }
-        return new Trace(trace.name(), trace.sourceFile(), java.util.Arrays.copyOfRange(trace.timesS(), from, to),
-                java.util.Arrays.copyOfRange(trace.signals(), from, to));
+        return trace.slice(from, to);
     }
 
     /**
@@ -398,8 +397,7 @@ public final class Identifier {
         if (inside > 1 || to - from < MARKER_SEARCH_MIN_POINTS) {
             return null;
         }
-        return new Trace(trace.name(), trace.sourceFile(), java.util.Arrays.copyOfRange(trace.timesS(), from, to),
-                java.util.Arrays.copyOfRange(trace.signals(), from, to));
+        return trace.slice(from, to);
     }
 
     /**

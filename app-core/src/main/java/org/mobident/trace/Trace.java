@@ -109,6 +109,12 @@ public final class Trace {
         return i >= 0 ? i : -i - 1;
     }
 
+    /** The points [fromIndex, toIndex) as a trace of their own (same name and source), copied once. */
+    public Trace slice(int fromIndex, int toIndex) {
+        return new Trace(name, sourceFile, Arrays.copyOfRange(timeS, fromIndex, toIndex),
+                Arrays.copyOfRange(signal, fromIndex, toIndex), false);
+    }
+
     /** A new trace with the same times and source but another signal. */
     public Trace withSignal(double[] newSignal) {
         return new Trace(name, sourceFile, timeS, newSignal);
