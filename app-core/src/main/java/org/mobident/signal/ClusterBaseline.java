@@ -101,13 +101,16 @@ final class ClusterBaseline {
      * Where a group's outer flank reaches the floor of the signal: from {@code index}, steps of
      * {@code edgeS} outwards while the mean smoothed signal of the next step lies lower than that of
      * the current one, never beyond {@code limitS} (on the baseline's noise the walk stops after a step or two, the chance of
-     * going on halving with each step). A concentrated zone's diffuse flank
+     * going on halving with each step), and only while each step falls clearly less than the one before
+     * ({@link SignalLimits#WALK_DRIFT_DROP_RATIO}): an exponential flank falls by a shrinking amount per
+     * step, a drifting baseline by a steady one, and the walk must not follow the drift away from the zone. A concentrated zone's diffuse flank
      * (electromigration dispersion) runs on far beyond where the clipped baseline, which rose into
      * it, lets it end; its chord must start where the signal stops falling.
      */
     private static int walkOut(double[] t, double[] smooth, int index, int direction, double edgeS, double limitS) {
         int current = index;
         double currentMean = stepMean(t, smooth, current, direction, edgeS);
+        double lastDrop = Double.POSITIVE_INFINITY;
         while (true) {
             int next = current;
             while (next + direction >= 0 && next + direction < t.length
@@ -118,11 +121,13 @@ final class ClusterBaseline {
                 return current;
             }
             double nextMean = stepMean(t, smooth, next, direction, edgeS);
-            if (!(nextMean < currentMean)) {
-                return current;
+            double drop = currentMean - nextMean;
+            if (!(drop > 0) || drop >= SignalLimits.WALK_DRIFT_DROP_RATIO * lastDrop) {
+                return current; // back on the floor, or falling as steadily as a drifting baseline
             }
             current = next;
             currentMean = nextMean;
+            lastDrop = drop;
         }
     }
 

@@ -97,6 +97,42 @@ class SkewedClusterTest {
         assertEquals(2.0, zone.area(), 0.2, "area of the skewed zone");
     }
 
+    @Test
+    void theFlankWalkDoesNotFollowADriftingBaseline() {
+        // a tailing zone on the falling side of a slow baseline wave (period 200 s): the walk down
+        // its outer flank must stop where the zone ends, not follow the falling baseline to the
+        // trough, where a chord would cut across the wave's curvature and move the centre. Expected
+        // centre: the first moment the zone was built with (Grushka 1972).
+        double[] t = Synthetic.regularTimes(200, 0.1, 2000);
+        double[] y = new double[t.length];
+        for (int i = 0; i < t.length; i++) {
+            y[i] = 0.1 * Math.cos(2 * Math.PI * (t[i] - 270.0) / 200.0);
+        }
+        addEmg(t, y, 0.9, 289.2, 0.9, 2.6);
+        Synthetic.addGaussian(t, y, 230.0, 0.1, 0.60);
+        Synthetic.addGaussian(t, y, 380.0, 0.1, 0.60);
+        Synthetic.addNoise(y, 0.002, 17);
+        List<Peak> peaks = PeakDetector.analyse(Synthetic.trace(t, y), Detection.DIRECT, PeakSettings.DEFAULT).peaks();
+        assertEquals(289.2, nearest(peaks, 289.2).centreTimeS(), 0.1, "centre of the tailing zone");
+    }
+
+    @Test
+    void frontingZonesSplitAtAHighValleyAreFittedTogether() {
+        // two concentrated fronting zones 5 s apart: the second one's long front runs under the
+        // first, and the valley between them stays at about a fifth of the smaller maximum. Split at
+        // the valley, the first zone takes in that front and the second loses it (both centres late
+        // by a few tenths of a second); fitted together, each keeps its own first moment.
+        double[] t = Synthetic.regularTimes(80, 0.06, 900);
+        double[] y = new double[t.length];
+        addEmg(t, y, 1.6, 99.6, 0.25, -1.6);
+        addEmg(t, y, 3.4, 104.6, 0.25, -2.6);
+        Synthetic.addGaussian(t, y, 125.0, 0.3, 0.30);
+        Synthetic.addNoise(y, 0.01, 23);
+        List<Peak> peaks = PeakDetector.analyse(Synthetic.trace(t, y), Detection.DIRECT, PeakSettings.DEFAULT).peaks();
+        assertEquals(99.6, nearest(peaks, 99.6).centreTimeS(), 0.15, "first zone");
+        assertEquals(104.6, nearest(peaks, 104.6).centreTimeS(), 0.15, "second zone");
+    }
+
     private static Peak nearest(List<Peak> peaks, double timeS) {
         Peak best = null;
         for (Peak p : peaks) {
