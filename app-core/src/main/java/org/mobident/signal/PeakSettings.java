@@ -6,7 +6,7 @@ import org.mobident.Tolerances;
  * Settings of peak detection.
  *
  * @param minSignalToNoise  peaks with a lower S/N (Ph. Eur. 2.2.46, see {@link PeakDetector}) are not
- *                          reported; by default the ICH Q2 detection limit, 3. Whatever its value, a
+ *                          reported; by default 2, the lower end of the ICH Q2 detection limit (3:1 or 2:1). Whatever its value, a
  *                          peak must also stand significantly above the smoothed noise around it
  * @param smoothingWindowS  width of the smoothing window in s; NaN chooses it from the data
  * @param minWidthS         narrower features (spikes) are not peaks, s; NaN chooses from the data

@@ -260,6 +260,11 @@ final class SignalLimits {
      *  of their own). */
     static final double SHOULDER_MIN_SEPARATION_SIGMAS = 1.0;
 
+    /** A peak below the detection limit (S/N &lt; 3) whose w½/t exceeds this many times that of the
+     *  run's narrower quantifiable zones is not reported (see {@code PeakDetector}): a modelling
+     *  choice, with room for the growth of w½/t with t and for the scatter of the reference. */
+    static final double FAINT_MAX_WIDTH_RATIO = 3.0;
+
     /** The flank walk of {@code ClusterBaseline} goes on only while a step falls by less than this
      *  fraction of the step before. An exponential flank exp(−t/τ) falls per step s by the factor
      *  exp(−s/τ) less each step (about 0.4 for s ≈ τ: the group above the detection level spans a

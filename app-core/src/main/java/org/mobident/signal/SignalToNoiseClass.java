@@ -14,6 +14,10 @@ public enum SignalToNoiseClass {
     /** Detected (S/N of at least {@link Tolerances#DETECTION_LIMIT_SIGNAL_TO_NOISE}) but below the
      *  quantitation limit: its height and area are too noisy to quantify. */
     BELOW_QUANTITATION_LIMIT("below quantitation limit"),
+    /** At the detection limit: S/N from {@link Tolerances#LOWEST_DETECTION_LIMIT_SIGNAL_TO_NOISE} (2:1)
+     *  up to {@link Tolerances#DETECTION_LIMIT_SIGNAL_TO_NOISE} (3:1), the range ICH Q2(R1) § 6.2
+     *  accepts for the detection limit: seen, but barely. */
+    AT_DETECTION_LIMIT("at detection limit"),
     /** Below the detection limit: reported only when a lower {@code --min-sn} asks for it, on the
      *  strength of the significance test on the smoothed signal. */
     BELOW_DETECTION_LIMIT("below detection limit");
@@ -36,6 +40,9 @@ public enum SignalToNoiseClass {
         }
         if (signalToNoise >= Tolerances.DETECTION_LIMIT_SIGNAL_TO_NOISE) {
             return BELOW_QUANTITATION_LIMIT;
+        }
+        if (signalToNoise >= Tolerances.LOWEST_DETECTION_LIMIT_SIGNAL_TO_NOISE) {
+            return AT_DETECTION_LIMIT;
         }
         return BELOW_DETECTION_LIMIT;
     }

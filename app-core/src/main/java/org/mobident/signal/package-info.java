@@ -12,8 +12,8 @@
  * <p>Noise: every SD that decides about peaks is measured on the baseline-corrected signal itself
  * (not on its first differences, which understate correlated noise), where the peak sits
  * ({@code LocalNoise}); S/N = 2H/h with h the pharmacopoeial peak-to-peak noise over 5 widths at
- * half height, reported from the ICH Q2 detection limit (3) up and marked below the quantitation
- * limit (10) ({@link org.mobident.signal.SignalToNoiseClass}). Spikes are removed before anything is
+ * half height, reported from the lower end of the ICH Q2 detection limit (2) up and marked at the
+ * detection limit (below 3) and below the quantitation limit (10) ({@link org.mobident.signal.SignalToNoiseClass}). Spikes are removed before anything is
  * measured. Each peak carries two migration times: the apex (pharmacopoeial) and the zone centre
  * (first moment), which stays put when electromigration dispersion skews a zone.
  *

@@ -126,7 +126,7 @@ class SpikeFilterTest {
                 for (double a : apex) {
                     zone |= Math.abs(p.apexTimeS() - a) < 2;
                 }
-                assertTrue(zone, "run " + run + " at " + hz + " Hz: a peak at " + p.apexTimeS() + " s, spikes at "
+                assertTrue(zone, "run " + run + " at " + hz + " Hz: a peak " + p + ", spikes at "
                         + spikeTimes);
             }
         }
