@@ -2,25 +2,17 @@ package org.mobident.cli;
 
 import java.io.PrintWriter;
 import java.nio.file.Path;
-import java.util.List;
 import java.util.concurrent.Callable;
 import org.mobident.assess.AcceptanceLimits;
 import org.mobident.assess.Assessment;
-import org.mobident.assess.AssessmentCsv;
-import org.mobident.assess.AssessmentHtml;
-import org.mobident.assess.AssessmentText;
-import org.mobident.assess.Assessor;
 import org.mobident.assess.KnownIdentities;
 import org.mobident.assess.KnownIdentitiesReader;
-import org.mobident.assess.ReportedRun;
-import org.mobident.assess.ReportedRuns;
-import org.mobident.library.Library;
 import org.mobident.recheck.PeakTableReader;
-import picocli.CommandLine;
+import org.mobident.usecase.AssessIdentification;
+import org.mobident.usecase.IdentifiedBatch;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
-import picocli.CommandLine.Model.OptionSpec;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Spec;
 
@@ -29,7 +21,7 @@ import picocli.CommandLine.Spec;
         mixinStandardHelpOptions = true,
         versionProvider = VersionProvider.class,
         sortOptions = false,
-        modelTransformer = AssessCommand.LibraryOnlyWhenIdentifying.class,
+        modelTransformer = LibraryOnlyWhenIdentifying.class,
         description = "Scores an identification against a known-identities table (--known): what is really in "
                 + "spiked samples, standards or synthetic runs. The peaks come from a peak table written by "
                 + "'identify --csv' (--table), or are found now from a run sheet or trace files with a library, "
@@ -61,55 +53,11 @@ public final class AssessCommand implements Callable<Integer> {
     @Mixin
     BatchOptions batch;
 
-    @Option(names = "--csv", paramLabel = "FILE",
-            description = "Write the scores as a long CSV table (section, subject, measure, value).")
-    Path csvOut;
-
-    @Option(names = "--peaks-csv", paramLabel = "FILE",
-            description = "Write every reported peak of the scored runs with the known zone it belongs to and its "
-                    + "verdict, then the known zones no peak was found for.")
-    Path verdictsOut;
-
-    @Option(names = "--html", paramLabel = "FILE",
-            description = "Write the scores as a self-contained HTML page with a reliability diagram.")
-    Path htmlOut;
-
-    @Option(names = "--min-precision", paramLabel = "P",
-            description = "Acceptance limit: least precision of the identified calls, a fraction, such as 0.95.")
-    Double minPrecision;
-
-    @Option(names = "--min-recall", paramLabel = "R",
-            description = "Acceptance limit: least recall of the analytes present (identified with the right "
-                    + "name), a fraction.")
-    Double minRecall;
-
-    @Option(names = "--max-ece", paramLabel = "E",
-            description = "Acceptance limit: largest expected calibration error of the calls' confidences, a "
-                    + "fraction, such as 0.05.")
-    Double maxEce;
-
-    @Option(names = "--overwrite", description = "Replace output files that already exist.")
-    boolean overwrite;
+    @Mixin
+    AssessOutputs outputs;
 
     @Option(names = "--quiet", description = "Do not print the scores (the files and the exit code still tell).")
     boolean quiet;
-
-    /**
-     * The library option of the shared run options is required by the commands that always
-     * identify; here it is needed only without {@code --table}, which {@link #call} checks.
-     */
-    static final class LibraryOnlyWhenIdentifying implements CommandLine.IModelTransformer {
-        @Override
-        public CommandSpec transform(CommandSpec commandSpec) {
-            OptionSpec library = commandSpec.findOption("--library");
-            if (library != null && library.required()) {
-                commandSpec.remove(library);
-                commandSpec.addOption(OptionSpec.builder(library).required(false)
-                        .description("Mobility library (CSV), to identify the runs now (not with --table).").build());
-            }
-            return commandSpec;
-        }
-    }
 
     @Override
     public Integer call() throws Exception {
@@ -125,69 +73,30 @@ public final class AssessCommand implements Callable<Integer> {
                     + "files together with --library.");
             return ExitCodes.USAGE;
         }
-        AcceptanceLimits limits = limits();
-        Outputs.checkFree(overwrite, csvOut, verdictsOut, htmlOut);
+        AcceptanceLimits limits = outputs.limits(spec.commandLine());
+        outputs.checkFree();
         KnownIdentities known = KnownIdentitiesReader.read(knownFile);
-        List<ReportedRun> reported;
-        String source;
-        Library library = null;
+        AssessIdentification.Result scored;
         int runProblems = ExitCodes.OK;
         if (tableFile != null) {
-            reported = ReportedRuns.fromTable(PeakTableReader.read(tableFile));
-            source = tableFile.toString();
+            scored = AssessIdentification.ofTable(known, PeakTableReader.read(tableFile), tableFile.toString());
         } else {
-            BatchOptions.Batch done = batch.identify();
-            reported = ReportedRuns.fromResults(done.results());
-            library = done.library();
-            source = "identified now with " + batch.libraryFile;
-            runProblems = Outputs.reportRunProblems(done.results(), err);
+            IdentifiedBatch done = batch.identify();
+            scored = AssessIdentification.ofBatch(known, done, "identified now with " + batch.libraryFile);
+            runProblems = Outputs.reportRunProblems(done, err);
         }
-        Assessment assessment = Assessor.assess(known, reported, source, library);
+        Assessment assessment = scored.assessment();
         if (!assessment.anythingScored()) {
             err.println("mobident assess: none of the " + assessment.notInTable().size() + " runs named in "
-                    + knownFile + " is in the reported peaks (runs there: " + preview(reported) + "); nothing to score.");
+                    + knownFile + " is in the reported peaks (runs there: " + scored.preview()
+                    + "); nothing to score.");
             return ExitCodes.BAD_INPUT;
         }
-        if (!quiet) {
-            AssessmentText.write(assessment, limits, out);
-        }
-        if (csvOut != null) {
-            Outputs.write(csvOut, overwrite, w -> AssessmentCsv.writeScores(assessment, limits, w));
-        }
-        if (verdictsOut != null) {
-            Outputs.write(verdictsOut, overwrite, w -> AssessmentCsv.writeVerdicts(assessment, w));
-        }
-        if (htmlOut != null) {
-            String page = AssessmentHtml.page(assessment, limits, null, VersionProvider.version(), Outputs.timestamp());
-            Outputs.write(htmlOut, overwrite, w -> w.write(page));
-        }
+        outputs.write(assessment, limits, quiet ? null : out);
         if (!limits.allMet(assessment)) {
             err.println("mobident assess: an acceptance limit was not met.");
             return ExitCodes.SOME_RUNS_FAILED;
         }
         return runProblems;
-    }
-
-    /** The limits given; a value outside [0, 1] is a usage error. */
-    private AcceptanceLimits limits() {
-        double p = minPrecision == null ? Double.NaN : minPrecision;
-        double r = minRecall == null ? Double.NaN : minRecall;
-        double e = maxEce == null ? Double.NaN : maxEce;
-        String[] names = {"--min-precision", "--min-recall", "--max-ece"};
-        double[] values = {p, r, e};
-        for (int i = 0; i < names.length; i++) {
-            if (!Double.isNaN(values[i]) && !(values[i] >= 0 && values[i] <= 1)) {
-                throw new CommandLine.ParameterException(spec.commandLine(), names[i]
-                        + ": a limit is a fraction between 0 and 1, got " + values[i]);
-            }
-        }
-        return new AcceptanceLimits(p, r, e);
-    }
-
-    /** The first few run names of the peaks, for the message when nothing matches. */
-    private static String preview(List<ReportedRun> runs) {
-        final int shown = 5;
-        List<String> names = runs.stream().limit(shown).map(ReportedRun::name).toList();
-        return names.isEmpty() ? "none" : String.join(", ", names) + (runs.size() > shown ? ", ..." : "");
     }
 }

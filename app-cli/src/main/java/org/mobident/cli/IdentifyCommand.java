@@ -1,21 +1,8 @@
 package org.mobident.cli;
 
-import java.io.IOException;
 import java.io.PrintWriter;
-import java.nio.file.Files;
-import java.nio.file.Path;
-import java.util.List;
 import java.util.concurrent.Callable;
-import org.mobident.io.SafeFiles;
-import org.mobident.pipeline.RunResult;
-import org.mobident.report.BatchSummaryCsv;
-import org.mobident.report.PeakTableCsv;
-import org.mobident.report.PeakTableJson;
-import org.mobident.report.ResultsWorkbook;
-import org.mobident.report.RunSummaryText;
-import org.mobident.summary.RecurringUnknowns;
-import org.mobident.summary.SampleCalls;
-import org.mobident.report.html.HtmlReport;
+import org.mobident.usecase.IdentifiedBatch;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
@@ -39,37 +26,8 @@ public final class IdentifyCommand implements Callable<Integer> {
     @Mixin
     BatchOptions batch;
 
-    @Option(names = "--csv", paramLabel = "FILE", description = "Write the peak table as CSV.")
-    Path csvOut;
-
-    @Option(names = "--json", paramLabel = "FILE", description = "Write the peak table as JSON.")
-    Path jsonOut;
-
-    @Option(names = "--html", paramLabel = "FILE", description = "Write a self-contained HTML report with plots.")
-    Path htmlOut;
-
-    @Option(names = "--xlsx", paramLabel = "FILE",
-            description = "Write a results workbook (.xlsx): samples x analytes first, then the peak table, each "
-                    + "analyte over the batch, recurring unknowns, run facts and the library used.")
-    Path xlsxOut;
-
-    @Option(names = "--summary-csv", paramLabel = "FILE",
-            description = "Write the samples x analytes summary as CSV: one row per run and library analyte "
-                    + "(result, confidence, corrected area, mobility).")
-    Path summaryCsvOut;
-
-    @Option(names = "--unknowns-csv", paramLabel = "FILE",
-            description = "Write the recurring unknowns as CSV: unassigned peaks at one mobility in two or more "
-                    + "runs of a buffer, one row per peak.")
-    Path unknownsCsvOut;
-
-    @Option(names = "--known", paramLabel = "FILE",
-            description = "Known-identities table: score the results against it as 'assess' does, print the scores "
-                    + "and add them to the --html report.")
-    Path knownFile;
-
-    @Option(names = "--overwrite", description = "Replace output files that already exist.")
-    boolean overwrite;
+    @Mixin
+    IdentifyOutputs outputs;
 
     @Option(names = "--quiet", description = "Print neither the per-run summary, nor the progress bar, nor the "
             + "closing totals line.")
@@ -77,53 +35,22 @@ public final class IdentifyCommand implements Callable<Integer> {
 
     @Override
     public Integer call() throws Exception {
-        PrintWriter out = spec.commandLine().getOut();
         PrintWriter err = spec.commandLine().getErr();
         if (!batch.runsGiven()) {
             err.println("mobident identify: give either a run sheet (--runs SHEET) or trace files, not both or neither.");
             return ExitCodes.USAGE;
         }
         long start = System.nanoTime();
-        Outputs.checkFree(overwrite, csvOut, jsonOut, htmlOut, xlsxOut, summaryCsvOut, unknownsCsvOut);
-        KnownScores known = KnownScores.read(knownFile);
-        BatchOptions.Batch done;
+        outputs.checkFree();
+        KnownScores known = KnownScores.read(outputs.knownFile);
+        IdentifiedBatch done;
         try (ProgressDisplay progress = ProgressDisplay.on(err, !quiet && ProgressDisplay.stderrIsTerminal())) {
             done = batch.identify(progress);
         }
-        var results = done.results();
-        KnownScores scored = known == null ? null : known.score(results, done.library());
-        List<RecurringUnknowns.Group> unknowns = RecurringUnknowns.of(results, done.library());
-        SampleCalls samples = SampleCalls.of(results, done.library());
+        outputs.write(done, known == null ? null : known.score(done), quiet ? null : spec.commandLine().getOut());
+        int code = Outputs.reportRunProblems(done, err);
         if (!quiet) {
-            RunSummaryText.write(results, samples, unknowns, out);
-            if (scored != null) {
-                scored.print(out);
-            }
-        }
-        if (csvOut != null) {
-            Outputs.write(csvOut, overwrite, w -> PeakTableCsv.write(results, w));
-        }
-        if (jsonOut != null) {
-            Outputs.write(jsonOut, overwrite, w -> PeakTableJson.write(results, w));
-        }
-        if (htmlOut != null) {
-            var traces = done.traces();
-            Outputs.write(htmlOut, overwrite, w -> HtmlReport.write(results, traces, done.library(),
-                    Outputs.htmlOptions(), KnownScores.sections(scored), w));
-        }
-        if (summaryCsvOut != null) {
-            Outputs.write(summaryCsvOut, overwrite, w -> BatchSummaryCsv.writeSamples(samples, w));
-        }
-        if (unknownsCsvOut != null) {
-            Outputs.write(unknownsCsvOut, overwrite, w -> BatchSummaryCsv.writeUnknowns(unknowns, w));
-        }
-        if (xlsxOut != null) {
-            Outputs.writeBytes(xlsxOut, overwrite, o -> ResultsWorkbook.write(results, done.library(), unknowns,
-                    Outputs.workbookOptions(), o));
-        }
-        int code = Outputs.reportRunProblems(results, err);
-        if (!quiet) {
-            err.println(BatchTotals.line(results, (System.nanoTime() - start) / 1e9));
+            err.println(BatchTotals.line(done.results(), (System.nanoTime() - start) / 1e9));
             err.flush();
         }
         return code;

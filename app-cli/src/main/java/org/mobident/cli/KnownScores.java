@@ -8,13 +8,11 @@ import org.mobident.assess.AcceptanceLimits;
 import org.mobident.assess.Assessment;
 import org.mobident.assess.AssessmentHtml;
 import org.mobident.assess.AssessmentText;
-import org.mobident.assess.Assessor;
 import org.mobident.assess.KnownIdentities;
 import org.mobident.assess.KnownIdentitiesReader;
-import org.mobident.assess.ReportedRuns;
-import org.mobident.library.Library;
-import org.mobident.pipeline.RunResult;
 import org.mobident.report.html.HtmlSection;
+import org.mobident.usecase.AssessIdentification;
+import org.mobident.usecase.IdentifiedBatch;
 
 /**
  * The scores that {@code identify --known} adds to its outputs: the known-identities table, read
@@ -30,10 +28,9 @@ record KnownScores(KnownIdentities known, Assessment scores) {
         return file == null ? null : new KnownScores(KnownIdentitiesReader.read(file), null);
     }
 
-    /** Scores the results of an identification against the table. */
-    KnownScores score(List<RunResult> results, Library library) {
-        return new KnownScores(known, Assessor.assess(known, ReportedRuns.fromResults(results),
-                "this identification", library));
+    /** Scores an identification against the table. */
+    KnownScores score(IdentifiedBatch batch) {
+        return new KnownScores(known, AssessIdentification.ofBatch(known, batch, "this identification").assessment());
     }
 
     /** Prints the scores after a blank line. */

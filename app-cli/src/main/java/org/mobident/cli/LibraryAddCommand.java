@@ -2,13 +2,12 @@ package org.mobident.cli;
 
 import java.nio.file.Path;
 import java.util.concurrent.Callable;
-import org.mobident.library.Library;
 import org.mobident.library.LibraryCsv;
-import org.mobident.library.standards.BuildResult;
 import org.mobident.library.standards.BuildText;
 import org.mobident.library.standards.BuildWarning;
-import org.mobident.library.standards.LibraryMerger;
 import org.mobident.library.standards.MergeResult;
+import org.mobident.matching.MatchSettings;
+import org.mobident.usecase.AddToLibrary;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
@@ -42,11 +41,11 @@ public final class LibraryAddCommand implements Callable<Integer> {
             err.println("mobident library add: give the standards runs as a run sheet (--runs SHEET) or trace files.");
             return ExitCodes.USAGE;
         }
-        Library existing = LibraryCsv.read(libraryFile);
-        BuildResult fresh = standards.build();
+        AddToLibrary job = new AddToLibrary(LibraryCsv.read(libraryFile), standards.job());
         // refuses runs already pooled (same trace SHA-256 in the library's notes) before anything is written
-        MergeResult merged = LibraryMerger.merge(existing, fresh);
-        BuildText.write(fresh, out);
+        AddToLibrary.Result done = job.run(standards.inputs.settings(MatchSettings.DEFAULT), standards.buildSettings());
+        MergeResult merged = done.merged();
+        BuildText.write(done.fresh(), out);
         LibraryBuildCommand.writeLibrary(libraryFile, true, merged.library());
         if (!merged.pooled().isEmpty()) {
             out.println("pooled: " + String.join(", ", merged.pooled()));
@@ -62,8 +61,7 @@ public final class LibraryAddCommand implements Callable<Integer> {
         }
         printWritten(merged, out);
         out.println("library " + libraryFile + " updated; previous version kept as " + libraryFile + ".prev");
-        return BuildWarning.anyWarning(fresh.warnings()) || BuildWarning.anyWarning(merged.warnings())
-                ? ExitCodes.SOME_RUNS_FAILED : ExitCodes.OK;
+        return done.anyWarning() ? ExitCodes.SOME_RUNS_FAILED : ExitCodes.OK;
     }
 
     /**

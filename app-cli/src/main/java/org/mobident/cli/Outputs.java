@@ -8,7 +8,7 @@ import java.time.Instant;
 import java.time.temporal.ChronoUnit;
 import java.util.List;
 import org.mobident.io.SafeFiles;
-import org.mobident.pipeline.RunResult;
+import org.mobident.usecase.IdentifiedBatch;
 
 /** Writing output files and reporting run problems, the same way for every command. */
 final class Outputs {
@@ -59,18 +59,13 @@ final class Outputs {
     }
 
     /** Prints one line per failed run or run without mobility scale; returns the exit code. */
-    static int reportRunProblems(List<RunResult> results, PrintWriter err) {
-        int problems = 0;
-        for (RunResult r : results) {
-            if (r.failed()) {
-                err.println("mobident: run " + r.spec().name() + " not processed: " + r.error().getMessage());
-                problems++;
-            } else if (!r.mobilityKnown()) {
-                err.println("mobident: run " + r.spec().name() + " has no mobility scale: " + r.scaleNote());
-                problems++;
-            }
+    static int reportRunProblems(IdentifiedBatch batch, PrintWriter err) {
+        List<IdentifiedBatch.RunProblem> problems = batch.problems();
+        for (IdentifiedBatch.RunProblem p : problems) {
+            err.println("mobident: run " + p.result().spec().name() + (p.failed() ? " not processed: "
+                    : " has no mobility scale: ") + p.reason());
         }
         err.flush();
-        return problems > 0 ? ExitCodes.SOME_RUNS_FAILED : ExitCodes.OK;
+        return problems.isEmpty() ? ExitCodes.OK : ExitCodes.SOME_RUNS_FAILED;
     }
 }

@@ -1,19 +1,12 @@
 package org.mobident.cli;
 
-import java.io.IOException;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
-import java.util.Locale;
-import java.util.Map;
 import java.util.concurrent.Callable;
-import org.mobident.io.SafeFiles;
-import org.mobident.pipeline.RunResult;
 import org.mobident.report.plot.Axis;
-import org.mobident.report.plot.PlotModel;
-import org.mobident.report.plot.PngPlot;
-import org.mobident.report.plot.SvgPlot;
-import org.mobident.trace.Trace;
+import org.mobident.usecase.IdentifiedBatch;
+import org.mobident.usecase.PlotRuns;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
@@ -55,20 +48,6 @@ public final class PlotCommand implements Callable<Integer> {
     @Option(names = "--overwrite", description = "Replace the file if it exists.")
     boolean overwrite;
 
-    /** The image formats written, chosen by the name's extension. */
-    enum ImageKind {
-        PNG, SVG;
-
-        /** The kind a file name asks for, or null when it names no format written here. */
-        static ImageKind of(Path file) {
-            String name = file.getFileName() == null ? "" : file.getFileName().toString().toLowerCase(Locale.ROOT);
-            if (name.endsWith(".png")) {
-                return PNG;
-            }
-            return name.endsWith(".svg") ? SVG : null;
-        }
-    }
-
     @Override
     public Integer call() throws Exception {
         var err = spec.commandLine().getErr();
@@ -76,75 +55,29 @@ public final class PlotCommand implements Callable<Integer> {
             err.println("mobident plot: give either a run sheet (--runs SHEET) or trace files, not both or neither.");
             return ExitCodes.USAGE;
         }
-        Axis ax = axis;
         ImageKind kind = ImageKind.of(out);
         if (kind == null) {
             err.println("mobident plot: --out must name a .png or .svg file, got '" + out.getFileName()
                     + "'; other image formats are not written");
             return ExitCodes.USAGE;
         }
-        String[] wh = size.toLowerCase(Locale.ROOT).split("x");
-        int w;
-        int h;
-        try {
-            w = Integer.parseInt(wh[0].trim());
-            h = Integer.parseInt(wh[1].trim());
-        } catch (RuntimeException e) {
-            err.println("mobident plot: --size must look like 1200x520, got '" + size + "'");
-            return ExitCodes.USAGE;
-        }
-        if (w < 200 || h < 150 || w > 10000 || h > 10000) {
-            err.println("mobident plot: --size must be between 200x150 and 10000x10000 pixels");
+        int[] wh = ImageKind.size(size, err);
+        if (wh == null) {
             return ExitCodes.USAGE;
         }
         Outputs.checkFree(overwrite, out);
-        BatchOptions.Batch done = batch.identify();
-        Map<String, Trace> traces = done.traces();
-        PlotModel.Builder b = PlotModel.builder(ax);
-        int drawn = 0;
-        for (RunResult r : done.results()) {
-            if (!runNames.isEmpty() && runNames.stream().noneMatch(n -> n.trim().equals(r.spec().name()))) {
-                continue;
-            }
-            Trace t = traces.get(r.spec().name());
-            if (t != null) {
-                b.run(t, r);
-                drawn++;
-            }
+        IdentifiedBatch done = batch.identify();
+        PlotRuns.Drawing drawing = PlotRuns.plot(done, runNames, axis, !noBands);
+        if (drawing.unknownName() != null) {
+            err.println("mobident plot: --show: no run is named '" + drawing.unknownName() + "'");
+            return ExitCodes.BAD_INPUT;
         }
-        for (String n : runNames) {
-            if (done.results().stream().noneMatch(r -> r.spec().name().equals(n.trim()))) {
-                err.println("mobident plot: --show: no run is named '" + n.trim() + "'");
-                return ExitCodes.BAD_INPUT;
-            }
-        }
-        if (drawn == 0) {
+        if (!drawing.any()) {
             err.println("mobident plot: no run could be drawn");
-            return Outputs.reportRunProblems(done.results(), err) == ExitCodes.OK
-                    ? ExitCodes.BAD_INPUT : ExitCodes.SOME_RUNS_FAILED;
+            return Outputs.reportRunProblems(done, err) == ExitCodes.OK ? ExitCodes.BAD_INPUT : ExitCodes.SOME_RUNS_FAILED;
         }
-        if (!noBands) {
-            b.library(done.library());
-        }
-        // labels of many overlaid runs would pile up: markers alone then, the status in their shape
-        b.peakLabels(drawn <= 2);
-        if (drawn == 1) {
-            b.title(runNames.isEmpty() ? done.results().get(0).spec().name() : runNames.get(0).trim());
-        } else {
-            b.title(drawn + " runs");
-        }
-        PlotModel model = b.build();
-        try {
-            if (kind == ImageKind.SVG) {
-                String svg = SvgPlot.render(model, w, h);
-                SafeFiles.write(out, overwrite, "add --overwrite to replace it", wr -> wr.write(svg));
-            } else {
-                PngPlot.write(model, w, h, out, overwrite);
-            }
-        } catch (IOException e) {
-            throw new OutputException(out + ": " + e.getMessage(), e);
-        }
-        spec.commandLine().getOut().println("plot of " + drawn + " run(s) written to " + out);
-        return Outputs.reportRunProblems(done.results(), err);
+        kind.write(drawing.model(), wh[0], wh[1], out, overwrite);
+        spec.commandLine().getOut().println("plot of " + drawing.drawn() + " run(s) written to " + out);
+        return Outputs.reportRunProblems(done, err);
     }
 }

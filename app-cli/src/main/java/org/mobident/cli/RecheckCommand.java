@@ -5,14 +5,13 @@ import java.util.List;
 import java.util.concurrent.Callable;
 import org.mobident.library.Library;
 import org.mobident.library.LibraryCsv;
+import org.mobident.recheck.BufferTransfer;
 import org.mobident.recheck.PeakTableReader;
 import org.mobident.recheck.PeakTableRow;
-import org.mobident.recheck.BufferTransfer;
 import org.mobident.recheck.RecheckReportCsv;
 import org.mobident.recheck.RecheckResult;
-import org.mobident.recheck.RecheckSettings;
 import org.mobident.recheck.RecheckSummaryText;
-import org.mobident.recheck.Rechecker;
+import org.mobident.usecase.RecheckAssignments;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
@@ -84,17 +83,11 @@ public final class RecheckCommand implements Callable<Integer> {
         List<PeakTableRow> rows = PeakTableReader.read(tableFile);
         Library libraryA = LibraryCsv.read(libraryFile);
         BufferTransfer predictor = ReferenceData.transfer(referenceFile);
-        RecheckResult result;
-        if (newLibraryFile != null) {
-            Library libraryB = LibraryCsv.read(newLibraryFile);
-            result = Rechecker.withMeasuredLibrary(rows, tableFile.toString(), libraryA, buffers.oldBuffer(), libraryB,
-                    buffers.newGiven() ? ReferenceData.adjusted(buffers.newBuffer(), buffers, referenceFile,
-                            spec.commandLine().getOut()) : null, predictor, RecheckSettings.DEFAULT);
-        } else {
-            result = Rechecker.withPredictedLibrary(rows, tableFile.toString(), libraryA, buffers.oldBuffer(),
-                    ReferenceData.adjusted(buffers.newBuffer(), buffers, referenceFile, spec.commandLine().getOut()),
-                    predictor, RecheckSettings.DEFAULT);
-        }
+        Library libraryB = newLibraryFile == null ? null : LibraryCsv.read(newLibraryFile);
+        var job = new RecheckAssignments(rows, tableFile.toString(), libraryA, buffers.oldBuffer(), predictor);
+        RecheckResult result = libraryB != null
+                ? job.againstMeasured(libraryB, buffers.newGiven() ? adjustedNewBuffer() : null)
+                : job.againstPredicted(adjustedNewBuffer());
         RecheckSummaryText.write(result, spec.commandLine().getOut());
         if (csvOut != null) {
             Outputs.write(csvOut, overwrite, w -> RecheckReportCsv.writeAssignments(result, w));
@@ -106,5 +99,9 @@ public final class RecheckCommand implements Callable<Integer> {
             Outputs.write(analytesOut, overwrite, w -> RecheckReportCsv.writeAnalytes(result, w));
         }
         return result.needsAttention() ? ExitCodes.SOME_RUNS_FAILED : ExitCodes.OK;
+    }
+
+    private org.mobident.recheck.BufferSpec adjustedNewBuffer() throws org.mobident.InputException {
+        return ReferenceData.adjusted(buffers.newBuffer(), buffers, referenceFile, spec.commandLine().getOut());
     }
 }

@@ -44,7 +44,7 @@ public final class ReportCommand implements Callable<Integer> {
             return ExitCodes.USAGE;
         }
         Outputs.checkFree(overwrite, out, xlsxOut);
-        BatchOptions.Batch done = batch.identify();
+        var done = batch.identify();
         var traces = done.traces();
         Outputs.write(out, overwrite, w -> HtmlReport.write(done.results(), traces, done.library(),
                 Outputs.htmlOptions(), w));
@@ -54,6 +54,6 @@ public final class ReportCommand implements Callable<Integer> {
                     unknowns, Outputs.workbookOptions(), o));
         }
         spec.commandLine().getOut().println("report written to " + out + " (" + done.results().size() + " runs)");
-        return Outputs.reportRunProblems(done.results(), err);
+        return Outputs.reportRunProblems(done, err);
     }
 }

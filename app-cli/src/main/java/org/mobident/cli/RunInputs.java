@@ -3,15 +3,11 @@ package org.mobident.cli;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
-import java.util.Map;
 import org.mobident.InputException;
 import org.mobident.matching.MatchSettings;
 import org.mobident.pipeline.IdentifySettings;
-import org.mobident.pipeline.RunResult;
 import org.mobident.trace.RunConditions;
-import org.mobident.trace.RunSpec;
-import org.mobident.trace.io.RunSheet;
-import org.mobident.trace.io.RunSheetReader;
+import org.mobident.usecase.RunBatch;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
@@ -32,37 +28,16 @@ public final class RunInputs {
     @Mixin
     CommonOptions common;
 
-    /** The runs that can be processed, the rows that cannot (as failed results), and sheet text columns. */
-    record Loaded(List<RunSpec> runs, List<RunResult> rejected, Map<String, String> sampleByRun,
-                  Map<String, String> mixByRun) {
-    }
-
     /** True when exactly one of run sheet and trace files was given. */
     boolean given() {
         return (runSheet == null) != traces.isEmpty();
     }
 
-    Loaded load() throws InputException {
+    /** The runs named by the options: a sheet's, or the trace files under the conditions given as options. */
+    RunBatch load() throws InputException {
         RunConditions defaults = conditions.toConditions();
-        List<RunSpec> runs = new ArrayList<>();
-        List<RunResult> rejected = new ArrayList<>();
-        if (runSheet != null) {
-            RunSheet sheet = RunSheetReader.read(runSheet, defaults);
-            runs.addAll(sheet.runs());
-            for (InputException problem : sheet.rowProblems()) {
-                rejected.add(RunResult.failure(new RunSpec("sheet line " + problem.line(), null,
-                        RunConditions.EMPTY, runSheet.toString(), problem.line()), problem));
-            }
-            return new Loaded(runs, rejected, sheet.sampleByRun(), sheet.mixByRun());
-        }
-        for (Path t : traces) {
-            try {
-                runs.add(RunSheetReader.single(t, defaults));
-            } catch (InputException e) {
-                rejected.add(RunResult.failure(new RunSpec(RunSpec.runNameOf(t), null, defaults, OptionNames.COMMAND_LINE, 0), e));
-            }
-        }
-        return new Loaded(runs, rejected, Map.of(), Map.of());
+        return runSheet != null ? RunBatch.fromSheet(runSheet, defaults)
+                : RunBatch.fromTraces(traces, defaults, OptionNames.COMMAND_LINE);
     }
 
     /** The settings from the options; an option value the engine refuses is a usage error, not an internal one. */

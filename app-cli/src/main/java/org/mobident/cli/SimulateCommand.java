@@ -5,9 +5,9 @@ import java.nio.file.Path;
 import java.util.concurrent.Callable;
 import org.mobident.library.Library;
 import org.mobident.library.LibraryCsv;
-import org.mobident.simulate.ArchiveGenerator;
 import org.mobident.simulate.LabDayBench;
 import org.mobident.simulate.LabDaySummary;
+import org.mobident.usecase.SimulateRuns;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Spec;
@@ -34,35 +34,27 @@ import picocli.CommandLine.Model.CommandSpec;
             "  mobident simulate --scenario lab-day --count 160 --seed 7 --out /tmp/bench-7"})
 public final class SimulateCommand implements Callable<Integer> {
 
-    static final String ARCHIVE = "archive";
-    static final String LAB_DAY = "lab-day";
-    static final int DEFAULT_ARCHIVE_RUNS = 20;
-    static final int DEFAULT_LAB_DAY_SAMPLES = 160;
-    static final int DEFAULT_POINTS = 14_400;
-    static final int MAX_ARCHIVE_RUNS = 100_000;
-    static final int MAX_LAB_DAY_SAMPLES = 10_000;
-    static final int MIN_POINTS = 100;
-    static final int MAX_POINTS = 10_000_000;
     private static final String OVERWRITE_HINT = "add --overwrite to replace it";
 
     @Spec
     CommandSpec spec;
 
     @Option(names = "--scenario", paramLabel = "NAME", description = "archive (default) or lab-day.")
-    String scenario = ARCHIVE;
+    String scenario = SimulateRuns.ARCHIVE;
 
     @Option(names = {"-l", "--library"}, paramLabel = "FILE",
             description = "archive: library to draw anions from (required). lab-day: not used (built-in panels).")
     Path libraryFile;
 
     @Option(names = "--count", paramLabel = "N",
-            description = "archive: number of runs (default " + DEFAULT_ARCHIVE_RUNS + "). lab-day: number of sample "
-                    + "runs, besides the standards (default " + DEFAULT_LAB_DAY_SAMPLES + ").")
+            description = "archive: number of runs (default " + SimulateRuns.DEFAULT_ARCHIVE_RUNS + "). lab-day: "
+                    + "number of sample runs, besides the standards (default " + SimulateRuns.DEFAULT_LAB_DAY_SAMPLES
+                    + ").")
     Integer count;
 
     @Option(names = "--points", paramLabel = "N",
-            description = "archive: points per run (default " + DEFAULT_POINTS + "). lab-day: not used (each run "
-                    + "has its own sampling rate and length).")
+            description = "archive: points per run (default " + SimulateRuns.DEFAULT_POINTS + "). lab-day: not used "
+                    + "(each run has its own sampling rate and length).")
     Integer points;
 
     @Option(names = "--seed", paramLabel = "N", description = "Random seed (default ${DEFAULT-VALUE}); the same seed "
@@ -77,61 +69,32 @@ public final class SimulateCommand implements Callable<Integer> {
 
     @Override
     public Integer call() throws Exception {
-        if (ARCHIVE.equals(scenario)) {
-            return archive();
+        var request = new SimulateRuns.Request(scenario, libraryFile != null, count, points, seed, out, overwrite,
+                OVERWRITE_HINT);
+        if (request.problem() != null) {
+            spec.commandLine().getErr().println("mobident simulate: " + request.problem());
+            return ExitCodes.USAGE;
         }
-        if (LAB_DAY.equals(scenario)) {
-            return labDay();
-        }
-        return usage("unknown --scenario '" + scenario + "'; choose " + ARCHIVE + " or " + LAB_DAY);
-    }
-
-    private Integer archive() throws Exception {
-        int runs = count == null ? DEFAULT_ARCHIVE_RUNS : count;
-        int n = points == null ? DEFAULT_POINTS : points;
-        if (runs < 1 || runs > MAX_ARCHIVE_RUNS || n < MIN_POINTS || n > MAX_POINTS) {
-            return usage("--count must be 1.." + MAX_ARCHIVE_RUNS + " and --points " + MIN_POINTS + ".." + MAX_POINTS);
-        }
-        if (libraryFile == null) {
-            return usage("the archive scenario draws its anions from a library: give --library FILE");
-        }
-        Library library = LibraryCsv.read(libraryFile);
+        var o = spec.commandLine().getOut();
         try {
-            Path sheet = ArchiveGenerator.write(library, runs, n, seed, out, overwrite);
-            spec.commandLine().getOut().println(runs + " runs of " + n + " points written; run sheet " + sheet);
-        } catch (IllegalArgumentException e) {
-            spec.commandLine().getErr().println("mobident simulate: " + e.getMessage());
-            return ExitCodes.BAD_INPUT;
+            if (SimulateRuns.ARCHIVE.equals(scenario)) {
+                Library library = LibraryCsv.read(libraryFile);
+                try {
+                    Path sheet = SimulateRuns.archive(request, library);
+                    o.println(request.runs() + " runs of " + request.pointsPerRun() + " points written; run sheet "
+                            + sheet);
+                } catch (IllegalArgumentException e) {
+                    spec.commandLine().getErr().println("mobident simulate: " + e.getMessage());
+                    return ExitCodes.BAD_INPUT;
+                }
+            } else {
+                LabDaySummary summary = SimulateRuns.labDay(request);
+                o.println(summary.paragraph());
+                o.println("Written to " + out + "; start with " + out.resolve(LabDayBench.README) + ".");
+            }
         } catch (IOException e) {
             throw new OutputException(out + ": " + e.getMessage(), e);
         }
         return ExitCodes.OK;
-    }
-
-    private Integer labDay() throws Exception {
-        if (libraryFile != null) {
-            return usage("the lab-day scenario uses its own invented panels; leave out --library");
-        }
-        if (points != null) {
-            return usage("the lab-day scenario chooses each run's sampling rate and length; leave out --points");
-        }
-        int samples = count == null ? DEFAULT_LAB_DAY_SAMPLES : count;
-        if (samples < 1 || samples > MAX_LAB_DAY_SAMPLES) {
-            return usage("--count must be 1.." + MAX_LAB_DAY_SAMPLES + " sample runs");
-        }
-        try {
-            LabDaySummary summary = LabDayBench.write(samples, seed, out, overwrite, OVERWRITE_HINT);
-            var o = spec.commandLine().getOut();
-            o.println(summary.paragraph());
-            o.println("Written to " + out + "; start with " + out.resolve(LabDayBench.README) + ".");
-        } catch (IOException e) {
-            throw new OutputException(out + ": " + e.getMessage(), e);
-        }
-        return ExitCodes.OK;
-    }
-
-    private Integer usage(String message) {
-        spec.commandLine().getErr().println("mobident simulate: " + message);
-        return ExitCodes.USAGE;
     }
 }

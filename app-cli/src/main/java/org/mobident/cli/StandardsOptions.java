@@ -1,32 +1,21 @@
 package org.mobident.cli;
 
 import java.nio.file.Path;
-import java.util.ArrayList;
-import java.util.List;
 import org.mobident.InputException;
 import org.mobident.library.Library;
 import org.mobident.library.LibraryCsv;
 import org.mobident.library.standards.BuildResult;
 import org.mobident.library.standards.BuildSettings;
 import org.mobident.library.standards.Grubbs;
-import org.mobident.library.standards.LibraryBuilder;
 import org.mobident.library.standards.StandardsSheet;
 import org.mobident.library.standards.StandardsSheetReader;
 import org.mobident.matching.MatchSettings;
-import org.mobident.pipeline.IdentifySettings;
-import org.mobident.pipeline.Identifier;
-import org.mobident.pipeline.RunResult;
+import org.mobident.usecase.BuildLibrary;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
 
 /** Standards runs, the sheet saying what each mix holds, and the build settings. */
 public final class StandardsOptions {
-
-    /** Spread given to a sheet's approximate mobility when it guides the marker choice, mobility units. */
-    static final double GUIDE_APPROX_SPREAD = 1.5;
-
-    /** Relative spread given to a reference (limiting) mobility when it guides the marker choice. */
-    static final double GUIDE_REFERENCE_RELATIVE_SPREAD = 0.05;
 
     @Mixin
     RunInputs inputs;
@@ -77,32 +66,15 @@ public final class StandardsOptions {
 
     /** Processes the standards runs and builds a library from them. */
     BuildResult build() throws InputException {
+        return job().run(inputs.settings(MatchSettings.DEFAULT), buildSettings());
+    }
+
+    /** The standards runs, their sheet, the reference and the buffer, checked before any work. */
+    BuildLibrary job() throws InputException {
         StandardsSheet sheet = StandardsSheetReader.read(mixesFile);
         Library reference = referenceFile == null ? null : LibraryCsv.read(referenceFile);
-        RunInputs.Loaded loaded = inputs.load();
-        var mixByRun = sheet.resolveMixes(loaded.runs(), loaded.mixByRun(), loaded.sampleByRun());
-        sheet.requireMixes(loaded.runs(), mixByRun);
-        if ((ph != null && !(ph >= 0 && ph <= 14)) || (ionicStrengthMm != null && !(ionicStrengthMm >= 0))) {
-            throw new InputException("command line", 0, ph != null && !(ph >= 0 && ph <= 14) ? "--ph"
-                    : "--ionic-strength-mm", "pH must lie in 0–14 and the ionic strength must not be negative");
-        }
-        IdentifySettings settings = inputs.settings(MatchSettings.DEFAULT);
-        // without marker windows, the neutral marker is the peak under which the expected analytes fit best;
-        // reference (limiting) mobilities are first carried to the buffer when its pH and ionic strength are known
-        Library guideReference = reference;
-        if (reference != null && ph != null && ionicStrengthMm != null) {
-            double t = loaded.runs().isEmpty() || Double.isNaN(loaded.runs().get(0).conditions().temperatureC())
-                    ? org.mobident.library.LibraryEntry.DEFAULT_TEMPERATURE_C
-                    : loaded.runs().get(0).conditions().temperatureC();
-            guideReference = org.mobident.chem.ReferenceIons.effectiveAt(reference,
-                    new org.mobident.chem.BufferConditions(ph, ionicStrengthMm / 1000.0, t));
-        }
-        Library guide = sheet.guideLibrary(guideReference, GUIDE_APPROX_SPREAD, GUIDE_REFERENCE_RELATIVE_SPREAD);
-        List<RunResult> results = new ArrayList<>(new Identifier(guide, settings).identifyAll(loaded.runs()));
-        results.addAll(loaded.rejected());
-        // with pH and ionic strength, the reference's limiting mobilities are first predicted for the buffer
-        return LibraryBuilder.build(results, mixByRun, sheet, buildSettings(), reference,
-                ph == null ? Double.NaN : ph, ionicStrengthMm == null ? Double.NaN : ionicStrengthMm);
+        return new BuildLibrary(sheet, reference, inputs.load(), ph == null ? Double.NaN : ph,
+                ionicStrengthMm == null ? Double.NaN : ionicStrengthMm);
     }
 
     BuildSettings buildSettings() {

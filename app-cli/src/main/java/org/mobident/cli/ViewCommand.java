@@ -7,7 +7,6 @@ import java.util.List;
 import java.util.concurrent.Callable;
 import java.util.concurrent.CountDownLatch;
 import org.mobident.InputException;
-import org.mobident.library.Library;
 import org.mobident.library.LibraryCsv;
 import org.mobident.matching.MatchSettings;
 import org.mobident.pipeline.IdentifySettings;
@@ -15,6 +14,8 @@ import org.mobident.pipeline.RunResult;
 import org.mobident.report.plot.Axis;
 import org.mobident.trace.RunSpec;
 import org.mobident.trace.io.TraceFiles;
+import org.mobident.usecase.IdentifyBatch;
+import org.mobident.usecase.RunBatch;
 import org.mobident.viewer.Viewer;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
@@ -69,9 +70,8 @@ public final class ViewCommand implements Callable<Integer> {
             err.println("mobident view: give either a run sheet (--runs SHEET) or trace files, not both or neither.");
             return ExitCodes.USAGE;
         }
-        Library library = LibraryCsv.read(libraryFile);
-        org.mobident.library.standards.LibraryCheck.requirePlausible(library);
-        RunInputs.Loaded loaded = inputs.load();
+        IdentifyBatch job = new IdentifyBatch(LibraryCsv.read(libraryFile));
+        RunBatch loaded = inputs.load();
         List<RunSpec> runs = loaded.runs();
         List<RunResult> rejected = loaded.rejected();
         IdentifySettings settings = inputs.settings(matching.toSettings(MatchSettings.DEFAULT));
@@ -80,7 +80,7 @@ public final class ViewCommand implements Callable<Integer> {
                 : inputs.traces.size() == 1 ? inputs.traces.get(0).getFileName().toString()
                 : inputs.traces.size() + " traces")
                 + " · " + libraryFile.getFileName();
-        CountDownLatch closed = Viewer.open(new Viewer.Setup(title, library, runs, rejected, settings,
+        CountDownLatch closed = Viewer.open(new Viewer.Setup(title, job, runs, rejected, settings,
                 TraceFiles::read, axis, ticked));
         try {
             closed.await();

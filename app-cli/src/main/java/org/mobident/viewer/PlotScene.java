@@ -8,7 +8,6 @@ import org.mobident.report.plot.Axis;
 import org.mobident.report.plot.PlotLayout;
 import org.mobident.report.plot.PlotModel;
 import org.mobident.signal.Peak;
-import org.mobident.trace.Trace;
 
 /**
  * What one {@link ViewState} of one {@link ViewerData} looks like, before any pixel: the plot
@@ -73,7 +72,7 @@ public final class PlotScene {
                 }
                 double x = axis == Axis.TIME ? p.apexTimeS() : run.result().comparedMobility(scale.mobility(p.apexTimeS()));
                 if (Double.isFinite(x)) {
-                    spots.add(new PeakSpot(new PeakRef(i, k), x, apexSignal(run.trace(), p)));
+                    spots.add(new PeakSpot(new PeakRef(i, k), x, PlotModel.apexSignal(run.trace(), p)));
                 }
             }
         }
@@ -166,18 +165,6 @@ public final class PlotScene {
         double first = layout.xTicks().first();
         double last = layout.xTicks().last();
         return first + (px - layout.plotLeft()) / (layout.plotRight() - layout.plotLeft()) * (last - first);
-    }
-
-    /** The signal at a peak's apex sample (interpolated in time when the index is unusable). */
-    static double apexSignal(Trace trace, Peak p) {
-        int i = p.apexIndex();
-        if (i >= 0 && i < trace.size()) {
-            return trace.signal(i);
-        }
-        int j = Math.max(1, Math.min(trace.size() - 1, trace.indexAtOrAfter(p.apexTimeS())));
-        double f = (p.apexTimeS() - trace.timeS(j - 1)) / (trace.timeS(j) - trace.timeS(j - 1));
-        f = Math.max(0, Math.min(1, f));
-        return trace.signal(j - 1) + f * (trace.signal(j) - trace.signal(j - 1));
     }
 
     private static XRange dataExtent(PlotModel model) {

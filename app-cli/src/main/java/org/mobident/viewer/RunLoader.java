@@ -1,23 +1,24 @@
 package org.mobident.viewer;
 
 import java.util.List;
-import java.util.concurrent.CompletionService;
-import java.util.concurrent.ExecutionException;
-import java.util.concurrent.ExecutorCompletionService;
-import java.util.concurrent.ExecutorService;
-import java.util.concurrent.Executors;
+import java.util.Map;
+import java.util.concurrent.ConcurrentHashMap;
 import java.util.function.BiConsumer;
 import javax.swing.SwingWorker;
 import org.mobident.InputException;
-import org.mobident.pipeline.Identifier;
+import org.mobident.pipeline.BatchProgress;
+import org.mobident.pipeline.IdentifySettings;
 import org.mobident.pipeline.RunResult;
 import org.mobident.trace.RunSpec;
 import org.mobident.trace.Trace;
-import org.mobident.trace.io.TraceReadOptions;
+import org.mobident.usecase.IdentifyBatch;
+import org.mobident.usecase.RunBatch;
 
 /**
- * Reads and identifies the runs on background threads (several at once) and hands each finished
- * run to the Event Dispatch Thread as soon as it is done, so the window fills in run by run.
+ * Identifies the runs in the background through the same use case as {@code identify}
+ * ({@link IdentifyBatch}: several runs at once, the batch's second pass) and hands each run to the
+ * Event Dispatch Thread as soon as its result is known, with its trace for drawing, so the window
+ * fills in run by run; a run matched again in the second pass is handed on again.
  */
 final class RunLoader extends SwingWorker<Void, RunLoader.Done> {
 
@@ -26,68 +27,62 @@ final class RunLoader extends SwingWorker<Void, RunLoader.Done> {
     }
 
     private final List<RunSpec> runs;
-    private final Identifier identifier;
+    private final IdentifyBatch job;
+    private final IdentifySettings settings;
     private final TraceLoader loader;
-    private final TraceReadOptions options;
-    private final int threads;
     private final BiConsumer<Integer, ViewerRun> onRun;
     private final Runnable onFinished;
+    /** Each run's trace once read for drawing, so that a second-pass result does not read it again. */
+    private final Map<Integer, Trace> traces = new ConcurrentHashMap<>();
 
     /**
      * @param runs     the runs to process; run {@code i} is reported with index {@code i}
+     * @param loader   reads a run's trace for drawing
      * @param onRun    called on the Event Dispatch Thread for each finished run
      * @param onFinish called on the Event Dispatch Thread when all are done (or loading was cancelled)
      */
-    RunLoader(List<RunSpec> runs, Identifier identifier, TraceLoader loader, TraceReadOptions options,
-              int threads, BiConsumer<Integer, ViewerRun> onRun, Runnable onFinish) {
+    RunLoader(List<RunSpec> runs, IdentifyBatch job, IdentifySettings settings, TraceLoader loader,
+              BiConsumer<Integer, ViewerRun> onRun, Runnable onFinish) {
         this.runs = List.copyOf(runs);
-        this.identifier = identifier;
+        this.job = job;
+        this.settings = settings;
         this.loader = loader;
-        this.options = options;
-        this.threads = Math.max(1, Math.min(threads, runs.size()));
         this.onRun = onRun;
         this.onFinished = onFinish;
     }
 
     @Override
-    protected Void doInBackground() throws InterruptedException {
-        if (runs.isEmpty()) {
-            return null;
-        }
-        ExecutorService pool = Executors.newFixedThreadPool(threads, r -> {
-            Thread t = new Thread(r, "mobident-viewer-run");
-            t.setDaemon(true);
-            return t;
-        });
-        try {
-            CompletionService<Done> done = new ExecutorCompletionService<>(pool);
-            for (int i = 0; i < runs.size(); i++) {
-                int index = i;
-                done.submit(() -> new Done(index, process(runs.get(index))));
-            }
-            for (int i = 0; i < runs.size() && !isCancelled(); i++) {
-                try {
-                    publish(done.take().get());
-                } catch (ExecutionException e) {
-                    // process() catches everything it can; nothing is left to report here
+    protected Void doInBackground() {
+        if (!runs.isEmpty()) {
+            job.run(new RunBatch(runs, List.of(), Map.of(), Map.of()), settings, BatchProgress.NONE, (i, r) -> {
+                if (!isCancelled()) {
+                    publish(new Done(i, shown(i, r)));
                 }
-            }
-        } finally {
-            pool.shutdownNow();
+            });
         }
         return null;
     }
 
-    /** One run: read, identify; any problem becomes a failed run with the reason. */
-    ViewerRun process(RunSpec spec) {
+    /**
+     * A run's result as the window shows it: with its trace, read once; a run that failed, or whose
+     * trace can no longer be read for drawing, is shown as not processed with the reason.
+     */
+    ViewerRun shown(int index, RunResult result) {
+        if (result.failed()) {
+            return ViewerRun.failed(result);
+        }
         try {
-            Trace trace = loader.read(spec.traceFile(), options);
-            return new ViewerRun(spec, trace, identifier.identify(spec, trace));
+            Trace trace = traces.get(index);
+            if (trace == null) {
+                trace = loader.read(result.spec().traceFile(), settings.readOptions());
+                traces.put(index, trace);
+            }
+            return new ViewerRun(result.spec(), trace, result);
         } catch (InputException e) {
-            return ViewerRun.failed(RunResult.failure(spec, e));
+            return ViewerRun.failed(RunResult.failure(result.spec(), e));
         } catch (RuntimeException e) {
-            return ViewerRun.failed(RunResult.failure(spec, new InputException(String.valueOf(spec.traceFile()), 0,
-                    null, "could not be processed (" + e + "); please report this with the file", e)));
+            return ViewerRun.failed(RunResult.failure(result.spec(), new InputException(
+                    String.valueOf(result.spec().traceFile()), 0, null, "could not be read for drawing (" + e + ")", e)));
         }
     }
 

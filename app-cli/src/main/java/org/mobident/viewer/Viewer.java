@@ -11,6 +11,7 @@ import org.mobident.pipeline.IdentifySettings;
 import org.mobident.pipeline.RunResult;
 import org.mobident.report.plot.Axis;
 import org.mobident.trace.RunSpec;
+import org.mobident.usecase.IdentifyBatch;
 
 /** Opens the viewer window. The only entry point the command line needs. */
 public final class Viewer {
@@ -22,7 +23,7 @@ public final class Viewer {
      * What the window starts with.
      *
      * @param title          shown in the window title (e.g. the run sheet's file name)
-     * @param library        the library the runs are matched against
+     * @param job            identifies the runs (and names the library they are matched against)
      * @param runs           runs to read and identify (in the background)
      * @param rejected       runs already known to have failed (bad sheet rows, unusable trace names)
      * @param settings       identification settings, as for {@code identify}
@@ -30,17 +31,22 @@ public final class Viewer {
      * @param axis           the axis shown first
      * @param tickedAtStart  indices (into {@code runs} followed by {@code rejected}) ticked at start
      */
-    public record Setup(String title, Library library, List<RunSpec> runs, List<RunResult> rejected,
+    public record Setup(String title, IdentifyBatch job, List<RunSpec> runs, List<RunResult> rejected,
                         IdentifySettings settings, TraceLoader loader, Axis axis, List<Integer> tickedAtStart) {
         public Setup {
             title = title == null ? "" : title;
-            Objects.requireNonNull(library, "library");
+            Objects.requireNonNull(job, "job");
             runs = List.copyOf(runs);
             rejected = List.copyOf(rejected);
             Objects.requireNonNull(settings, "settings");
             Objects.requireNonNull(loader, "loader");
             Objects.requireNonNull(axis, "axis");
             tickedAtStart = List.copyOf(tickedAtStart);
+        }
+
+        /** The library the runs are matched against. */
+        public Library library() {
+            return job.library();
         }
 
         /** The runs as the window lists them: those to process, waiting, then the rejected ones. */

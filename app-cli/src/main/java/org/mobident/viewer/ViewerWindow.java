@@ -28,7 +28,6 @@ import javax.swing.ListSelectionModel;
 import javax.swing.UIManager;
 import javax.swing.table.AbstractTableModel;
 import org.mobident.pipeline.IdentifySettings;
-import org.mobident.pipeline.Identifier;
 import org.mobident.pipeline.PeakResult;
 import org.mobident.report.plot.Axis;
 import org.mobident.trace.RunSpec;
@@ -128,8 +127,7 @@ final class ViewerWindow implements PlotPanel.Gestures {
         }
         IdentifySettings settings = setup.settings();
         loading = true;
-        loader = new RunLoader(todo, new Identifier(setup.library(), settings), setup.loader(),
-                settings.readOptions(), settings.threads(), this::runFinished, this::loadingFinished);
+        loader = new RunLoader(todo, setup.job(), settings, setup.loader(), this::runFinished, this::loadingFinished);
         loader.execute();
         updateStatus();
     }

@@ -79,9 +79,9 @@ class OneInterfaceTest {
         assertEquals(ExitCodes.USAGE, r.code(), r.err());
         assertTrue(r.err().contains("--out") && r.err().contains(".png or .svg"), r.err());
         assertFalse(Files.exists(pdf));
-        assertEquals(PlotCommand.ImageKind.PNG, PlotCommand.ImageKind.of(Path.of("A.PNG")));
-        assertEquals(PlotCommand.ImageKind.SVG, PlotCommand.ImageKind.of(Path.of("a.svg")));
-        assertEquals(null, PlotCommand.ImageKind.of(Path.of("a")));
+        assertEquals(ImageKind.PNG, ImageKind.of(Path.of("A.PNG")));
+        assertEquals(ImageKind.SVG, ImageKind.of(Path.of("a.svg")));
+        assertEquals(null, ImageKind.of(Path.of("a")));
     }
 
     @Test

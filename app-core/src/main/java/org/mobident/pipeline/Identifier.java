@@ -121,14 +121,21 @@ public final class Identifier {
 
     /** As {@link #identifyAll(List)}, telling {@code progress} as runs are done. */
     public List<RunResult> identifyAll(List<RunSpec> runs, BatchProgress progress) {
+        return identifyAll(runs, progress, RunListener.NONE);
+    }
+
+    /** As {@link #identifyAll(List, BatchProgress)}, telling {@code listener} each run's result as it is known. */
+    public List<RunResult> identifyAll(List<RunSpec> runs, BatchProgress progress, RunListener listener) {
         if (runs.isEmpty()) {
             return List.of();
         }
         // pass 1: each run read, detected and matched in one task, so that at most one trace per thread is held
         progress.passStarted(1, runs.size());
-        List<Finished> done = parallel(runs, r -> counted(progress, 1, finishing(detect(r), null)),
-                (spec, e) -> new Finished(RunResult.failure(spec, e),
-                        new Detected(spec, RunResult.failure(spec, e), List.of(), Double.NaN)));
+        List<Integer> all = java.util.stream.IntStream.range(0, runs.size()).boxed().toList();
+        List<Finished> done = parallel(all, i -> told(listener, i,
+                        counted(progress, 1, finishing(detect(runs.get(i)), null))),
+                (i, e) -> new Finished(RunResult.failure(runs.get(i), e),
+                        new Detected(runs.get(i), RunResult.failure(runs.get(i), e), List.of(), Double.NaN)));
         List<Detected> detected = new ArrayList<>(done.size());
         for (Finished f : done) {
             detected.add(f.settled());
@@ -162,8 +169,8 @@ public final class Identifier {
             }
         }
         progress.passStarted(2, again.size());
-        List<RunResult> second = parallel(again, i -> counted(progress, 2, finish(detected.get(i),
-                        learned.get(bufferKey(detected.get(i).run().conditions().buffer())))),
+        List<RunResult> second = parallel(again, i -> told(listener, i, counted(progress, 2, finish(detected.get(i),
+                        learned.get(bufferKey(detected.get(i).run().conditions().buffer()))))),
                 (i, e) -> first.get(i));
         List<RunResult> out = new ArrayList<>(first);
         for (int k = 0; k < again.size(); k++) {
@@ -194,6 +201,12 @@ public final class Identifier {
             }
         }
         return false;
+    }
+
+    /** Tells {@code listener} the result of run {@code index}; returns it. */
+    private static <R> R told(RunListener listener, int index, R done) {
+        listener.runDone(index, done instanceof Finished f ? f.result() : (RunResult) done);
+        return done;
     }
 
     /** Tells {@code progress} that a run of {@code pass} is done; returns its result. */

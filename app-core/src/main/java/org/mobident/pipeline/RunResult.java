@@ -5,6 +5,9 @@ import org.mobident.InputException;
 import org.mobident.matching.RunScale;
 import org.mobident.mobility.MobilityScale;
 import org.mobident.trace.RunSpec;
+import org.mobident.trace.Trace;
+import org.mobident.trace.io.TraceFiles;
+import org.mobident.trace.io.TraceReadOptions;
 
 /**
  * The outcome of one run: either its peaks, or the reason it could not be processed.
@@ -64,6 +67,19 @@ public record RunResult(RunSpec spec, InputException error, String scaleNote, do
 
     public boolean failed() {
         return error != null;
+    }
+
+    /**
+     * Reads the run's trace again, for plots and reports: results keep no trace, so that a batch
+     * holds at most one trace per thread while it works.
+     *
+     * @throws InputException when the run has no trace file or it cannot be read (any more)
+     */
+    public Trace reopenTrace(TraceReadOptions options) throws InputException {
+        if (spec.traceFile() == null) {
+            throw new InputException(spec.name(), 0, null, "the run has no trace file");
+        }
+        return TraceFiles.read(spec.traceFile(), options);
     }
 
     public static RunResult failure(RunSpec spec, InputException error) {

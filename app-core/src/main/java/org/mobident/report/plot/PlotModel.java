@@ -388,8 +388,11 @@ public record PlotModel(Axis axis, String title, List<Series> series, List<PeakM
         }
     }
 
-    /** The signal at a peak's apex: the apex sample when it is valid, else interpolated at the apex time. */
-    static double apexSignal(Trace trace, Peak p) {
+    /**
+     * The signal at a peak's apex: the apex sample when it is valid, else interpolated at the apex
+     * time (the end sample outside the trace). The plots and the viewer mark peaks with it.
+     */
+    public static double apexSignal(Trace trace, Peak p) {
         int i = p.apexIndex();
         if (i >= 0 && i < trace.size()) {
             return trace.signal(i);

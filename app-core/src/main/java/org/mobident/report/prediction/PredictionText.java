@@ -1,0 +1,58 @@
+package org.mobident.report.prediction;
+
+import java.io.PrintWriter;
+import java.util.List;
+import java.util.Locale;
+import org.mobident.recheck.BufferSpec;
+import org.mobident.recheck.BufferTransfer;
+import org.mobident.recheck.ModelCoverage;
+import org.mobident.recheck.PredictedMobility;
+import org.mobident.recheck.PredictionBasis;
+
+/** The predicted mobilities in a new buffer, for a person: one row per analyte, then what the bases mean. */
+public final class PredictionText {
+
+    private PredictionText() {
+    }
+
+    /**
+     * Writes the table of {@code shown} and the notes that apply to them.
+     *
+     * @param buffer the new buffer, named in the heading
+     */
+    public static void write(BufferSpec buffer, List<PredictedMobility> shown, PrintWriter o) {
+        o.println("Predicted effective mobilities in " + buffer.describe() + " (1e-9 m^2/(V s)).");
+        // per row only what is particular to that analyte; what the basis implies is said once below
+        boolean remarks = shown.stream().anyMatch(p -> !p.specificNote().isBlank());
+        int basisWidth = shown.stream().mapToInt(p -> p.basis().description().length()).max().orElse(5);
+        String layout = "%-16s %9s %9s %7s  " + (remarks ? "%-" + basisWidth + "s  %s" : "%s");
+        o.println(String.format(Locale.ROOT, layout, "analyte", "measured", "predicted", "+/-", "basis", "remark")
+                .stripTrailing());
+        for (PredictedMobility p : shown) {
+            o.println(String.format(Locale.ROOT, layout, p.name(), num(p.measuredA()), num(p.predicted()),
+                    num(p.uncertainty()), p.basis().description(), p.specificNote()).stripTrailing());
+        }
+        o.println("basis: own pKa data = the library entry's pKa and limiting mobilities; reference pKa data = "
+                + "taken from --reference by name; charge only = a strong ion; no model = the pH change is not "
+                + "accounted for.");
+        List<String> assumed = shown.stream().filter(p -> p.note().contains(BufferTransfer.NOTE_ASSUMED_ENTHALPY))
+                .map(PredictedMobility::name).toList();
+        if (!assumed.isEmpty()) {
+            o.println("pKa values moved to the method temperature with an assumed enthalpy of ionisation (no tabulated "
+                    + "value; ±10 kJ/mol for acids, ±15 for protonated amines, in the uncertainty): "
+                    + String.join(", ", assumed) + ".");
+        }
+        List<String> missing = shown.stream().filter(p -> p.basis() == PredictionBasis.NO_MODEL)
+                .map(PredictedMobility::name).toList();
+        if (!missing.isEmpty()) {
+            o.println("No model data for " + String.join(", ", missing) + ". To fix: for each, "
+                    + ModelCoverage.HOW_TO_FIX + ".");
+        }
+        o.println("Predictions are estimates: measure standards in the new buffer before relying on them.");
+    }
+
+    /** Two decimals; "-" for a value that is not known (never "NaN" on a terminal). */
+    static String num(double v) {
+        return Double.isFinite(v) ? String.format(Locale.ROOT, "%.2f", v) : "-";
+    }
+}

@@ -1,0 +1,116 @@
+package org.mobident.usecase;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertNull;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.io.StringReader;
+import java.io.StringWriter;
+import java.util.List;
+import org.junit.jupiter.api.BeforeAll;
+import org.junit.jupiter.api.Test;
+import org.mobident.InputException;
+import org.mobident.assess.KnownIdentities;
+import org.mobident.assess.KnownIdentitiesReader;
+import org.mobident.recheck.BufferSpec;
+import org.mobident.recheck.BufferTransfer;
+import org.mobident.recheck.PeakTableReader;
+import org.mobident.recheck.PeakTableRow;
+import org.mobident.recheck.RecheckResult;
+import org.mobident.recheck.Verdict;
+import org.mobident.report.PeakTableCsv;
+import org.mobident.report.plot.Axis;
+
+/**
+ * Recheck, assess and plot from one identification of the demo batch (invented data; truth in
+ * demo-data/TRUTH.md), its peak table written and read back as a user's file would be.
+ */
+class RecheckAndAssessTest {
+
+    private static IdentifiedBatch batch;
+    private static List<PeakTableRow> table;
+
+    @BeforeAll
+    static void identify() throws Exception {
+        batch = DemoInputs.identified();
+        StringWriter csv = new StringWriter();
+        PeakTableCsv.write(batch.results(), csv);
+        table = PeakTableReader.read(new StringReader(csv.toString()), "peaks.csv");
+    }
+
+    private static RecheckAssignments recheck() throws InputException {
+        return new RecheckAssignments(table, "peaks.csv", DemoInputs.library(), null, BufferTransfer.withoutReference());
+    }
+
+    @Test
+    void againstTheSameLibraryNothingMoves() throws InputException {
+        RecheckResult r = recheck().againstMeasured(DemoInputs.library(), null);
+        assertFalse(r.assignments().isEmpty());
+        // every identified call still holds; the one ambiguous call of the demo (spring-03-uv214) stays ambiguous
+        long ambiguous = table.stream().filter(t -> "ambiguous".equals(t.status())).count();
+        assertEquals(r.assignments().size() - ambiguous, r.count(Verdict.STILL_HOLDS));
+        assertEquals(ambiguous, r.count(Verdict.STILL_AMBIGUOUS));
+        assertEquals(0, r.count(Verdict.LOST) + r.count(Verdict.REASSIGNED) + r.count(Verdict.NOW_AMBIGUOUS));
+        assertFalse(r.predicted());
+    }
+
+    @Test
+    void aBufferNearTheWeakAcidsPkaMovesThem() throws InputException {
+        RecheckResult r = recheck().againstPredicted(BufferSpec.of("", 4.5, 8, 25));
+        assertTrue(r.predicted());
+        long identified = table.stream().filter(t -> "identified".equals(t.status())).count();
+        assertTrue(r.assignments().size() >= identified);
+        // strong ions stay put; formate and phosphate (pKa 3.75 and 2.15 in the demo library) shift by several units
+        assertTrue(r.count(Verdict.STILL_HOLDS) > 0);
+        assertTrue(r.count(Verdict.STILL_HOLDS) < r.assignments().size());
+    }
+
+    @Test
+    void theTruthOfOneRunScoresItsCallsRight() throws InputException {
+        // demo-data/TRUTH.md, spring-01: the four analytes and the neutral marker with their times
+        String truth = """
+                run,kind,analyte,time_s,mobility,height_sd
+                spring-01,analyte,chloride,228.30,-76.15,
+                spring-01,analyte,sulfate,232.61,-73.81,
+                spring-01,analyte,nitrate,241.30,-69.35,
+                spring-01,analyte,fluoride,271.51,-56.08,
+                spring-01,marker,,576.00,0,
+                """;
+        KnownIdentities known = KnownIdentitiesReader.read(truth, "truth.csv");
+        AssessIdentification.Result fromTable = AssessIdentification.ofTable(known, table, "peaks.csv");
+        AssessIdentification.Result now = AssessIdentification.ofBatch(known, batch, "identified now");
+        for (AssessIdentification.Result r : List.of(fromTable, now)) {
+            assertTrue(r.assessment().anythingScored());
+            assertEquals(1, r.assessment().runs().size());
+            assertEquals(4, r.assessment().identification().identifiedCalls());
+            assertEquals(4, r.assessment().identification().identifiedRight());
+        }
+        assertEquals("spring-01, spring-02, well-01, well-02, well-03, ...", now.preview());
+    }
+
+    @Test
+    void aTruthOfOtherRunsScoresNothing() throws InputException {
+        KnownIdentities known = KnownIdentitiesReader.read("run,kind,analyte,time_s,mobility,height_sd\n"
+                + "elsewhere,analyte,chloride,228.30,-76.15,\n", "truth.csv");
+        AssessIdentification.Result r = AssessIdentification.ofBatch(known, batch, "identified now");
+        assertFalse(r.assessment().anythingScored());
+        assertEquals(List.of("elsewhere"), r.assessment().notInTable());
+    }
+
+    @Test
+    void thePlotDrawsTheRunsAskedFor() {
+        PlotRuns.Drawing two = PlotRuns.plot(batch, List.of("spring-01", " well-02"), Axis.MOBILITY, true);
+        assertEquals(2, two.drawn());
+        assertEquals(2, two.model().series().size());
+        assertTrue(two.model().peakLabels());
+        assertFalse(two.model().bands().isEmpty());
+        PlotRuns.Drawing all = PlotRuns.plot(batch, List.of(), Axis.TIME, false);
+        assertEquals(batch.results().size(), all.drawn());
+        assertFalse(all.model().peakLabels());
+        assertTrue(all.model().bands().isEmpty());
+        PlotRuns.Drawing unknown = PlotRuns.plot(batch, List.of("spring-01", "nowhere"), Axis.MOBILITY, true);
+        assertNull(unknown.model());
+        assertEquals("nowhere", unknown.unknownName());
+    }
+}
