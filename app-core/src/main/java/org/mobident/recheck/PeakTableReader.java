@@ -11,27 +11,35 @@ import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.EnumMap;
 import java.util.HashMap;
 import java.util.Iterator;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 import java.util.Set;
-import java.util.regex.Pattern;
+import java.util.Optional;
+import java.util.stream.Collectors;
 import org.apache.commons.csv.CSVFormat;
 import org.apache.commons.csv.CSVParser;
 import org.apache.commons.csv.CSVRecord;
 import org.mobident.InputException;
 import org.mobident.report.CsvCells;
+import org.mobident.report.PeakTableColumn;
+import org.mobident.report.PeakTableStatus;
 
 /**
  * Reads back the peak table CSV that Mobident writes ({@link org.mobident.report.PeakTableCsv}),
- * keeping only what a recheck or a scoring needs: run, peak, role, mobility, mobility_sd,
- * mobility_at_library_temp, assigned, confidence, status, and when present apex_time_s,
- * width_half_s, signal_to_noise, mobility_corrected and centre_time_s.
+ * with the columns, formats and status words of {@link PeakTableColumn} and {@link PeakTableStatus}:
+ * every known column the table has is read and its numbers checked; a row names directly what a
+ * recheck or a scoring needs (run, peak, role, mobility, mobility_sd, mobility_at_library_temp,
+ * assigned, confidence, status, and when present apex_time_s, width_half_s, signal_to_noise,
+ * mobility_corrected and centre_time_s) and gives the rest through {@link PeakTableRow#text} and
+ * {@link PeakTableRow#number}.
  *
- * <p>The header must name the required columns (any case, any order; the optional ones are read
- * when present, other columns are ignored). Text
+ * <p>The header must name the required columns (any case, any order; the other known columns are
+ * read when present, unknown columns are ignored). Text
  * cells that the writer made spreadsheet-safe ({@link CsvCells#inert}: a leading apostrophe
  * before {@code = + - @}, tab or carriage return) are read back without the apostrophe. Numbers
  * use a decimal point; an empty cell is unknown. Every problem raises an {@link InputException}
@@ -39,19 +47,13 @@ import org.mobident.report.CsvCells;
  */
 public final class PeakTableReader {
 
-    /** The columns that must be present. */
-    public static final List<String> REQUIRED = List.of("run", "peak", "role", "mobility", "mobility_sd",
-            "mobility_at_library_temp", "assigned", "confidence", "status");
+    /** The columns that must be present ({@link PeakTableColumn#requiredToRead}). */
+    public static final List<String> REQUIRED = PeakTableColumn.requiredHeaders();
 
-    /** Columns read when the table has them; an empty or absent one reads as unknown (NaN). */
-    public static final List<String> OPTIONAL = List.of("apex_time_s", "width_half_s", "signal_to_noise",
-            "mobility_corrected", "centre_time_s");
+    /** Status values the writer produces ({@link PeakTableStatus}). */
+    public static final Set<String> STATUSES = Arrays.stream(PeakTableStatus.values()).map(PeakTableStatus::word)
+            .collect(Collectors.toUnmodifiableSet());
 
-    /** Status values the writer produces. */
-    public static final Set<String> STATUSES = Set.of("identified", "ambiguous", "unassigned", "marker", "failed",
-            "no_peaks");
-
-    private static final Pattern DECIMAL = Pattern.compile("[+-]?(\\d+\\.?\\d*|\\.\\d+)([eE][+-]?\\d+)?");
     private static final char BYTE_ORDER_MARK = '\uFEFF';
     private static final CSVFormat FORMAT = CSVFormat.DEFAULT.builder().setIgnoreEmptyLines(true).get();
 
@@ -111,7 +113,7 @@ public final class PeakTableReader {
         int[] lineStarts = lineStarts(text);
         List<PeakTableRow> rows = new ArrayList<>();
         Map<String, Long> seen = new HashMap<>();
-        Map<String, Integer> column = null;
+        Map<PeakTableColumn, Integer> column = null;
         try (CSVParser parser = CSVParser.parse(new StringReader(text), FORMAT)) {
             Iterator<CSVRecord> it = parser.iterator();
             while (true) {
@@ -190,104 +192,100 @@ public final class PeakTableReader {
         return true;
     }
 
-    private static Map<String, Integer> header(CSVRecord rec, String label, long line) throws InputException {
-        Map<String, Integer> column = new HashMap<>();
+    /** Column index of every known column the header names. */
+    private static Map<PeakTableColumn, Integer> header(CSVRecord rec, String label, long line) throws InputException {
+        Map<PeakTableColumn, Integer> column = new EnumMap<>(PeakTableColumn.class);
         for (int i = 0; i < rec.size(); i++) {
-            String name = rec.get(i).strip().toLowerCase(Locale.ROOT);
-            if (column.putIfAbsent(name, i) != null && (REQUIRED.contains(name) || OPTIONAL.contains(name))) {
+            Optional<PeakTableColumn> known = PeakTableColumn.fromHeader(rec.get(i));
+            if (known.isPresent() && column.putIfAbsent(known.get(), i) != null) {
+                String name = known.get().header();
                 throw new InputException(label, line, name, "column '" + name + "' appears twice");
             }
         }
-        for (String required : REQUIRED) {
-            if (!column.containsKey(required)) {
-                throw new InputException(label, line, required, "required column '" + required
+        for (PeakTableColumn c : PeakTableColumn.values()) {
+            if (c.requiredToRead() && !column.containsKey(c)) {
+                throw new InputException(label, line, c.header(), "required column '" + c.header()
                         + "' is missing from the header (is this a Mobident peak table?)");
             }
         }
         return column;
     }
 
-    private static PeakTableRow row(CSVRecord rec, Map<String, Integer> column, String label, long line)
+    private static PeakTableRow row(CSVRecord rec, Map<PeakTableColumn, Integer> column, String label, long line)
             throws InputException {
-        String run = text(rec, column, "run");
+        Map<PeakTableColumn, String> cells = new EnumMap<>(PeakTableColumn.class);
+        for (Map.Entry<PeakTableColumn, Integer> e : column.entrySet()) {
+            PeakTableColumn c = e.getKey();
+            String cell = e.getValue() < rec.size() ? rec.get(e.getValue()) : "";
+            if (c.format().numeric()) {
+                number(cell, c, label, line); // every number is checked where it stands
+                cell = cell.strip();
+            } else {
+                cell = PeakTableColumn.Format.readText(cell);
+            }
+            if (cell != null && !cell.isEmpty()) {
+                cells.put(c, cell);
+            }
+        }
+        String run = cells.get(PeakTableColumn.RUN);
         if (run == null) {
             throw new InputException(label, line, "run", "the run name is empty");
         }
-        String peakText = text(rec, column, "peak");
+        String peakText = cells.get(PeakTableColumn.PEAK);
         int peak = 0;
         if (peakText != null) {
-            try {
-                peak = Integer.parseInt(peakText);
-            } catch (NumberFormatException e) {
+            double p = number(peakText, PeakTableColumn.PEAK, label, line);
+            if (p != Math.rint(p) || Math.abs(p) > Integer.MAX_VALUE) {
                 throw new InputException(label, line, "peak", "expected a whole peak number, got '" + peakText + "'");
             }
+            peak = (int) p;
             if (peak < 1) {
                 throw new InputException(label, line, "peak", "peak numbers start at 1, got " + peak);
             }
         }
-        String status = text(rec, column, "status");
-        if (status == null || !STATUSES.contains(status.toLowerCase(Locale.ROOT))) {
-            throw new InputException(label, line, "status", "unknown status '" + (status == null ? "" : status)
-                    + "'; expected one of identified, ambiguous, unassigned, marker, failed, no_peaks");
+        String statusText = cells.get(PeakTableColumn.STATUS);
+        Optional<PeakTableStatus> known = PeakTableStatus.fromWord(statusText);
+        if (known.isEmpty()) {
+            throw new InputException(label, line, "status", "unknown status '" + (statusText == null ? "" : statusText)
+                    + "'; expected one of " + PeakTableStatus.words());
         }
-        status = status.toLowerCase(Locale.ROOT);
-        String role = text(rec, column, "role");
-        String assigned = text(rec, column, "assigned");
-        double confidence = number(rec, column, "confidence", label, line);
+        PeakTableStatus status = known.get();
+        String role = cells.get(PeakTableColumn.ROLE);
+        String assigned = cells.get(PeakTableColumn.ASSIGNED);
+        double confidence = value(cells, PeakTableColumn.CONFIDENCE);
         if (Double.isFinite(confidence) && (confidence < 0 || confidence > 1)) {
             throw new InputException(label, line, "confidence", "a confidence lies between 0 and 1, got " + confidence);
         }
-        double sd = number(rec, column, "mobility_sd", label, line);
+        double sd = value(cells, PeakTableColumn.MOBILITY_SD);
         if (sd < 0) {
             throw new InputException(label, line, "mobility_sd", "a standard uncertainty cannot be negative, got " + sd);
         }
-        if (assigned != null && ("unassigned".equals(status) || "marker".equals(status))) {
+        if (assigned != null && (status == PeakTableStatus.UNASSIGNED || status == PeakTableStatus.MARKER)) {
             throw new InputException(label, line, "assigned", "analyte '" + assigned + "' is assigned but the status is "
-                    + status);
+                    + status.word());
         }
         return new PeakTableRow(line, run, peak, role == null ? "" : role.toLowerCase(Locale.ROOT),
-                number(rec, column, "mobility", label, line), sd,
-                number(rec, column, "mobility_at_library_temp", label, line), assigned, confidence, status,
-                optional(rec, column, "apex_time_s", label, line), optional(rec, column, "width_half_s", label, line),
-                optional(rec, column, "signal_to_noise", label, line),
-                optional(rec, column, "mobility_corrected", label, line),
-                optional(rec, column, "centre_time_s", label, line));
+                value(cells, PeakTableColumn.MOBILITY), sd, value(cells, PeakTableColumn.MOBILITY_AT_LIBRARY_TEMP),
+                assigned, confidence, status.word(), value(cells, PeakTableColumn.APEX_TIME_S),
+                value(cells, PeakTableColumn.WIDTH_HALF_S), value(cells, PeakTableColumn.SIGNAL_TO_NOISE),
+                value(cells, PeakTableColumn.MOBILITY_CORRECTED), value(cells, PeakTableColumn.CENTRE_TIME_S), cells);
     }
 
-    /** An optional numeric column: NaN when the table has no such column. */
-    private static double optional(CSVRecord rec, Map<String, Integer> column, String name, String label, long line)
-            throws InputException {
-        return column.containsKey(name) ? number(rec, column, name, label, line) : Double.NaN;
+    /** A number already checked by {@link #number}: NaN when the cell is empty or the column absent. */
+    private static double value(Map<PeakTableColumn, String> cells, PeakTableColumn c) {
+        return c.format().read(cells.get(c));
     }
 
-    /** The cell, trimmed, with the spreadsheet-safety apostrophe removed; null when empty or absent. */
-    private static String text(CSVRecord rec, Map<String, Integer> column, String name) {
-        int i = column.get(name);
-        if (i >= rec.size()) {
-            return null;
+    /** A numeric cell in the column's format: NaN when empty; an error naming the column otherwise. */
+    private static double number(String cell, PeakTableColumn c, String label, long line) throws InputException {
+        try {
+            return c.format().read(cell);
+        } catch (NumberFormatException e) {
+            if (c == PeakTableColumn.PEAK) {
+                throw new InputException(label, line, c.header(), "expected a whole peak number, got '"
+                        + cell.strip() + "'");
+            }
+            throw new InputException(label, line, c.header(), e.getMessage());
         }
-        String s = rec.get(i).strip();
-        if (s.length() > 1 && s.charAt(0) == CsvCells.TEXT_PREFIX && CsvCells.startsDangerously(s.substring(1))) {
-            s = s.substring(1);
-        }
-        return s.isEmpty() ? null : s;
-    }
-
-    private static double number(CSVRecord rec, Map<String, Integer> column, String name, String label, long line)
-            throws InputException {
-        int i = column.get(name);
-        String s = i < rec.size() ? rec.get(i).strip() : "";
-        if (s.isEmpty()) {
-            return Double.NaN;
-        }
-        String plain = s.replace('\u2212', '-');
-        if (!DECIMAL.matcher(plain).matches()) {
-            throw new InputException(label, line, name, "expected a number, got '" + s + "'");
-        }
-        double v = Double.parseDouble(plain);
-        if (!Double.isFinite(v)) {
-            throw new InputException(label, line, name, "the number '" + s + "' is out of range");
-        }
-        return v;
     }
 }

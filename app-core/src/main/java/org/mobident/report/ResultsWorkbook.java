@@ -307,10 +307,10 @@ public final class ResultsWorkbook {
                 continue;
             }
             n[0]++;
-            String status = PeakRows.statusOf(pr);
-            if ("identified".equals(status)) {
+            PeakTableStatus status = PeakRows.statusOf(pr);
+            if (status == PeakTableStatus.IDENTIFIED) {
                 n[1]++;
-            } else if ("ambiguous".equals(status)) {
+            } else if (status == PeakTableStatus.AMBIGUOUS) {
                 n[2]++;
             } else {
                 n[3]++;
