@@ -1,30 +1,25 @@
 package org.mobident.recheck;
 
+import java.io.BufferedReader;
 import java.io.IOException;
 import java.io.Reader;
 import java.io.StringReader;
-import java.io.UncheckedIOException;
-import java.nio.ByteBuffer;
-import java.nio.charset.CharacterCodingException;
-import java.nio.charset.CodingErrorAction;
-import java.nio.charset.StandardCharsets;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.EnumMap;
 import java.util.HashMap;
-import java.util.Iterator;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
-import java.util.Set;
 import java.util.Optional;
+import java.util.Set;
 import java.util.stream.Collectors;
-import org.apache.commons.csv.CSVFormat;
-import org.apache.commons.csv.CSVParser;
-import org.apache.commons.csv.CSVRecord;
 import org.mobident.InputException;
+import org.mobident.io.TableReader;
+import org.mobident.io.TableRow;
+import org.mobident.io.TableSpec;
+import org.mobident.io.TextFiles;
 import org.mobident.report.CsvCells;
 import org.mobident.report.PeakTableColumn;
 import org.mobident.report.PeakTableStatus;
@@ -54,8 +49,12 @@ public final class PeakTableReader {
     public static final Set<String> STATUSES = Arrays.stream(PeakTableStatus.values()).map(PeakTableStatus::word)
             .collect(Collectors.toUnmodifiableSet());
 
-    private static final char BYTE_ORDER_MARK = '\uFEFF';
-    private static final CSVFormat FORMAT = CSVFormat.DEFAULT.builder().setIgnoreEmptyLines(true).get();
+    /** The peak table as the table reader expects it: the known columns, the required ones, no comments. */
+    private static final TableSpec SPEC = TableSpec.of("peak table", PeakTableColumn.headers(), REQUIRED)
+            .ignoringUnknownColumns().withoutComments().withMissingHint(" (is this a Mobident peak table?)");
+
+    /** How far ahead the check for a JSON table looks for its first character. */
+    private static final int LOOK_AHEAD = 1 << 16;
 
     private PeakTableReader() {
     }
@@ -68,158 +67,67 @@ public final class PeakTableReader {
      * @throws InputException when the file cannot be read or a line is invalid
      */
     public static List<PeakTableRow> read(Path file) throws InputException {
-        String label = file.toString();
-        byte[] bytes;
-        try {
-            bytes = Files.readAllBytes(file);
-        } catch (IOException e) {
-            throw new InputException(label, 0, null, "cannot read the peak table: " + e.getMessage(), e);
-        }
-        String text;
-        try {
-            text = StandardCharsets.UTF_8.newDecoder().onMalformedInput(CodingErrorAction.REPORT)
-                    .onUnmappableCharacter(CodingErrorAction.REPORT).decode(ByteBuffer.wrap(bytes)).toString();
-        } catch (CharacterCodingException e) {
-            throw new InputException(label, 0, null, "the peak table is not valid UTF-8 text", e);
-        }
-        return read(new StringReader(text), label);
+        return read(new StringReader(TextFiles.readUtf8(file, SPEC.what())), file.toString());
     }
 
     /**
      * Reads a peak table from text.
      *
-     * @param in    the CSV text (not closed)
+     * @param in    the CSV text (a leading byte-order mark is skipped)
      * @param label file name for messages
      */
     public static List<PeakTableRow> read(Reader in, String label) throws InputException {
-        String text;
-        try {
-            StringBuilder sb = new StringBuilder();
-            char[] buffer = new char[8192];
-            for (int n = in.read(buffer); n >= 0; n = in.read(buffer)) {
-                sb.append(buffer, 0, n);
-            }
-            text = sb.toString();
-        } catch (IOException e) {
-            throw new InputException(label, 0, null, "cannot read the peak table: " + e.getMessage(), e);
-        }
-        if (!text.isEmpty() && text.charAt(0) == BYTE_ORDER_MARK) {
-            text = " " + text.substring(1);
-        }
-        if (text.strip().startsWith("{")) {
-            throw new InputException(label, 1, null, "this looks like the JSON peak table; give the CSV "
-                    + "peak table (write it with 'identify --csv')");
-        }
-        int[] lineStarts = lineStarts(text);
+        BufferedReader text = new BufferedReader(in);
+        rejectJson(text, label);
         List<PeakTableRow> rows = new ArrayList<>();
         Map<String, Long> seen = new HashMap<>();
-        Map<PeakTableColumn, Integer> column = null;
-        try (CSVParser parser = CSVParser.parse(new StringReader(text), FORMAT)) {
-            Iterator<CSVRecord> it = parser.iterator();
-            while (true) {
-                CSVRecord rec;
-                try {
-                    if (!it.hasNext()) {
-                        break;
-                    }
-                    rec = it.next();
-                } catch (UncheckedIOException | IllegalStateException e) {
-                    throw new InputException(label, parser.getCurrentLineNumber() + 1, null,
-                            "malformed CSV (check the quotes)", e);
-                }
-                long line = lineOf(lineStarts, firstContent(text, rec.getCharacterPosition()));
-                if (blank(rec)) {
-                    continue;
-                }
-                if (column == null) {
-                    column = header(rec, label, line);
-                    continue;
-                }
-                PeakTableRow row = row(rec, column, label, line);
+        try (TableReader table = TableReader.open(text, label, SPEC)) {
+            for (TableRow r = table.next(); r != null; r = table.next()) {
+                PeakTableRow row = row(r);
                 if (row.peak() > 0) {
                     String key = row.run() + "\u0000" + row.peak();
-                    Long earlier = seen.putIfAbsent(key, line);
+                    Long earlier = seen.putIfAbsent(key, r.line());
                     if (earlier != null) {
-                        throw new InputException(label, line, "peak", "run '" + row.run() + "' peak " + row.peak()
-                                + " appears twice (lines " + earlier + " and " + line + ")");
+                        throw r.problem("peak", "run '" + row.run() + "' peak " + row.peak()
+                                + " appears twice (lines " + earlier + " and " + r.line() + ")");
                     }
                 }
                 rows.add(row);
             }
-        } catch (IOException | UncheckedIOException e) {
-            throw new InputException(label, 0, null, "cannot read the peak table: " + e.getMessage(), e);
-        }
-        if (column == null) {
-            throw new InputException(label, 0, null, "the peak table is empty (no header)");
         }
         return rows;
     }
 
-    /** Offsets at which lines begin (after "\n", "\r\n" or a lone "\r"). */
-    private static int[] lineStarts(String text) {
-        List<Integer> starts = new ArrayList<>();
-        starts.add(0);
-        for (int i = 0; i < text.length(); i++) {
-            char c = text.charAt(i);
-            if (c == '\n' || (c == '\r' && (i + 1 == text.length() || text.charAt(i + 1) != '\n'))) {
-                starts.add(i + 1);
+    /** The JSON peak table is not read here: say so, rather than that the header lacks columns. */
+    private static void rejectJson(BufferedReader text, String label) throws InputException {
+        try {
+            text.mark(LOOK_AHEAD);
+            int c = text.read();
+            for (int n = 1; n < LOOK_AHEAD && c >= 0 && (Character.isWhitespace(c) || c == TextFiles.BYTE_ORDER_MARK);
+                 n++) {
+                c = text.read();
             }
-        }
-        return starts.stream().mapToInt(Integer::intValue).toArray();
-    }
-
-    /** The offset of the first character after any line breaks at {@code from} (skipped empty lines). */
-    private static long firstContent(String text, long from) {
-        int i = (int) from;
-        while (i < text.length() && (text.charAt(i) == '\n' || text.charAt(i) == '\r')) {
-            i++;
-        }
-        return i;
-    }
-
-    /** 1-based line of a character offset. */
-    private static long lineOf(int[] lineStarts, long offset) {
-        int i = java.util.Arrays.binarySearch(lineStarts, (int) offset);
-        return i >= 0 ? i + 1 : -i - 1;
-    }
-
-    private static boolean blank(CSVRecord rec) {
-        for (String v : rec.values()) {
-            if (!v.isBlank()) {
-                return false;
+            text.reset();
+            if (c == '{') {
+                throw new InputException(label, 1, null, "this looks like the JSON peak table; give the CSV "
+                        + "peak table (write it with 'identify --csv')");
             }
+        } catch (IOException e) {
+            throw new InputException(label, 0, null, "cannot read the peak table: " + e.getMessage(), e);
         }
-        return true;
     }
 
-    /** Column index of every known column the header names. */
-    private static Map<PeakTableColumn, Integer> header(CSVRecord rec, String label, long line) throws InputException {
-        Map<PeakTableColumn, Integer> column = new EnumMap<>(PeakTableColumn.class);
-        for (int i = 0; i < rec.size(); i++) {
-            Optional<PeakTableColumn> known = PeakTableColumn.fromHeader(rec.get(i));
-            if (known.isPresent() && column.putIfAbsent(known.get(), i) != null) {
-                String name = known.get().header();
-                throw new InputException(label, line, name, "column '" + name + "' appears twice");
-            }
-        }
-        for (PeakTableColumn c : PeakTableColumn.values()) {
-            if (c.requiredToRead() && !column.containsKey(c)) {
-                throw new InputException(label, line, c.header(), "required column '" + c.header()
-                        + "' is missing from the header (is this a Mobident peak table?)");
-            }
-        }
-        return column;
-    }
-
-    private static PeakTableRow row(CSVRecord rec, Map<PeakTableColumn, Integer> column, String label, long line)
-            throws InputException {
+    private static PeakTableRow row(TableRow r) throws InputException {
+        String label = r.file();
+        long line = r.line();
         Map<PeakTableColumn, String> cells = new EnumMap<>(PeakTableColumn.class);
-        for (Map.Entry<PeakTableColumn, Integer> e : column.entrySet()) {
-            PeakTableColumn c = e.getKey();
-            String cell = e.getValue() < rec.size() ? rec.get(e.getValue()) : "";
+        for (PeakTableColumn c : PeakTableColumn.values()) {
+            if (!r.has(c.header())) {
+                continue;
+            }
+            String cell = r.get(c.header());
             if (c.format().numeric()) {
                 number(cell, c, label, line); // every number is checked where it stands
-                cell = cell.strip();
             } else {
                 cell = PeakTableColumn.Format.readText(cell);
             }

@@ -1,17 +1,13 @@
 package org.mobident.trace.io;
 
 import java.io.IOException;
-import java.nio.ByteBuffer;
-import java.nio.CharBuffer;
-import java.nio.charset.CharacterCodingException;
-import java.nio.charset.CodingErrorAction;
-import java.nio.charset.StandardCharsets;
 import java.nio.file.AccessDeniedException;
 import java.nio.file.Files;
 import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
 
 import org.mobident.InputException;
+import org.mobident.io.TextFiles;
 
 /** Checks that bytes are plain 8-bit text and decodes short pieces of it. */
 final class TextSniffer {
@@ -50,9 +46,9 @@ final class TextSniffer {
         }
     }
 
-    /** Number of bytes of a UTF-8 byte order mark at the start, 0 or 3. */
+    /** Number of bytes of a UTF-8 byte order mark at the start, 0 or 3 ({@link TextFiles#bomLength}). */
     static int utf8BomLength(byte[] b) {
-        return b.length >= 3 && (b[0] & 0xFF) == 0xEF && (b[1] & 0xFF) == 0xBB && (b[2] & 0xFF) == 0xBF ? 3 : 0;
+        return TextFiles.bomLength(b);
     }
 
     /**
@@ -92,16 +88,8 @@ final class TextSniffer {
         }
     }
 
-    /** Decodes {@code b[from, to)} as UTF-8, or as ISO-8859-1 when it is not valid UTF-8. */
+    /** Decodes {@code b[from, to)} as UTF-8, or as ISO-8859-1 when it is not valid UTF-8 ({@link TextFiles#decodeLenient}). */
     static String decode(byte[] b, int from, int to) {
-        try {
-            CharBuffer cb = StandardCharsets.UTF_8.newDecoder()
-                    .onMalformedInput(CodingErrorAction.REPORT)
-                    .onUnmappableCharacter(CodingErrorAction.REPORT)
-                    .decode(ByteBuffer.wrap(b, from, to - from));
-            return cb.toString();
-        } catch (CharacterCodingException e) {
-            return new String(b, from, to - from, StandardCharsets.ISO_8859_1);
-        }
+        return TextFiles.decodeLenient(b, from, to);
     }
 }
