@@ -7,9 +7,8 @@ import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
 
 import org.mobident.InputException;
-import org.mobident.io.TextFiles;
 
-/** Checks that bytes are plain 8-bit text and decodes short pieces of it. */
+/** Checks that bytes are plain 8-bit text (decoding them is {@link org.mobident.io.TextFiles}). */
 final class TextSniffer {
 
     /** How many leading bytes are inspected for NUL and control bytes. */
@@ -44,11 +43,6 @@ final class TextSniffer {
         } catch (IOException e) {
             throw new InputException(display, 0, null, "cannot be read: " + e.getMessage(), e);
         }
-    }
-
-    /** Number of bytes of a UTF-8 byte order mark at the start, 0 or 3 ({@link TextFiles#bomLength}). */
-    static int utf8BomLength(byte[] b) {
-        return TextFiles.bomLength(b);
     }
 
     /**
@@ -86,10 +80,5 @@ final class TextSniffer {
         if (control > BINARY_CONTROL_SHARE * n) {
             throw new InputException(file, 0, null, "not a text file (it contains many control bytes)");
         }
-    }
-
-    /** Decodes {@code b[from, to)} as UTF-8, or as ISO-8859-1 when it is not valid UTF-8 ({@link TextFiles#decodeLenient}). */
-    static String decode(byte[] b, int from, int to) {
-        return TextFiles.decodeLenient(b, from, to);
     }
 }
