@@ -77,6 +77,7 @@ public final class TableReader implements AutoCloseable {
             throw new InputException(file, 0, null, "the " + spec.what() + " is empty (no header line)");
         }
         this.headerLine = line;
+        this.lastLine = line - 1;
         this.delimiter = spec.sniffDelimiter() ? sniff(header) : ',';
         CSVFormat format = CSVFormat.DEFAULT.builder()
                 .setDelimiter(delimiter)

@@ -145,6 +145,8 @@ class TableReaderTest {
         InputException open = refused("name,mobility\nx,1\n\"open,2\ny,3\n", LIBRARY);
         assertEquals(3, open.line());
         assertTrue(open.problem().contains("quotes"), open.getMessage());
+        InputException inHeader = refused("# c\n\"name,mobility\nx,1\n", LIBRARY);
+        assertEquals(2, inHeader.line(), "the header's own line, after the comment");
     }
 
     @Test
