@@ -22,40 +22,49 @@ import java.util.regex.Pattern;
  * limits) and the run's scale correction {@code scale_factor … scale_offset_sd}.
  */
 public enum PeakTableColumn {
-    RUN("run", Format.TEXT, Scope.RUN, true),
-    SAMPLE("sample", Format.TEXT, Scope.RUN, false),
-    PEAK("peak", Format.INTEGER, Scope.PEAK, true),
-    ROLE("role", Format.TEXT, Scope.PEAK, true),
-    APEX_TIME_S("apex_time_s", Format.TIME, Scope.PEAK, false),
-    APEX_TIME_SD_S("apex_time_sd_s", Format.TIME, Scope.PEAK, false),
-    START_S("start_s", Format.TIME, Scope.PEAK, false),
-    END_S("end_s", Format.TIME, Scope.PEAK, false),
-    HEIGHT("height", Format.MAGNITUDE, Scope.PEAK, false),
-    AREA("area", Format.MAGNITUDE, Scope.PEAK, false),
-    CORRECTED_AREA("corrected_area", Format.MAGNITUDE, Scope.PEAK, false),
-    WIDTH_HALF_S("width_half_s", Format.TIME, Scope.PEAK, false),
-    PLATES("plates", Format.INTEGER, Scope.PEAK, false),
-    RESOLUTION("resolution", Format.RESOLUTION, Scope.PEAK, false),
-    SIGNAL_TO_NOISE("signal_to_noise", Format.SIGNAL_TO_NOISE, Scope.PEAK, false),
-    DIRECTION("direction", Format.TEXT, Scope.PEAK, false),
-    MOBILITY("mobility", Format.MOBILITY, Scope.PEAK, true),
-    MOBILITY_SD("mobility_sd", Format.MOBILITY, Scope.PEAK, true),
-    MOBILITY_AT_LIBRARY_TEMP("mobility_at_library_temp", Format.MOBILITY, Scope.PEAK, true),
-    MOBILITY_CORRECTED("mobility_corrected", Format.MOBILITY, Scope.PEAK, false),
-    ASSIGNED("assigned", Format.TEXT, Scope.PEAK, true),
-    CONFIDENCE("confidence", Format.PROBABILITY, Scope.PEAK, true),
-    STATUS("status", Format.TEXT, Scope.PEAK, true),
-    RUNNER_UP("runner_up", Format.TEXT, Scope.PEAK, false),
-    RUNNER_UP_PROBABILITY("runner_up_probability", Format.PROBABILITY, Scope.PEAK, false),
-    CANDIDATES("candidates", Format.TEXT, Scope.PEAK, false),
-    CENTRE_TIME_S("centre_time_s", Format.TIME, Scope.PEAK, false),
-    CENTRE_TIME_SD_S("centre_time_sd_s", Format.TIME, Scope.PEAK, false),
-    SN_CLASS("sn_class", Format.TEXT, Scope.PEAK, false),
-    SCALE_FACTOR("scale_factor", Format.FACTOR, Scope.RUN, false),
-    SCALE_FACTOR_SD("scale_factor_sd", Format.FACTOR, Scope.RUN, false),
-    SCALE_OFFSET("scale_offset", Format.MOBILITY, Scope.RUN, false),
-    SCALE_OFFSET_SD("scale_offset_sd", Format.MOBILITY, Scope.RUN, false),
-    NOTE("note", Format.TEXT, Scope.PEAK, false);
+    RUN("run", Format.TEXT, Scope.RUN, true, "run"),
+    SAMPLE("sample", Format.TEXT, Scope.RUN, false, "sample"),
+    PEAK("peak", Format.INTEGER, Scope.PEAK, true, "peak"),
+    ROLE("role", Format.TEXT, Scope.PEAK, true, "role"),
+    APEX_TIME_S("apex_time_s", Format.TIME, Scope.PEAK, false, "apex time (s)"),
+    APEX_TIME_SD_S("apex_time_sd_s", Format.TIME, Scope.PEAK, false, "apex time SD (s)"),
+    START_S("start_s", Format.TIME, Scope.PEAK, false, "start (s)"),
+    END_S("end_s", Format.TIME, Scope.PEAK, false, "end (s)"),
+    HEIGHT("height", Format.MAGNITUDE, Scope.PEAK, false, "height (signal)"),
+    AREA("area", Format.MAGNITUDE, Scope.PEAK, false, "area (signal·s)"),
+    CORRECTED_AREA("corrected_area", Format.MAGNITUDE, Scope.PEAK, false, "corrected area A/t (signal)"),
+    WIDTH_HALF_S("width_half_s", Format.TIME, Scope.PEAK, false, "width at half height (s)"),
+    PLATES("plates", Format.INTEGER, Scope.PEAK, false, "plates"),
+    RESOLUTION("resolution", Format.RESOLUTION, Scope.PEAK, false, "resolution"),
+    SIGNAL_TO_NOISE("signal_to_noise", Format.SIGNAL_TO_NOISE, Scope.PEAK, false, "S/N"),
+    DIRECTION("direction", Format.TEXT, Scope.PEAK, false, "direction"),
+    MOBILITY("mobility", Format.MOBILITY, Scope.PEAK, true, "mobility (" + Label.MOBILITY_UNIT + ")"),
+    MOBILITY_SD("mobility_sd", Format.MOBILITY, Scope.PEAK, true, "mobility SD (" + Label.MOBILITY_UNIT + ")"),
+    MOBILITY_AT_LIBRARY_TEMP("mobility_at_library_temp", Format.MOBILITY, Scope.PEAK, true,
+            "mobility at library temperature (" + Label.MOBILITY_UNIT + ")"),
+    MOBILITY_CORRECTED("mobility_corrected", Format.MOBILITY, Scope.PEAK, false,
+            "mobility compared with library (" + Label.MOBILITY_UNIT + ")"),
+    ASSIGNED("assigned", Format.TEXT, Scope.PEAK, true, "assigned"),
+    CONFIDENCE("confidence", Format.PROBABILITY, Scope.PEAK, true, "confidence (fraction)"),
+    STATUS("status", Format.TEXT, Scope.PEAK, true, "status"),
+    RUNNER_UP("runner_up", Format.TEXT, Scope.PEAK, false, "runner-up"),
+    RUNNER_UP_PROBABILITY("runner_up_probability", Format.PROBABILITY, Scope.PEAK, false,
+            "runner-up probability (fraction)"),
+    CANDIDATES("candidates", Format.TEXT, Scope.PEAK, false, "candidates (name:probability)"),
+    CENTRE_TIME_S("centre_time_s", Format.TIME, Scope.PEAK, false, "centre time (s)"),
+    CENTRE_TIME_SD_S("centre_time_sd_s", Format.TIME, Scope.PEAK, false, "centre time SD (s)"),
+    SN_CLASS("sn_class", Format.TEXT, Scope.PEAK, false, "S/N class"),
+    SCALE_FACTOR("scale_factor", Format.FACTOR, Scope.RUN, false, "scale factor a"),
+    SCALE_FACTOR_SD("scale_factor_sd", Format.FACTOR, Scope.RUN, false, "scale factor a SD"),
+    SCALE_OFFSET("scale_offset", Format.MOBILITY, Scope.RUN, false, "scale offset b (" + Label.MOBILITY_UNIT + ")"),
+    SCALE_OFFSET_SD("scale_offset_sd", Format.MOBILITY, Scope.RUN, false,
+            "scale offset b SD (" + Label.MOBILITY_UNIT + ")"),
+    NOTE("note", Format.TEXT, Scope.PEAK, false, "note");
+
+    /** Constants the column labels use (a holder, since enum constants cannot use the enum's own). */
+    private static final class Label {
+        static final String MOBILITY_UNIT = "1e-9 m²/(V·s)";
+    }
 
     /** Whether a column describes one peak or the whole run. */
     public enum Scope {
@@ -173,13 +182,18 @@ public enum PeakTableColumn {
         }
     }
 
+    /** The mobility unit as the labels write it. */
+    public static final String MOBILITY_UNIT = Label.MOBILITY_UNIT;
+
     private final String header;
+    private final String label;
     private final Format format;
     private final Scope scope;
     private final boolean requiredToRead;
 
-    PeakTableColumn(String header, Format format, Scope scope, boolean requiredToRead) {
+    PeakTableColumn(String header, Format format, Scope scope, boolean requiredToRead, String label) {
         this.header = header;
+        this.label = label;
         this.format = format;
         this.scope = scope;
         this.requiredToRead = requiredToRead;
@@ -188,6 +202,14 @@ public enum PeakTableColumn {
     /** The header name as written. */
     public String header() {
         return header;
+    }
+
+    /**
+     * The header for people, with its unit (the results workbook's peak sheet): "apex time (s)";
+     * the CSV name stays recognisable in it.
+     */
+    public String label() {
+        return label;
     }
 
     /** How the column's values are written and read back. */
