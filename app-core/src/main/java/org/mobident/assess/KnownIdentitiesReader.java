@@ -12,7 +12,6 @@ import org.mobident.io.Suggestions;
 import org.mobident.io.TableReader;
 import org.mobident.io.TableRow;
 import org.mobident.io.TableSpec;
-import org.mobident.io.TextFiles;
 
 /**
  * Reads a known-identities table (the shared format of the bench generator and the scoring).
@@ -62,7 +61,7 @@ public final class KnownIdentitiesReader {
      * @throws InputException when it cannot be read or any line or cell is invalid
      */
     public static KnownIdentities read(Path file) throws InputException {
-        return read(TextFiles.readUtf8(file, SPEC.what()), file.toString());
+        return new Parse(file.toString()).run(TableReader.open(file, SPEC));
     }
 
     /**
@@ -73,7 +72,7 @@ public final class KnownIdentitiesReader {
      * @throws InputException when any line or cell is invalid
      */
     public static KnownIdentities read(String text, String label) throws InputException {
-        return new Parse(label).run(text);
+        return new Parse(label).run(TableReader.open(new StringReader(text), label, SPEC));
     }
 
     /** State of one parse; not shared. */
@@ -87,8 +86,8 @@ public final class KnownIdentitiesReader {
             this.file = file;
         }
 
-        KnownIdentities run(String text) throws InputException {
-            try (TableReader table = TableReader.open(new StringReader(text), file, SPEC)) {
+        KnownIdentities run(TableReader opened) throws InputException {
+            try (TableReader table = opened) {
                 List<String> header = table.headerCells();
                 for (int k = 0; k < header.size(); k++) {
                     if (header.get(k).isEmpty()) {

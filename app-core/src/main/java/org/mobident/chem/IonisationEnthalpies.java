@@ -1,7 +1,6 @@
 package org.mobident.chem;
 
 import java.io.Reader;
-import java.io.StringReader;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.HashMap;
@@ -12,7 +11,6 @@ import org.mobident.InputException;
 import org.mobident.io.TableReader;
 import org.mobident.io.TableRow;
 import org.mobident.io.TableSpec;
-import org.mobident.io.TextFiles;
 
 /**
  * Tabulated enthalpies of ionisation by species name and step, as shipped in
@@ -48,13 +46,17 @@ public final class IonisationEnthalpies {
 
     /** Reads a table file. */
     public static IonisationEnthalpies read(Path file) throws InputException {
-        return read(new StringReader(TextFiles.readUtf8(file, SPEC.what())), file.toString());
+        return read(TableReader.open(file, SPEC));
     }
 
-    /** Reads a table. */
+    /** Reads a table (the reader is not closed). */
     public static IonisationEnthalpies read(Reader in, String label) throws InputException {
+        return read(TableReader.open(in, label, SPEC));
+    }
+
+    private static IonisationEnthalpies read(TableReader opened) throws InputException {
         Map<String, Map<Integer, PkaTemperature.Step>> out = new HashMap<>();
-        try (TableReader table = TableReader.open(in, label, SPEC)) {
+        try (TableReader table = opened) {
             for (TableRow r = table.next(); r != null; r = table.next()) {
                 String name = r.get("name");
                 int step = (int) number(r, "step");

@@ -5,6 +5,7 @@ import java.io.IOException;
 import java.io.Reader;
 import java.io.StringReader;
 import java.io.UncheckedIOException;
+import java.nio.charset.CharacterCodingException;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.Collections;
@@ -49,12 +50,16 @@ public final class TableReader implements AutoCloseable {
     private final char delimiter;
     private final CSVParser parser;
     private final Iterator<CSVRecord> records;
+    /** The reader of a file this table opened itself (closed with it), or null. */
+    private final Reader owned;
     /** The last line of the last record read (file lines). */
     private long lastLine;
 
-    private TableReader(String file, TableSpec spec, BufferedReader in) throws InputException, IOException {
+    private TableReader(String file, TableSpec spec, BufferedReader in, Reader owned) throws InputException,
+            IOException {
         this.file = file;
         this.spec = spec;
+        this.owned = owned;
         long line = 0;
         String header = null;
         for (String l = in.readLine(); l != null; l = in.readLine()) {
@@ -95,25 +100,45 @@ public final class TableReader implements AutoCloseable {
     }
 
     /**
-     * Opens a table file: reads it as UTF-8 (strict), strips a byte-order mark, and reads the header.
+     * Opens a table file, streamed as strict UTF-8 with a byte-order mark skipped, and reads the
+     * header; the file is closed with the reader.
      *
      * @throws InputException when the file cannot be read, is not UTF-8, has no header line, or the
      *                        header is not what {@code spec} expects
      */
     public static TableReader open(Path file, TableSpec spec) throws InputException {
-        return open(new StringReader(TextFiles.readUtf8(file, spec.what())), file.toString(), spec);
+        Reader in = TextFiles.openUtf8(file, spec.what());
+        try {
+            return open(in, file.toString(), spec, in);
+        } catch (InputException e) {
+            try {
+                in.close();
+            } catch (IOException closing) {
+                e.addSuppressed(closing);
+            }
+            throw e;
+        }
     }
 
     /**
-     * Opens a table given as text (a leading byte-order mark is skipped).
+     * Opens a table given as text (a leading byte-order mark is skipped). The reader is not closed.
      *
-     * @param in    the text; closed with the reader
+     * @param in    the text
      * @param label the file name used in messages
      */
     public static TableReader open(Reader in, String label, TableSpec spec) throws InputException {
+        return open(in, label, spec, null);
+    }
+
+    private static TableReader open(Reader in, String label, TableSpec spec, Reader owned) throws InputException {
         try {
-            return new TableReader(label, spec, new BufferedReader(TextFiles.withoutBom(in)));
+            return new TableReader(label, spec, new BufferedReader(TextFiles.withoutBom(in)), owned);
+        } catch (CharacterCodingException e) {
+            throw new InputException(label, 0, null, "the " + spec.what() + " is not valid UTF-8 text", e);
         } catch (IOException | UncheckedIOException e) {
+            if (e.getCause() instanceof CharacterCodingException) {
+                throw new InputException(label, 0, null, "the " + spec.what() + " is not valid UTF-8 text", e);
+            }
             throw new InputException(label, 0, null, "cannot read the " + spec.what() + ": " + e.getMessage(), e);
         }
     }
@@ -176,6 +201,9 @@ public final class TableReader implements AutoCloseable {
     public void close() throws InputException {
         try {
             parser.close();
+            if (owned != null) {
+                owned.close();
+            }
         } catch (IOException e) {
             throw new InputException(file, 0, null, "cannot read the " + spec.what() + ": " + e.getMessage(), e);
         }
@@ -190,6 +218,10 @@ public final class TableReader implements AutoCloseable {
             lastLine = headerLine - 1 + parser.getCurrentLineNumber();
             return rec;
         } catch (UncheckedIOException | IllegalStateException e) {
+            if (e.getCause() instanceof CharacterCodingException) {
+                // the decoder reads ahead of the rows, so the line of the bad bytes is not known here
+                throw new InputException(file, 0, null, "the " + spec.what() + " is not valid UTF-8 text", e);
+            }
             throw new InputException(file, lastLine + 1, null, "malformed CSV from this line on (check the quotes): "
                     + rootMessage(e), e);
         }
@@ -397,8 +429,8 @@ public final class TableReader implements AutoCloseable {
         }
 
         @Override
-        public void close() throws IOException {
-            in.close();
+        public void close() {
+            // the text's own reader is closed by whoever opened it
         }
     }
 
@@ -428,8 +460,8 @@ public final class TableReader implements AutoCloseable {
         }
 
         @Override
-        public void close() throws IOException {
-            rest.close();
+        public void close() {
+            // the text's own reader is closed by whoever opened it
         }
     }
 }

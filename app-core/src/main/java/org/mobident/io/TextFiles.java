@@ -1,11 +1,15 @@
 package org.mobident.io;
 
+import java.io.BufferedReader;
 import java.io.IOException;
+import java.io.InputStream;
+import java.io.InputStreamReader;
 import java.io.PushbackReader;
 import java.io.Reader;
 import java.nio.ByteBuffer;
 import java.nio.CharBuffer;
 import java.nio.charset.CharacterCodingException;
+import java.nio.charset.CharsetDecoder;
 import java.nio.charset.CodingErrorAction;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.AccessDeniedException;
@@ -23,50 +27,51 @@ public final class TextFiles {
     /** The byte-order mark as a character (U+FEFF), as it stands first in text decoded with it. */
     public static final char BYTE_ORDER_MARK = '\uFEFF';
 
-    /** Largest file read into one byte array. */
-    private static final long MAX_FILE_BYTES = Integer.MAX_VALUE - 64;
-
     private TextFiles() {
     }
 
     /**
-     * The whole file as text, strictly UTF-8, without a leading byte-order mark.
+     * A file opened for reading as strict UTF-8, a leading byte-order mark skipped. Bytes that are
+     * not UTF-8 make a later read throw a {@link CharacterCodingException}.
      *
-     * @param file the file
-     * @param what what the file is, for messages ("library file", "standards sheet")
-     * @throws InputException when it cannot be read or is not valid UTF-8 (naming the file)
+     * @param what what the file is, for messages ("peak table")
+     * @throws InputException when the file cannot be opened (naming the file and why)
      */
-    public static String readUtf8(Path file, String what) throws InputException {
+    public static Reader openUtf8(Path file, String what) throws InputException {
         String label = file.toString();
-        byte[] bytes = readAllBytes(file, label, what);
-        int bom = bomLength(bytes);
-        try {
-            return decodeStrict(bytes, bom, bytes.length);
-        } catch (CharacterCodingException e) {
-            throw new InputException(label, 0, null, "the " + what + " is not valid UTF-8 text", e);
-        }
-    }
-
-    /**
-     * A whole file's bytes; every failure is an {@link InputException} naming {@code label} and
-     * saying what went wrong ("cannot read the run sheet: file not found").
-     */
-    public static byte[] readAllBytes(Path file, String label, String what) throws InputException {
         String prefix = "cannot read the " + what + ": ";
+        InputStream in = null;
         try {
             if (Files.isDirectory(file)) {
                 throw new InputException(label, 0, null, prefix + "is a folder, not a file");
             }
-            if (Files.size(file) > MAX_FILE_BYTES) {
-                throw new InputException(label, 0, null, prefix + "is too large to read");
-            }
-            return Files.readAllBytes(file);
+            in = Files.newInputStream(file);
+            CharsetDecoder strict = StandardCharsets.UTF_8.newDecoder()
+                    .onMalformedInput(CodingErrorAction.REPORT)
+                    .onUnmappableCharacter(CodingErrorAction.REPORT);
+            return withoutBom(new BufferedReader(new InputStreamReader(in, strict)));
         } catch (NoSuchFileException e) {
             throw new InputException(label, 0, null, prefix + "file not found", e);
         } catch (AccessDeniedException e) {
             throw new InputException(label, 0, null, prefix + "access denied", e);
+        } catch (CharacterCodingException e) {
+            closeQuietly(in);
+            throw new InputException(label, 0, null, "the " + what + " is not valid UTF-8 text", e);
         } catch (IOException e) {
+            closeQuietly(in);
             throw new InputException(label, 0, null, prefix + e.getMessage(), e);
+        }
+    }
+
+    private static void closeQuietly(InputStream in) {
+        if (in == null) {
+            return;
+        }
+        try {
+            in.close();
+        } catch (IOException e) {
+            // already failing with the first error, which is the one to report
+            return;
         }
     }
 

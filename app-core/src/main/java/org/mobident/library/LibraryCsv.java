@@ -2,7 +2,6 @@ package org.mobident.library;
 
 import java.io.IOException;
 import java.io.Reader;
-import java.io.StringReader;
 import java.io.StringWriter;
 import java.io.UncheckedIOException;
 import java.io.Writer;
@@ -25,7 +24,6 @@ import org.mobident.InputException;
 import org.mobident.io.TableReader;
 import org.mobident.io.TableRow;
 import org.mobident.io.TableSpec;
-import org.mobident.io.TextFiles;
 
 /**
  * Reads and writes mobility libraries as human-editable CSV.
@@ -94,9 +92,7 @@ public final class LibraryCsv {
      * @throws InputException when the file cannot be read or any line is invalid
      */
     public static Library read(Path file) throws InputException {
-        String label = file.toString();
-        String text = TextFiles.readUtf8(file, SPEC.what());
-        return read(new StringReader(text), label);
+        return new Parse(file.toString()).run(TableReader.open(file, SPEC));
     }
 
     /**
@@ -108,7 +104,7 @@ public final class LibraryCsv {
      * @throws InputException when the text cannot be read or any line is invalid
      */
     public static Library read(Reader in, String sourceLabel) throws InputException {
-        return new Parse(sourceLabel).run(in);
+        return new Parse(sourceLabel).run(TableReader.open(in, sourceLabel, SPEC));
     }
 
     /**
@@ -261,8 +257,8 @@ public final class LibraryCsv {
             this.file = file;
         }
 
-        Library run(Reader in) throws InputException {
-            try (TableReader table = TableReader.open(in, file, SPEC)) {
+        Library run(TableReader opened) throws InputException {
+            try (TableReader table = opened) {
                 for (TableRow row = table.next(); row != null; row = table.next()) {
                     line = row.line();
                     entries.add(entry(row));

@@ -3,7 +3,7 @@ package org.mobident.recheck;
 import java.io.BufferedReader;
 import java.io.IOException;
 import java.io.Reader;
-import java.io.StringReader;
+import java.nio.charset.CharacterCodingException;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.Arrays;
@@ -67,7 +67,11 @@ public final class PeakTableReader {
      * @throws InputException when the file cannot be read or a line is invalid
      */
     public static List<PeakTableRow> read(Path file) throws InputException {
-        return read(new StringReader(TextFiles.readUtf8(file, SPEC.what())), file.toString());
+        try (Reader in = TextFiles.openUtf8(file, SPEC.what())) {
+            return read(in, file.toString());
+        } catch (IOException e) {
+            throw new InputException(file.toString(), 0, null, "cannot read the peak table: " + e.getMessage(), e);
+        }
     }
 
     /**
@@ -112,6 +116,8 @@ public final class PeakTableReader {
                 throw new InputException(label, 1, null, "this looks like the JSON peak table; give the CSV "
                         + "peak table (write it with 'identify --csv')");
             }
+        } catch (CharacterCodingException e) {
+            throw new InputException(label, 0, null, "the peak table is not valid UTF-8 text", e);
         } catch (IOException e) {
             throw new InputException(label, 0, null, "cannot read the peak table: " + e.getMessage(), e);
         }

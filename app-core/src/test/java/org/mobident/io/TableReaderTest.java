@@ -162,6 +162,27 @@ class TableReaderTest {
         InputException notUtf8 = assertThrows(InputException.class, () -> TableReader.open(latin, LIBRARY));
         assertEquals(latin.toString(), notUtf8.file());
         assertTrue(notUtf8.problem().contains("not valid UTF-8"), notUtf8.getMessage());
+        // bytes that are not UTF-8 far down a long file, met while the rows stream
+        StringBuilder longText = new StringBuilder("name,mobility\n");
+        for (int i = 0; i < 5000; i++) {
+            longText.append("ion").append(i).append(",-").append(i % 90).append('\n');
+        }
+        byte[] bytes = (longText + "chlor").getBytes(StandardCharsets.UTF_8);
+        byte[] bad = java.util.Arrays.copyOf(bytes, bytes.length + 3);
+        bad[bytes.length] = (byte) 0xE9;
+        bad[bytes.length + 1] = ',';
+        bad[bytes.length + 2] = '1';
+        Path far = dir.resolve("far.csv");
+        Files.write(far, bad);
+        InputException farOff = assertThrows(InputException.class, () -> {
+            try (TableReader t = TableReader.open(far, LIBRARY)) {
+                for (TableRow r = t.next(); r != null; r = t.next()) {
+                    assertTrue(r.get("name").startsWith("ion"), "rows before the bad bytes read as written");
+                }
+            }
+        });
+        assertEquals(far.toString(), farOff.file());
+        assertTrue(farOff.problem().contains("not valid UTF-8"), farOff.getMessage());
         InputException none = assertThrows(InputException.class,
                 () -> TableReader.open(dir.resolve("none.csv"), LIBRARY));
         assertTrue(none.problem().contains("cannot read the library file: file not found"), none.getMessage());

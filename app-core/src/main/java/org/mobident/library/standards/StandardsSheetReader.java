@@ -14,7 +14,6 @@ import org.mobident.InputException;
 import org.mobident.io.TableReader;
 import org.mobident.io.TableRow;
 import org.mobident.io.TableSpec;
-import org.mobident.io.TextFiles;
 
 /**
  * Reads a standards sheet: one row per analyte of a standard mix.
@@ -85,8 +84,7 @@ public final class StandardsSheetReader {
      */
     public static StandardsSheet read(Path file) throws InputException {
         String label = file.toString();
-        String text = TextFiles.readUtf8(file, SPEC.what());
-        return read(text, label);
+        return new Parse(label).run(TableReader.open(file, SPEC));
     }
 
     /**
@@ -97,7 +95,7 @@ public final class StandardsSheetReader {
      * @throws InputException when any line or column is invalid
      */
     public static StandardsSheet read(String text, String label) throws InputException {
-        return new Parse(label).run(text);
+        return new Parse(label).run(TableReader.open(new StringReader(text), label, SPEC));
     }
 
     /** State of one sheet parse; not shared. */
@@ -119,8 +117,8 @@ public final class StandardsSheetReader {
             this.file = file;
         }
 
-        StandardsSheet run(String text) throws InputException {
-            try (TableReader table = TableReader.open(new StringReader(text), file, SPEC)) {
+        StandardsSheet run(TableReader opened) throws InputException {
+            try (TableReader table = opened) {
                 delimiter = table.delimiter();
                 for (TableRow row = table.next(); row != null; row = table.next()) {
                     row(row);
