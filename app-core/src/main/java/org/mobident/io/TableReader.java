@@ -19,8 +19,10 @@ import org.apache.commons.csv.CSVRecord;
 import org.mobident.InputException;
 
 /**
- * The one reader of the tool's text tables: mobility libraries, run sheets, standards sheets and
- * peak tables (the byte-level trace reader is apart, for speed).
+ * The one reader of the tool's text tables: mobility libraries, run sheets, standards sheets, peak
+ * tables, known-identities tables and the enthalpy table (the byte-level trace reader is apart,
+ * for speed). What each kind of table expects is a {@link TableSpec}; each data row a
+ * {@link TableRow}.
  *
  * <ul>
  *   <li>UTF-8; a leading byte-order mark is stripped ({@link TextFiles}, the only place that does).</li>
