@@ -1,17 +1,17 @@
 package org.mobident.assess;
 
+import java.io.StringReader;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.HashMap;
 import java.util.List;
-import java.util.Locale;
 import java.util.Map;
 import java.util.regex.Pattern;
-import org.apache.commons.csv.CSVFormat;
 import org.mobident.InputException;
-import org.mobident.io.CsvLines;
 import org.mobident.io.Suggestions;
-import org.mobident.io.TextFiles;
+import org.mobident.io.TableReader;
+import org.mobident.io.TableRow;
+import org.mobident.io.TableSpec;
 
 /**
  * Reads a known-identities table (the shared format of the bench generator and the scoring).
@@ -19,7 +19,8 @@ import org.mobident.io.TextFiles;
  * <h2>Format</h2>
  * <ul>
  *   <li>Comma-delimited, UTF-8 (a leading byte-order mark is skipped); blank lines and lines
- *       starting with {@code #} are skipped; the first other line is the header. One row a line.</li>
+ *       starting with {@code #} are skipped; the first other line is the header. Read with
+ *       {@link TableReader}.</li>
  *   <li>Columns, any order, header names in any case: {@code run} (required), {@code kind}
  *       ({@code analyte}, {@code foreign}, {@code marker} or {@code spike}; empty means
  *       {@code analyte}), {@code analyte} (the library name; required on analyte rows, a free label
@@ -45,12 +46,11 @@ public final class KnownIdentitiesReader {
     /** The columns of the format, in documentation order. */
     public static final List<String> COLUMNS = List.of(RUN, KIND, ANALYTE, TIME_S, MOBILITY, HEIGHT_SD);
 
-    private static final char BYTE_ORDER_MARK = '\uFEFF';
     private static final char UNICODE_MINUS = '\u2212';
-    private static final String COMMENT = "#";
     private static final Pattern DECIMAL = Pattern.compile("[+-]?(\\d+\\.?\\d*|\\.\\d+)([eE][+-]?\\d+)?");
-    private static final CSVFormat FORMAT = CSVFormat.DEFAULT.builder().setTrim(true)
-            .setIgnoreSurroundingSpaces(true).get();
+    /** The table as the table reader expects it. */
+    private static final TableSpec SPEC = TableSpec.of("known-identities table", COLUMNS, List.of(RUN))
+            .listingPresentColumns();
 
     private KnownIdentitiesReader() {
     }
@@ -61,7 +61,7 @@ public final class KnownIdentitiesReader {
      * @throws InputException when it cannot be read or any line or cell is invalid
      */
     public static KnownIdentities read(Path file) throws InputException {
-        return read(TextFiles.readUtf8(file, "known-identities table"), file.toString());
+        return new Parse(file.toString()).run(TableReader.open(file, SPEC));
     }
 
     /**
@@ -72,14 +72,12 @@ public final class KnownIdentitiesReader {
      * @throws InputException when any line or cell is invalid
      */
     public static KnownIdentities read(String text, String label) throws InputException {
-        String t = !text.isEmpty() && text.charAt(0) == BYTE_ORDER_MARK ? text.substring(1) : text;
-        return new Parse(label).run(t);
+        return new Parse(label).run(TableReader.open(new StringReader(text), label, SPEC));
     }
 
     /** State of one parse; not shared. */
     private static final class Parse {
         private final String file;
-        private final List<String> columns = new ArrayList<>();
         private final List<KnownIdentity> rows = new ArrayList<>();
         /** "run / analyte key" or "run / marker" → line of first appearance. */
         private final Map<String, Long> firstLine = new HashMap<>();
@@ -88,24 +86,18 @@ public final class KnownIdentitiesReader {
             this.file = file;
         }
 
-        KnownIdentities run(String text) throws InputException {
-            String[] lines = text.split("\r\n|\r|\n", -1);
-            boolean headerSeen = false;
-            for (int i = 0; i < lines.length; i++) {
-                String stripped = lines[i].strip();
-                if (stripped.isEmpty() || stripped.startsWith(COMMENT)) {
-                    continue;
+        KnownIdentities run(TableReader opened) throws InputException {
+            try (TableReader table = opened) {
+                List<String> header = table.headerCells();
+                for (int k = 0; k < header.size(); k++) {
+                    if (header.get(k).isEmpty()) {
+                        throw new InputException(file, table.headerLine(), "column " + (k + 1),
+                                "a column has no name in the header");
+                    }
                 }
-                long lineNo = i + 1L;
-                if (!headerSeen) {
-                    header(lines[i], lineNo);
-                    headerSeen = true;
-                } else {
-                    row(lines[i], lineNo);
+                for (TableRow row = table.next(); row != null; row = table.next()) {
+                    row(row);
                 }
-            }
-            if (!headerSeen) {
-                throw new InputException(file, 0, null, "the known-identities table is empty (no header line)");
             }
             if (rows.isEmpty()) {
                 throw new InputException(file, 0, null, "the known-identities table has a header but no rows");
@@ -113,42 +105,13 @@ public final class KnownIdentitiesReader {
             return new KnownIdentities(file, rows);
         }
 
-        private void header(String line, long lineNo) throws InputException {
-            for (String raw : CsvLines.cells(line, FORMAT, file, lineNo)) {
-                String c = raw.strip().toLowerCase(Locale.ROOT);
-                if (c.isEmpty()) {
-                    throw new InputException(file, lineNo, "column " + (columns.size() + 1),
-                            "a column has no name in the header");
-                }
-                if (!COLUMNS.contains(c)) {
-                    throw new InputException(file, lineNo, raw, "unknown column '" + raw + "'"
-                            + Suggestions.didYouMean(c, COLUMNS) + "; known columns: " + String.join(", ", COLUMNS));
-                }
-                if (columns.contains(c)) {
-                    throw new InputException(file, lineNo, raw, "column '" + raw + "' appears twice");
-                }
-                columns.add(c);
-            }
-            if (!columns.contains(RUN)) {
-                throw new InputException(file, lineNo, RUN, "the known-identities table has no '" + RUN
-                        + "' column (its header names: " + String.join(", ", columns) + ")");
-            }
-        }
-
-        private void row(String line, long lineNo) throws InputException {
-            List<String> cells = CsvLines.cells(line, FORMAT, file, lineNo);
-            if (cells.size() > columns.size()) {
-                for (int k = columns.size(); k < cells.size(); k++) {
-                    if (!cells.get(k).isBlank()) {
-                        throw new InputException(file, lineNo, "column " + (k + 1), "value '" + cells.get(k).strip()
-                                + "' stands beyond the last column of the header (" + columns.size()
-                                + " columns; a decimal comma?)");
-                    }
-                }
-            }
+        private void row(TableRow row) throws InputException {
+            long lineNo = row.line();
             Map<String, String> v = new HashMap<>();
-            for (int k = 0; k < columns.size(); k++) {
-                v.put(columns.get(k), k < cells.size() ? cells.get(k).strip() : "");
+            for (String column : COLUMNS) {
+                if (row.has(column)) {
+                    v.put(column, row.get(column));
+                }
             }
             String run = v.get(RUN);
             if (run.isEmpty()) {

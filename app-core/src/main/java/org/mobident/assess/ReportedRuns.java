@@ -14,12 +14,13 @@ import org.mobident.pipeline.RunResult;
 import org.mobident.recheck.PeakTableReader;
 import org.mobident.recheck.PeakTableRow;
 import org.mobident.report.PeakTableCsv;
+import org.mobident.report.PeakTableStatus;
 
 /** The runs to be scored, from a peak table or from the results of an identification. */
 public final class ReportedRuns {
 
-    private static final String STATUS_FAILED = "failed";
-    private static final String STATUS_NO_PEAKS = "no_peaks";
+    private static final String STATUS_FAILED = PeakTableStatus.FAILED.word();
+    private static final String STATUS_NO_PEAKS = PeakTableStatus.NO_PEAKS.word();
     private static final String RESULTS_LABEL = "identification results";
 
     private ReportedRuns() {

@@ -1,18 +1,16 @@
 package org.mobident.chem;
 
-import java.io.IOException;
 import java.io.Reader;
-import java.io.StringReader;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.HashMap;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
-import org.apache.commons.csv.CSVFormat;
-import org.apache.commons.csv.CSVRecord;
 import org.mobident.InputException;
+import org.mobident.io.TableReader;
+import org.mobident.io.TableRow;
+import org.mobident.io.TableSpec;
 
 /**
  * Tabulated enthalpies of ionisation by species name and step, as shipped in
@@ -41,44 +39,45 @@ public final class IonisationEnthalpies {
         return NONE;
     }
 
+    /** The enthalpy table as the table reader expects it (other columns, such as a source, are kept out). */
+    private static final TableSpec SPEC = TableSpec.of("enthalpy table", List.of("name", "step", "pka_25c",
+            "enthalpy_kj_per_mol", "heat_capacity_j_per_k_mol", "source"), List.of("name", "step",
+            "enthalpy_kj_per_mol")).ignoringUnknownColumns();
+
     /** Reads a table file. */
     public static IonisationEnthalpies read(Path file) throws InputException {
-        try {
-            return read(new StringReader(Files.readString(file)), file.toString());
-        } catch (IOException e) {
-            throw new InputException(file.toString(), 0, null, "cannot read the enthalpy table: " + e.getMessage(), e);
-        }
+        return read(TableReader.open(file, SPEC));
     }
 
-    /** Reads a table. */
+    /** Reads a table (the reader is not closed). */
     public static IonisationEnthalpies read(Reader in, String label) throws InputException {
+        return read(TableReader.open(in, label, SPEC));
+    }
+
+    private static IonisationEnthalpies read(TableReader opened) throws InputException {
         Map<String, Map<Integer, PkaTemperature.Step>> out = new HashMap<>();
-        try {
-            for (CSVRecord r : CSVFormat.DEFAULT.builder().setHeader().setSkipHeaderRecord(true)
-                    .setCommentMarker('#').setTrim(true).get().parse(in)) {
-                long line = r.getParser().getCurrentLineNumber();
+        try (TableReader table = opened) {
+            for (TableRow r = table.next(); r != null; r = table.next()) {
                 String name = r.get("name");
-                int step = (int) number(r, "step", label, line);
-                double h = number(r, "enthalpy_kj_per_mol", label, line);
+                int step = (int) number(r, "step");
+                double h = number(r, "enthalpy_kj_per_mol");
                 String cp = r.get("heat_capacity_j_per_k_mol");
-                double heat = cp.isEmpty() ? Double.NaN : number(r, "heat_capacity_j_per_k_mol", label, line);
+                double heat = cp.isEmpty() ? Double.NaN : number(r, "heat_capacity_j_per_k_mol");
                 if (step < 1 || name.isEmpty()) {
-                    throw new InputException(label, line, "step", "needs a name and a step of 1 or more");
+                    throw r.problem("step", "needs a name and a step of 1 or more");
                 }
                 out.computeIfAbsent(key(name), k -> new HashMap<>()).put(step,
                         new PkaTemperature.Step(h, PkaTemperature.TABULATED_ENTHALPY_SD_KJ, heat, true));
             }
-        } catch (IOException | IllegalArgumentException | IllegalStateException e) {
-            throw new InputException(label, 0, null, "cannot read the enthalpy table: " + e.getMessage(), e);
         }
         return new IonisationEnthalpies(out);
     }
 
-    private static double number(CSVRecord r, String column, String label, long line) throws InputException {
+    private static double number(TableRow r, String column) throws InputException {
         try {
             return Double.parseDouble(r.get(column));
         } catch (NumberFormatException e) {
-            throw new InputException(label, line, column, "'" + r.get(column) + "' is not a number", e);
+            throw r.problem(column, "'" + r.get(column) + "' is not a number", e);
         }
     }
 

@@ -1,43 +1,115 @@
 package org.mobident.io;
 
+import java.io.BufferedReader;
 import java.io.IOException;
+import java.io.InputStream;
+import java.io.InputStreamReader;
+import java.io.PushbackReader;
+import java.io.Reader;
 import java.nio.ByteBuffer;
+import java.nio.CharBuffer;
 import java.nio.charset.CharacterCodingException;
+import java.nio.charset.CharsetDecoder;
 import java.nio.charset.CodingErrorAction;
 import java.nio.charset.StandardCharsets;
+import java.nio.file.AccessDeniedException;
 import java.nio.file.Files;
+import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
 import org.mobident.InputException;
 
-/** Reading the small text files of the tool (libraries, sheets, tables) strictly as UTF-8. */
+/**
+ * Reading the tool's text files (libraries, sheets, tables, trace headers) as UTF-8: the one
+ * place where a byte-order mark is recognised and stripped, and where bytes become text.
+ */
 public final class TextFiles {
+
+    /** The byte-order mark as a character (U+FEFF), as it stands first in text decoded with it. */
+    public static final char BYTE_ORDER_MARK = '\uFEFF';
 
     private TextFiles() {
     }
 
     /**
-     * The whole file as text.
+     * A file opened for reading as strict UTF-8, a leading byte-order mark skipped. Bytes that are
+     * not UTF-8 make a later read throw a {@link CharacterCodingException}.
      *
-     * @param file the file
-     * @param what what the file is, for messages ("library file", "standards sheet")
-     * @throws InputException when it cannot be read or is not valid UTF-8 (naming the file)
+     * @param what what the file is, for messages ("peak table")
+     * @throws InputException when the file cannot be opened (naming the file and why)
      */
-    public static String readUtf8(Path file, String what) throws InputException {
+    public static Reader openUtf8(Path file, String what) throws InputException {
         String label = file.toString();
-        byte[] bytes;
+        String prefix = "cannot read the " + what + ": ";
+        InputStream in = null;
         try {
-            bytes = Files.readAllBytes(file);
+            if (Files.isDirectory(file)) {
+                throw new InputException(label, 0, null, prefix + "is a folder, not a file");
+            }
+            in = Files.newInputStream(file);
+            CharsetDecoder strict = StandardCharsets.UTF_8.newDecoder()
+                    .onMalformedInput(CodingErrorAction.REPORT)
+                    .onUnmappableCharacter(CodingErrorAction.REPORT);
+            return withoutBom(new BufferedReader(new InputStreamReader(in, strict)));
+        } catch (NoSuchFileException e) {
+            throw new InputException(label, 0, null, prefix + "file not found", e);
+        } catch (AccessDeniedException e) {
+            throw new InputException(label, 0, null, prefix + "access denied", e);
+        } catch (CharacterCodingException e) {
+            closeQuietly(in);
+            throw new InputException(label, 0, null, "the " + what + " is not valid UTF-8 text", e);
         } catch (IOException e) {
-            throw new InputException(label, 0, null, "cannot read the " + what + ": " + e.getMessage(), e);
+            closeQuietly(in);
+            throw new InputException(label, 0, null, prefix + e.getMessage(), e);
+        }
+    }
+
+    private static void closeQuietly(InputStream in) {
+        if (in == null) {
+            return;
         }
         try {
-            return StandardCharsets.UTF_8.newDecoder()
-                    .onMalformedInput(CodingErrorAction.REPORT)
-                    .onUnmappableCharacter(CodingErrorAction.REPORT)
-                    .decode(ByteBuffer.wrap(bytes))
-                    .toString();
+            in.close();
+        } catch (IOException e) {
+            // already failing with the first error, which is the one to report
+            return;
+        }
+    }
+
+    /** Number of bytes of a UTF-8 byte-order mark at the start of {@code b}: 0 or 3. */
+    public static int bomLength(byte[] b) {
+        return b.length >= 3 && (b[0] & 0xFF) == 0xEF && (b[1] & 0xFF) == 0xBB && (b[2] & 0xFF) == 0xBF ? 3 : 0;
+    }
+
+    /** {@code text} without a leading byte-order mark. */
+    public static String withoutBom(String text) {
+        return !text.isEmpty() && text.charAt(0) == BYTE_ORDER_MARK ? text.substring(1) : text;
+    }
+
+    /** A reader that skips a leading byte-order mark of {@code in}. */
+    public static Reader withoutBom(Reader in) throws IOException {
+        PushbackReader r = new PushbackReader(in, 1);
+        int first = r.read();
+        if (first >= 0 && first != BYTE_ORDER_MARK) {
+            r.unread(first);
+        }
+        return r;
+    }
+
+    /** {@code b[from, to)} as strict UTF-8 (malformed input is an error). */
+    public static String decodeStrict(byte[] b, int from, int to) throws CharacterCodingException {
+        CharBuffer cb = StandardCharsets.UTF_8.newDecoder()
+                .onMalformedInput(CodingErrorAction.REPORT)
+                .onUnmappableCharacter(CodingErrorAction.REPORT)
+                .decode(ByteBuffer.wrap(b, from, to - from));
+        return cb.toString();
+    }
+
+    /** {@code b[from, to)} as UTF-8, or as ISO-8859-1 when it is not valid UTF-8 (old exports). */
+    public static String decodeLenient(byte[] b, int from, int to) {
+        try {
+            return decodeStrict(b, from, to);
         } catch (CharacterCodingException e) {
-            throw new InputException(label, 0, null, "the " + what + " is not valid UTF-8 text", e);
+            return new String(b, from, to - from, StandardCharsets.ISO_8859_1);
         }
     }
 }

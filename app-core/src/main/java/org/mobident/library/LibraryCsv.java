@@ -1,9 +1,7 @@
 package org.mobident.library;
 
 import java.io.IOException;
-import java.io.PushbackReader;
 import java.io.Reader;
-import java.io.StringReader;
 import java.io.StringWriter;
 import java.io.UncheckedIOException;
 import java.io.Writer;
@@ -12,19 +10,20 @@ import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.EnumMap;
 import java.util.EnumSet;
 import java.util.HashMap;
-import java.util.Iterator;
 import java.util.List;
 import java.util.Map;
 import java.util.Set;
 import java.util.regex.Pattern;
 import org.apache.commons.csv.CSVFormat;
-import org.apache.commons.csv.CSVParser;
 import org.apache.commons.csv.CSVPrinter;
-import org.apache.commons.csv.CSVRecord;
 import org.mobident.InputException;
+import org.mobident.io.TableReader;
+import org.mobident.io.TableRow;
+import org.mobident.io.TableSpec;
 
 /**
  * Reads and writes mobility libraries as human-editable CSV.
@@ -32,7 +31,7 @@ import org.mobident.InputException;
  * <h2>Format</h2>
  * <ul>
  *   <li>UTF-8 (a leading byte-order mark is tolerated), comma-delimited, double quotes around
- *       fields that contain commas, quotes or line breaks (RFC 4180, as Apache Commons CSV reads it).</li>
+ *       fields that contain commas, quotes or line breaks (RFC 4180), read with {@link TableReader}.</li>
  *   <li>Lines whose first character is {@code #} are comments; their text (without the {@code #}
  *       and surrounding spaces) becomes {@link Library#notes()}, in file order, and is written back
  *       at the top of the file. Blank lines, and lines of nothing but commas, are ignored.</li>
@@ -64,7 +63,6 @@ import org.mobident.InputException;
 public final class LibraryCsv {
 
     private static final char COMMENT = '#';
-    private static final char BYTE_ORDER_MARK = '\uFEFF';
     private static final char UNICODE_MINUS = '\u2212';
     /** A plain decimal number with optional sign, fraction and exponent (no NaN, hex or suffix). */
     private static final Pattern DECIMAL = Pattern.compile("[+-]?(\\d+\\.?\\d*|\\.\\d+)([eE][+-]?\\d+)?");
@@ -74,10 +72,10 @@ public final class LibraryCsv {
     private static final double PLAIN_MIN = 1e-4;
     private static final double PLAIN_MAX = 1e9;
 
-    private static final CSVFormat READ_FORMAT = CSVFormat.DEFAULT.builder()
-            .setCommentMarker(COMMENT)
-            .setIgnoreEmptyLines(true)
-            .get();
+    /** The library as the table reader expects it. */
+    private static final TableSpec SPEC = TableSpec.of("library file",
+            Arrays.stream(LibraryColumn.values()).map(LibraryColumn::header).toList(),
+            List.of(LibraryColumn.NAME.header(), LibraryColumn.MOBILITY.header()));
     private static final CSVFormat WRITE_FORMAT = CSVFormat.DEFAULT.builder()
             .setCommentMarker(COMMENT)
             .setRecordSeparator(RECORD_SEPARATOR)
@@ -94,9 +92,7 @@ public final class LibraryCsv {
      * @throws InputException when the file cannot be read or any line is invalid
      */
     public static Library read(Path file) throws InputException {
-        String label = file.toString();
-        String text = org.mobident.io.TextFiles.readUtf8(file, "library file");
-        return read(new StringReader(text), label);
+        return new Parse(file.toString()).run(TableReader.open(file, SPEC));
     }
 
     /**
@@ -108,11 +104,7 @@ public final class LibraryCsv {
      * @throws InputException when the text cannot be read or any line is invalid
      */
     public static Library read(Reader in, String sourceLabel) throws InputException {
-        try {
-            return new Parse(sourceLabel).run(skipByteOrderMark(in));
-        } catch (IOException | UncheckedIOException e) {
-            throw new InputException(sourceLabel, 0, null, "cannot read the library: " + e.getMessage(), e);
-        }
+        return new Parse(sourceLabel).run(TableReader.open(in, sourceLabel, SPEC));
     }
 
     /**
@@ -252,15 +244,6 @@ public final class LibraryCsv {
         return s == null ? "" : s;
     }
 
-    private static Reader skipByteOrderMark(Reader in) throws IOException {
-        PushbackReader r = new PushbackReader(in, 1);
-        int first = r.read();
-        if (first >= 0 && first != BYTE_ORDER_MARK) {
-            r.unread(first);
-        }
-        return r;
-    }
-
     /** One reading of one library: keeps the location for messages. */
     private static final class Parse {
         private final String file;
@@ -268,51 +251,20 @@ public final class LibraryCsv {
         private final List<LibraryEntry> entries = new ArrayList<>();
         private final List<Long> lines = new ArrayList<>();
         private final Map<String, Long> lineOfName = new HashMap<>();
-        /** Column index in the file → library column (null: an unnamed column that must stay empty). */
-        private final Map<Integer, LibraryColumn> columnAt = new HashMap<>();
-        private int headerWidth;
         private long line;
 
         Parse(String file) {
             this.file = file;
         }
 
-        Library run(Reader in) throws IOException, InputException {
-            boolean sawHeader = false;
-            try (CSVParser parser = CSVParser.parse(in, READ_FORMAT)) {
-                Iterator<CSVRecord> it = parser.iterator();
-                while (true) {
-                    CSVRecord rec;
-                    try {
-                        if (!it.hasNext()) {
-                            break;
-                        }
-                        rec = it.next();
-                    } catch (UncheckedIOException | IllegalStateException e) {
-                        throw new InputException(file, parser.getCurrentLineNumber() + 1, null,
-                                "malformed CSV (check the quotes): " + rootMessage(e), e);
-                    }
-                    line = startLine(rec, parser.getCurrentLineNumber());
-                    if (rec.hasComment()) {
-                        addNotes(rec.getComment());
-                    }
-                    if (isBlank(rec)) {
-                        continue;
-                    }
-                    if (!sawHeader) {
-                        header(rec);
-                        sawHeader = true;
-                    } else {
-                        entries.add(entry(rec));
-                        lines.add(line);
-                    }
+        Library run(TableReader opened) throws InputException {
+            try (TableReader table = opened) {
+                for (TableRow row = table.next(); row != null; row = table.next()) {
+                    line = row.line();
+                    entries.add(entry(row));
+                    lines.add(line);
                 }
-                if (parser.hasTrailerComment()) {
-                    addNotes(parser.getTrailerComment());
-                }
-            }
-            if (!sawHeader) {
-                throw new InputException(file, 0, null, "the library file is empty (no header, no analytes)");
+                notes.addAll(table.comments());
             }
             if (entries.isEmpty()) {
                 throw new InputException(file, 0, null, "the library has a header but no analytes");
@@ -320,85 +272,12 @@ public final class LibraryCsv {
             return new Library(entries, file, notes, lines);
         }
 
-        private static String rootMessage(Throwable e) {
-            Throwable t = e;
-            while (t.getCause() != null) {
-                t = t.getCause();
-            }
-            return t.getMessage();
-        }
-
-        /** The first physical line of a record: its last line minus the line breaks inside its fields. */
-        private static long startLine(CSVRecord rec, long endLine) {
-            long breaks = 0;
-            for (String v : rec.values()) {
-                for (int i = 0; i < v.length(); i++) {
-                    char c = v.charAt(i);
-                    if (c == '\n' || (c == '\r' && (i + 1 == v.length() || v.charAt(i + 1) != '\n'))) {
-                        breaks++;
-                    }
-                }
-            }
-            return Math.max(1, endLine - breaks);
-        }
-
-        private void addNotes(String comment) {
-            for (String s : comment.split("\n", -1)) {
-                notes.add(s.trim());
-            }
-        }
-
-        private static boolean isBlank(CSVRecord rec) {
-            for (String v : rec.values()) {
-                if (!v.isBlank()) {
-                    return false;
-                }
-            }
-            return true;
-        }
-
-        private void header(CSVRecord rec) throws InputException {
-            headerWidth = rec.size();
-            Map<LibraryColumn, Integer> seen = new EnumMap<>(LibraryColumn.class);
-            for (int i = 0; i < rec.size(); i++) {
-                String cell = rec.get(i).trim();
-                if (cell.isEmpty()) {
-                    columnAt.put(i, null);
-                    continue;
-                }
-                String hint = cell.indexOf(';') >= 0 || cell.indexOf('\t') >= 0
-                        ? " (library files are comma-delimited)" : "";
-                LibraryColumn c = LibraryColumn.fromHeader(cell).orElseThrow(() -> new InputException(file, line, cell,
-                        "unknown column '" + cell + "'" + org.mobident.io.Suggestions.didYouMean(cell,
-                                java.util.Arrays.asList(LibraryColumn.knownHeaders().split(",\\s*")))
-                                + "; known columns are: " + LibraryColumn.knownHeaders() + hint));
-                if (seen.containsKey(c)) {
-                    throw new InputException(file, line, c.header(), "column '" + c.header() + "' appears twice (columns "
-                            + (seen.get(c) + 1) + " and " + (i + 1) + ")");
-                }
-                seen.put(c, i);
-                columnAt.put(i, c);
-            }
-            for (LibraryColumn required : List.of(LibraryColumn.NAME, LibraryColumn.MOBILITY)) {
-                if (!seen.containsKey(required)) {
-                    throw new InputException(file, line, required.header(),
-                            "required column '" + required.header() + "' is missing from the header");
-                }
-            }
-        }
-
-        private LibraryEntry entry(CSVRecord rec) throws InputException {
+        private LibraryEntry entry(TableRow row) throws InputException {
             Map<LibraryColumn, String> v = new EnumMap<>(LibraryColumn.class);
-            for (int i = 0; i < rec.size(); i++) {
-                String cell = rec.get(i).trim();
-                if (i >= headerWidth || columnAt.get(i) == null) {
-                    if (!cell.isEmpty()) {
-                        throw new InputException(file, line, "column " + (i + 1),
-                                "value '" + cell + "' in a column that has no name in the header");
-                    }
-                    continue;
+            for (LibraryColumn c : LibraryColumn.values()) {
+                if (row.has(c.header())) {
+                    v.put(c, row.get(c.header()));
                 }
-                v.put(columnAt.get(i), cell);
             }
             String name = v.getOrDefault(LibraryColumn.NAME, "");
             if (name.isEmpty()) {

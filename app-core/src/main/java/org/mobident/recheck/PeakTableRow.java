@@ -1,8 +1,15 @@
 package org.mobident.recheck;
 
+import java.util.Collections;
+import java.util.EnumMap;
+import java.util.Map;
+import org.mobident.report.PeakTableColumn;
+import org.mobident.report.PeakTableStatus;
+
 /**
- * The part of one row of Mobident's peak table that a recheck or a scoring needs (see
- * {@link org.mobident.report.PeakTableCsv} for the whole table).
+ * One row of Mobident's peak table as read back: by name what a recheck or a scoring needs, and
+ * every column's cell through {@link #text} and {@link #number} (the columns are
+ * {@link PeakTableColumn}).
  *
  * @param line                  1-based line of the row in its file (0 when built in code)
  * @param run                   run name
@@ -21,11 +28,28 @@ package org.mobident.recheck;
  *                              1e-9 m²/(V s); NaN when empty or absent (tables of earlier versions)
  * @param centreTimeS           the zone's centre time (the time its mobility comes from), s; NaN when empty
  *                              or absent
+ * @param cells                 every known column's cell as read (text without the spreadsheet guard,
+ *                              numbers as written; empty cells and absent columns left out), for
+ *                              {@link #text} and {@link #number}
  */
 public record PeakTableRow(long line, String run, int peak, String role, double mobility, double mobilitySd,
                            double mobilityAtLibraryTemp, String assigned, double confidence, String status,
                            double apexTimeS, double widthHalfS, double signalToNoise, double mobilityCorrected,
-                           double centreTimeS) {
+                           double centreTimeS, Map<PeakTableColumn, String> cells) {
+
+    /** The canonical form: {@code cells} is copied (null: no cells). */
+    public PeakTableRow {
+        cells = cells == null || cells.isEmpty() ? Map.of() : Collections.unmodifiableMap(new EnumMap<>(cells));
+    }
+
+    /** A row with its peak measures but without the cells as read (as built in code). */
+    public PeakTableRow(long line, String run, int peak, String role, double mobility, double mobilitySd,
+                        double mobilityAtLibraryTemp, String assigned, double confidence, String status,
+                        double apexTimeS, double widthHalfS, double signalToNoise, double mobilityCorrected,
+                        double centreTimeS) {
+        this(line, run, peak, role, mobility, mobilitySd, mobilityAtLibraryTemp, assigned, confidence, status,
+                apexTimeS, widthHalfS, signalToNoise, mobilityCorrected, centreTimeS, Map.of());
+    }
 
     /** A row without the peak measures and the corrected mobility (as a recheck needs it). */
     public PeakTableRow(long line, String run, int peak, String role, double mobility, double mobilitySd,
@@ -37,9 +61,22 @@ public record PeakTableRow(long line, String run, int peak, String role, double 
     /** Role label of an analyte peak. */
     public static final String ROLE_ANALYTE = "analyte";
     /** Status of an identified analyte. */
-    public static final String STATUS_IDENTIFIED = "identified";
+    public static final String STATUS_IDENTIFIED = PeakTableStatus.IDENTIFIED.word();
     /** Status of an ambiguous analyte. */
-    public static final String STATUS_AMBIGUOUS = "ambiguous";
+    public static final String STATUS_AMBIGUOUS = PeakTableStatus.AMBIGUOUS.word();
+
+    /**
+     * A text column as read (stripped, without the spreadsheet guard); null when the cell is empty
+     * or the table has no such column.
+     */
+    public String text(PeakTableColumn column) {
+        return cells.get(column);
+    }
+
+    /** A numeric column as read; NaN when the cell is empty or the table has no such column. */
+    public double number(PeakTableColumn column) {
+        return column.format().read(cells.get(column));
+    }
 
     /** True for an analyte peak with an assignment (identified or ambiguous) and a known mobility. */
     public boolean isAssignment() {

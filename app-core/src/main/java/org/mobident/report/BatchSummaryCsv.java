@@ -48,9 +48,9 @@ public final class BatchSummaryCsv {
                 cells.add(text(row.run().spec().conditions().buffer()));
                 cells.add(text(table.analytes().get(a)));
                 cells.add(c.outcome().label());
-                cells.add(num(Numbers.fixed(c.confidence(), PeakRows.PROBABILITY_DECIMALS)));
-                cells.add(num(Numbers.significant(c.correctedArea(), PeakRows.MAGNITUDE_DIGITS)));
-                cells.add(num(Numbers.fixed(c.mobility(), PeakRows.MOBILITY_DECIMALS)));
+                cells.add(num(PeakTableColumn.Format.PROBABILITY.write(c.confidence())));
+                cells.add(num(PeakTableColumn.Format.MAGNITUDE.write(c.correctedArea())));
+                cells.add(num(PeakTableColumn.Format.MOBILITY.write(c.mobility())));
                 cells.add(c.peakNumber() > 0 ? Integer.toString(c.peakNumber()) : "");
                 p.printRecord(cells);
             }
@@ -65,12 +65,12 @@ public final class BatchSummaryCsv {
         for (RecurringUnknowns.Group g : groups) {
             for (RecurringUnknowns.Member m : g.members()) {
                 p.printRecord(g.name(), text(g.buffer()), g.runs().size(), g.runsInBuffer(),
-                        num(Numbers.fixed(g.meanMobility(), PeakRows.MOBILITY_DECIMALS)),
-                        num(Numbers.fixed(g.mobilitySd(), PeakRows.MOBILITY_DECIMALS)), text(m.run()), m.peakNumber(),
-                        num(Numbers.fixed(m.apexTimeS(), PeakRows.TIME_DECIMALS)),
-                        num(Numbers.fixed(m.mobility(), PeakRows.MOBILITY_DECIMALS)),
-                        num(Numbers.fixed(m.uncertainty(), PeakRows.MOBILITY_DECIMALS)),
-                        num(Numbers.significant(m.correctedArea(), PeakRows.MAGNITUDE_DIGITS)));
+                        num(PeakTableColumn.Format.MOBILITY.write(g.meanMobility())),
+                        num(PeakTableColumn.Format.MOBILITY.write(g.mobilitySd())), text(m.run()), m.peakNumber(),
+                        num(PeakTableColumn.Format.TIME.write(m.apexTimeS())),
+                        num(PeakTableColumn.Format.MOBILITY.write(m.mobility())),
+                        num(PeakTableColumn.Format.MOBILITY.write(m.uncertainty())),
+                        num(PeakTableColumn.Format.MAGNITUDE.write(m.correctedArea())));
             }
         }
         p.flush();

@@ -2,9 +2,7 @@ package org.mobident.report;
 
 import java.util.ArrayList;
 import java.util.List;
-import java.util.Locale;
 import org.mobident.matching.Candidate;
-import org.mobident.matching.MatchStatus;
 import org.mobident.matching.PeakMatch;
 import org.mobident.matching.RunScale;
 import org.mobident.pipeline.PeakResult;
@@ -13,49 +11,15 @@ import org.mobident.pipeline.RunResult;
 import org.mobident.signal.Peak;
 
 /**
- * The peak table as rows of typed cells, shared by the CSV and JSON writers so both carry the
- * same columns, values and number formats.
- *
- * <p>Formats (all {@link Locale#ROOT}): times in s with 4 decimals; mobilities with 3 decimals;
- * probabilities with 3 decimals; height, area and corrected area with 6 significant digits;
- * plates as an integer; resolution with 2 decimals; S/N with 1 decimal.
- *
- * <p>Columns added later come at the end, just before {@code note}, so that the earlier ones
- * keep their order: {@code centre_time_s} and {@code centre_time_sd_s} (the zone's first moment
- * and its uncertainty, see {@link Peak}) and {@code sn_class}, where the S/N stands against the
- * detection and quantitation limits ({@link org.mobident.signal.SignalToNoiseClass}).
+ * The peak table as rows of typed cells, shared by the CSV and JSON writers (and the workbook) so
+ * all carry the same columns, values and number formats: the columns and their formats are
+ * {@link PeakTableColumn}, the status words {@link PeakTableStatus}; this class says which value of
+ * a run or peak goes into each column.
  */
 final class PeakRows {
 
     /** Column names in output order. */
-    static final List<String> COLUMNS = List.of(
-            "run", "sample", "peak", "role", "apex_time_s", "apex_time_sd_s", "start_s", "end_s",
-            "height", "area", "corrected_area", "width_half_s", "plates", "resolution",
-            "signal_to_noise", "direction", "mobility", "mobility_sd", "mobility_at_library_temp",
-            "mobility_corrected", "assigned", "confidence", "status", "runner_up", "runner_up_probability",
-            "candidates", "centre_time_s", "centre_time_sd_s", "sn_class", "scale_factor", "scale_factor_sd",
-            "scale_offset", "scale_offset_sd", "note");
-
-    /** The columns that describe the whole run (repeated on each of its rows in CSV, stated once per run in JSON). */
-    static final List<String> RUN_COLUMNS = List.of("scale_factor", "scale_factor_sd", "scale_offset",
-            "scale_offset_sd");
-
-    /** Decimals of the scale factor a and its SD. */
-    static final int FACTOR_DECIMALS = 5;
-
-    static final int TIME_DECIMALS = 4;
-    static final int MOBILITY_DECIMALS = 3;
-    static final int PROBABILITY_DECIMALS = 3;
-    static final int MAGNITUDE_DIGITS = 6;
-    static final int RESOLUTION_DECIMALS = 2;
-    static final int SIGNAL_TO_NOISE_DECIMALS = 1;
-
-    /** Status of a row for a run that could not be processed. */
-    static final String STATUS_FAILED = "failed";
-    /** Status of a marker peak (markers are not matched against the library). */
-    static final String STATUS_MARKER = "marker";
-    /** Status of the single row of a processed run in which no peak was found. */
-    static final String STATUS_NO_PEAKS = "no_peaks";
+    static final List<String> COLUMNS = PeakTableColumn.headers();
 
     /** One cell: text, or a number already formatted (null text/number means empty). */
     record Cell(String text, boolean numeric) {
@@ -89,11 +53,11 @@ final class PeakRows {
         List<List<Cell>> rows = new ArrayList<>();
         String name = run.spec().name();
         if (run.failed()) {
-            rows.add(emptyRow(name, run.spec().sample(), STATUS_FAILED, run.error().getMessage()));
+            rows.add(emptyRow(name, run.spec().sample(), PeakTableStatus.FAILED, run.error().getMessage()));
             return rows;
         }
         if (run.peaks().isEmpty()) {
-            rows.add(emptyRow(name, run.spec().sample(), STATUS_NO_PEAKS, "no peaks detected"));
+            rows.add(emptyRow(name, run.spec().sample(), PeakTableStatus.NO_PEAKS, "no peaks detected"));
             return rows;
         }
         int number = 0;
@@ -104,68 +68,71 @@ final class PeakRows {
         return rows;
     }
 
-    private static List<Cell> emptyRow(String run, String sample, String status, String note) {
+    private static List<Cell> emptyRow(String run, String sample, PeakTableStatus status, String note) {
         List<Cell> row = new ArrayList<>(COLUMNS.size());
-        for (String column : COLUMNS) {
-            switch (column) {
-                case "run":
-                    row.add(Cell.text(run));
-                    break;
-                case "sample":
-                    row.add(Cell.text(sample));
-                    break;
-                case "status":
-                    row.add(Cell.text(status));
-                    break;
-                case "note":
-                    row.add(Cell.text(note));
-                    break;
-                default:
-                    row.add(Cell.text(null));
-                    break;
-            }
+        for (PeakTableColumn column : PeakTableColumn.values()) {
+            row.add(switch (column) {
+                case RUN -> Cell.text(run);
+                case SAMPLE -> Cell.text(sample);
+                case STATUS -> Cell.text(status.word());
+                case NOTE -> Cell.text(note);
+                default -> column.format().numeric() ? Cell.number(null) : Cell.text(null);
+            });
         }
         return row;
     }
 
     private static List<Cell> peakRow(RunResult run, String name, int number, PeakResult pr) {
+        List<Cell> scale = scaleCells(run);
+        List<Cell> row = new ArrayList<>(COLUMNS.size());
+        for (PeakTableColumn column : PeakTableColumn.values()) {
+            row.add(peakCell(column, run, name, number, pr, scale));
+        }
+        return row;
+    }
+
+    /** The cell of one column on the row of one peak. */
+    private static Cell peakCell(PeakTableColumn column, RunResult run, String name, int number, PeakResult pr,
+                                 List<Cell> scale) {
         Peak p = pr.peak();
         PeakMatch m = pr.match();
         boolean analyte = pr.role() == PeakRole.ANALYTE;
         boolean matched = analyte && Double.isFinite(pr.mobility());
-        List<Cell> row = new ArrayList<>(COLUMNS.size());
-        row.add(Cell.text(name));
-        row.add(Cell.text(run.spec().sample()));
-        row.add(Cell.number(Integer.toString(number)));
-        row.add(Cell.text(pr.role().label()));
-        row.add(time(p.apexTimeS()));
-        row.add(time(p.apexTimeSdS()));
-        row.add(time(p.startTimeS()));
-        row.add(time(p.endTimeS()));
-        row.add(Cell.number(Numbers.significant(p.height(), MAGNITUDE_DIGITS)));
-        row.add(Cell.number(Numbers.significant(p.area(), MAGNITUDE_DIGITS)));
-        row.add(Cell.number(Numbers.significant(p.correctedArea(), MAGNITUDE_DIGITS)));
-        row.add(time(p.widthHalfS()));
-        row.add(Cell.number(Numbers.integer(p.plates())));
-        row.add(Cell.number(Numbers.fixed(p.resolution(), RESOLUTION_DECIMALS)));
-        row.add(Cell.number(Numbers.fixed(p.signalToNoise(), SIGNAL_TO_NOISE_DECIMALS)));
-        row.add(Cell.text(p.dip() ? "dip" : "rise"));
-        row.add(mobility(pr.mobility()));
-        row.add(mobility(pr.mobilitySd()));
-        row.add(mobility(pr.mobilityAtLibraryTemp()));
-        row.add(mobility(pr.mobilityCorrected()));
-        row.add(Cell.text(matched ? m.assigned() : null));
-        row.add(matched ? probability(m.confidence()) : Cell.number(null));
-        row.add(Cell.text(statusOf(pr)));
-        row.add(Cell.text(matched ? m.runnerUp() : null));
-        row.add(matched && m.runnerUp() != null ? probability(m.runnerUpProbability()) : Cell.number(null));
-        row.add(Cell.text(matched ? candidatesText(m.candidates()) : null));
-        row.add(time(p.centreTimeS()));
-        row.add(time(p.centreTimeSdS()));
-        row.add(Cell.text(p.signalToNoiseClass().label()));
-        row.addAll(scaleCells(run));
-        row.add(Cell.text(analyte && !run.mobilityKnown() ? run.scaleNote() : null));
-        return row;
+        return switch (column) {
+            case RUN -> Cell.text(name);
+            case SAMPLE -> Cell.text(run.spec().sample());
+            case PEAK -> number(column, number);
+            case ROLE -> Cell.text(pr.role().label());
+            case APEX_TIME_S -> number(column, p.apexTimeS());
+            case APEX_TIME_SD_S -> number(column, p.apexTimeSdS());
+            case START_S -> number(column, p.startTimeS());
+            case END_S -> number(column, p.endTimeS());
+            case HEIGHT -> number(column, p.height());
+            case AREA -> number(column, p.area());
+            case CORRECTED_AREA -> number(column, p.correctedArea());
+            case WIDTH_HALF_S -> number(column, p.widthHalfS());
+            case PLATES -> number(column, p.plates());
+            case RESOLUTION -> number(column, p.resolution());
+            case SIGNAL_TO_NOISE -> number(column, p.signalToNoise());
+            case DIRECTION -> Cell.text(p.dip() ? "dip" : "rise");
+            case MOBILITY -> number(column, pr.mobility());
+            case MOBILITY_SD -> number(column, pr.mobilitySd());
+            case MOBILITY_AT_LIBRARY_TEMP -> number(column, pr.mobilityAtLibraryTemp());
+            case MOBILITY_CORRECTED -> number(column, pr.mobilityCorrected());
+            case ASSIGNED -> Cell.text(matched ? m.assigned() : null);
+            case CONFIDENCE -> matched ? number(column, m.confidence()) : Cell.number(null);
+            case STATUS -> Cell.text(statusOf(pr).word());
+            case RUNNER_UP -> Cell.text(matched ? m.runnerUp() : null);
+            case RUNNER_UP_PROBABILITY -> matched && m.runnerUp() != null
+                    ? number(column, m.runnerUpProbability()) : Cell.number(null);
+            case CANDIDATES -> Cell.text(matched ? candidatesText(m.candidates()) : null);
+            case CENTRE_TIME_S -> number(column, p.centreTimeS());
+            case CENTRE_TIME_SD_S -> number(column, p.centreTimeSdS());
+            case SN_CLASS -> Cell.text(p.signalToNoiseClass().label());
+            case SCALE_FACTOR, SCALE_FACTOR_SD, SCALE_OFFSET, SCALE_OFFSET_SD ->
+                    scale.get(PeakTableColumn.runValues().indexOf(column));
+            case NOTE -> Cell.text(analyte && !run.mobilityKnown() ? run.scaleNote() : null);
+        };
     }
 
     /**
@@ -177,19 +144,18 @@ final class PeakRows {
         if (!run.mobilityKnown() || s.status() == RunScale.Status.OFF) {
             return List.of(Cell.number(null), Cell.number(null), Cell.number(null), Cell.number(null));
         }
-        return List.of(Cell.number(Numbers.fixed(s.factor(), FACTOR_DECIMALS)),
-                Cell.number(Numbers.fixed(s.factorSd(), FACTOR_DECIMALS)),
-                Cell.number(Numbers.fixed(s.offset(), MOBILITY_DECIMALS)),
-                Cell.number(Numbers.fixed(s.offsetSd(), MOBILITY_DECIMALS)));
+        return List.of(number(PeakTableColumn.SCALE_FACTOR, s.factor()),
+                number(PeakTableColumn.SCALE_FACTOR_SD, s.factorSd()),
+                number(PeakTableColumn.SCALE_OFFSET, s.offset()),
+                number(PeakTableColumn.SCALE_OFFSET_SD, s.offsetSd()));
     }
 
-    /** identified / ambiguous / unassigned for analytes, "marker" for markers. */
-    static String statusOf(PeakResult pr) {
+    /** identified / ambiguous / unassigned for analytes, marker for markers. */
+    static PeakTableStatus statusOf(PeakResult pr) {
         if (pr.role() != PeakRole.ANALYTE) {
-            return STATUS_MARKER;
+            return PeakTableStatus.MARKER;
         }
-        MatchStatus s = pr.match().status();
-        return s == null ? MatchStatus.UNASSIGNED.label() : s.label();
+        return PeakTableStatus.of(pr.match().status());
     }
 
     /** "nitrate:0.930 chlorate:0.050": name and probability of each candidate, most likely first. */
@@ -199,21 +165,14 @@ final class PeakRows {
             if (sb.length() > 0) {
                 sb.append(' ');
             }
-            String p = Numbers.fixed(c.probability(), PROBABILITY_DECIMALS);
+            String p = PeakTableColumn.Format.PROBABILITY.write(c.probability());
             sb.append(c.name()).append(':').append(p == null ? "" : p);
         }
         return sb.toString();
     }
 
-    static Cell time(double s) {
-        return Cell.number(Numbers.fixed(s, TIME_DECIMALS));
-    }
-
-    static Cell mobility(double mu) {
-        return Cell.number(Numbers.fixed(mu, MOBILITY_DECIMALS));
-    }
-
-    static Cell probability(double p) {
-        return Cell.number(Numbers.fixed(p, PROBABILITY_DECIMALS));
+    /** A number in the column's format. */
+    static Cell number(PeakTableColumn column, double value) {
+        return Cell.number(column.write(value));
     }
 }

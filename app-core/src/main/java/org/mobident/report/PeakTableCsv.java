@@ -14,15 +14,9 @@ import org.mobident.pipeline.RunResult;
  * (status {@code failed}, the reason in {@code note}) or that found no peak (status
  * {@code no_peaks}).
  *
- * <p>Columns, in order: run, peak, role, apex_time_s, apex_time_sd_s, start_s, end_s, height,
- * area, corrected_area, width_half_s, plates, resolution, signal_to_noise, direction (rise|dip),
- * mobility, mobility_sd, mobility_at_library_temp, assigned, confidence, status, runner_up,
- * runner_up_probability, candidates, note.
- *
- * <p>Times in s (4 decimals), mobilities in 1e-9 m²/(V s) (3 decimals), probabilities as
- * fractions (3 decimals), height/area/corrected area to 6 significant digits; unknown values
- * are empty cells. The {@code status} is identified, ambiguous or unassigned for analytes and
- * {@code marker} for marker peaks; {@code confidence} is left empty where no mobility is known.
+ * <p>The columns, their order and number formats are {@link PeakTableColumn}; the status words
+ * {@link PeakTableStatus}. Unknown values are empty cells; {@code confidence} is left empty where
+ * no mobility is known.
  * Output is deterministic ({@link java.util.Locale#ROOT}, "\n" line ends) and text cells are made
  * spreadsheet-safe with {@link CsvCells#inert}; numbers are written as they are.
  */

@@ -21,8 +21,9 @@ import org.mobident.pipeline.RunResult;
  *         "residual": 0.120, "z": 0.40}], "note": null}]}]}
  * </pre>
  *
- * <p>Each peak object carries the columns of {@link PeakTableCsv} (except {@code run}, which is
- * the run's own field) with the same number formats; numbers are JSON numbers and unknown
+ * <p>Each peak object carries the columns of {@link PeakTableColumn} that describe a peak (those
+ * of the whole run, such as {@code run} and the scale correction, are the run's own fields), with
+ * the same number formats as the CSV; numbers are JSON numbers and unknown
  * values are {@code null}. Unlike the CSV, {@code candidates} is an array of objects. A failed
  * run has an empty {@code peaks} array and its reason in {@code error}.
  */
@@ -57,17 +58,16 @@ public final class PeakTableJson {
         field(sb, in2, "sample", Json.quote(run.spec().sample()));
         field(sb, in2, "file", Json.quote(run.spec().traceFile() == null ? null
                 : run.spec().traceFile().toString()));
-        field(sb, in2, "status", Json.quote(run.failed() ? "failed" : "ok"));
+        field(sb, in2, "status", Json.quote(run.failed() ? PeakTableStatus.FAILED.word() : "ok"));
         field(sb, in2, "error", Json.quote(run.failed() ? run.error().getMessage() : null));
         field(sb, in2, "scale", Json.quote(run.scaleNote()));
-        field(sb, in2, "eof_mobility", Json.number(Numbers.fixed(run.eofMobility(),
-                PeakRows.MOBILITY_DECIMALS)));
+        field(sb, in2, "eof_mobility", Json.number(PeakTableColumn.Format.MOBILITY.write(run.eofMobility())));
         field(sb, in2, "mobility_known", Boolean.toString(run.mobilityKnown()));
-        field(sb, in2, "noise_sd", Json.number(Numbers.significant(run.noiseSd(),
-                PeakRows.MAGNITUDE_DIGITS)));
+        field(sb, in2, "noise_sd", Json.number(PeakTableColumn.Format.MAGNITUDE.write(run.noiseSd())));
         List<PeakRows.Cell> scale = PeakRows.scaleCells(run);
-        for (int k = 0; k < PeakRows.RUN_COLUMNS.size(); k++) {
-            field(sb, in2, PeakRows.RUN_COLUMNS.get(k), Json.number(scale.get(k).text()));
+        List<PeakTableColumn> runValues = PeakTableColumn.runValues();
+        for (int k = 0; k < runValues.size(); k++) {
+            field(sb, in2, runValues.get(k).header(), Json.number(scale.get(k).text()));
         }
         StringBuilder notes = new StringBuilder("[");
         for (int i = 0; i < run.notes().size(); i++) {
@@ -92,13 +92,13 @@ public final class PeakTableJson {
     private static void appendPeak(StringBuilder sb, List<PeakRows.Cell> row, PeakResult pr) {
         sb.append('{');
         boolean first = true;
-        for (int c = 0; c < PeakRows.COLUMNS.size(); c++) {
-            String column = PeakRows.COLUMNS.get(c);
-            if (column.equals("run") || column.equals("sample") || PeakRows.RUN_COLUMNS.contains(column)) {
+        for (PeakTableColumn column : PeakTableColumn.values()) {
+            if (column.scope() == PeakTableColumn.Scope.RUN) {
                 continue; // stated once for the run
             }
+            int c = column.ordinal();
             String value;
-            if (column.equals("candidates")) {
+            if (column == PeakTableColumn.CANDIDATES) {
                 value = candidates(pr);
             } else {
                 PeakRows.Cell cell = row.get(c);
@@ -108,7 +108,7 @@ public final class PeakTableJson {
                     value = cell.numeric() ? cell.text() : Json.quote(cell.text());
                 }
             }
-            sb.append(first ? "" : ", ").append(Json.quote(column)).append(": ").append(value);
+            sb.append(first ? "" : ", ").append(Json.quote(column.header())).append(": ").append(value);
             first = false;
         }
         sb.append('}');
@@ -125,11 +125,11 @@ public final class PeakTableJson {
             sb.append(i == 0 ? "" : ", ")
                     .append("{\"name\": ").append(Json.quote(c.name()))
                     .append(", \"probability\": ")
-                    .append(Json.number(Numbers.fixed(c.probability(), PeakRows.PROBABILITY_DECIMALS)))
+                    .append(Json.number(PeakTableColumn.Format.PROBABILITY.write(c.probability())))
                     .append(", \"library_mobility\": ")
-                    .append(Json.number(Numbers.fixed(c.libraryMobility(), PeakRows.MOBILITY_DECIMALS)))
+                    .append(Json.number(PeakTableColumn.Format.MOBILITY.write(c.libraryMobility())))
                     .append(", \"residual\": ")
-                    .append(Json.number(Numbers.fixed(c.residual(), PeakRows.MOBILITY_DECIMALS)))
+                    .append(Json.number(PeakTableColumn.Format.MOBILITY.write(c.residual())))
                     .append(", \"z\": ")
                     .append(Json.number(Numbers.fixed(c.z(), Z_DECIMALS)))
                     .append('}');

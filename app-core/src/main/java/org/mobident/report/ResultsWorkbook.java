@@ -3,7 +3,6 @@ package org.mobident.report;
 import java.io.IOException;
 import java.io.OutputStream;
 import java.util.List;
-import java.util.Map;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
 import java.util.stream.Collectors;
@@ -47,33 +46,11 @@ public final class ResultsWorkbook {
     public static final String SHEET_ABOUT = "About";
 
     /** The mobility unit as written in headers. */
-    static final String MOBILITY_UNIT = "1e-9 m²/(V·s)";
+    static final String MOBILITY_UNIT = PeakTableColumn.MOBILITY_UNIT;
 
     /** The measures shown per analyte on the samples sheet. */
     static final List<String> SAMPLE_MEASURES = List.of("result", "confidence", "corrected area",
             "mobility (" + MOBILITY_UNIT + ")");
-
-    /** Header of each peak-table column, with its unit; the CSV name stays recognisable. */
-    static final Map<String, String> PEAK_HEADERS = Map.ofEntries(
-            Map.entry("run", "run"), Map.entry("sample", "sample"), Map.entry("peak", "peak"),
-            Map.entry("role", "role"), Map.entry("apex_time_s", "apex time (s)"),
-            Map.entry("apex_time_sd_s", "apex time SD (s)"), Map.entry("start_s", "start (s)"),
-            Map.entry("end_s", "end (s)"), Map.entry("height", "height (signal)"),
-            Map.entry("area", "area (signal·s)"), Map.entry("corrected_area", "corrected area A/t (signal)"),
-            Map.entry("width_half_s", "width at half height (s)"), Map.entry("plates", "plates"),
-            Map.entry("resolution", "resolution"), Map.entry("signal_to_noise", "S/N"),
-            Map.entry("direction", "direction"), Map.entry("mobility", "mobility (" + MOBILITY_UNIT + ")"),
-            Map.entry("mobility_sd", "mobility SD (" + MOBILITY_UNIT + ")"),
-            Map.entry("mobility_at_library_temp", "mobility at library temperature (" + MOBILITY_UNIT + ")"),
-            Map.entry("mobility_corrected", "mobility compared with library (" + MOBILITY_UNIT + ")"),
-            Map.entry("assigned", "assigned"), Map.entry("confidence", "confidence (fraction)"),
-            Map.entry("status", "status"), Map.entry("runner_up", "runner-up"),
-            Map.entry("runner_up_probability", "runner-up probability (fraction)"),
-            Map.entry("candidates", "candidates (name:probability)"), Map.entry("centre_time_s", "centre time (s)"),
-            Map.entry("centre_time_sd_s", "centre time SD (s)"), Map.entry("sn_class", "S/N class"),
-            Map.entry("scale_factor", "scale factor a"), Map.entry("scale_factor_sd", "scale factor a SD"),
-            Map.entry("scale_offset", "scale offset b (" + MOBILITY_UNIT + ")"),
-            Map.entry("scale_offset_sd", "scale offset b SD (" + MOBILITY_UNIT + ")"), Map.entry("note", "note"));
 
     private static final Pattern VERSION = Pattern.compile("(\\d+)\\.(\\d+)");
     private static final String HEADER_FILL = "DCE6F0";
@@ -157,7 +134,7 @@ public final class ResultsWorkbook {
     private static void peaks(Worksheet ws, List<RunResult> runs) {
         List<String> columns = PeakRows.COLUMNS;
         for (int c = 0; c < columns.size(); c++) {
-            header(ws, 0, c, PEAK_HEADERS.getOrDefault(columns.get(c), columns.get(c)));
+            header(ws, 0, c, PeakTableColumn.values()[c].label());
             ws.width(c, NUMBER_WIDTH);
         }
         int r = 1;
@@ -307,10 +284,10 @@ public final class ResultsWorkbook {
                 continue;
             }
             n[0]++;
-            String status = PeakRows.statusOf(pr);
-            if ("identified".equals(status)) {
+            PeakTableStatus status = PeakRows.statusOf(pr);
+            if (status == PeakTableStatus.IDENTIFIED) {
                 n[1]++;
-            } else if ("ambiguous".equals(status)) {
+            } else if (status == PeakTableStatus.AMBIGUOUS) {
                 n[2]++;
             } else {
                 n[3]++;

@@ -1,5 +1,6 @@
 package org.mobident.library.standards;
 
+import java.io.StringReader;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.HashMap;
@@ -9,8 +10,10 @@ import java.util.Locale;
 import java.util.Map;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
-import org.apache.commons.csv.CSVFormat;
 import org.mobident.InputException;
+import org.mobident.io.TableReader;
+import org.mobident.io.TableRow;
+import org.mobident.io.TableSpec;
 
 /**
  * Reads a standards sheet: one row per analyte of a standard mix.
@@ -39,7 +42,8 @@ import org.mobident.InputException;
  *       analyte may appear in several mixes.</li>
  *   <li>Delimiter comma, semicolon or tab, taken from the header line; with semicolon or tab a
  *       decimal comma is accepted. UTF-8 (a leading byte-order mark is skipped); blank lines and
- *       lines starting with {@code #} are skipped. Each line holds one row.</li>
+ *       lines starting with {@code #} are skipped. Read with {@link TableReader} (a quoted cell may
+ *       hold the delimiter).</li>
  * </ul>
  * Every problem raises an {@link InputException} naming the file, the 1-based line and the column.
  */
@@ -58,7 +62,9 @@ public final class StandardsSheetReader {
     public static final List<String> COLUMNS = List.of(MIX, ANALYTE, CHARGE, APPROX_MOBILITY, ORDER, PKA,
             LIMITING_MOBILITY, NOTE);
 
-    private static final char BYTE_ORDER_MARK = '\uFEFF';
+    /** The standards sheet as the table reader expects it. */
+    private static final TableSpec SPEC = TableSpec.of("standards sheet", COLUMNS, List.of(MIX, ANALYTE))
+            .withSniffedDelimiter().withSpacesAsUnderscore();
     private static final char UNICODE_MINUS = '\u2212';
     private static final Pattern DECIMAL = Pattern.compile("[+-]?(\\d+\\.?\\d*|\\.\\d+)([eE][+-]?\\d+)?");
     /** {@code -2}, {@code +1}, {@code 3}: sign before the number. */
@@ -78,8 +84,7 @@ public final class StandardsSheetReader {
      */
     public static StandardsSheet read(Path file) throws InputException {
         String label = file.toString();
-        String text = org.mobident.io.TextFiles.readUtf8(file, "standards sheet");
-        return read(text, label);
+        return new Parse(label).run(TableReader.open(file, SPEC));
     }
 
     /**
@@ -90,16 +95,13 @@ public final class StandardsSheetReader {
      * @throws InputException when any line or column is invalid
      */
     public static StandardsSheet read(String text, String label) throws InputException {
-        String t = !text.isEmpty() && text.charAt(0) == BYTE_ORDER_MARK ? text.substring(1) : text;
-        return new Parse(label).run(t);
+        return new Parse(label).run(TableReader.open(new StringReader(text), label, SPEC));
     }
 
     /** State of one sheet parse; not shared. */
     private static final class Parse {
         private final String file;
-        private CSVFormat format;
         private char delimiter;
-        private final List<String> columns = new ArrayList<>();
         /** Mix key → analytes in sheet order. */
         private final Map<String, List<StandardAnalyte>> analytesByMix = new LinkedHashMap<>();
         /** Mix key → the mix name as first written. */
@@ -115,25 +117,12 @@ public final class StandardsSheetReader {
             this.file = file;
         }
 
-        StandardsSheet run(String text) throws InputException {
-            String[] lines = text.split("\r\n|\r|\n", -1);
-            boolean headerSeen = false;
-            for (int i = 0; i < lines.length; i++) {
-                String line = lines[i];
-                String stripped = line.strip();
-                if (stripped.isEmpty() || stripped.startsWith("#")) {
-                    continue;
+        StandardsSheet run(TableReader opened) throws InputException {
+            try (TableReader table = opened) {
+                delimiter = table.delimiter();
+                for (TableRow row = table.next(); row != null; row = table.next()) {
+                    row(row);
                 }
-                long lineNo = i + 1L;
-                if (!headerSeen) {
-                    header(line, lineNo);
-                    headerSeen = true;
-                } else {
-                    row(line, lineNo);
-                }
-            }
-            if (!headerSeen) {
-                throw new InputException(file, 0, null, "the standards sheet is empty (no header line)");
             }
             if (analytesByMix.isEmpty()) {
                 throw new InputException(file, 0, null, "the standards sheet has a header but no analytes");
@@ -145,47 +134,13 @@ public final class StandardsSheetReader {
             return new StandardsSheet(file, mixes);
         }
 
-        private void header(String line, long lineNo) throws InputException {
-            delimiter = line.indexOf(';') >= 0 ? ';' : line.indexOf('\t') >= 0 ? '\t' : ',';
-            format = CSVFormat.DEFAULT.builder().setDelimiter(delimiter).setTrim(true)
-                    .setIgnoreSurroundingSpaces(true).get();
-            for (String raw : cells(line, lineNo)) {
-                String c = raw.strip().toLowerCase(Locale.ROOT).replace(' ', '_').replace('-', '_');
-                if (!c.isEmpty() && !COLUMNS.contains(c)) {
-                    throw new InputException(file, lineNo, raw, "unknown column '" + raw + "'"
-                            + org.mobident.io.Suggestions.didYouMean(c, COLUMNS) + "; known columns: "
-                            + String.join(", ", COLUMNS));
-                }
-                if (!c.isEmpty() && columns.contains(c)) {
-                    throw new InputException(file, lineNo, raw, "column '" + raw + "' appears twice");
-                }
-                columns.add(c);
-            }
-            for (String required : List.of(MIX, ANALYTE)) {
-                if (!columns.contains(required)) {
-                    throw new InputException(file, lineNo, required, "the standards sheet has no '" + required
-                            + "' column");
-                }
-            }
-        }
-
-        private List<String> cells(String line, long lineNo) throws InputException {
-            return org.mobident.io.CsvLines.cells(line, format, file, lineNo);
-        }
-
-        private void row(String line, long lineNo) throws InputException {
-            List<String> cells = cells(line, lineNo);
+        private void row(TableRow row) throws InputException {
+            long lineNo = row.line();
             Map<String, String> v = new HashMap<>();
-            for (int k = 0; k < cells.size(); k++) {
-                String cell = cells.get(k).strip();
-                if (k >= columns.size() || columns.get(k).isEmpty()) {
-                    if (!cell.isEmpty()) {
-                        throw new InputException(file, lineNo, "column " + (k + 1), "value '" + cell
-                                + "' stands in a column without a name in the header");
-                    }
-                    continue;
+            for (String column : COLUMNS) {
+                if (row.has(column)) {
+                    v.put(column, row.get(column));
                 }
-                v.put(columns.get(k), cell);
             }
             String mix = v.getOrDefault(MIX, "");
             if (mix.isEmpty()) {

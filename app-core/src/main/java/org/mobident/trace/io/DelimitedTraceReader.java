@@ -8,6 +8,7 @@ import java.util.List;
 import java.util.Locale;
 
 import org.mobident.InputException;
+import org.mobident.io.TextFiles;
 import org.mobident.trace.RunSpec;
 import org.mobident.trace.TimeScale;
 import org.mobident.trace.Trace;
@@ -348,7 +349,7 @@ public final class DelimitedTraceReader {
 
         Trace run(String traceName) throws InputException {
             TextSniffer.requireText(b, file);
-            pos = TextSniffer.utf8BomLength(b);
+            pos = TextFiles.bomLength(b);
             boolean found = false;
             while (nextLine()) {
                 if (!skippable()) {
@@ -361,7 +362,7 @@ public final class DelimitedTraceReader {
                         : "the file has no header line (only blank or comment lines)");
             }
             long headerLine = line;
-            String header = TextSniffer.decode(b, lineStart, lineEnd);
+            String header = TextFiles.decodeLenient(b, lineStart, lineEnd);
             readHeader(header, headerLine);
 
             int timeIndex = timeColumn(headerLine);
@@ -659,7 +660,7 @@ public final class DelimitedTraceReader {
             }
             double v = FastDoubleParser.parse(b, s, e, decimalComma);
             if (Double.isNaN(v)) {
-                String text = TextSniffer.decode(b, s, e);
+                String text = TextFiles.decodeLenient(b, s, e);
                 String lower = text.toLowerCase(Locale.ROOT).replace("+", "").replace("-", "");
                 if (lower.equals("nan") || lower.startsWith("inf") || lower.contains("#inf")) {
                     throw new InputException(file, line, column, "'" + clip(text)
@@ -668,14 +669,14 @@ public final class DelimitedTraceReader {
                 throw new InputException(file, line, column, "'" + clip(text) + "' is not a number");
             }
             if (Double.isInfinite(v)) {
-                throw new InputException(file, line, column, "'" + clip(TextSniffer.decode(b, s, e))
+                throw new InputException(file, line, column, "'" + clip(TextFiles.decodeLenient(b, s, e))
                         + "' is too large for a double (overflows to infinity)");
             }
             return v;
         }
 
         private String quote(int index) {
-            String text = TextSniffer.decode(b, fieldStart[index], fieldEnd[index]).trim();
+            String text = TextFiles.decodeLenient(b, fieldStart[index], fieldEnd[index]).trim();
             return clip(text);
         }
 

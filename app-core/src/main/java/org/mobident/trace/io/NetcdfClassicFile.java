@@ -13,6 +13,7 @@ import java.util.List;
 import java.util.Set;
 
 import org.mobident.InputException;
+import org.mobident.io.TextFiles;
 
 /**
  * A small, strict reader of the netCDF <em>classic</em> binary format: version 1 ("CDF-1", classic)
@@ -818,7 +819,7 @@ final class NetcdfClassicFile {
                     while (end > i0 && b[end - 1] == 0) {
                         end--;
                     }
-                    text = TextSniffer.decode(b, i0, end);
+                    text = TextFiles.decodeLenient(b, i0, end);
                 } else {
                     values = new double[n];
                     for (int k = 0; k < n; k++) {

@@ -1,5 +1,6 @@
 package org.mobident.trace.io;
 
+import java.io.StringReader;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.InvalidPathException;
@@ -10,8 +11,11 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 
-import org.apache.commons.csv.CSVFormat;
 import org.mobident.InputException;
+import org.mobident.io.TableReader;
+import org.mobident.io.TableRow;
+import org.mobident.io.TableSpec;
+import org.mobident.io.TextFiles;
 import org.mobident.Units;
 import org.mobident.trace.Detection;
 import org.mobident.trace.RunConditions;
@@ -31,7 +35,7 @@ import org.mobident.trace.RunSpec;
  *
  * <p>Delimiter comma, semicolon or tab, taken from the header; with semicolon or tab, numbers may
  * use a decimal comma. A UTF-8 byte order mark, blank lines and {@code #} comment lines are
- * skipped. Each line holds one row (quoted cells may hold the delimiter, not a line break).
+ * skipped. Read with {@link TableReader} (quoted cells may hold the delimiter).
  */
 public final class RunSheetReader {
 
@@ -68,6 +72,10 @@ public final class RunSheetReader {
     private static final List<String> NUMBER_COLUMNS = List.of(TOTAL_LENGTH, DETECTOR_LENGTH, VOLTAGE, RAMP,
             TEMPERATURE, MARKER_FROM, MARKER_TO, REF_MOBILITY, REF_FROM, REF_TO);
 
+    /** The run sheet as the table reader expects it. */
+    private static final TableSpec SPEC = TableSpec.of("run sheet", COLUMNS, List.of(FILE)).withSniffedDelimiter()
+            .withSpacesAsUnderscore().withUnnamedValuesPerRow().listingPresentColumns();
+
     private RunSheetReader() {
     }
 
@@ -83,8 +91,7 @@ public final class RunSheetReader {
         String name = sheet.toString();
         byte[] bytes = TextSniffer.readAllBytes(sheet, name);
         TextSniffer.requireText(bytes, name);
-        int bom = TextSniffer.utf8BomLength(bytes);
-        String text = TextSniffer.decode(bytes, bom, bytes.length);
+        String text = TextFiles.decodeLenient(bytes, TextFiles.bomLength(bytes), bytes.length);
         return new SheetParse(sheet, name, defaults == null ? RunConditions.EMPTY : defaults).run(text);
     }
 
@@ -215,10 +222,7 @@ public final class RunSheetReader {
         private final Path sheet;
         private final String name;
         private final RunConditions defaults;
-        private CSVFormat format;
         private char delimiter;
-        private List<String> columns;
-        private int columnIndexOfFile;
         private final Map<String, Long> runNames = new HashMap<>();
         private final Map<String, String> samples = new java.util.LinkedHashMap<>();
         private final Map<String, String> mixes = new java.util.LinkedHashMap<>();
@@ -230,32 +234,19 @@ public final class RunSheetReader {
         }
 
         RunSheet run(String text) throws InputException {
-            String[] lines = text.split("\r\n|\r|\n", -1);
             List<RunSpec> runs = new ArrayList<>();
             List<InputException> problems = new ArrayList<>();
-            boolean headerSeen = false;
             int rows = 0;
-            for (int i = 0; i < lines.length; i++) {
-                String line = lines[i];
-                String stripped = line.strip();
-                if (stripped.isEmpty() || stripped.startsWith("#")) {
-                    continue;
+            try (TableReader table = TableReader.open(new StringReader(text), name, SPEC)) {
+                delimiter = table.delimiter();
+                for (TableRow r = table.next(); r != null; r = table.next()) {
+                    rows++;
+                    try {
+                        runs.add(row(r));
+                    } catch (InputException e) {
+                        problems.add(e);
+                    }
                 }
-                long lineNo = i + 1L;
-                if (!headerSeen) {
-                    readHeader(line, lineNo);
-                    headerSeen = true;
-                    continue;
-                }
-                rows++;
-                try {
-                    runs.add(row(line, lineNo));
-                } catch (InputException e) {
-                    problems.add(e);
-                }
-            }
-            if (!headerSeen) {
-                throw new InputException(name, 0, null, "the run sheet is empty (no header line)");
             }
             if (rows == 0) {
                 throw new InputException(name, 0, null, "the run sheet has a header but no runs");
@@ -263,64 +254,16 @@ public final class RunSheetReader {
             return new RunSheet(runs, problems, samples, mixes);
         }
 
-        private void readHeader(String line, long lineNo) throws InputException {
-            char d = DelimitedTraceReader.detectDelimiter(line);
-            delimiter = d == 0 ? ',' : d;
-            format = CSVFormat.DEFAULT.builder()
-                    .setDelimiter(delimiter)
-                    .setTrim(true)
-                    .setIgnoreSurroundingSpaces(true)
-                    .get();
-            List<String> raw = cells(line, lineNo);
-            columns = new ArrayList<>();
-            for (String r : raw) {
-                String c = r.strip().toLowerCase(Locale.ROOT).replace(' ', '_').replace('-', '_');
-                if (!c.isEmpty() && !COLUMNS.contains(c)) {
-                    throw new InputException(name, lineNo, r, "unknown column '" + r + "'"
-                            + org.mobident.io.Suggestions.didYouMean(c, COLUMNS) + "; known columns: " + COLUMN_LIST);
-                }
-                if (!c.isEmpty() && columns.contains(c)) {
-                    throw new InputException(name, lineNo, r, "column '" + r + "' appears twice");
-                }
-                columns.add(c);
+        private RunSpec row(TableRow r) throws InputException {
+            if (r.unnamedValueProblem() != null) {
+                throw r.unnamedValueProblem();
             }
-            columnIndexOfFile = columns.indexOf(FILE);
-            if (columnIndexOfFile < 0) {
-                throw new InputException(name, lineNo, FILE, "the run sheet has no 'file' column; columns present: "
-                        + String.join(", ", raw));
-            }
-        }
-
-        private List<String> cells(String line, long lineNo) throws InputException {
-            return org.mobident.io.CsvLines.cells(line, format, name, lineNo);
-        }
-
-        private RunSpec row(String line, long lineNo) throws InputException {
-            List<String> cells = cells(line, lineNo);
-            if (cells.size() > columns.size()) {
-                boolean extra = false;
-                for (int k = columns.size(); k < cells.size(); k++) {
-                    extra |= !cells.get(k).isBlank();
-                }
-                if (extra) {
-                    String hint = delimiter == ',' ? "; a decimal comma in a comma-delimited sheet does this: use"
-                            + " decimal points, or quote the value, or separate the columns with semicolons" : "";
-                    throw new InputException(name, lineNo, null, "the row has " + cells.size()
-                            + " cells but the header has " + columns.size() + hint);
-                }
-            }
+            long lineNo = r.line();
             Map<String, String> values = new HashMap<>();
-            for (int k = 0; k < columns.size() && k < cells.size(); k++) {
-                String column = columns.get(k);
-                String v = cells.get(k).strip();
-                if (column.isEmpty()) {
-                    if (!v.isEmpty()) {
-                        throw new InputException(name, lineNo, null, "a value ('" + v
-                                + "') stands in a column without a name (cell " + (k + 1) + ")");
-                    }
-                    continue;
+            for (String column : COLUMNS) {
+                if (r.has(column)) {
+                    values.put(column, r.get(column));
                 }
-                values.put(column, v);
             }
 
             String fileText = values.getOrDefault(FILE, "");

@@ -1,11 +1,6 @@
 package org.mobident.trace.io;
 
 import java.io.IOException;
-import java.nio.ByteBuffer;
-import java.nio.CharBuffer;
-import java.nio.charset.CharacterCodingException;
-import java.nio.charset.CodingErrorAction;
-import java.nio.charset.StandardCharsets;
 import java.nio.file.AccessDeniedException;
 import java.nio.file.Files;
 import java.nio.file.NoSuchFileException;
@@ -13,7 +8,7 @@ import java.nio.file.Path;
 
 import org.mobident.InputException;
 
-/** Checks that bytes are plain 8-bit text and decodes short pieces of it. */
+/** Checks that bytes are plain 8-bit text (decoding them is {@link org.mobident.io.TextFiles}). */
 final class TextSniffer {
 
     /** How many leading bytes are inspected for NUL and control bytes. */
@@ -50,11 +45,6 @@ final class TextSniffer {
         }
     }
 
-    /** Number of bytes of a UTF-8 byte order mark at the start, 0 or 3. */
-    static int utf8BomLength(byte[] b) {
-        return b.length >= 3 && (b[0] & 0xFF) == 0xEF && (b[1] & 0xFF) == 0xBB && (b[2] & 0xFF) == 0xBF ? 3 : 0;
-    }
-
     /**
      * Throws when the bytes are UTF-16 (byte order mark, or NULs in every other byte) or binary
      * (NULs or many control bytes in the first {@value #SAMPLE_BYTES} bytes).
@@ -89,19 +79,6 @@ final class TextSniffer {
         }
         if (control > BINARY_CONTROL_SHARE * n) {
             throw new InputException(file, 0, null, "not a text file (it contains many control bytes)");
-        }
-    }
-
-    /** Decodes {@code b[from, to)} as UTF-8, or as ISO-8859-1 when it is not valid UTF-8. */
-    static String decode(byte[] b, int from, int to) {
-        try {
-            CharBuffer cb = StandardCharsets.UTF_8.newDecoder()
-                    .onMalformedInput(CodingErrorAction.REPORT)
-                    .onUnmappableCharacter(CodingErrorAction.REPORT)
-                    .decode(ByteBuffer.wrap(b, from, to - from));
-            return cb.toString();
-        } catch (CharacterCodingException e) {
-            return new String(b, from, to - from, StandardCharsets.ISO_8859_1);
         }
     }
 }

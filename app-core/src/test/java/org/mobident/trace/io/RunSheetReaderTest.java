@@ -144,7 +144,8 @@ class RunSheetReaderTest {
         assertWhere(assertThrows(InputException.class, () -> read("# nothing\n\n")), 0, null);
         InputException headerOnly = assertThrows(InputException.class, () -> read("file,voltage_kv\n"));
         assertTrue(headerOnly.problem().contains("no runs"), headerOnly.getMessage());
-        assertWhere(assertThrows(InputException.class, () -> read("file,buffer,Buffer\na,b,c\n")), 1, "Buffer");
+        // the field is the column's own name, as in every other message about it
+        assertWhere(assertThrows(InputException.class, () -> read("file,buffer,Buffer\na,b,c\n")), 1, "buffer");
         assertThrows(InputException.class, () -> RunSheetReader.read(dir.resolve("none.csv"), RunConditions.EMPTY));
         Path u16 = dir.resolve("u16.csv");
         Files.write(u16, "file\ntraces/a.csv\n".getBytes(StandardCharsets.UTF_16));
@@ -216,7 +217,7 @@ class RunSheetReaderTest {
         assertWhere(rowProblem("file,voltage_kv\ntraces/a.csv,NaN\n"), 2, "voltage_kv");
         assertWhere(rowProblem("file,voltage_kv\ntraces/a.csv,1e999\n"), 2, "voltage_kv");
         InputException many = rowProblem("file,voltage_kv\ntraces/a.csv,2,5\n");
-        assertWhere(many, 2, null);
+        assertWhere(many, 2, "column 3"); // the one table reader names the cell that stands under no column
         assertTrue(many.problem().contains("decimal comma"), many.getMessage());
         InputException quotedComma = rowProblem("file,voltage_kv\ntraces/a.csv,\"2,5\"\n");
         assertWhere(quotedComma, 2, "voltage_kv");
