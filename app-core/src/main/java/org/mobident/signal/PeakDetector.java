@@ -512,9 +512,14 @@ public final class PeakDetector {
             boolean shoulder = moreStart.size() > region.size()
                     && moreStart.size() <= SignalLimits.SHOULDER_MAX_ZONES;
             boolean overlapped = false;
+            double broad = SignalLimits.BROAD_ZONE_WIDTHS * typicalSigmaS * GaussianClusterFit.HALF_WIDTH_PER_SIGMA;
             for (int k = 0; k + 1 < region.size(); k++) {
                 double lower = Math.min(smooth[tops[k]], smooth[tops[k + 1]]);
-                overlapped |= smooth[region.get(k)[1]] > SignalLimits.CLUSTER_VALLEY_FRACTION * lower;
+                double valley = smooth[region.get(k)[1]];
+                overlapped |= valley > SignalLimits.CLUSTER_VALLEY_FRACTION * lower
+                        || valley > SignalLimits.SKEWED_CLUSTER_VALLEY_FRACTION * lower
+                        && (halfWidthS(region.get(k), tops[k]) > broad
+                            || halfWidthS(region.get(k + 1), tops[k + 1]) > broad);
             }
             overlapped &= region.size() <= SignalLimits.SHOULDER_MAX_ZONES;
             if (!shoulder && !overlapped) {
@@ -586,6 +591,20 @@ public final class PeakDetector {
                 start = end;
             }
             return out;
+        }
+
+        /** Width at half height of a segment's top on the smoothed signal, within the segment, s. */
+        private double halfWidthS(int[] segment, int top) {
+            double half = 0.5 * smooth[top];
+            int left = top;
+            while (left > segment[0] && smooth[left - 1] > half) {
+                left--;
+            }
+            int right = top;
+            while (right < segment[1] && smooth[right + 1] > half) {
+                right++;
+            }
+            return t[right] - t[left];
         }
 
         /**

@@ -274,14 +274,23 @@ final class SignalLimits {
     static final double WALK_DRIFT_DROP_RATIO = 0.9;
 
     /** Two maxima split at a valley are fitted as a cluster when the valley rises above this
-     *  fraction of the lower maximum. On a pair of Gaussians a valley at 0.4 of the lower maximum
-     *  already leans the apex of the sum about 0.02 σ towards the other zone (computed for heights
-     *  1:1, 1:3 and 1:0.7; Rs ≈ 0.9–1.0). Concentrated zones are not Gaussian: the long diffuse
-     *  flank of one (electromigration dispersion) runs under its neighbour while the valley stands
-     *  at only a fifth of the lower maximum, and a split there hands that flank to the neighbour and
-     *  moves both first moments by tenths of a second (SkewedClusterTest). Below 0.15 the flanks
-     *  carry too little of either zone to matter; a modelling choice, checked on the lab-day bench. */
-    static final double CLUSTER_VALLEY_FRACTION = 0.15;
+     *  fraction of the lower maximum. On a pair of Gaussians the apex of the sum then leans more
+     *  than about 0.02 σ towards the other zone (computed for heights 1:1, 1:3 and 1:0.7: a valley
+     *  at 0.4 of the lower maximum means Rs ≈ 0.9–1.0); below it the tops are practically
+     *  undisturbed and the valley split stands. */
+    static final double CLUSTER_VALLEY_FRACTION = 0.4;
+
+    /** The same for a pair of which one zone is broad ({@link #BROAD_ZONE_WIDTHS}): concentrated
+     *  zones are not Gaussian, and the long diffuse flank of one (electromigration dispersion) runs
+     *  under its neighbour while the valley stands at only a fifth of the lower maximum; a split
+     *  there hands that flank to the neighbour and moves both first moments by tenths of a second
+     *  (SkewedClusterTest). Below 0.15 the flanks carry too little of either zone to matter; a
+     *  modelling choice, checked on the lab-day bench. */
+    static final double SKEWED_CLUSTER_VALLEY_FRACTION = 0.15;
+
+    /** A zone wider at half height than this many typical widths counts as broad (dispersed). */
+    static final double BROAD_ZONE_WIDTHS = 1.5;
+
 
     /** Bounds of a fitted zone SD, as multiples of the typical SD (w½ / 2.3548). */
     static final double FIT_MIN_SIGMA_FACTOR = 0.1;
