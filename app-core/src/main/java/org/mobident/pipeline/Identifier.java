@@ -575,6 +575,7 @@ public final class Identifier {
                 k++;
             }
         }
+        rows = CoMigration.remarked(rows, pr -> zoneWidthInMobility(scale, pr.peak(), runTempC, libraryTempC));
         if (beyond > 0) {
             notes.add(String.format(Locale.ROOT, "%d peak(s) with a mobility beyond ±%.0f units cannot be an ion in "
                     + "water and were not matched", beyond, PhysicalBounds.MAX_ION_MOBILITY));
@@ -600,6 +601,21 @@ public final class Identifier {
         }
         return new Finished(new RunResult(run, null, scale.describe(), scale.eofMobility(), scale, rows, notes,
                 d.noiseSd(), runScale, temperatureFactor), settled);
+    }
+
+    /**
+     * The width at half height of a peak, in mobility units at the library temperature: the mobility
+     * span of its half-height interval centred on its migration time (NaN when unknown).
+     */
+    private static double zoneWidthInMobility(MobilityScale scale, Peak p, double runTempC, double libraryTempC) {
+        double half = 0.5 * p.widthHalfS();
+        double t = p.migrationTimeS();
+        if (!(half > 0) || !(t - half > 0)) {
+            return Double.NaN;
+        }
+        double early = convert(scale.mobility(t - half), runTempC, libraryTempC);
+        double late = convert(scale.mobility(t + half), runTempC, libraryTempC);
+        return Math.abs(late - early);
     }
 
     /**

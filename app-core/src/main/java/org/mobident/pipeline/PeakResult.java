@@ -16,9 +16,17 @@ import org.mobident.signal.Peak;
  * @param mobilityCorrected     the mobility compared with the library: at the library temperature and
  *                              corrected for the run's scale ({@link org.mobident.matching.RunScale#corrected});
  *                              equals mobilityAtLibraryTemp when the scale was not fitted (NaN if unknown)
+ * @param note                  a remark on this peak for the reader (e.g. two candidates that co-migrate
+ *                              at this zone's width), or null
  */
 public record PeakResult(Peak peak, PeakRole role, double mobility, double mobilitySd,
-                         double mobilityAtLibraryTemp, PeakMatch match, double mobilityCorrected) {
+                         double mobilityAtLibraryTemp, PeakMatch match, double mobilityCorrected, String note) {
+
+    /** A peak without a remark. */
+    public PeakResult(Peak peak, PeakRole role, double mobility, double mobilitySd, double mobilityAtLibraryTemp,
+                      PeakMatch match, double mobilityCorrected) {
+        this(peak, role, mobility, mobilitySd, mobilityAtLibraryTemp, match, mobilityCorrected, null);
+    }
 
     /** A peak whose run's scale was not corrected: the corrected mobility is the one at the library temperature. */
     public PeakResult(Peak peak, PeakRole role, double mobility, double mobilitySd, double mobilityAtLibraryTemp,

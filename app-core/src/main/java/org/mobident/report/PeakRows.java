@@ -131,7 +131,7 @@ final class PeakRows {
             case SN_CLASS -> Cell.text(p.signalToNoiseClass().label());
             case SCALE_FACTOR, SCALE_FACTOR_SD, SCALE_OFFSET, SCALE_OFFSET_SD ->
                     scale.get(PeakTableColumn.runValues().indexOf(column));
-            case NOTE -> Cell.text(analyte && !run.mobilityKnown() ? run.scaleNote() : null);
+            case NOTE -> Cell.text(analyte && !run.mobilityKnown() ? run.scaleNote() : pr.note());
         };
     }
 
