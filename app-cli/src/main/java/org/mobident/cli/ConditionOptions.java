@@ -43,7 +43,8 @@ public final class ConditionOptions {
     String detection;
 
     @Option(names = "--ref-mobility", paramLabel = "MOB",
-            description = "Known effective mobility (1e-9 m²/(V s), signed) of a charged marker in every run.")
+            description = "Known effective mobility (1e-9 m²/(V s), signed) of a charged marker in every run, at the"
+                    + " run's temperature (--temperature-c): every other mobility of the run is measured against it.")
     Double refMobility;
 
     @Option(names = "--ref-window", paramLabel = "FROM:TO", description = "Time window (s) holding that charged marker.")

@@ -15,8 +15,9 @@ package org.mobident.trace;
  * @param markerFromS            start of the window in which the neutral marker is expected, s
  * @param markerToS              end of that window, s
  * @param detection              direct (positive peaks) or indirect (dips)
- * @param refMarkerMobility      known effective mobility of a charged marker (1e-9 m²/(V s)),
- *                               for the two-marker mode; NaN when there is none
+ * @param refMarkerMobility      known effective mobility of a charged marker (1e-9 m²/(V s)) at the run's
+ *                               temperature (the run's other mobilities are measured against it, then
+ *                               carried to the library temperature); NaN when there is none
  * @param refMarkerFromS         start of the window where the charged marker migrates, s
  * @param refMarkerToS           end of that window, s
  */
