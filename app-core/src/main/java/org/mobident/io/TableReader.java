@@ -315,33 +315,10 @@ public final class TableReader implements AutoCloseable {
         return true;
     }
 
-    /** The delimiter the header uses most outside quotes: tab, then semicolon, then comma on ties. */
+    /** The delimiter the header uses most outside quotes (tab, then semicolon, then comma on ties); comma when none occurs. */
     static char sniff(String header) {
-        int tabs = 0;
-        int semicolons = 0;
-        int commas = 0;
-        boolean quoted = false;
-        for (int i = 0; i < header.length(); i++) {
-            char c = header.charAt(i);
-            if (c == '"') {
-                quoted = !quoted;
-            } else if (!quoted) {
-                if (c == '\t') {
-                    tabs++;
-                } else if (c == ';') {
-                    semicolons++;
-                } else if (c == ',') {
-                    commas++;
-                }
-            }
-        }
-        if (tabs == 0 && semicolons == 0) {
-            return ',';
-        }
-        if (tabs >= semicolons && tabs >= commas) {
-            return '\t';
-        }
-        return semicolons >= commas ? ';' : ',';
+        char d = TextFiles.mostFrequentDelimiter(header);
+        return d == 0 ? ',' : d;
     }
 
     private static String rootMessage(Throwable e) {

@@ -112,4 +112,33 @@ public final class TextFiles {
             return new String(b, from, to - from, StandardCharsets.ISO_8859_1);
         }
     }
+
+    /** The most frequent of tab, semicolon, comma outside quotes (ties: that order), or 0 when none occurs. */
+    public static char mostFrequentDelimiter(String header) {
+        int tabs = 0;
+        int semicolons = 0;
+        int commas = 0;
+        boolean quoted = false;
+        for (int i = 0; i < header.length(); i++) {
+            char c = header.charAt(i);
+            if (c == '"') {
+                quoted = !quoted;
+            } else if (!quoted) {
+                if (c == '\t') {
+                    tabs++;
+                } else if (c == ';') {
+                    semicolons++;
+                } else if (c == ',') {
+                    commas++;
+                }
+            }
+        }
+        if (tabs == 0 && semicolons == 0 && commas == 0) {
+            return 0;
+        }
+        if (tabs >= semicolons && tabs >= commas) {
+            return '\t';
+        }
+        return semicolons >= commas ? ';' : ',';
+    }
 }

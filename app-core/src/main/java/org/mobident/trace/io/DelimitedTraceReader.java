@@ -455,7 +455,7 @@ public final class DelimitedTraceReader {
         // ---- header ----
 
         private void readHeader(String header, long headerLine) throws InputException {
-            char d = detectDelimiter(header);
+            char d = TextFiles.mostFrequentDelimiter(header);
             if (d == 0) {
                 String only = unquote(header.trim());
                 if (!Double.isNaN(parseText(only))) {
@@ -696,35 +696,6 @@ public final class DelimitedTraceReader {
     }
 
     // ---- text helpers ----
-
-    /** The most frequent of tab, semicolon, comma outside quotes (ties: that order), or 0 when none occurs. */
-    static char detectDelimiter(String header) {
-        int tabs = 0;
-        int semicolons = 0;
-        int commas = 0;
-        boolean quoted = false;
-        for (int i = 0; i < header.length(); i++) {
-            char c = header.charAt(i);
-            if (c == '"') {
-                quoted = !quoted;
-            } else if (!quoted) {
-                if (c == '\t') {
-                    tabs++;
-                } else if (c == ';') {
-                    semicolons++;
-                } else if (c == ',') {
-                    commas++;
-                }
-            }
-        }
-        if (tabs == 0 && semicolons == 0 && commas == 0) {
-            return 0;
-        }
-        if (tabs >= semicolons && tabs >= commas) {
-            return '\t';
-        }
-        return semicolons >= commas ? ';' : ',';
-    }
 
     /** Splits at {@code d} outside quotes; each part trimmed and unquoted. */
     static List<String> splitText(String text, char d) {
