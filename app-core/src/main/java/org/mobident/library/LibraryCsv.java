@@ -7,7 +7,6 @@ import java.io.StringReader;
 import java.io.StringWriter;
 import java.io.UncheckedIOException;
 import java.io.Writer;
-import java.math.BigDecimal;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -25,6 +24,7 @@ import org.apache.commons.csv.CSVParser;
 import org.apache.commons.csv.CSVPrinter;
 import org.apache.commons.csv.CSVRecord;
 import org.mobident.InputException;
+import org.mobident.text.NumberText;
 
 /**
  * Reads and writes mobility libraries as human-editable CSV.
@@ -71,8 +71,6 @@ public final class LibraryCsv {
     private static final String RECORD_SEPARATOR = "\n";
     private static final Pattern LIST_SEPARATOR = Pattern.compile("\\s+");
     /** Magnitudes in [1e-4, 1e9) are written as plain decimals, others in exponent form. */
-    private static final double PLAIN_MIN = 1e-4;
-    private static final double PLAIN_MAX = 1e9;
 
     private static final CSVFormat READ_FORMAT = CSVFormat.DEFAULT.builder()
             .setCommentMarker(COMMENT)
@@ -179,27 +177,10 @@ public final class LibraryCsv {
      * otherwise ({@code 1.5e-7}); empty for NaN.
      */
     static String formatNumber(double v) {
-        if (Double.isNaN(v)) {
-            return "";
-        }
         if (Double.isInfinite(v)) {
             throw new IllegalArgumentException("an infinite value cannot be written to a library file");
         }
-        if (v == 0.0) {
-            return Double.doubleToRawLongBits(v) == 0L ? "0" : "-0";
-        }
-        // Double.toString gives a decimal string that parses back to exactly v (JLS / Double javadoc).
-        String repr = Double.toString(v);
-        double mag = Math.abs(v);
-        if (mag >= PLAIN_MIN && mag < PLAIN_MAX) {
-            return new BigDecimal(repr).stripTrailingZeros().toPlainString();
-        }
-        int e = repr.indexOf('E');
-        if (e < 0) {
-            return new BigDecimal(repr).stripTrailingZeros().toPlainString();
-        }
-        String mantissa = new BigDecimal(repr.substring(0, e)).stripTrailingZeros().toPlainString();
-        return mantissa + "e" + repr.substring(e + 1);
+        return NumberText.roundTrip(v, "");
     }
 
     private static String formatList(List<Double> values) {

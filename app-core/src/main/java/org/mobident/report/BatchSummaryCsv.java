@@ -9,6 +9,7 @@ import org.apache.commons.csv.CSVPrinter;
 import org.apache.commons.csv.QuoteMode;
 import org.mobident.summary.RecurringUnknowns;
 import org.mobident.summary.SampleCalls;
+import org.mobident.text.NumberText;
 
 /**
  * The batch summaries as CSV, in long form (one row per run and analyte, one row per peak of a
@@ -48,9 +49,9 @@ public final class BatchSummaryCsv {
                 cells.add(text(row.run().spec().conditions().buffer()));
                 cells.add(text(table.analytes().get(a)));
                 cells.add(c.outcome().label());
-                cells.add(num(Numbers.fixed(c.confidence(), PeakRows.PROBABILITY_DECIMALS)));
-                cells.add(num(Numbers.significant(c.correctedArea(), PeakRows.MAGNITUDE_DIGITS)));
-                cells.add(num(Numbers.fixed(c.mobility(), PeakRows.MOBILITY_DECIMALS)));
+                cells.add(NumberText.fixed(c.confidence(), PeakRows.PROBABILITY_DECIMALS, ""));
+                cells.add(NumberText.significant(c.correctedArea(), PeakRows.MAGNITUDE_DIGITS, ""));
+                cells.add(NumberText.fixed(c.mobility(), PeakRows.MOBILITY_DECIMALS, ""));
                 cells.add(c.peakNumber() > 0 ? Integer.toString(c.peakNumber()) : "");
                 p.printRecord(cells);
             }
@@ -65,12 +66,12 @@ public final class BatchSummaryCsv {
         for (RecurringUnknowns.Group g : groups) {
             for (RecurringUnknowns.Member m : g.members()) {
                 p.printRecord(g.name(), text(g.buffer()), g.runs().size(), g.runsInBuffer(),
-                        num(Numbers.fixed(g.meanMobility(), PeakRows.MOBILITY_DECIMALS)),
-                        num(Numbers.fixed(g.mobilitySd(), PeakRows.MOBILITY_DECIMALS)), text(m.run()), m.peakNumber(),
-                        num(Numbers.fixed(m.apexTimeS(), PeakRows.TIME_DECIMALS)),
-                        num(Numbers.fixed(m.mobility(), PeakRows.MOBILITY_DECIMALS)),
-                        num(Numbers.fixed(m.uncertainty(), PeakRows.MOBILITY_DECIMALS)),
-                        num(Numbers.significant(m.correctedArea(), PeakRows.MAGNITUDE_DIGITS)));
+                        NumberText.fixed(g.meanMobility(), PeakRows.MOBILITY_DECIMALS, ""),
+                        NumberText.fixed(g.mobilitySd(), PeakRows.MOBILITY_DECIMALS, ""), text(m.run()), m.peakNumber(),
+                        NumberText.fixed(m.apexTimeS(), PeakRows.TIME_DECIMALS, ""),
+                        NumberText.fixed(m.mobility(), PeakRows.MOBILITY_DECIMALS, ""),
+                        NumberText.fixed(m.uncertainty(), PeakRows.MOBILITY_DECIMALS, ""),
+                        NumberText.significant(m.correctedArea(), PeakRows.MAGNITUDE_DIGITS, ""));
             }
         }
         p.flush();
@@ -80,7 +81,4 @@ public final class BatchSummaryCsv {
         return s == null ? "" : CsvCells.inert(s);
     }
 
-    private static String num(String formatted) {
-        return formatted == null ? "" : formatted;
-    }
 }
