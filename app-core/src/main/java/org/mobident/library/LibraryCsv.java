@@ -172,9 +172,9 @@ public final class LibraryCsv {
     }
 
     /**
-     * A number in the shortest decimal form that reads back to the same double: plain notation
-     * for ordinary magnitudes ({@code -55.43}, {@code 0.001}, {@code 25}), exponent notation
-     * otherwise ({@code 1.5e-7}); empty for NaN.
+     * A number of the library file: {@link NumberText#roundTrip}, so it reads back to the same
+     * double ({@code -55.43}, {@code 0.001}, {@code 25}, {@code 1.5e-7}); empty for NaN, and an
+     * infinite value is refused.
      */
     static String formatNumber(double v) {
         if (Double.isInfinite(v)) {
