@@ -257,33 +257,43 @@ public final class AssessmentHtml {
             double x0 = MARGIN_LEFT + b.lower() * plot + 1;
             double w = (b.upper() - b.lower()) * plot - 2;
             double h = b.accuracy() * plotHeight;
-            sb.append(String.format(Locale.ROOT, "<rect x=\"%.1f\" y=\"%.1f\" width=\"%.1f\" height=\"%.1f\" "
-                    + "fill=\"#4f7cac\" fill-opacity=\"0.55\" stroke=\"#2f5a88\"><title>%s: %d, observed %s</title>"
-                    + "</rect>\n", x0, MARGIN_TOP + plotHeight - h, w, h, esc(Figures.bin(b)), b.count(),
-                    NumberText.fixed(b.accuracy(), Figures.CONFIDENCE_DECIMALS, MISSING)));
-            sb.append(String.format(Locale.ROOT, "<circle cx=\"%.1f\" cy=\"%.1f\" r=\"%.1f\" fill=\"#c0392b\"/>\n",
-                    MARGIN_LEFT + b.meanConfidence() * plot, MARGIN_TOP + (1 - b.accuracy()) * plotHeight, DOT_RADIUS));
+            sb.append("<rect x=\"").append(coordinate(x0)).append("\" y=\"")
+                    .append(coordinate(MARGIN_TOP + plotHeight - h)).append("\" width=\"").append(coordinate(w))
+                    .append("\" height=\"").append(coordinate(h))
+                    .append("\" fill=\"#4f7cac\" fill-opacity=\"0.55\" stroke=\"#2f5a88\"><title>")
+                    .append(esc(Figures.bin(b))).append(": ").append(b.count()).append(", observed ")
+                    .append(NumberText.fixed(b.accuracy(), Figures.CONFIDENCE_DECIMALS, MISSING))
+                    .append("</title></rect>\n");
+            sb.append("<circle cx=\"").append(coordinate(MARGIN_LEFT + b.meanConfidence() * plot)).append("\" cy=\"")
+                    .append(coordinate(MARGIN_TOP + (1 - b.accuracy()) * plotHeight)).append("\" r=\"")
+                    .append(coordinate(DOT_RADIUS)).append("\" fill=\"#c0392b\"/>\n");
             sb.append(text(x0 + w / 2, MARGIN_TOP + plotHeight - h - 4, "middle", Integer.toString(b.count())));
         }
         sb.append(line(MARGIN_LEFT, MARGIN_TOP + plotHeight, MARGIN_LEFT + plot, MARGIN_TOP, "#56606a", "4 3"));
         sb.append(String.format(Locale.ROOT, "<rect x=\"%d\" y=\"%d\" width=\"%d\" height=\"%d\" fill=\"none\" "
                 + "stroke=\"#56606a\"/>\n", MARGIN_LEFT, MARGIN_TOP, plot, plotHeight));
         sb.append(text(MARGIN_LEFT + plot / 2.0, DIAGRAM_SIZE - 10, "middle", "stated confidence"));
-        sb.append(String.format(Locale.ROOT, "<text x=\"14\" y=\"%.1f\" text-anchor=\"middle\" "
-                + "transform=\"rotate(-90 14 %.1f)\">observed accuracy</text>\n", MARGIN_TOP + plotHeight / 2.0,
-                MARGIN_TOP + plotHeight / 2.0));
+        String middle = coordinate(MARGIN_TOP + plotHeight / 2.0);
+        sb.append("<text x=\"14\" y=\"").append(middle).append("\" text-anchor=\"middle\" transform=\"rotate(-90 14 ")
+                .append(middle).append(")\">observed accuracy</text>\n");
         sb.append("</svg>\n");
         return sb.toString();
     }
 
     private static String line(double x1, double y1, double x2, double y2, String colour, String dash) {
-        return String.format(Locale.ROOT, "<line x1=\"%.1f\" y1=\"%.1f\" x2=\"%.1f\" y2=\"%.1f\" stroke=\"%s\"%s/>\n",
-                x1, y1, x2, y2, colour, dash == null ? "" : " stroke-dasharray=\"" + dash + "\"");
+        return "<line x1=\"" + coordinate(x1) + "\" y1=\"" + coordinate(y1) + "\" x2=\"" + coordinate(x2)
+                + "\" y2=\"" + coordinate(y2) + "\" stroke=\"" + colour + "\""
+                + (dash == null ? "" : " stroke-dasharray=\"" + dash + "\"") + "/>\n";
     }
 
     private static String text(double x, double y, String anchor, String content) {
-        return String.format(Locale.ROOT, "<text x=\"%.1f\" y=\"%.1f\" text-anchor=\"%s\">%s</text>\n", x, y, anchor,
-                esc(content));
+        return "<text x=\"" + coordinate(x) + "\" y=\"" + coordinate(y) + "\" text-anchor=\"" + anchor + "\">"
+                + esc(content) + "</text>\n";
+    }
+
+    /** A diagram coordinate, px, with one decimal. */
+    private static String coordinate(double px) {
+        return NumberText.fixed(px, 1, "0");
     }
 
     private static void mobility(StringBuilder sb, MobilityError e) {
