@@ -2,6 +2,7 @@ package org.mobident.cli;
 
 import org.mobident.InputException;
 import org.mobident.recheck.BufferSpec;
+import org.mobident.text.NumberText;
 import picocli.CommandLine.Option;
 
 /** The new buffer, and optionally the old buffer (the library's) when the library does not state it. */
@@ -71,13 +72,8 @@ public final class BufferOptions {
             return b;
         }
         return spec(String.format(java.util.Locale.ROOT, "predicted: pH %.2f, I %s mM, %s °C", ph,
-                plain(ionicStrengthMm), plain(temperatureC)), ph, ionicStrengthMm, temperatureC, "--ph");
-    }
-
-    /** A number without trailing zeros, at most three decimals. */
-    private static String plain(double v) {
-        return new java.math.BigDecimal(String.format(java.util.Locale.ROOT, "%.3f", v)).stripTrailingZeros()
-                .toPlainString();
+                NumberText.trimmed(ionicStrengthMm, 3, "-"), NumberText.trimmed(temperatureC, 3, "-")), ph,
+                ionicStrengthMm, temperatureC, "--ph");
     }
 
     /** The old buffer when given on the command line, else null (each entry's own conditions are used). */

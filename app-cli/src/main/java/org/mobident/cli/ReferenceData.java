@@ -13,6 +13,7 @@ import org.mobident.chem.SpeciesModel;
 import org.mobident.library.LibraryCsv;
 import org.mobident.recheck.BufferSpec;
 import org.mobident.recheck.BufferTransfer;
+import org.mobident.text.NumberText;
 
 /**
  * The reference data a prediction command uses: the reference library given with --reference and
@@ -66,16 +67,12 @@ final class ReferenceData {
         double sd = BufferPh.shiftSd(substance, table, b.pH(), o.phMeasuredAtC, b.temperatureC());
         out.println(String.format(Locale.ROOT, "Buffer pH: %s at pH %.2f (measured at %s °C) is at pH %.2f ± %.2f at "
                         + "%s °C (van 't Hoff, %s enthalpy of ionisation).", substance.name(), b.pH(),
-                plain(o.phMeasuredAtC), pH, sd, plain(b.temperatureC()),
+                NumberText.trimmed(o.phMeasuredAtC, 2, "-"), pH, sd, NumberText.trimmed(b.temperatureC(), 2, "-"),
                 BufferPh.tabulated(substance, table, b.pH(), o.phMeasuredAtC) ? "tabulated" : "an assumed"));
         try {
             return new BufferSpec(b.label(), pH, b.ionicStrengthMolar(), b.temperatureC());
         } catch (IllegalArgumentException e) {
             throw new InputException("command line", 0, "--ph", e.getMessage());
         }
-    }
-
-    private static String plain(double v) {
-        return new java.math.BigDecimal(String.format(Locale.ROOT, "%.2f", v)).stripTrailingZeros().toPlainString();
     }
 }

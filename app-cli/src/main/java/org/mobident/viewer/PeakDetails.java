@@ -2,7 +2,6 @@ package org.mobident.viewer;
 
 import java.util.ArrayList;
 import java.util.List;
-import java.util.Locale;
 import org.mobident.matching.Candidate;
 import org.mobident.matching.PeakMatch;
 import org.mobident.pipeline.PeakResult;
@@ -10,6 +9,7 @@ import org.mobident.pipeline.PeakRole;
 import org.mobident.report.plot.Markup;
 import org.mobident.report.plot.PeakStatus;
 import org.mobident.signal.Peak;
+import org.mobident.text.NumberText;
 
 /** The words and numbers shown for a selected peak: its measures and its candidate analytes. */
 final class PeakDetails {
@@ -45,11 +45,12 @@ final class PeakDetails {
         rows.add(row("Mobility", withSd(pr.mobility(), 2, pr.mobilitySd(), 3) + " " + MOBILITY_UNIT));
         if (Double.isFinite(pr.mobilityAtLibraryTemp())
                 && !(Math.abs(pr.mobilityAtLibraryTemp() - pr.mobility()) < SAME_MOBILITY)) {
-            rows.add(row("At library temperature", num(pr.mobilityAtLibraryTemp(), 2)));
+            rows.add(row("At library temperature", NumberText.fixed(pr.mobilityAtLibraryTemp(), 2, UNKNOWN)));
         }
         if (Double.isFinite(pr.mobilityCorrected())
                 && !(Math.abs(pr.mobilityCorrected() - pr.mobilityAtLibraryTemp()) < SAME_MOBILITY)) {
-            rows.add(row("Compared with library", num(pr.mobilityCorrected(), 2) + " (run scale corrected)"));
+            rows.add(row("Compared with library",
+                    NumberText.fixed(pr.mobilityCorrected(), 2, UNKNOWN) + " (run scale corrected)"));
         }
         if (p != null) {
             rows.add(row("Apex time", withSd(p.apexTimeS(), 2, p.apexTimeSdS(), 3) + " s"));
@@ -64,15 +65,16 @@ final class PeakDetails {
         if (p == null) {
             return rows;
         }
-        rows.add(row("Start – end", num(p.startTimeS(), 2) + " – " + num(p.endTimeS(), 2) + " s"));
+        rows.add(row("Start – end",
+                NumberText.fixed(p.startTimeS(), 2, UNKNOWN) + " – " + NumberText.fixed(p.endTimeS(), 2, UNKNOWN) + " s"));
         rows.add(row("Direction", p.dip() ? "dip (below the baseline)" : "rise (above the baseline)"));
-        rows.add(row("Height", num(p.height(), 4)));
-        rows.add(row("Area", num(p.area(), 4)));
-        rows.add(row("Area / time", num(p.correctedArea(), 5)));
-        rows.add(row("Width at half height", num(p.widthHalfS(), 3) + " s"));
-        rows.add(row("Plates", num(p.plates(), 0)));
-        rows.add(row("Resolution", num(p.resolution(), 2)));
-        rows.add(row("Signal / noise", num(p.signalToNoise(), 1)));
+        rows.add(row("Height", NumberText.fixed(p.height(), 4, UNKNOWN)));
+        rows.add(row("Area", NumberText.fixed(p.area(), 4, UNKNOWN)));
+        rows.add(row("Area / time", NumberText.fixed(p.correctedArea(), 5, UNKNOWN)));
+        rows.add(row("Width at half height", NumberText.fixed(p.widthHalfS(), 3, UNKNOWN) + " s"));
+        rows.add(row("Plates", NumberText.fixed(p.plates(), 0, UNKNOWN)));
+        rows.add(row("Resolution", NumberText.fixed(p.resolution(), 2, UNKNOWN)));
+        rows.add(row("Signal / noise", NumberText.fixed(p.signalToNoise(), 1, UNKNOWN)));
         return rows;
     }
 
@@ -90,8 +92,9 @@ final class PeakDetails {
             return rows;
         }
         for (Candidate c : match.candidates()) {
-            rows.add(new String[] {c.name(), num(c.libraryMobility(), 2), signed(c.residual(), 2),
-                signed(c.z(), 2), percent(c.probability())});
+            rows.add(new String[] {c.name(), NumberText.fixed(c.libraryMobility(), 2, UNKNOWN),
+                NumberText.signed(c.residual(), 2, UNKNOWN),
+                NumberText.signed(c.z(), 2, UNKNOWN), percent(c.probability())});
         }
         return rows;
     }
@@ -139,35 +142,22 @@ final class PeakDetails {
         sb.append("</table>");
     }
 
-    static String num(double v, int digits) {
-        if (!Double.isFinite(v)) {
-            return UNKNOWN;
-        }
-        String s = String.format(Locale.ROOT, "%." + digits + "f", v);
-        return s.matches("-0(\\.0*)?") ? s.substring(1) : s;
-    }
-
-    static String signed(double v, int digits) {
-        String s = num(v, digits);
-        return Double.isFinite(v) && !s.startsWith("-") && !s.matches("0(\\.0*)?") ? "+" + s : s;
-    }
-
     static String percent(double p) {
         if (!Double.isFinite(p)) {
             return UNKNOWN;
         }
-        double pct = 100 * p;
-        if (pct > 0 && pct < 1) {
+        if (p > 0 && 100 * p < 1) {
             return "<1 %";
         }
-        return String.format(Locale.ROOT, "%d %%", Math.round(pct));
+        return NumberText.percent(p, 0, UNKNOWN);
     }
 
     private static String withSd(double v, int digits, double sd, int sdDigits) {
         if (!Double.isFinite(v)) {
             return UNKNOWN;
         }
-        return Double.isFinite(sd) ? num(v, digits) + " ± " + num(sd, sdDigits) : num(v, digits);
+        String value = NumberText.fixed(v, digits, UNKNOWN);
+        return Double.isFinite(sd) ? value + " ± " + NumberText.fixed(sd, sdDigits, UNKNOWN) : value;
     }
 
     private static String[] row(String label, String value) {

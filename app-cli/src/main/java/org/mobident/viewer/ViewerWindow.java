@@ -30,6 +30,7 @@ import javax.swing.table.AbstractTableModel;
 import org.mobident.pipeline.IdentifySettings;
 import org.mobident.pipeline.PeakResult;
 import org.mobident.report.plot.Axis;
+import org.mobident.text.NumberText;
 import org.mobident.trace.RunSpec;
 
 /**
@@ -413,7 +414,8 @@ final class ViewerWindow implements PlotPanel.Gestures {
 
         @Override
         protected void setValue(Object value) {
-            setText(value instanceof Double ? PeakDetails.num((Double) value, digits) : PeakDetails.UNKNOWN);
+            setText(value instanceof Double ? NumberText.fixed((Double) value, digits, PeakDetails.UNKNOWN)
+                    : PeakDetails.UNKNOWN);
         }
     }
 

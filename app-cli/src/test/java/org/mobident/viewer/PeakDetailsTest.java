@@ -64,11 +64,7 @@ class PeakDetailsTest {
     }
 
     @Test
-    void numbersAreFormattedWithoutMinusZero() {
-        assertEquals("0.00", PeakDetails.num(-0.001, 2));
-        assertEquals("+0.05", PeakDetails.signed(0.05, 2));
-        assertEquals("0.00", PeakDetails.signed(0.0, 2));
-        assertEquals("-1.50", PeakDetails.signed(-1.5, 2));
+    void probabilitiesAreWholePercentages() {
         assertEquals("100 %", PeakDetails.percent(1.0));
         assertEquals(PeakDetails.UNKNOWN, PeakDetails.percent(Double.NaN));
     }

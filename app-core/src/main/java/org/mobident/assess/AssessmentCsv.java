@@ -7,6 +7,7 @@ import org.apache.commons.csv.CSVFormat;
 import org.apache.commons.csv.CSVPrinter;
 import org.apache.commons.csv.QuoteMode;
 import org.mobident.report.CsvCells;
+import org.mobident.text.NumberText;
 
 /**
  * The scores as CSV files.
@@ -134,14 +135,14 @@ public final class AssessmentCsv {
                     CsvCells.inert(v.run()),
                     p == null ? "" : Integer.toString(p.number()),
                     p == null ? "" : CsvCells.inert(p.role()),
-                    p == null ? "" : Figures.fixed(p.timeS(), Figures.TABLE_TIME_DECIMALS, ""),
+                    p == null ? "" : NumberText.fixed(p.timeS(), Figures.TABLE_TIME_DECIMALS, ""),
                     p == null ? "" : p.status().label(),
                     p == null ? "" : CsvCells.inert(p.assigned()),
-                    p == null ? "" : Figures.fixed(p.confidence(), Figures.CONFIDENCE_DECIMALS, ""),
+                    p == null ? "" : NumberText.fixed(p.confidence(), Figures.CONFIDENCE_DECIMALS, ""),
                     k == null || k.line() <= 0 ? "" : Long.toString(k.line()),
                     k == null ? "" : k.kind().label(),
                     k == null ? "" : CsvCells.inert(k.name()),
-                    k == null ? "" : Figures.fixed(k.timeS(), Figures.TABLE_TIME_DECIMALS, ""),
+                    k == null ? "" : NumberText.fixed(k.timeS(), Figures.TABLE_TIME_DECIMALS, ""),
                     v.how() == null ? "" : v.how().label(),
                     v.verdict().label());
         }
@@ -166,15 +167,15 @@ public final class AssessmentCsv {
 
         void fraction(String section, String subject, String measure, double value) throws IOException {
             printer.printRecord(section, CsvCells.inert(subject), measure,
-                    Figures.fixed(value, Figures.FRACTION_DECIMALS, ""));
+                    NumberText.fixed(value, Figures.FRACTION_DECIMALS, ""));
         }
 
         void mobilityError(String section, String subject, String prefix, MobilityError e) throws IOException {
             count(section, subject, prefix + "n", e.count());
             printer.printRecord(section, CsvCells.inert(subject), prefix + "mae",
-                    Figures.fixed(e.meanAbsoluteError(), Figures.MOBILITY_DECIMALS, ""));
+                    NumberText.fixed(e.meanAbsoluteError(), Figures.MOBILITY_DECIMALS, ""));
             printer.printRecord(section, CsvCells.inert(subject), prefix + "bias",
-                    Figures.fixed(e.bias(), Figures.MOBILITY_DECIMALS, ""));
+                    NumberText.fixed(e.bias(), Figures.MOBILITY_DECIMALS, ""));
         }
 
         void calibration(String subject, Calibration c) throws IOException {

@@ -4,6 +4,7 @@ import java.util.List;
 import java.util.Locale;
 import org.mobident.report.html.HtmlSection;
 import org.mobident.report.plot.Markup;
+import org.mobident.text.NumberText;
 
 /**
  * The scores as HTML: a {@link #section} that the peak-identification report includes
@@ -130,7 +131,7 @@ public final class AssessmentHtml {
         ratioRow(sb, "Precision of all calls (identified or ambiguous)", id.precisionWithAmbiguous(), "right");
         ratioRow(sb, "Recall of the analytes present", id.recall(), "identified by name");
         ratioRow(sb, "Recall counting ambiguous calls", id.recallWithAmbiguous(), "called by name");
-        ratioRow(sb, "Recall at a height of at least " + Figures.fixed(HeightStratum.CLEAR_HEIGHT_SD, 0, MISSING)
+        ratioRow(sb, "Recall at a height of at least " + NumberText.fixed(HeightStratum.CLEAR_HEIGHT_SD, 0, MISSING)
                 + " noise SD", id.recallClear(), "identified by name");
         sb.append("</tbody>\n</table>\n");
         sb.append("<p>Wrong names: ").append(id.wrongNames()).append(". Called but absent: ")
@@ -181,8 +182,8 @@ public final class AssessmentHtml {
             num(sb, Integer.toString(s.missed()));
             num(sb, Figures.percent(s.precision(), MISSING));
             num(sb, Figures.percent(s.recall(), MISSING));
-            num(sb, Figures.fixed(s.mobilityError().meanAbsoluteError(), Figures.MOBILITY_ERROR_DECIMALS, MISSING));
-            num(sb, Figures.signed(s.mobilityError().bias(), Figures.MOBILITY_ERROR_DECIMALS, MISSING));
+            num(sb, NumberText.fixed(s.mobilityError().meanAbsoluteError(), Figures.MOBILITY_ERROR_DECIMALS, MISSING));
+            num(sb, NumberText.signed(s.mobilityError().bias(), Figures.MOBILITY_ERROR_DECIMALS, MISSING));
             sb.append("</tr>\n");
         }
         sb.append("</tbody>\n</table>\n<p>Precision: right calls of the name out of all its calls (identified or "
@@ -203,8 +204,8 @@ public final class AssessmentHtml {
             for (ReliabilityBin b : c.bins()) {
                 sb.append("<tr><td>").append(esc(Figures.bin(b))).append("</td>");
                 num(sb, Integer.toString(b.count()));
-                num(sb, Figures.fixed(b.meanConfidence(), Figures.CONFIDENCE_DECIMALS, MISSING));
-                num(sb, Figures.fixed(b.accuracy(), Figures.CONFIDENCE_DECIMALS, MISSING));
+                num(sb, NumberText.fixed(b.meanConfidence(), Figures.CONFIDENCE_DECIMALS, MISSING));
+                num(sb, NumberText.fixed(b.accuracy(), Figures.CONFIDENCE_DECIMALS, MISSING));
                 sb.append("</tr>\n");
             }
             sb.append("</tbody>\n</table>\n");
@@ -222,10 +223,10 @@ public final class AssessmentHtml {
             return "none with a verdict";
         }
         return c.count() + " " + (c.count() == 1 ? one : many) + ", mean confidence "
-                + Figures.fixed(c.meanConfidence(), Figures.CONFIDENCE_DECIMALS, MISSING) + ", observed accuracy "
-                + Figures.fixed(c.accuracy(), Figures.CONFIDENCE_DECIMALS, MISSING) + ", ECE "
-                + Figures.fixed(c.ece(), Figures.CONFIDENCE_DECIMALS, MISSING) + ", Brier score "
-                + Figures.fixed(c.brier(), Figures.BRIER_DECIMALS, MISSING);
+                + NumberText.fixed(c.meanConfidence(), Figures.CONFIDENCE_DECIMALS, MISSING) + ", observed accuracy "
+                + NumberText.fixed(c.accuracy(), Figures.CONFIDENCE_DECIMALS, MISSING) + ", ECE "
+                + NumberText.fixed(c.ece(), Figures.CONFIDENCE_DECIMALS, MISSING) + ", Brier score "
+                + NumberText.fixed(c.brier(), Figures.BRIER_DECIMALS, MISSING);
     }
 
     /** The reliability diagram of a calibration as inline SVG. */
@@ -243,7 +244,7 @@ public final class AssessmentHtml {
             double v = i * TICK_STEP;
             double x = MARGIN_LEFT + v * plot;
             double y = MARGIN_TOP + (1 - v) * plotHeight;
-            String label = Figures.fixed(v, 1, "");
+            String label = NumberText.fixed(v, 1, "");
             sb.append(line(x, MARGIN_TOP, x, MARGIN_TOP + plotHeight, "#e6e9ed", null));
             sb.append(line(MARGIN_LEFT, y, MARGIN_LEFT + plot, y, "#e6e9ed", null));
             sb.append(text(x, MARGIN_TOP + plotHeight + 14, "middle", label));
@@ -256,33 +257,43 @@ public final class AssessmentHtml {
             double x0 = MARGIN_LEFT + b.lower() * plot + 1;
             double w = (b.upper() - b.lower()) * plot - 2;
             double h = b.accuracy() * plotHeight;
-            sb.append(String.format(Locale.ROOT, "<rect x=\"%.1f\" y=\"%.1f\" width=\"%.1f\" height=\"%.1f\" "
-                    + "fill=\"#4f7cac\" fill-opacity=\"0.55\" stroke=\"#2f5a88\"><title>%s: %d, observed %s</title>"
-                    + "</rect>\n", x0, MARGIN_TOP + plotHeight - h, w, h, esc(Figures.bin(b)), b.count(),
-                    Figures.fixed(b.accuracy(), Figures.CONFIDENCE_DECIMALS, MISSING)));
-            sb.append(String.format(Locale.ROOT, "<circle cx=\"%.1f\" cy=\"%.1f\" r=\"%.1f\" fill=\"#c0392b\"/>\n",
-                    MARGIN_LEFT + b.meanConfidence() * plot, MARGIN_TOP + (1 - b.accuracy()) * plotHeight, DOT_RADIUS));
+            sb.append("<rect x=\"").append(coordinate(x0)).append("\" y=\"")
+                    .append(coordinate(MARGIN_TOP + plotHeight - h)).append("\" width=\"").append(coordinate(w))
+                    .append("\" height=\"").append(coordinate(h))
+                    .append("\" fill=\"#4f7cac\" fill-opacity=\"0.55\" stroke=\"#2f5a88\"><title>")
+                    .append(esc(Figures.bin(b))).append(": ").append(b.count()).append(", observed ")
+                    .append(NumberText.fixed(b.accuracy(), Figures.CONFIDENCE_DECIMALS, MISSING))
+                    .append("</title></rect>\n");
+            sb.append("<circle cx=\"").append(coordinate(MARGIN_LEFT + b.meanConfidence() * plot)).append("\" cy=\"")
+                    .append(coordinate(MARGIN_TOP + (1 - b.accuracy()) * plotHeight)).append("\" r=\"")
+                    .append(coordinate(DOT_RADIUS)).append("\" fill=\"#c0392b\"/>\n");
             sb.append(text(x0 + w / 2, MARGIN_TOP + plotHeight - h - 4, "middle", Integer.toString(b.count())));
         }
         sb.append(line(MARGIN_LEFT, MARGIN_TOP + plotHeight, MARGIN_LEFT + plot, MARGIN_TOP, "#56606a", "4 3"));
         sb.append(String.format(Locale.ROOT, "<rect x=\"%d\" y=\"%d\" width=\"%d\" height=\"%d\" fill=\"none\" "
                 + "stroke=\"#56606a\"/>\n", MARGIN_LEFT, MARGIN_TOP, plot, plotHeight));
         sb.append(text(MARGIN_LEFT + plot / 2.0, DIAGRAM_SIZE - 10, "middle", "stated confidence"));
-        sb.append(String.format(Locale.ROOT, "<text x=\"14\" y=\"%.1f\" text-anchor=\"middle\" "
-                + "transform=\"rotate(-90 14 %.1f)\">observed accuracy</text>\n", MARGIN_TOP + plotHeight / 2.0,
-                MARGIN_TOP + plotHeight / 2.0));
+        String middle = coordinate(MARGIN_TOP + plotHeight / 2.0);
+        sb.append("<text x=\"14\" y=\"").append(middle).append("\" text-anchor=\"middle\" transform=\"rotate(-90 14 ")
+                .append(middle).append(")\">observed accuracy</text>\n");
         sb.append("</svg>\n");
         return sb.toString();
     }
 
     private static String line(double x1, double y1, double x2, double y2, String colour, String dash) {
-        return String.format(Locale.ROOT, "<line x1=\"%.1f\" y1=\"%.1f\" x2=\"%.1f\" y2=\"%.1f\" stroke=\"%s\"%s/>\n",
-                x1, y1, x2, y2, colour, dash == null ? "" : " stroke-dasharray=\"" + dash + "\"");
+        return "<line x1=\"" + coordinate(x1) + "\" y1=\"" + coordinate(y1) + "\" x2=\"" + coordinate(x2)
+                + "\" y2=\"" + coordinate(y2) + "\" stroke=\"" + colour + "\""
+                + (dash == null ? "" : " stroke-dasharray=\"" + dash + "\"") + "/>\n";
     }
 
     private static String text(double x, double y, String anchor, String content) {
-        return String.format(Locale.ROOT, "<text x=\"%.1f\" y=\"%.1f\" text-anchor=\"%s\">%s</text>\n", x, y, anchor,
-                esc(content));
+        return "<text x=\"" + coordinate(x) + "\" y=\"" + coordinate(y) + "\" text-anchor=\"" + anchor + "\">"
+                + esc(content) + "</text>\n";
+    }
+
+    /** A diagram coordinate, px, with one decimal. */
+    private static String coordinate(double px) {
+        return NumberText.fixed(px, 1, "0");
     }
 
     private static void mobility(StringBuilder sb, MobilityError e) {
@@ -294,8 +305,8 @@ public final class AssessmentHtml {
             return;
         }
         sb.append(e.count()).append(e.count() == 1 ? " peak" : " peaks").append(", mean absolute error ")
-                .append(Figures.fixed(e.meanAbsoluteError(), Figures.MOBILITY_ERROR_DECIMALS, MISSING))
-                .append(", bias ").append(Figures.signed(e.bias(), Figures.MOBILITY_ERROR_DECIMALS, MISSING))
+                .append(NumberText.fixed(e.meanAbsoluteError(), Figures.MOBILITY_ERROR_DECIMALS, MISSING))
+                .append(", bias ").append(NumberText.signed(e.bias(), Figures.MOBILITY_ERROR_DECIMALS, MISSING))
                 .append(" × 10⁻⁹ m² V⁻¹ s⁻¹.</p>\n");
     }
 

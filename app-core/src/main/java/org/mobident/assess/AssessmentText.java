@@ -3,6 +3,7 @@ package org.mobident.assess;
 import java.io.PrintWriter;
 import java.util.ArrayList;
 import java.util.List;
+import org.mobident.text.NumberText;
 
 /**
  * The scores as a readable terminal summary, in plain ASCII: identification, results by zone height,
@@ -65,8 +66,8 @@ public final class AssessmentText {
     /** "precision >= 0.95: met (measured 1.0000)". */
     static String limitLine(AcceptanceLimits.Check c) {
         String value = Double.isNaN(c.value()) ? "cannot be measured (nothing to count)"
-                : "measured " + Figures.fixed(c.value(), Figures.FRACTION_DECIMALS, NONE);
-        return c.name() + (c.atLeast() ? " >= " : " <= ") + Figures.plain(c.limit()) + ": "
+                : "measured " + NumberText.fixed(c.value(), Figures.FRACTION_DECIMALS, NONE);
+        return c.name() + (c.atLeast() ? " >= " : " <= ") + NumberText.plain(c.limit(), "") + ": "
                 + (c.met() ? "met" : "NOT MET") + " (" + value + ")";
     }
 
@@ -78,7 +79,7 @@ public final class AssessmentText {
         rows.add(ratioRow("precision of all calls", id.precisionWithAmbiguous(), "right"));
         rows.add(ratioRow("recall of the analytes present", id.recall(), "identified by name"));
         rows.add(ratioRow("recall counting ambiguous calls", id.recallWithAmbiguous(), "called by name"));
-        rows.add(ratioRow("recall at height >= " + Figures.fixed(HeightStratum.CLEAR_HEIGHT_SD, 0, NONE)
+        rows.add(ratioRow("recall at height >= " + NumberText.fixed(HeightStratum.CLEAR_HEIGHT_SD, 0, NONE)
                 + " noise SD", id.recallClear(), "identified by name"));
         table(new String[] {"", "", ""}, new boolean[] {false, true, false}, rows, out, false);
         out.println(INDENT + "wrong names " + id.wrongNames() + ", called but absent " + id.calledAbsent()
@@ -114,8 +115,8 @@ public final class AssessmentText {
             rows.add(new String[] {s.name(), Integer.toString(s.present()), Integer.toString(s.identifiedRight()),
                 Integer.toString(s.ambiguousRight()), Integer.toString(s.wrongCalls()), Integer.toString(s.missed()),
                 Figures.percent(s.precision(), NONE), Figures.percent(s.recall(), NONE),
-                Figures.fixed(s.mobilityError().meanAbsoluteError(), Figures.MOBILITY_ERROR_DECIMALS, NONE),
-                Figures.signed(s.mobilityError().bias(), Figures.MOBILITY_ERROR_DECIMALS, NONE)});
+                NumberText.fixed(s.mobilityError().meanAbsoluteError(), Figures.MOBILITY_ERROR_DECIMALS, NONE),
+                NumberText.signed(s.mobilityError().bias(), Figures.MOBILITY_ERROR_DECIMALS, NONE)});
         }
         table(new String[] {"analyte", "present", "identified", "ambiguous", "wrong", "missed", "precision", "recall",
             "MAE", "bias"}, new boolean[] {false, true, true, true, true, true, true, true, true, true}, rows, out,
@@ -131,8 +132,8 @@ public final class AssessmentText {
         for (ReliabilityBin b : c.bins()) {
             if (b.count() > 0) {
                 rows.add(new String[] {Figures.bin(b), Integer.toString(b.count()),
-                    Figures.fixed(b.meanConfidence(), Figures.CONFIDENCE_DECIMALS, NONE),
-                    Figures.fixed(b.accuracy(), Figures.CONFIDENCE_DECIMALS, NONE)});
+                    NumberText.fixed(b.meanConfidence(), Figures.CONFIDENCE_DECIMALS, NONE),
+                    NumberText.fixed(b.accuracy(), Figures.CONFIDENCE_DECIMALS, NONE)});
             }
         }
         if (!rows.isEmpty()) {
@@ -150,10 +151,10 @@ public final class AssessmentText {
             return "no " + many + " with a verdict";
         }
         return c.count() + " " + (c.count() == 1 ? one : many) + ": mean confidence "
-                + Figures.fixed(c.meanConfidence(), Figures.CONFIDENCE_DECIMALS, NONE) + ", observed "
-                + Figures.fixed(c.accuracy(), Figures.CONFIDENCE_DECIMALS, NONE) + "; ECE "
-                + Figures.fixed(c.ece(), Figures.CONFIDENCE_DECIMALS, NONE) + ", Brier score "
-                + Figures.fixed(c.brier(), Figures.BRIER_DECIMALS, NONE);
+                + NumberText.fixed(c.meanConfidence(), Figures.CONFIDENCE_DECIMALS, NONE) + ", observed "
+                + NumberText.fixed(c.accuracy(), Figures.CONFIDENCE_DECIMALS, NONE) + "; ECE "
+                + NumberText.fixed(c.ece(), Figures.CONFIDENCE_DECIMALS, NONE) + ", Brier score "
+                + NumberText.fixed(c.brier(), Figures.BRIER_DECIMALS, NONE);
     }
 
     private static void mobility(MobilityError e, PrintWriter out) {
@@ -165,8 +166,8 @@ public final class AssessmentText {
             return;
         }
         out.println(INDENT + e.count() + (e.count() == 1 ? " peak" : " peaks") + ": mean absolute error "
-                + Figures.fixed(e.meanAbsoluteError(), Figures.MOBILITY_ERROR_DECIMALS, NONE) + ", bias "
-                + Figures.signed(e.bias(), Figures.MOBILITY_ERROR_DECIMALS, NONE));
+                + NumberText.fixed(e.meanAbsoluteError(), Figures.MOBILITY_ERROR_DECIMALS, NONE) + ", bias "
+                + NumberText.signed(e.bias(), Figures.MOBILITY_ERROR_DECIMALS, NONE));
     }
 
     private static void detection(Assessment a, PrintWriter out) {

@@ -5,7 +5,6 @@ import java.io.Reader;
 import java.io.StringWriter;
 import java.io.UncheckedIOException;
 import java.io.Writer;
-import java.math.BigDecimal;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -24,6 +23,7 @@ import org.mobident.InputException;
 import org.mobident.io.TableReader;
 import org.mobident.io.TableRow;
 import org.mobident.io.TableSpec;
+import org.mobident.text.NumberText;
 
 /**
  * Reads and writes mobility libraries as human-editable CSV.
@@ -68,10 +68,6 @@ public final class LibraryCsv {
     private static final Pattern DECIMAL = Pattern.compile("[+-]?(\\d+\\.?\\d*|\\.\\d+)([eE][+-]?\\d+)?");
     private static final String RECORD_SEPARATOR = "\n";
     private static final Pattern LIST_SEPARATOR = Pattern.compile("\\s+");
-    /** Magnitudes in [1e-4, 1e9) are written as plain decimals, others in exponent form. */
-    private static final double PLAIN_MIN = 1e-4;
-    private static final double PLAIN_MAX = 1e9;
-
     /** The library as the table reader expects it. */
     private static final TableSpec SPEC = TableSpec.of("library file",
             Arrays.stream(LibraryColumn.values()).map(LibraryColumn::header).toList(),
@@ -166,32 +162,15 @@ public final class LibraryCsv {
     }
 
     /**
-     * A number in the shortest decimal form that reads back to the same double: plain notation
-     * for ordinary magnitudes ({@code -55.43}, {@code 0.001}, {@code 25}), exponent notation
-     * otherwise ({@code 1.5e-7}); empty for NaN.
+     * A number of the library file: {@link NumberText#roundTrip}, so it reads back to the same
+     * double ({@code -55.43}, {@code 0.001}, {@code 25}, {@code 1.5e-7}); empty for NaN, and an
+     * infinite value is refused.
      */
     static String formatNumber(double v) {
-        if (Double.isNaN(v)) {
-            return "";
-        }
         if (Double.isInfinite(v)) {
             throw new IllegalArgumentException("an infinite value cannot be written to a library file");
         }
-        if (v == 0.0) {
-            return Double.doubleToRawLongBits(v) == 0L ? "0" : "-0";
-        }
-        // Double.toString gives a decimal string that parses back to exactly v (JLS / Double javadoc).
-        String repr = Double.toString(v);
-        double mag = Math.abs(v);
-        if (mag >= PLAIN_MIN && mag < PLAIN_MAX) {
-            return new BigDecimal(repr).stripTrailingZeros().toPlainString();
-        }
-        int e = repr.indexOf('E');
-        if (e < 0) {
-            return new BigDecimal(repr).stripTrailingZeros().toPlainString();
-        }
-        String mantissa = new BigDecimal(repr.substring(0, e)).stripTrailingZeros().toPlainString();
-        return mantissa + "e" + repr.substring(e + 1);
+        return NumberText.roundTrip(v, "");
     }
 
     private static String formatList(List<Double> values) {

@@ -11,6 +11,7 @@ import org.apache.commons.csv.CSVFormat;
 import org.apache.commons.csv.CSVPrinter;
 import org.apache.commons.csv.QuoteMode;
 import org.mobident.report.CsvCells;
+import org.mobident.text.NumberText;
 
 /**
  * A recheck as three CSV tables: assignments (one row per earlier assignment), pairs (analyte
@@ -109,12 +110,8 @@ public final class RecheckReportCsv {
         return CsvCells.inert(s);
     }
 
-    /** Fixed decimals, empty for non-finite, no "-0.000". */
-    static String number(double v) {
-        if (!Double.isFinite(v)) {
-            return "";
-        }
-        String s = String.format(Locale.ROOT, "%." + DECIMALS + "f", v);
-        return s.matches("-0\\.0*") ? s.substring(1) : s;
+    /** A number cell: {@value #DECIMALS} decimals, empty when not known. */
+    private static String number(double v) {
+        return NumberText.fixed(v, DECIMALS, "");
     }
 }

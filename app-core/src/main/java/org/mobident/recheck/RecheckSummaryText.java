@@ -7,6 +7,7 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 import java.util.Set;
+import org.mobident.text.NumberText;
 
 /**
  * A readable summary of a recheck for a terminal, per analyte rather than per peak: the buffer
@@ -22,6 +23,10 @@ public final class RecheckSummaryText {
 
     /** Most pairs listed per kind (merge, separate); the rest are counted. */
     public static final int MAX_PAIR_LINES = 6;
+    /** Decimals of mobilities, 1e-9 m²/(V s). */
+    private static final int DECIMALS = 2;
+    /** A value that is not known. */
+    private static final String NONE = "-";
     /** Most notes listed; the rest are counted. */
     public static final int MAX_NOTE_LINES = 5;
     /** Widest analyte column; longer names are cut with "…". */
@@ -142,11 +147,13 @@ public final class RecheckSummaryText {
         return name.length() <= width ? name : name.substring(0, width - 1) + "…";
     }
 
+    /** A mobility (difference) with two decimals, "-" when not known. */
     private static String num(double v) {
-        return Double.isFinite(v) ? String.format(Locale.ROOT, "%.2f", v) : "-";
+        return NumberText.fixed(v, DECIMALS, NONE);
     }
 
+    /** As {@link #num}, with a plus sign when not zero. */
     private static String signed(double v) {
-        return Double.isFinite(v) ? String.format(Locale.ROOT, "%+.2f", v) : "-";
+        return NumberText.signed(v, DECIMALS, NONE);
     }
 }

@@ -80,6 +80,7 @@ public final class BatchSummaryCsv {
         return s == null ? "" : CsvCells.inert(s);
     }
 
+
     private static String num(String formatted) {
         return formatted == null ? "" : formatted;
     }

@@ -3,6 +3,7 @@ package org.mobident.report;
 import java.io.PrintWriter;
 import java.util.List;
 import org.mobident.summary.RecurringUnknowns;
+import org.mobident.text.NumberText;
 
 /** The terminal block that names the recurring unknowns of a batch, in plain ASCII. */
 public final class RecurringUnknownsText {
@@ -24,8 +25,8 @@ public final class RecurringUnknownsText {
                 + RecurringUnknowns.DEFAULT_MIN_RUNS + " or more runs of a buffer. +/- is the SD over the runs.");
         for (RecurringUnknowns.Group g : groups) {
             StringBuilder sb = new StringBuilder("  ").append(g.name()).append(" at ")
-                    .append(Numbers.fixed(g.meanMobility(), MOBILITY_DECIMALS));
-            String sd = Numbers.fixed(g.mobilitySd(), MOBILITY_DECIMALS);
+                    .append(NumberText.fixed(g.meanMobility(), MOBILITY_DECIMALS, null));
+            String sd = NumberText.fixed(g.mobilitySd(), MOBILITY_DECIMALS, null);
             if (sd != null) {
                 sb.append(" +/- ").append(sd);
             }

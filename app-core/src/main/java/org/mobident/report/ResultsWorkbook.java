@@ -17,6 +17,7 @@ import org.mobident.pipeline.RunResult;
 import org.mobident.summary.AnalyteStats;
 import org.mobident.summary.RecurringUnknowns;
 import org.mobident.summary.SampleCalls;
+import org.mobident.text.NumberText;
 import org.mobident.trace.RunConditions;
 
 /**
@@ -349,7 +350,9 @@ public final class ResultsWorkbook {
 
     private static String joined(List<Double> values) {
         return values.isEmpty() ? null
-                : values.stream().map(v -> Numbers.significant(v, Numbers.LIBRARY_DIGITS)).collect(Collectors.joining(" "));
+                : values.stream()
+                        .map(v -> NumberText.significant(v, Numbers.LIBRARY_DIGITS, null))
+                        .collect(Collectors.joining(" "));
     }
 
     private static void headerRow(Worksheet ws, String[] headers) {

@@ -11,6 +11,7 @@ import org.mobident.pipeline.PeakRole;
 import org.mobident.pipeline.RunResult;
 import org.mobident.summary.RecurringUnknowns;
 import org.mobident.summary.SampleCalls;
+import org.mobident.text.NumberText;
 
 /**
  * A readable terminal summary of processed runs, in plain ASCII.
@@ -40,7 +41,6 @@ public final class RunSummaryText {
     private static final int MOBILITY_DECIMALS = 2;
     private static final int SD_DECIMALS = 3;
     private static final int PERCENT_DECIMALS = 0;
-    private static final double PERCENT = 100.0;
 
     private RunSummaryText() {
     }
@@ -152,7 +152,8 @@ public final class RunSummaryText {
                 for (int a = 0; a < samples.analytes().size(); a++) {
                     SampleCalls.Call c = row.calls().get(a);
                     if (c.outcome().called()) {
-                        found.add(samples.analytes().get(a) + " " + percent(c.confidence())
+                        found.add(samples.analytes().get(a) + " "
+                                + NumberText.percent(c.confidence(), PERCENT_DECIMALS, NONE)
                                 + (c.outcome() == SampleCalls.Outcome.AMBIGUOUS ? " ?" : ""));
                     }
                 }
@@ -169,7 +170,7 @@ public final class RunSummaryText {
         }
         sb.append(": ").append(oneLine(run.scaleNote()));
         if (!run.scaleNote().contains("EOF")) {
-            String eof = Numbers.fixed(run.eofMobility(), MOBILITY_DECIMALS);
+            String eof = NumberText.fixed(run.eofMobility(), MOBILITY_DECIMALS, null);
             sb.append("; EOF mobility ").append(eof == null ? "unknown" : eof);
         }
         return sb.toString();
@@ -184,30 +185,27 @@ public final class RunSummaryText {
         } else {
             double compared = Double.isFinite(pr.mobilityCorrected()) ? pr.mobilityCorrected() : pr.mobility();
             double sdCompared = pr.mobilitySd() * (pr.mobility() != 0 ? Math.abs(compared / pr.mobility()) : 1.0);
-            String sd = Numbers.fixed(sdCompared, SD_DECIMALS);
-            mobility = Numbers.fixed(compared, MOBILITY_DECIMALS) + " +/- " + (sd == null ? "?" : sd);
+            String sd = NumberText.fixed(sdCompared, SD_DECIMALS, null);
+            mobility = NumberText.fixed(compared, MOBILITY_DECIMALS, null) + " +/- " + (sd == null ? "?" : sd);
         }
         boolean assigned = known && m.assigned() != null;
         // an unassigned peak's confidence is that it is none of the library's analytes, shown as in the HTML report
-        String confidence = assigned ? percent(m.confidence()) : known ? percent(m.confidence()) + " none" : NONE;
+        String percent = NumberText.percent(m.confidence(), PERCENT_DECIMALS, NONE);
+        String confidence = assigned ? percent : known ? percent + " none" : NONE;
         String status = !known ? "no mobility"
                 : m.status() == null ? MatchStatus.UNASSIGNED.label() : m.status().label();
         if (m.status() == MatchStatus.AMBIGUOUS && m.runnerUp() != null) {
-            status += " (or " + m.runnerUp() + " " + percent(m.runnerUpProbability()) + ")";
+            status += " (or " + m.runnerUp() + " " + NumberText.percent(m.runnerUpProbability(), PERCENT_DECIMALS, NONE)
+                    + ")";
         }
         return new String[] {
             Integer.toString(number),
-            Numbers.fixed(pr.peak().apexTimeS(), TIME_DECIMALS),
+            NumberText.fixed(pr.peak().apexTimeS(), TIME_DECIMALS, null),
             mobility,
             assigned ? m.assigned() : NONE,
             confidence,
             status
         };
-    }
-
-    private static String percent(double p) {
-        String s = Numbers.fixed(p * PERCENT, PERCENT_DECIMALS);
-        return s == null ? NONE : s + " %";
     }
 
     private static void printTable(List<String[]> rows, PrintWriter out) {

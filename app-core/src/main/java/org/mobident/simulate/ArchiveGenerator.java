@@ -10,6 +10,7 @@ import java.util.SplittableRandom;
 import org.mobident.io.SafeFiles;
 import org.mobident.library.Library;
 import org.mobident.library.LibraryEntry;
+import org.mobident.text.NumberText;
 import org.mobident.trace.Detection;
 import org.mobident.trace.RunConditions;
 import org.mobident.trace.Trace;
@@ -89,15 +90,12 @@ public final class ArchiveGenerator {
             Trace t = TraceSimulator.simulate(name, spec);
             TraceSimulator.writeCsv(t, dir.resolve(name + ".csv"), overwrite);
             sheet.append(String.format(Locale.ROOT, "%s.csv,%s,%s,%s,0,25,%s,%.1f,%.1f,indirect%n", name,
-                    fmt(TOTAL_LENGTH_CM), fmt(DETECTOR_LENGTH_CM), fmt(VOLTAGE_KV), buffer, markerS - 30, markerS + 30));
+                    NumberText.trimmed(TOTAL_LENGTH_CM, 1, ""), NumberText.trimmed(DETECTOR_LENGTH_CM, 1, ""),
+                    NumberText.trimmed(VOLTAGE_KV, 1, ""), buffer, markerS - 30, markerS + 30));
         }
         Path runSheet = dir.resolve("runs.csv");
         String text = sheet.toString();
         SafeFiles.write(runSheet, overwrite, w -> w.write(text));
         return runSheet;
-    }
-
-    private static String fmt(double v) {
-        return Long.toString((long) v);
     }
 }

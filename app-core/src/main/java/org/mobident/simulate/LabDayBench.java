@@ -6,8 +6,8 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
-import java.util.Locale;
 import org.mobident.io.SafeFiles;
+import org.mobident.text.NumberText;
 
 /**
  * Writes a lab-day bench: standards and sample runs of the built-in invented methods with the
@@ -146,15 +146,15 @@ public final class LabDayBench {
         for (LabDayRun r : runs) {
             var c = r.spec().conditions();
             sb.append(r.fileName()).append(',');
-            plain(sb, c.totalLengthCm(), 1).append(',');
-            plain(sb, c.detectorLengthCm(), 1).append(',');
-            plain(sb, c.voltageKv(), 1).append(',');
-            plain(sb, c.rampS(), 1).append(',');
-            plain(sb, c.temperatureC(), 2).append(',');
+            sb.append(NumberText.trimmed(c.totalLengthCm(), 1, "")).append(',');
+            sb.append(NumberText.trimmed(c.detectorLengthCm(), 1, "")).append(',');
+            sb.append(NumberText.trimmed(c.voltageKv(), 1, "")).append(',');
+            sb.append(NumberText.trimmed(c.rampS(), 1, "")).append(',');
+            sb.append(NumberText.trimmed(c.temperatureC(), 2, "")).append(',');
             sb.append(c.buffer()).append(',');
             if (c.hasMarkerWindow()) {
-                plain(sb, c.markerFromS(), 1).append(',');
-                plain(sb, c.markerToS(), 1);
+                sb.append(NumberText.trimmed(c.markerFromS(), 1, "")).append(',');
+                sb.append(NumberText.trimmed(c.markerToS(), 1, ""));
             } else {
                 sb.append(',');
             }
@@ -189,9 +189,9 @@ public final class LabDayBench {
             for (TruthRow t : r.truth()) {
                 sb.append(t.run()).append(',').append(t.kind().label()).append(',')
                         .append(t.analyte() == null ? "" : t.analyte()).append(',')
-                        .append(fixed(t.timeS(), 3)).append(',')
-                        .append(Double.isNaN(t.mobility()) ? "" : fixed(t.mobility(), 2)).append(',')
-                        .append(Double.isNaN(t.heightSd()) ? "" : fixed(t.heightSd(), 1)).append('\n');
+                        .append(NumberText.fixed(t.timeS(), 3, "")).append(',')
+                        .append(NumberText.fixed(t.mobility(), 2, "")).append(',')
+                        .append(NumberText.fixed(t.heightSd(), 1, "")).append('\n');
             }
         }
         return sb.toString();
@@ -208,12 +208,12 @@ public final class LabDayBench {
             SimulationSpec s = r.spec();
             sb.append(r.name()).append(',').append(r.isStandard() ? "standards" : "samples").append(',')
                     .append(r.method().buffer()).append(',')
-                    .append(fixed(r.actualTemperatureC(), 2)).append(',')
-                    .append(fixed(r.eofMobilityAt25C(), 2)).append(',')
-                    .append(fixed(s.eofMobility(), 3)).append(',')
-                    .append(String.format(Locale.ROOT, "%.5f", s.noiseSd())).append(',')
-                    .append(fixed(s.noiseCorrelation(), 2)).append(',');
-            plain(sb, s.samplingHz(), 1).append(',')
+                    .append(NumberText.fixed(r.actualTemperatureC(), 2, "")).append(',')
+                    .append(NumberText.fixed(r.eofMobilityAt25C(), 2, "")).append(',')
+                    .append(NumberText.fixed(s.eofMobility(), 3, "")).append(',')
+                    .append(NumberText.fixed(s.noiseSd(), 5, "")).append(',')
+                    .append(NumberText.fixed(s.noiseCorrelation(), 2, "")).append(',');
+            sb.append(NumberText.trimmed(s.samplingHz(), 1, "")).append(',')
                     .append(LabDayPlanner.FILE_STYLE_CODES.get(LabDayPlanner.FILE_STYLES.indexOf(r.style())))
                     .append(',')
                     .append(r.weakMarker() ? "yes" : "no").append(',')
@@ -221,15 +221,5 @@ public final class LabDayBench {
                     .append(r.hasMarkerWindow() ? "yes" : "no").append('\n');
         }
         return sb.toString();
-    }
-
-    static String fixed(double v, int decimals) {
-        String s = String.format(Locale.ROOT, "%." + decimals + "f", v);
-        return s.matches("-0\\.?0*") ? s.substring(1) : s;
-    }
-
-    private static StringBuilder plain(StringBuilder sb, double v, int decimals) {
-        TraceSimulator.appendPlain(sb, v, decimals, '.');
-        return sb;
     }
 }

@@ -4,6 +4,7 @@ import java.nio.file.Path;
 import java.util.List;
 import java.util.Locale;
 import java.util.stream.Collectors;
+import org.mobident.text.NumberText;
 
 /** The README.txt of a lab-day bench: what it holds, its troubles, its counts, how to use it. */
 final class LabDayReadme {
@@ -58,7 +59,8 @@ final class LabDayReadme {
         for (LabDayMethod m : plan.methods()) {
             sb.append(String.format(Locale.ROOT, "  %s: %s%n    Lt %s cm, Ld %s cm, %s kV, nominal EOF %s, "
                             + "background co-ion %s, %d standards runs, %d sample runs%n",
-                    m.buffer(), m.description(), num(m.totalLengthCm()), num(m.detectorLengthCm()),
+                    m.buffer(), m.description(), NumberText.trimmed(m.totalLengthCm(), 1, ""),
+                    NumberText.trimmed(m.detectorLengthCm(), 1, ""),
                     signed(m.voltageKv()), signed(m.nominalEofMobility()), signed(m.coIonMobility()),
                     plan.standards(m).size(), plan.samples(m).size()));
             sb.append("    ").append(m.panel().stream().map(a -> a.name() + " " + signed(a.mobility()))
@@ -135,14 +137,10 @@ final class LabDayReadme {
         return sb.toString();
     }
 
-    private static String num(double v) {
-        StringBuilder sb = new StringBuilder();
-        TraceSimulator.appendPlain(sb, v, 1, '.');
-        return sb.toString();
-    }
-
+    /** One decimal at most, with a plus sign when positive ("+45.2", "-20", "0"). */
     private static String signed(double v) {
-        return (v > 0 ? "+" : "") + num(v);
+        String s = NumberText.trimmed(v, 1, "");
+        return s.startsWith("-") || s.equals("0") ? s : "+" + s;
     }
 
     private static String wrap(String text) {

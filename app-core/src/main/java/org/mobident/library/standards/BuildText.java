@@ -5,9 +5,12 @@ import java.util.List;
 import java.util.Locale;
 import org.mobident.library.Library;
 import org.mobident.library.LibraryEntry;
+import org.mobident.text.NumberText;
 
 /** Readable terminal output for built and checked libraries. */
 public final class BuildText {
+    /** Decimals of mobility SDs and windows, 1e-9 m²/(V s). */
+    private static final int DECIMALS = 3;
 
     private BuildText() {
     }
@@ -69,9 +72,11 @@ public final class BuildText {
             boolean own = Double.isFinite(e.tolerance());
             fixed |= own;
             out.println(String.format(Locale.ROOT, "%-18s %9.3f %7s %3s %6s %8s %6.1f  %s",
-                    e.name(), e.mobility(), num(e.mobilitySd()), e.n() > 0 ? Integer.toString(e.n()) : "-",
+                    e.name(), e.mobility(), NumberText.fixed(e.mobilitySd(), DECIMALS, "-"),
+                    e.n() > 0 ? Integer.toString(e.n()) : "-",
                     e.charge() != 0 ? String.format(Locale.ROOT, "%+d", e.charge()) : "-",
-                    num(windows[j]) + (own ? "=" : " "), e.temperatureOrDefaultC(), e.source() == null ? "" : e.source()));
+                    NumberText.fixed(windows[j], DECIMALS, "-") + (own ? "=" : " "), e.temperatureOrDefaultC(),
+                    e.source() == null ? "" : e.source()));
         }
         org.mobident.matching.SpreadModel spread = org.mobident.matching.SpreadModel.of(library, match);
         out.println("window: the half-width identification applies to a peak measured without uncertainty; a peak's"
@@ -101,9 +106,5 @@ public final class BuildText {
         for (BuildWarning w : warnings) {
             out.println("  - " + w.message());
         }
-    }
-
-    private static String num(double v) {
-        return Double.isFinite(v) ? String.format(Locale.ROOT, "%.3f", v) : "-";
     }
 }

@@ -1,7 +1,6 @@
 package org.mobident.library.standards;
 
 import java.io.IOException;
-import java.math.BigDecimal;
 import java.nio.file.NoSuchFileException;
 import java.time.Instant;
 import java.util.ArrayList;
@@ -21,6 +20,7 @@ import org.mobident.matching.MatchSettings;
 import org.mobident.pipeline.PeakResult;
 import org.mobident.pipeline.PeakRole;
 import org.mobident.pipeline.RunResult;
+import org.mobident.text.NumberText;
 import org.mobident.trace.RunConditions;
 
 /**
@@ -39,6 +39,7 @@ import org.mobident.trace.RunConditions;
  * <p>The build never fails on questionable data; it reports {@link BuildWarning}s instead.
  */
 public final class LibraryBuilder {
+    private static final double PERCENT = 100.0;
 
     /** Label of {@link Library#sourceFile()} for a built library, followed by the standards sheet. */
     public static final String SOURCE_LABEL = "built from standards ";
@@ -281,8 +282,8 @@ public final class LibraryBuilder {
                     + String.join(", ", comparedAsStated) + " were compared as stated (limiting, infinite-dilution"
                     + " mobilities in a reference such as ions-25C.csv), not predicted for the standards' buffer,"
                     + " because " + notPredictedWhy + "; effective mobilities in a buffer are several units"
-                    + " smaller, so only clear pairings were named (" + LibraryBuilder.plain(
-                    settings.referenceWindow() / 2.0) + " units of clearance). Give the buffer's pH and ionic"
+                    + " smaller, so only clear pairings were named (" + NumberText.plain(
+                    settings.referenceWindow() / 2.0, "-") + " units of clearance). Give the buffer's pH and ionic"
                     + " strength, or approx_mobility or order in the standards sheet, to name the rest."));
         }
 
@@ -526,7 +527,7 @@ public final class LibraryBuilder {
                         String.format(Locale.ROOT, "%s: the value %.3f of run %s is an outlier by the Grubbs test"
                                         + " (G = %.3f > %.3f, %s, alpha %s, n = %d); it was %s the statistics.",
                                 p.name, m.mobility(), m.run(), g.g(), g.gCritical(), alternative(),
-                                plain(settings.outlierAlpha()), all.length,
+                                NumberText.plain(settings.outlierAlpha(), "-"), all.length,
                                 settings.excludeOutliers() ? "left out of" : "kept in")));
             }
             List<Double> kept = new ArrayList<>();
@@ -558,7 +559,7 @@ public final class LibraryBuilder {
             if (rsd > settings.rsdLimitPercent()) {
                 warnings.add(new BuildWarning(BuildWarning.Kind.HIGH_RSD, mixes, p.name, null,
                         String.format(Locale.ROOT, "%s: replicate RSD %.2f %% is above the limit of %s %%.", p.name,
-                                rsd, plain(settings.rsdLimitPercent()))));
+                                rsd, NumberText.plain(settings.rsdLimitPercent(), "-"))));
             }
             // the sheet's charge number, or 0 (unknown): a sign alone is no charge number
             int charge = p.chargeNumber;
@@ -654,7 +655,8 @@ public final class LibraryBuilder {
                                        Function<RunConditions, Double> get, String unit) {
             List<Double> d = distinct(cs, get);
             if (d.size() > 1) {
-                out.add(what + " (" + String.join("; ", d.stream().map(x -> plain(x) + unit).toList()) + ")");
+                out.add(what + " (" + String.join("; ", d.stream().map(x -> NumberText.plain(x, "-") + unit).toList())
+                        + ")");
             }
         }
 
@@ -683,7 +685,8 @@ public final class LibraryBuilder {
                     + stamp.builtAt());
             notes.add("Mobility in 1e-9 m^2/(V s), signed (cations +, anions -); mobility_sd is the SD between"
                     + " replicate runs; " + (settings.writesTolerance() ? "fixed windows written as tolerance = max("
-                    + plain(settings.toleranceSdMultiple()) + " x SD, " + plain(settings.toleranceFloor()) + ")"
+                    + NumberText.plain(settings.toleranceSdMultiple(), "-") + " x SD, "
+                    + NumberText.plain(settings.toleranceFloor(), "-") + ")"
                     : "no fixed windows: identification applies its prediction interval (see 'mobident library check')"));
             notes.add("Standards sheet: " + sheet.sourceFile());
             List<RunConditions> cs = used.stream().map(r -> r.spec().conditions()).toList();
@@ -700,12 +703,13 @@ public final class LibraryBuilder {
                     + "; detector length: " + condition(cs, RunConditions::detectorLengthCm, " cm")
                     + "; voltage: " + condition(cs, RunConditions::voltageKv, " kV"));
             notes.add("Replicate outliers: Grubbs test (ASTM E178), " + alternative() + ", alpha "
-                    + plain(settings.outlierAlpha()) + "; outliers are reported and "
+                    + NumberText.plain(settings.outlierAlpha(), "-") + "; outliers are reported and "
                     + (settings.excludeOutliers() ? "left out of the statistics" : "kept in the statistics"));
             notes.add("Peaks below " + percent(settings.minRelativeHeight()) + " of their run's largest were set"
                     + " aside; replicate peaks were grouped by optimal one-to-one alignment of each run to the"
-                    + " group centres (join within max(" + plain(settings.groupingSdMultiple()) + " x peak SD, "
-                    + plain(settings.groupingFloor()) + "))");
+                    + " group centres (join within max(" + NumberText.plain(settings.groupingSdMultiple(), "-")
+                    + " x peak SD, "
+                    + NumberText.plain(settings.groupingFloor(), "-") + "))");
             for (StandardsMix m : sheet.mixes()) {
                 List<RunResult> rs = runsByMix.get(m.name());
                 if (!rs.isEmpty()) {
@@ -740,9 +744,9 @@ public final class LibraryBuilder {
                 return "not given";
             }
             if (d.size() == 1) {
-                return plain(d.get(0)) + unit;
+                return NumberText.plain(d.get(0), "-") + unit;
             }
-            return "mixed (" + String.join("; ", d.stream().map(x -> plain(x) + unit).toList()) + ")";
+            return "mixed (" + String.join("; ", d.stream().map(x -> NumberText.plain(x, "-") + unit).toList()) + ")";
         }
 
         private String alternative() {
@@ -766,12 +770,8 @@ public final class LibraryBuilder {
         return v;
     }
 
-    /** A number in its shortest plain decimal form (25, 0.05, -30.5). */
-    static String plain(double v) {
-        return new BigDecimal(Double.toString(v)).stripTrailingZeros().toPlainString();
-    }
-
-    static String percent(double fraction) {
-        return plain(new BigDecimal(Double.toString(fraction)).movePointRight(2).doubleValue()) + " %";
+    /** A fraction as a percentage as short as it was given ("5 %", "2.5 %"). */
+    private static String percent(double fraction) {
+        return NumberText.plain(PERCENT * fraction, "-") + " %";
     }
 }

@@ -9,6 +9,7 @@ import org.mobident.library.LibraryEntry;
 import org.mobident.matching.MatchSettings;
 import org.mobident.matching.MatchWindow;
 import org.mobident.mobility.PhysicalBounds;
+import org.mobident.text.NumberText;
 
 /**
  * Checks an existing library for what an analyst should know before trusting it: impossible
@@ -74,14 +75,15 @@ public final class LibraryCheck {
         boolean tiny = e.charge() != 0 && m > 0 && m < PhysicalBounds.MIN_CHARGED_MOBILITY;
         if (m > MAX_PLAUSIBLE_MOBILITY || tiny) {
             return String.format(Locale.ROOT, "%s: mobility %s is %s; %s", e.name(), plain(e.mobility()),
-                    tiny ? "far slower than any ion" : "beyond ±" + LibraryBuilder.plain(MAX_PLAUSIBLE_MOBILITY)
+                    tiny ? "far slower than any ion" : "beyond ±" + NumberText.plain(MAX_PLAUSIBLE_MOBILITY, "-")
                             + ", faster than any common ion but H+ (about 362) and OH- (about 205)",
                     PhysicalBounds.unitHint(e.mobility()));
         }
         for (double mu : e.limitingMobilities()) {
             if (Math.abs(mu) > MAX_PLAUSIBLE_MOBILITY) {
                 return String.format(Locale.ROOT, "%s: limiting mobility %s is beyond ±%s, faster than any common "
-                                + "ion but H+ and OH-; %s", e.name(), plain(mu), LibraryBuilder.plain(MAX_PLAUSIBLE_MOBILITY),
+                                + "ion but H+ and OH-; %s", e.name(), plain(mu),
+                        NumberText.plain(MAX_PLAUSIBLE_MOBILITY, "-"),
                         PhysicalBounds.unitHint(mu));
             }
         }
@@ -115,7 +117,7 @@ public final class LibraryCheck {
     }
 
     private static String plain(double v) {
-        return Math.abs(v) >= 1e-3 && Math.abs(v) < 1e6 ? String.format(Locale.ROOT, "%.3f", v)
-                : String.format(Locale.ROOT, "%.3g", v);
+        return Math.abs(v) >= 1e-3 && Math.abs(v) < 1e6 ? NumberText.fixed(v, 3, "NaN")
+                : NumberText.general(v, 3, Double.toString(v));
     }
 }

@@ -11,6 +11,7 @@ import java.util.regex.Pattern;
 import org.mobident.InputException;
 import org.mobident.library.Library;
 import org.mobident.library.LibraryEntry;
+import org.mobident.text.NumberText;
 
 /**
  * Updates an existing library with a fresh build from standards.
@@ -137,7 +138,7 @@ public final class LibraryMerger {
                         String.format(Locale.ROOT, "%s: the fresh mean %.3f (n = %d) differs from the existing %.3f"
                                         + " (n = %d) by %.3f, more than %s times their combined standard uncertainty"
                                         + " %.3f; have the conditions changed?", f.name(), f.mobility(), f.n(),
-                                e.mobility(), e.n(), delta, LibraryBuilder.plain(settings.mergeCoverageFactor()), u)));
+                                e.mobility(), e.n(), delta, NumberText.plain(settings.mergeCoverageFactor(), "-"), u)));
             }
             merged.put(key, pool(e, f, all, settings));
             pooled.add(f.name());
@@ -246,7 +247,7 @@ public final class LibraryMerger {
     }
 
     private static String temperatureText(LibraryEntry e) {
-        return Double.isNaN(e.temperatureC()) ? "unstated" : LibraryBuilder.plain(e.temperatureC());
+        return Double.isNaN(e.temperatureC()) ? "unstated" : NumberText.plain(e.temperatureC(), "-");
     }
 
     private static LibraryEntry pool(LibraryEntry e, LibraryEntry f, ReplicateStatistics all, BuildSettings settings) {

@@ -4,6 +4,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 import org.mobident.library.LibraryEntry;
+import org.mobident.text.NumberText;
 
 /**
  * Finds analytes that lie close together in mobility, in two degrees:
@@ -55,8 +56,8 @@ final class WindowOverlaps {
                             null, String.format(Locale.ROOT, "%s (%.3f) and %s (%.3f) cannot be told apart by"
                                             + " mobility alone: %s, less than %.3f (the larger of %s combined SDs"
                                             + " and %s unit).", a.name(), a.mobility(), b.name(), b.mobility(), apart,
-                                    limit, LibraryBuilder.plain(INDISTINGUISHABLE_SD_MULTIPLE),
-                                    LibraryBuilder.plain(INDISTINGUISHABLE_FLOOR))));
+                                    limit, NumberText.plain(INDISTINGUISHABLE_SD_MULTIPLE, "-"),
+                                    NumberText.plain(INDISTINGUISHABLE_FLOOR, "-"))));
                     continue;
                 }
                 double wa = windows[i];

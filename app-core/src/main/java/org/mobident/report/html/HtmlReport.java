@@ -21,6 +21,7 @@ import org.mobident.report.plot.PeakStatus;
 import org.mobident.report.plot.PlotModel;
 import org.mobident.report.plot.SvgPlot;
 import org.mobident.signal.Peak;
+import org.mobident.text.NumberText;
 import org.mobident.trace.RunConditions;
 import org.mobident.trace.Trace;
 
@@ -43,6 +44,8 @@ public final class HtmlReport {
 
     /** Shown where a number is unknown. */
     static final String MISSING = "–";
+    /** Significant digits of the baseline noise, a value of any size. */
+    private static final int NOISE_DIGITS = 3;
 
     /** Size of the overlay plot, px. */
     static final int OVERLAY_WIDTH = 960;
@@ -233,7 +236,7 @@ public final class HtmlReport {
             sb.append("<td>").append(esc(sampleFile(r))).append("</td>");
             sb.append("<td>").append(esc(buffer(r))).append("</td>");
             sb.append("<td>").append(esc(r.scaleNote())).append("</td>");
-            sb.append("<td class=\"num\">").append(fixed(r.eofMobility(), 2)).append("</td>");
+            sb.append("<td class=\"num\">").append(NumberText.fixed(r.eofMobility(), 2, MISSING)).append("</td>");
             for (int c : counts) {
                 sb.append("<td class=\"num\">").append(r.failed() ? MISSING : Integer.toString(c)).append("</td>");
             }
@@ -306,8 +309,9 @@ public final class HtmlReport {
         for (RecurringUnknowns.Group g : groups) {
             sb.append("<tr><td>").append(esc(g.name())).append("</td><td>")
                     .append(esc(g.buffer() == null ? MISSING : g.buffer())).append("</td><td class=\"num\">")
-                    .append(fixed(g.meanMobility(), 2)).append("</td><td class=\"num\">")
-                    .append(fixed(g.mobilitySd(), 2)).append("</td><td class=\"num\">").append(g.runs().size())
+                    .append(NumberText.fixed(g.meanMobility(), 2, MISSING)).append("</td><td class=\"num\">")
+                    .append(NumberText.fixed(g.mobilitySd(), 2, MISSING)).append("</td><td class=\"num\">")
+                    .append(g.runs().size())
                     .append(" of ").append(g.runsInBuffer()).append("</td><td>")
                     .append(esc(String.join(", ", g.runs()))).append("</td></tr>\n");
         }
@@ -393,9 +397,9 @@ public final class HtmlReport {
         fact(sb, "Declared in", esc(origin(r)));
         fact(sb, "Buffer", esc(buffer(r)));
         fact(sb, "How mobilities were set", esc(r.scaleNote()));
-        fact(sb, "EOF mobility", fixed(r.eofMobility(), 2) + " × 10⁻⁹ m² V⁻¹ s⁻¹");
+        fact(sb, "EOF mobility", NumberText.fixed(r.eofMobility(), 2, MISSING) + " × 10⁻⁹ m² V⁻¹ s⁻¹");
         fact(sb, "Run scale correction", esc(scaleText(r)));
-        fact(sb, "Baseline noise (SD)", sig(r.noiseSd()));
+        fact(sb, "Baseline noise (SD)", NumberText.general(r.noiseSd(), NOISE_DIGITS, MISSING));
         sb.append("</dl>\n");
         if (r.failed()) {
             sb.append("<p class=\"error\">This run failed: ").append(esc(r.error().getMessage())).append("</p>\n");
@@ -461,13 +465,13 @@ public final class HtmlReport {
             PeakStatus status = PeakStatus.of(pr);
             boolean marker = status == PeakStatus.MARKER;
             sb.append("<tr><td class=\"num\">").append(n).append("</td>");
-            sb.append("<td class=\"num\">").append(fixed(p.apexTimeS(), 2)).append("</td>");
+            sb.append("<td class=\"num\">").append(NumberText.fixed(p.apexTimeS(), 2, MISSING)).append("</td>");
             // the value compared with the library: at its temperature, corrected for the run's scale
             double compared = Double.isFinite(pr.mobilityCorrected()) ? pr.mobilityCorrected() : pr.mobility();
-            sb.append("<td class=\"num\">").append(fixed(compared, 2));
+            sb.append("<td class=\"num\">").append(NumberText.fixed(compared, 2, MISSING));
             if (Double.isFinite(pr.mobilitySd())) {
                 double scale = pr.mobility() != 0 && Double.isFinite(compared) ? Math.abs(compared / pr.mobility()) : 1.0;
-                sb.append(" ± ").append(fixed(pr.mobilitySd() * scale, 3));
+                sb.append(" ± ").append(NumberText.fixed(pr.mobilitySd() * scale, 3, MISSING));
             }
             sb.append("</td>");
             sb.append("<td>").append(marker || m.assigned() == null ? MISSING : esc(m.assigned())).append("</td>");
@@ -490,9 +494,10 @@ public final class HtmlReport {
                 sb.append(MISSING);
             }
             sb.append("</td>");
-            sb.append("<td class=\"num\">").append(fixed(p.signalToNoise(), 1)).append("</td>");
-            sb.append("<td class=\"num\">").append(fixed(p.plates(), 0)).append("</td>");
-            sb.append("<td class=\"num\">").append(fixed(p.resolution(), 2)).append("</td></tr>\n");
+            sb.append("<td class=\"num\">").append(NumberText.fixed(p.signalToNoise(), 1, MISSING)).append("</td>");
+            sb.append("<td class=\"num\">").append(NumberText.fixed(p.plates(), 0, MISSING)).append("</td>");
+            sb.append("<td class=\"num\">").append(NumberText.fixed(p.resolution(), 2, MISSING))
+                    .append("</td></tr>\n");
         }
         sb.append("</tbody>\n</table>\n");
     }
@@ -530,22 +535,7 @@ public final class HtmlReport {
         return Markup.escape(text);
     }
 
-    static String fixed(double v, int digits) {
-        if (!Double.isFinite(v)) {
-            return MISSING;
-        }
-        String s = String.format(Locale.ROOT, "%." + digits + "f", v);
-        return s.matches("-0(\\.0+)?") ? s.substring(1) : s;
-    }
-
-    /** Three significant figures, for values of any size (noise). */
-    static String sig(double v) {
-        if (!Double.isFinite(v)) {
-            return MISSING;
-        }
-        return String.format(Locale.ROOT, "%.3g", v);
-    }
-
+    /** A confidence as a whole percentage ("97%"), with "&lt;1%" for a small one that is not zero. */
     static String percent(double p) {
         if (!Double.isFinite(p)) {
             return MISSING;
@@ -553,6 +543,6 @@ public final class HtmlReport {
         if (p > 0 && p < LESS_THAN_ONE_PERCENT) {
             return "&lt;1%"; // inserted into the page as markup
         }
-        return Math.round(100 * p) + "%";
+        return NumberText.fixed(100 * p, 0, MISSING) + "%";
     }
 }

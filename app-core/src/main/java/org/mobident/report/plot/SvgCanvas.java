@@ -1,7 +1,14 @@
 package org.mobident.report.plot;
 
+import org.mobident.text.NumberText;
+
 /** Writes the drawing operations as SVG elements; numbers with one decimal, text escaped. */
 final class SvgCanvas implements Canvas {
+    /** Decimals of coordinates and sizes, px: a tenth of a pixel is below what any screen shows. */
+    private static final int COORDINATE_DECIMALS = 1;
+    /** Decimals of opacities (0 to 1). */
+    private static final int OPACITY_DECIMALS = 2;
+
     private final StringBuilder out;
     private int depth = 1;
 
@@ -27,7 +34,7 @@ final class SvgCanvas implements Canvas {
                 .append("\" width=\"").append(num(w)).append("\" height=\"").append(num(h))
                 .append("\" fill=\"").append(fill).append('"');
         if (opacity < 1) {
-            out.append(" fill-opacity=\"").append(num2(opacity)).append('"');
+            out.append(" fill-opacity=\"").append(NumberText.trimmed(opacity, OPACITY_DECIMALS, "0")).append('"');
         }
         out.append("/>\n");
     }
@@ -102,38 +109,8 @@ final class SvgCanvas implements Canvas {
         return out;
     }
 
-    /** A coordinate with one decimal, without locale, trailing ".0" or "-0". */
+    /** A coordinate: at most one decimal, without locale, trailing ".0" or "-0"; "0" when not finite. */
     static String num(double v) {
-        return fixed(v, 10);
-    }
-
-    private static String num2(double v) {
-        return fixed(v, 100);
-    }
-
-    private static String fixed(double v, long scale) {
-        if (!Double.isFinite(v)) {
-            return "0";
-        }
-        long t = Math.round(v * scale);
-        if (t == 0) {
-            return "0";
-        }
-        StringBuilder sb = new StringBuilder();
-        if (t < 0) {
-            sb.append('-');
-            t = -t;
-        }
-        sb.append(t / scale);
-        long frac = t % scale;
-        if (frac != 0) {
-            String f = Long.toString(frac + scale).substring(1);
-            int end = f.length();
-            while (end > 0 && f.charAt(end - 1) == '0') {
-                end--;
-            }
-            sb.append('.').append(f, 0, end);
-        }
-        return sb.toString();
+        return NumberText.trimmed(v, COORDINATE_DECIMALS, "0");
     }
 }

@@ -1,10 +1,10 @@
 package org.mobident.report.prediction;
 
 import java.io.PrintWriter;
-import java.math.BigDecimal;
 import java.util.Locale;
 import org.mobident.recheck.PhScan;
 import org.mobident.recheck.SeparationRule;
+import org.mobident.text.NumberText;
 
 /** The mobility-against-pH scan for a person: the table, then the pH ranges where two analytes co-migrate. */
 public final class PhScanText {
@@ -17,6 +17,8 @@ public final class PhScanText {
 
     /** Widest analyte column of the terminal table; longer names are cut. */
     private static final int SCAN_COLUMN_WIDTH = 10;
+    /** Most decimals of the ionic strength, temperature and pH step in the heading. */
+    private static final int PLAIN_DECIMALS = 3;
 
     private PhScanText() {
     }
@@ -28,10 +30,12 @@ public final class PhScanText {
     public static void writeTable(PhScan.Result r, double ionicStrengthMm, double temperatureC, PrintWriter o) {
         int n = r.pH().size();
         int every = Math.max(1, (int) Math.ceil((n - 1) / (double) (MAX_SCAN_ROWS - 1)));
+        String step = every > 1
+                ? NumberText.trimmed(r.pH().get(every) - r.pH().get(0), PLAIN_DECIMALS, PredictionText.NONE) : "";
         o.println(String.format(Locale.ROOT, "Predicted effective mobility against pH, 1e-9 m^2/(V s), at I = %s mmol/L "
-                        + "and %s °C%s:", plainNumber(ionicStrengthMm), plainNumber(temperatureC),
-                every > 1 ? " (one row per " + plainNumber(r.pH().get(every) - r.pH().get(0))
-                        + " pH; --out writes every step)" : ""));
+                        + "and %s °C%s:", NumberText.trimmed(ionicStrengthMm, PLAIN_DECIMALS, PredictionText.NONE),
+                NumberText.trimmed(temperatureC, PLAIN_DECIMALS, PredictionText.NONE),
+                every > 1 ? " (one row per " + step + " pH; --out writes every step)" : ""));
         StringBuilder header = new StringBuilder(String.format(Locale.ROOT, "%6s", "pH"));
         for (PhScan.Curve c : r.curves()) {
             String name = c.name().length() <= SCAN_COLUMN_WIDTH ? c.name()
@@ -46,7 +50,7 @@ public final class PhScanText {
             StringBuilder row = new StringBuilder(String.format(Locale.ROOT, "%6.2f", r.pH().get(i)));
             for (PhScan.Curve c : r.curves()) {
                 row.append(String.format(Locale.ROOT, " %" + SCAN_COLUMN_WIDTH + "s",
-                        PredictionText.num(c.mobility().get(i))));
+                        NumberText.fixed(c.mobility().get(i), PredictionText.DECIMALS, PredictionText.NONE)));
             }
             o.println(row);
         }
@@ -93,9 +97,5 @@ public final class PhScanText {
         }
         return String.format(Locale.ROOT, "not reliably resolved: %s and %s, %s (%s; the prediction uncertainty "
                 + "asks for %.2f)", c.first(), c.second(), range, closest, c.thresholdUnits());
-    }
-
-    private static String plainNumber(double v) {
-        return new BigDecimal(String.format(Locale.ROOT, "%.3f", v)).stripTrailingZeros().toPlainString();
     }
 }

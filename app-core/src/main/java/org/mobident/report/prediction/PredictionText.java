@@ -8,9 +8,14 @@ import org.mobident.recheck.BufferTransfer;
 import org.mobident.recheck.ModelCoverage;
 import org.mobident.recheck.PredictedMobility;
 import org.mobident.recheck.PredictionBasis;
+import org.mobident.text.NumberText;
 
 /** The predicted mobilities in a new buffer, for a person: one row per analyte, then what the bases mean. */
 public final class PredictionText {
+    /** Decimals of mobilities in the tables, 1e-9 m²/(V s). */
+    static final int DECIMALS = 2;
+    /** A value that is not known (never "NaN" on a terminal). */
+    static final String NONE = "-";
 
     private PredictionText() {
     }
@@ -29,8 +34,9 @@ public final class PredictionText {
         o.println(String.format(Locale.ROOT, layout, "analyte", "measured", "predicted", "+/-", "basis", "remark")
                 .stripTrailing());
         for (PredictedMobility p : shown) {
-            o.println(String.format(Locale.ROOT, layout, p.name(), num(p.measuredA()), num(p.predicted()),
-                    num(p.uncertainty()), p.basis().description(), p.specificNote()).stripTrailing());
+            o.println(String.format(Locale.ROOT, layout, p.name(), NumberText.fixed(p.measuredA(), DECIMALS, NONE),
+                    NumberText.fixed(p.predicted(), DECIMALS, NONE), NumberText.fixed(p.uncertainty(), DECIMALS, NONE),
+                    p.basis().description(), p.specificNote()).stripTrailing());
         }
         o.println("basis: own pKa data = the library entry's pKa and limiting mobilities; reference pKa data = "
                 + "taken from --reference by name; charge only = a strong ion; no model = the pH change is not "
@@ -49,10 +55,5 @@ public final class PredictionText {
                     + ModelCoverage.HOW_TO_FIX + ".");
         }
         o.println("Predictions are estimates: measure standards in the new buffer before relying on them.");
-    }
-
-    /** Two decimals; "-" for a value that is not known (never "NaN" on a terminal). */
-    static String num(double v) {
-        return Double.isFinite(v) ? String.format(Locale.ROOT, "%.2f", v) : "-";
     }
 }

@@ -195,9 +195,6 @@ class HtmlReportTest {
 
     @Test
     void numbersAreFormattedWithoutLocale() {
-        assertEquals("-30.00", HtmlReport.fixed(-30, 2));
-        assertEquals("0.0", HtmlReport.fixed(-0.01, 1));
-        assertEquals(HtmlReport.MISSING, HtmlReport.fixed(Double.NaN, 2));
         assertEquals("97%", HtmlReport.percent(0.971));
         assertEquals(HtmlReport.MISSING, HtmlReport.percent(Double.NaN));
     }
