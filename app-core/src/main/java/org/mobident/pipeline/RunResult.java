@@ -60,6 +60,16 @@ public record RunResult(RunSpec spec, InputException error, String scaleNote, do
         return Math.abs(temperatureFactor / runScale.factor());
     }
 
+    /**
+     * Standard uncertainty of the mobility a peak of this run shows beside its compared value: the
+     * run mobility's SD carried by |f/a| for an analyte peak (its value is corrected for the run's
+     * scale), by |f| for a marker (only converted to the library temperature).
+     */
+    public double comparedSd(PeakResult pr) {
+        double factor = pr.role() == PeakRole.ANALYTE ? comparedSdFactor() : Math.abs(temperatureFactor);
+        return pr.mobilitySd() * factor;
+    }
+
     /** True when a mobility scale was set for this run. */
     public boolean mobilityKnown() {
         return scale != null;

@@ -108,7 +108,7 @@ public final class RunSummaryText {
                 } else {
                     unassigned++;
                 }
-                rows.add(row(number, pr));
+                rows.add(row(run, number, pr));
             }
             if (rows.isEmpty()) {
                 out.println(TABLE_INDENT + "no analyte peaks detected");
@@ -176,7 +176,7 @@ public final class RunSummaryText {
         return sb.toString();
     }
 
-    private static String[] row(int number, PeakResult pr) {
+    private static String[] row(RunResult run, int number, PeakResult pr) {
         PeakMatch m = pr.match();
         boolean known = Double.isFinite(pr.mobility());
         String mobility;
@@ -184,7 +184,7 @@ public final class RunSummaryText {
             mobility = "n/a";
         } else {
             double compared = Double.isFinite(pr.mobilityCorrected()) ? pr.mobilityCorrected() : pr.mobility();
-            double sdCompared = pr.mobilitySd() * (pr.mobility() != 0 ? Math.abs(compared / pr.mobility()) : 1.0);
+            double sdCompared = run.comparedSd(pr);
             String sd = NumberText.fixed(sdCompared, SD_DECIMALS, null);
             mobility = NumberText.fixed(compared, MOBILITY_DECIMALS, null) + " +/- " + (sd == null ? "?" : sd);
         }

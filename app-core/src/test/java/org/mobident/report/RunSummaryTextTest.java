@@ -52,7 +52,7 @@ class RunSummaryTextTest {
                     p.match()));
         }
         RunResult converted = new RunResult(warm.spec(), null, warm.scaleNote(), warm.eofMobility(), warm.scale(),
-                peaks, warm.notes(), warm.noiseSd());
+                peaks, warm.notes(), warm.noiseSd(), org.mobident.matching.RunScale.OFF, 0.8957);
         String text = summary(List.of(converted));
         // -71.52 × 0.8957 = -64.06; the SD scales with it: 0.21 × 0.8957 = 0.188
         assertTrue(text.contains("-64.06 +/- 0.188"), text);

@@ -470,8 +470,7 @@ public final class HtmlReport {
             double compared = Double.isFinite(pr.mobilityCorrected()) ? pr.mobilityCorrected() : pr.mobility();
             sb.append("<td class=\"num\">").append(NumberText.fixed(compared, 2, MISSING));
             if (Double.isFinite(pr.mobilitySd())) {
-                double scale = pr.mobility() != 0 && Double.isFinite(compared) ? Math.abs(compared / pr.mobility()) : 1.0;
-                sb.append(" ± ").append(NumberText.fixed(pr.mobilitySd() * scale, 3, MISSING));
+                sb.append(" ± ").append(NumberText.fixed(r.comparedSd(pr), 3, MISSING));
             }
             sb.append("</td>");
             sb.append("<td>").append(marker || m.assigned() == null ? MISSING : esc(m.assigned())).append("</td>");
