@@ -9,6 +9,7 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 import org.mobident.InputException;
+import org.mobident.io.TextFiles;
 
 /**
  * A method file: the run conditions of a method as {@code name = value} lines, the names being the
@@ -35,6 +36,9 @@ final class MethodFile {
         List<String> text;
         try {
             text = Files.readAllLines(file, StandardCharsets.UTF_8);
+            if (!text.isEmpty()) {
+                text.set(0, TextFiles.withoutBom(text.get(0))); // editors on some systems write one
+            }
         } catch (IOException e) {
             throw new InputException(file.toString(), 0, "--method", "cannot read the method file: " + e.getMessage(), e);
         }

@@ -45,6 +45,15 @@ class MethodFileTest {
     }
 
     @Test
+    void aByteOrderMarkBeforeTheFirstLineIsNotPartOfItsName() throws IOException {
+        // a file whose first line is a setting, saved with a UTF-8 byte-order mark (U+FEFF, Unicode 15, § 23.8)
+        String noComment = CHR8.substring(CHR8.indexOf('\n') + 1);
+        BadInputCatalogueTest.Run r = identify(Files.writeString(dir.resolve("bom.method"), "\uFEFF" + noComment));
+        assertEquals(ExitCodes.OK, r.code(), r.err());
+        assertTrue(r.out().contains("spring-01  chloride"), r.out());
+    }
+
+    @Test
     void anOptionGivenAsWellWins() throws IOException {
         Path m = Files.writeString(dir.resolve("zero.method"), CHR8.replace("voltage-kv = -20", "voltage-kv = 0"));
         BadInputCatalogueTest.Run alone = identify(m, "--quiet");
