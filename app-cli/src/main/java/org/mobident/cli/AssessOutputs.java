@@ -4,9 +4,9 @@ import java.io.PrintWriter;
 import java.nio.file.Path;
 import org.mobident.assess.AcceptanceLimits;
 import org.mobident.assess.Assessment;
-import org.mobident.assess.AssessmentCsv;
-import org.mobident.assess.AssessmentHtml;
-import org.mobident.assess.AssessmentText;
+import org.mobident.report.assess.AssessmentCsv;
+import org.mobident.report.assess.AssessmentHtml;
+import org.mobident.report.assess.AssessmentText;
 import picocli.CommandLine;
 import picocli.CommandLine.Option;
 

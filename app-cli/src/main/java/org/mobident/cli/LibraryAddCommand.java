@@ -3,7 +3,7 @@ package org.mobident.cli;
 import java.nio.file.Path;
 import java.util.concurrent.Callable;
 import org.mobident.library.LibraryCsv;
-import org.mobident.library.standards.BuildText;
+import org.mobident.report.library.BuildText;
 import org.mobident.library.standards.BuildWarning;
 import org.mobident.library.standards.MergeResult;
 import org.mobident.matching.MatchSettings;

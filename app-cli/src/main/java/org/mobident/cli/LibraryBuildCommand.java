@@ -7,7 +7,7 @@ import java.util.concurrent.Callable;
 import org.mobident.io.SafeFiles;
 import org.mobident.library.LibraryCsv;
 import org.mobident.library.standards.BuildResult;
-import org.mobident.library.standards.BuildText;
+import org.mobident.report.library.BuildText;
 import org.mobident.library.standards.BuildWarning;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;

@@ -6,7 +6,7 @@ import java.util.concurrent.Callable;
 import org.mobident.library.Library;
 import org.mobident.library.LibraryCsv;
 import org.mobident.library.standards.BuildSettings;
-import org.mobident.library.standards.BuildText;
+import org.mobident.report.library.BuildText;
 import org.mobident.library.standards.BuildWarning;
 import org.mobident.library.standards.LibraryCheck;
 import picocli.CommandLine.Command;

@@ -9,9 +9,9 @@
  * and {@link org.mobident.assess.Assessor} turns the verdicts into an
  * {@link org.mobident.assess.Assessment}: precision and recall of the calls, results by zone height,
  * per analyte scores, calibration of the confidences (reliability table, expected calibration error,
- * Brier score), mobility error and detection. The scores are written as text, a long CSV table and
- * HTML ({@link org.mobident.assess.AssessmentText}, {@link org.mobident.assess.AssessmentCsv},
- * {@link org.mobident.assess.AssessmentHtml}).
+ * Brier score), mobility error and detection. The scores are rendered as text, a long CSV table and
+ * HTML in {@code report.assess} ({@link org.mobident.report.assess.AssessmentText}, {@link org.mobident.report.assess.AssessmentCsv},
+ * {@link org.mobident.report.assess.AssessmentHtml}).
  *
  * <p>Units: times in s, mobilities in 1e-9 m² V⁻¹ s⁻¹ (signed), heights over the noise SD
  * dimensionless, probabilities and scores as fractions. All types are immutable; nothing here prints.

@@ -1,5 +1,8 @@
 package org.mobident.assess;
 
+import org.mobident.report.assess.AssessmentCsv;
+import org.mobident.report.assess.AssessmentHtml;
+import org.mobident.report.assess.AssessmentText;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;

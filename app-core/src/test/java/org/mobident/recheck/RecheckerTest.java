@@ -1,5 +1,7 @@
 package org.mobident.recheck;
 
+import org.mobident.report.recheck.RecheckReportCsv;
+import org.mobident.report.recheck.RecheckSummaryText;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertNull;

@@ -1,5 +1,6 @@
 package org.mobident.library.standards;
 
+import org.mobident.report.library.BuildText;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertThrows;

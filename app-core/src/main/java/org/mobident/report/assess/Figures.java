@@ -1,5 +1,7 @@
-package org.mobident.assess;
+package org.mobident.report.assess;
 
+import org.mobident.assess.Ratio;
+import org.mobident.assess.ReliabilityBin;
 import org.mobident.text.NumberText;
 
 /**

@@ -1,8 +1,20 @@
-package org.mobident.assess;
+package org.mobident.report.assess;
 
 import java.io.PrintWriter;
 import java.util.ArrayList;
 import java.util.List;
+import org.mobident.assess.AcceptanceLimits;
+import org.mobident.assess.AnalyteScore;
+import org.mobident.assess.Assessment;
+import org.mobident.assess.Calibration;
+import org.mobident.assess.Detection;
+import org.mobident.assess.HeightStratum;
+import org.mobident.assess.Identification;
+import org.mobident.assess.MobilityError;
+import org.mobident.assess.Ratio;
+import org.mobident.assess.ReliabilityBin;
+import org.mobident.assess.RunCheck;
+import org.mobident.assess.StratumScore;
 import org.mobident.text.NumberText;
 
 /**

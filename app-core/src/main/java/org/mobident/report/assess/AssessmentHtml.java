@@ -1,7 +1,19 @@
-package org.mobident.assess;
+package org.mobident.report.assess;
 
 import java.util.List;
 import java.util.Locale;
+import org.mobident.assess.AcceptanceLimits;
+import org.mobident.assess.AnalyteScore;
+import org.mobident.assess.Assessment;
+import org.mobident.assess.Calibration;
+import org.mobident.assess.Detection;
+import org.mobident.assess.HeightStratum;
+import org.mobident.assess.Identification;
+import org.mobident.assess.MobilityError;
+import org.mobident.assess.Ratio;
+import org.mobident.assess.ReliabilityBin;
+import org.mobident.assess.RunCheck;
+import org.mobident.assess.StratumScore;
 import org.mobident.report.html.HtmlSection;
 import org.mobident.report.plot.Markup;
 import org.mobident.text.NumberText;

@@ -1,4 +1,4 @@
-package org.mobident.assess;
+package org.mobident.report.assess;
 
 import java.io.IOException;
 import java.io.Writer;
@@ -6,6 +6,19 @@ import java.util.List;
 import org.apache.commons.csv.CSVFormat;
 import org.apache.commons.csv.CSVPrinter;
 import org.apache.commons.csv.QuoteMode;
+import org.mobident.assess.AcceptanceLimits;
+import org.mobident.assess.AnalyteScore;
+import org.mobident.assess.Assessment;
+import org.mobident.assess.Calibration;
+import org.mobident.assess.Detection;
+import org.mobident.assess.Identification;
+import org.mobident.assess.KnownIdentity;
+import org.mobident.assess.MobilityError;
+import org.mobident.assess.PeakVerdict;
+import org.mobident.assess.ReliabilityBin;
+import org.mobident.assess.ReportedPeak;
+import org.mobident.assess.RunCheck;
+import org.mobident.assess.StratumScore;
 import org.mobident.report.CsvCells;
 import org.mobident.text.NumberText;
 

@@ -1,10 +1,17 @@
-package org.mobident.library.standards;
+package org.mobident.report.library;
 
 import java.io.PrintWriter;
 import java.util.List;
 import java.util.Locale;
 import org.mobident.library.Library;
 import org.mobident.library.LibraryEntry;
+import org.mobident.library.standards.AnalyteStats;
+import org.mobident.library.standards.BuildResult;
+import org.mobident.library.standards.BuildSettings;
+import org.mobident.library.standards.BuildWarning;
+import org.mobident.library.standards.LibraryCheck;
+import org.mobident.library.standards.Outlier;
+import org.mobident.library.standards.UnexpectedPeak;
 import org.mobident.text.NumberText;
 
 /** Readable terminal output for built and checked libraries. */

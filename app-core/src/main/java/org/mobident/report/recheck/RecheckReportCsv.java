@@ -1,4 +1,4 @@
-package org.mobident.recheck;
+package org.mobident.report.recheck;
 
 import java.io.IOException;
 import java.io.Writer;
@@ -10,6 +10,12 @@ import java.util.Map;
 import org.apache.commons.csv.CSVFormat;
 import org.apache.commons.csv.CSVPrinter;
 import org.apache.commons.csv.QuoteMode;
+import org.mobident.recheck.AssignmentCheck;
+import org.mobident.recheck.PairCheck;
+import org.mobident.recheck.PredictedMobility;
+import org.mobident.recheck.PredictionError;
+import org.mobident.recheck.RecheckResult;
+import org.mobident.recheck.Verdict;
 import org.mobident.report.CsvCells;
 import org.mobident.text.NumberText;
 

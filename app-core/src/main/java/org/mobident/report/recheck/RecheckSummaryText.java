@@ -1,4 +1,4 @@
-package org.mobident.recheck;
+package org.mobident.report.recheck;
 
 import java.io.PrintWriter;
 import java.util.HashMap;
@@ -7,6 +7,11 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 import java.util.Set;
+import org.mobident.recheck.AnalyteRecheck;
+import org.mobident.recheck.PairCheck;
+import org.mobident.recheck.PredictionError;
+import org.mobident.recheck.RecheckResult;
+import org.mobident.recheck.Verdict;
 import org.mobident.text.NumberText;
 
 /**
