@@ -4,12 +4,14 @@ import java.io.PrintWriter;
 import java.nio.file.Path;
 import java.util.List;
 import org.mobident.io.SafeFiles;
+import org.mobident.library.LibraryCsv;
 import org.mobident.report.BatchSummaryCsv;
 import org.mobident.report.PeakTableCsv;
 import org.mobident.report.PeakTableJson;
 import org.mobident.report.ResultsWorkbook;
 import org.mobident.report.RunSummaryText;
 import org.mobident.report.html.HtmlReport;
+import org.mobident.summary.ProvisionalEntries;
 import org.mobident.summary.RecurringUnknowns;
 import org.mobident.summary.SampleCalls;
 import org.mobident.usecase.IdentifiedBatch;
@@ -42,6 +44,11 @@ public final class IdentifyOutputs {
                     + "runs of a buffer, one row per peak.")
     Path unknownsCsvOut;
 
+    @Option(names = "--unknowns-library", paramLabel = "FILE",
+            description = "Write the recurring unknowns as provisional library entries (unknown-1, ...: mean mobility, "
+                    + "SD, runs, buffer), to follow them in later batches once checked and added to your library.")
+    Path unknownsLibraryOut;
+
     @Option(names = "--known", paramLabel = "FILE",
             description = "Known-identities table: score the results against it as 'assess' does, print the scores "
                     + "and add them to the --html report.")
@@ -52,7 +59,8 @@ public final class IdentifyOutputs {
 
     /** Refuses, before any work is done, to replace existing files unless asked to. */
     void checkFree() throws OutputException {
-        Outputs.checkFree(overwrite, csvOut, jsonOut, htmlOut, xlsxOut, summaryCsvOut, unknownsCsvOut);
+        Outputs.checkFree(overwrite, csvOut, jsonOut, htmlOut, xlsxOut, summaryCsvOut, unknownsCsvOut,
+                unknownsLibraryOut);
     }
 
     /** The summary on {@code out} (none when null) and every output file asked for. */
@@ -75,6 +83,8 @@ public final class IdentifyOutputs {
         }
         writeIf(summaryCsvOut, w -> BatchSummaryCsv.writeSamples(samples, w));
         writeIf(unknownsCsvOut, w -> BatchSummaryCsv.writeUnknowns(unknowns, w));
+        writeIf(unknownsLibraryOut, w -> LibraryCsv.write(ProvisionalEntries.of(unknowns, done.library(),
+                "this batch"), w));
         if (xlsxOut != null) {
             Outputs.writeBytes(xlsxOut, overwrite, o -> ResultsWorkbook.write(results, done.library(), unknowns,
                     Outputs.workbookOptions(), o));
