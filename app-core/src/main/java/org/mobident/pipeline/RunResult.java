@@ -70,6 +70,23 @@ public record RunResult(RunSpec spec, InputException error, String scaleNote, do
         return pr.mobilitySd() * factor;
     }
 
+    /**
+     * The uncertainty shown beside a peak's compared mobility: for a peak with a name, the combined
+     * uncertainty that decided its match ({@link org.mobident.matching.Candidate#combinedSd}:
+     * measurement, scale correction and library spread); otherwise {@link #comparedSd}.
+     */
+    public double decidingSd(PeakResult pr) {
+        String name = pr.match().assigned();
+        if (name != null) {
+            for (org.mobident.matching.Candidate c : pr.match().candidates()) {
+                if (c.name().equals(name) && Double.isFinite(c.combinedSd())) {
+                    return c.combinedSd();
+                }
+            }
+        }
+        return comparedSd(pr);
+    }
+
     /** True when a mobility scale was set for this run. */
     public boolean mobilityKnown() {
         return scale != null;

@@ -33,7 +33,7 @@ public final class RunSummaryText {
     /** What the table shows for a missing value. */
     static final String NONE = "-";
 
-    private static final String[] HEADERS = {"peak", "time/s", "mobility +/- sd", "assigned", "confidence", "status"};
+    private static final String[] HEADERS = {"peak", "time/s", "mobility +/- u", "assigned", "confidence", "status"};
     private static final boolean[] RIGHT_ALIGNED = {true, true, true, false, true, false};
     private static final String COLUMN_GAP = "  ";
     private static final String TABLE_INDENT = "  ";
@@ -69,9 +69,9 @@ public final class RunSummaryText {
             out.println();
         }
         out.println("Effective mobilities in 1e-9 m^2/(V s), as compared with the library: converted to its");
-        out.println("temperature and corrected for the run's scale (see each run's note). +/- is the standard");
-        out.println("uncertainty from the zone and marker times only; the run-to-run spread and the scale's");
-        out.println("uncertainty enter the match too.");
+        out.println("temperature and corrected for the run's scale (see each run's note). +/- u: for a named peak,");
+        out.println("the standard uncertainty that decided its match (zone and marker times, the scale correction");
+        out.println("and the library's run-to-run spread); for a peak without a name, its times' share only.");
         int ok = 0;
         int failed = 0;
         int withoutScale = 0;
@@ -184,7 +184,7 @@ public final class RunSummaryText {
             mobility = "n/a";
         } else {
             double compared = Double.isFinite(pr.mobilityCorrected()) ? pr.mobilityCorrected() : pr.mobility();
-            double sdCompared = run.comparedSd(pr);
+            double sdCompared = run.decidingSd(pr);
             String sd = NumberText.fixed(sdCompared, SD_DECIMALS, null);
             mobility = NumberText.fixed(compared, MOBILITY_DECIMALS, null) + " +/- " + (sd == null ? "?" : sd);
         }

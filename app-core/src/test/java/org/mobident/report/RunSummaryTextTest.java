@@ -29,7 +29,8 @@ class RunSummaryTextTest {
         assertTrue(text.contains("nitrate"), text);
         assertTrue(text.contains("97 %"), text);
         assertTrue(text.contains("ambiguous (or nitrite 38 %)"), text);
-        assertTrue(text.contains("-71.52 +/- 0.21"), text);
+        // a named peak shows the uncertainty that decided its match: |residual / z| = 0.08 / 0.2 = 0.4
+        assertTrue(text.contains("-71.52 +/- 0.400"), text);
         assertTrue(text.contains("note: run at 30.0 C"), text);
         assertTrue(text.contains("Run well-09: FAILED - samples/well-09.csv, line 3"), text);
         assertTrue(text.contains("Run spring-02: no neutral marker found; EOF mobility unknown"), text);
@@ -54,8 +55,13 @@ class RunSummaryTextTest {
         RunResult converted = new RunResult(warm.spec(), null, warm.scaleNote(), warm.eofMobility(), warm.scale(),
                 peaks, warm.notes(), warm.noiseSd(), org.mobident.matching.RunScale.OFF, 0.8957);
         String text = summary(List.of(converted));
-        // -71.52 × 0.8957 = -64.06; the SD scales with it: 0.21 × 0.8957 = 0.188
-        assertTrue(text.contains("-64.06 +/- 0.188"), text);
+        // -71.52 × 0.8957 = -64.06; the times' SD scales with it: 0.21 × 0.8957 = 0.188; the table shows
+        // the named peak's deciding uncertainty, 0.08 / 0.2 = 0.4
+        assertTrue(text.contains("-64.06 +/- 0.400"), text);
+        PeakResult chloride = converted.peaks().stream().filter(x -> "chloride".equals(x.match().assigned()))
+                .findFirst().orElseThrow();
+        assertEquals(0.21 * 0.8957, converted.comparedSd(chloride), 1e-12);
+        assertEquals(0.4, converted.decidingSd(chloride), 1e-12);
         assertFalse(text.contains("-71.52"), text);
     }
 

@@ -454,7 +454,7 @@ public final class HtmlReport {
             return;
         }
         sb.append("<table class=\"peaks\">\n<thead><tr><th>#</th><th>Apex time (s)</th>"
-                + "<th>Mobility ± SD (10⁻⁹ m² V⁻¹ s⁻¹, as compared with the library)</th><th>Assigned</th><th>Confidence</th>"
+                + "<th>Mobility ± u (10⁻⁹ m² V⁻¹ s⁻¹, as compared with the library; u: the uncertainty that decided the match)</th><th>Assigned</th><th>Confidence</th>"
                 + "<th>Status</th><th>Runner-up</th><th>S/N</th><th>Plates</th><th>Resolution</th>"
                 + "</tr></thead>\n<tbody>\n");
         int n = 0;
@@ -470,7 +470,7 @@ public final class HtmlReport {
             double compared = Double.isFinite(pr.mobilityCorrected()) ? pr.mobilityCorrected() : pr.mobility();
             sb.append("<td class=\"num\">").append(NumberText.fixed(compared, 2, MISSING));
             if (Double.isFinite(pr.mobilitySd())) {
-                sb.append(" ± ").append(NumberText.fixed(r.comparedSd(pr), 3, MISSING));
+                sb.append(" ± ").append(NumberText.fixed(r.decidingSd(pr), 3, MISSING));
             }
             sb.append("</td>");
             sb.append("<td>").append(marker || m.assigned() == null ? MISSING : esc(m.assigned())).append("</td>");
