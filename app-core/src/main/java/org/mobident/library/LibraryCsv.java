@@ -173,6 +173,22 @@ public final class LibraryCsv {
         return NumberText.roundTrip(v, "");
     }
 
+    /**
+     * A value computed for a library file (a mean, an SD) to {@value #COMPUTED_DIGITS} significant
+     * digits: a person reads and edits the file, a mobility's sixth digit (10⁻⁴ units) lies far
+     * below any uncertainty it carries, and 17 digits suggest a precision nobody has. The writer
+     * itself stays exact ({@link #formatNumber}), so what is rounded here reads back unchanged.
+     */
+    public static double computedValue(double v) {
+        if (!Double.isFinite(v) || v == 0) {
+            return v;
+        }
+        return new java.math.BigDecimal(v).round(new java.math.MathContext(COMPUTED_DIGITS)).doubleValue();
+    }
+
+    /** Significant digits of the values a build or a merge computes for a library file. */
+    public static final int COMPUTED_DIGITS = 6;
+
     private static String formatList(List<Double> values) {
         StringBuilder sb = new StringBuilder();
         for (Double v : values) {

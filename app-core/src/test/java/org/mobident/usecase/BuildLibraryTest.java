@@ -93,7 +93,9 @@ class BuildLibraryTest {
         for (LibraryEntry e : full.library().entries()) {
             LibraryEntry pooled = added.merged().library().find(e.name()).orElseThrow();
             assertEquals(4, pooled.n(), e.name());
-            assertEquals(e.mobility(), pooled.mobility(), 1e-6, e.name());
+            // both sides are kept to 6 significant digits (LibraryCsv.computedValue): pooled from two
+            // rounded halves, the mean may differ in its last digit
+            assertEquals(e.mobility(), pooled.mobility(), 2e-4, e.name());
         }
         // formate's halves differ by more than twice their combined uncertainty: the merge says so
         assertTrue(added.anyWarning());

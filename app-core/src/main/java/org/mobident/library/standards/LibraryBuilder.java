@@ -15,6 +15,7 @@ import java.util.function.Function;
 import org.mobident.chem.BufferConditions;
 import org.mobident.chem.ReferenceIons;
 import org.mobident.library.Library;
+import org.mobident.library.LibraryCsv;
 import org.mobident.library.LibraryEntry;
 import org.mobident.matching.MatchSettings;
 import org.mobident.pipeline.PeakResult;
@@ -618,7 +619,8 @@ public final class LibraryBuilder {
                 }
                 limiting = atT;
             }
-            return new LibraryEntry(s.name(), s.mean(), s.sd(), s.n(), s.charge(), s.tolerance(), pKa, limiting,
+            return new LibraryEntry(s.name(), LibraryCsv.computedValue(s.mean()), LibraryCsv.computedValue(s.sd()), s.n(),
+                    s.charge(), LibraryCsv.computedValue(s.tolerance()), pKa, limiting,
                     buffer, Double.NaN, Double.NaN, temperature, source(s.runs())
                             + (model == null ? "" : "; pka and limiting_mobility from the standards sheet"));
         }

@@ -10,6 +10,7 @@ import java.util.regex.Matcher;
 import java.util.regex.Pattern;
 import org.mobident.InputException;
 import org.mobident.library.Library;
+import org.mobident.library.LibraryCsv;
 import org.mobident.library.LibraryEntry;
 import org.mobident.text.NumberText;
 
@@ -263,9 +264,9 @@ public final class LibraryMerger {
             temperature = (e.n() * e.temperatureC() + f.n() * f.temperatureC()) / (e.n() + f.n());
         }
         double tolerance = settings.writesTolerance() ? settings.toleranceFor(sd) : e.tolerance();
-        return new LibraryEntry(e.name(), all.mean(), sd, all.n(), e.charge() != 0 ? e.charge() : f.charge(),
-                tolerance, e.pKa(), e.limitingMobilities(), buffer, e.pH(), e.ionicStrengthMm(),
-                temperature, joinSources(e.source(), f.source()), e.internalStandard() || f.internalStandard(),
+        return new LibraryEntry(e.name(), LibraryCsv.computedValue(all.mean()), LibraryCsv.computedValue(sd), all.n(),
+                e.charge() != 0 ? e.charge() : f.charge(), LibraryCsv.computedValue(tolerance), e.pKa(),
+                e.limitingMobilities(), buffer, e.pH(), e.ionicStrengthMm(), LibraryCsv.computedValue(temperature), joinSources(e.source(), f.source()), e.internalStandard() || f.internalStandard(),
                 e.sessionSd());
     }
 
