@@ -8,6 +8,7 @@ import org.mobident.library.LibraryCsv;
 import org.mobident.recheck.BufferTransfer;
 import org.mobident.recheck.PeakTableReader;
 import org.mobident.recheck.PeakTableRow;
+import org.mobident.report.recheck.RecheckHtml;
 import org.mobident.report.recheck.RecheckReportCsv;
 import org.mobident.recheck.RecheckResult;
 import org.mobident.report.recheck.RecheckSummaryText;
@@ -69,6 +70,10 @@ public final class RecheckCommand implements Callable<Integer> {
             description = "Write the per-analyte predictions (new mobility, uncertainty, basis, model error) as CSV.")
     Path analytesOut;
 
+    @Option(names = "--html", paramLabel = "FILE",
+            description = "Write the recheck as a self-contained HTML page: per analyte, pairs, every assignment.")
+    Path htmlOut;
+
     @Option(names = "--overwrite", description = "Replace output files that already exist.")
     boolean overwrite;
 
@@ -79,7 +84,7 @@ public final class RecheckCommand implements Callable<Integer> {
                     + "--ionic-strength-mm.");
             return ExitCodes.USAGE;
         }
-        Outputs.checkFree(overwrite, csvOut, pairsOut, analytesOut);
+        Outputs.checkFree(overwrite, csvOut, pairsOut, analytesOut, htmlOut);
         List<PeakTableRow> rows = PeakTableReader.read(tableFile);
         Library libraryA = LibraryCsv.read(libraryFile);
         BufferTransfer predictor = ReferenceData.transfer(referenceFile);
@@ -97,6 +102,9 @@ public final class RecheckCommand implements Callable<Integer> {
         }
         if (analytesOut != null) {
             Outputs.write(analytesOut, overwrite, w -> RecheckReportCsv.writeAnalytes(result, w));
+        }
+        if (htmlOut != null) {
+            Outputs.write(htmlOut, overwrite, w -> RecheckHtml.write(result, w));
         }
         return result.needsAttention() ? ExitCodes.SOME_RUNS_FAILED : ExitCodes.OK;
     }

@@ -141,6 +141,32 @@ class PredictRecheckCommandTest {
     }
 
     @Test
+    void recheckWritesTheSameVerdictsAsAnHtmlPage() throws Exception {
+        Path table = dir.resolve("peaks.csv");
+        run("identify", "--runs", DEMO.resolve("runs.csv").toString(), "--library",
+                DEMO.resolve("library.csv").toString(), "--csv", table.toString(), "--quiet");
+        Path verdicts = dir.resolve("rc.csv");
+        Path page = dir.resolve("recheck.html");
+        String[] r = run("recheck", "--table", table.toString(), "--library", DEMO.resolve("library.csv").toString(),
+                "--ph", "4.5", "--ionic-strength-mm", "12", "--reference", REFERENCE.toString(),
+                "--csv", verdicts.toString(), "--html", page.toString());
+        assertEquals("1", r[0], r[2]);
+        List<CSVRecord> rows = CSVFormat.DEFAULT.builder().setHeader().setSkipHeaderRecord(true).get()
+                .parse(Files.newBufferedReader(verdicts)).getRecords();
+        String html = Files.readString(page);
+        String every = html.substring(html.indexOf("<h2>Every earlier assignment</h2>"));
+        every = every.substring(0, every.indexOf("</table>"));
+        // one row per assignment of the CSV, each with its run and verdict
+        assertEquals(rows.size(), every.split("<tr><td>", -1).length - 1, every);
+        for (CSVRecord row : rows) {
+            assertTrue(every.contains("<tr><td>" + row.get("run") + "</td>"), row.get("run"));
+        }
+        assertTrue(html.contains("<h2>Per analyte</h2>") && html.contains("phosphate"), html);
+        assertTrue(html.contains("presumptive"), "the page carries the caution");
+        assertFalse(html.contains("NaN"), "no NaN a person reads");
+    }
+
+    @Test
     void recheckVerdictsFollowTheStatedWindowRule() throws Exception {
         Path table = dir.resolve("peaks.csv");
         run("identify", "--runs", DEMO.resolve("runs.csv").toString(), "--library",
