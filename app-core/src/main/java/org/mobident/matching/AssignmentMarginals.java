@@ -94,19 +94,7 @@ final class AssignmentMarginals {
         forward.add(start);
         for (int t = 0; t < peaks; t++) {
             Map<BitSet, Double> next = new HashMap<>();
-            double total = 0.0;
-            for (Map.Entry<BitSet, Double> s : forward.get(t).entrySet()) {
-                BitSet used = s.getKey();
-                double f = s.getValue();
-                total += accumulate(next, project(used, -1, t + 1, lastUser), f * noneWeight[t]);
-                for (int k = 0; k < weight[t].length; k++) {
-                    int b = bit[t][k];
-                    if (b >= 0 && used.get(b)) {
-                        continue;
-                    }
-                    total += accumulate(next, project(used, b, t + 1, lastUser), f * weight[t][k]);
-                }
-            }
+            double total = forwardStep(forward.get(t), next, t, noneWeight[t], weight[t], bit[t], lastUser);
             if (next.size() > maxStates) {
                 return null;
             }
@@ -125,25 +113,7 @@ final class AssignmentMarginals {
         for (int t = peaks - 1; t >= 0; t--) {
             double[] m = new double[weight[t].length + 1];
             Map<BitSet, Double> here = new HashMap<>();
-            double max = 0.0;
-            for (Map.Entry<BitSet, Double> s : forward.get(t).entrySet()) {
-                BitSet used = s.getKey();
-                double f = s.getValue();
-                double b0 = noneWeight[t] * after.getOrDefault(project(used, -1, t + 1, lastUser), 0.0);
-                double sum = b0;
-                m[0] += f * b0;
-                for (int k = 0; k < weight[t].length; k++) {
-                    int b = bit[t][k];
-                    if (b >= 0 && used.get(b)) {
-                        continue;
-                    }
-                    double bk = weight[t][k] * after.getOrDefault(project(used, b, t + 1, lastUser), 0.0);
-                    sum += bk;
-                    m[k + 1] += f * bk;
-                }
-                here.put(used, sum);
-                max = Math.max(max, sum);
-            }
+            double max = backwardStep(forward.get(t), after, here, m, t, noneWeight[t], weight[t], bit[t], lastUser);
             double z = 0.0;
             for (double v : m) {
                 z += v;
@@ -161,6 +131,60 @@ final class AssignmentMarginals {
             after = here;
         }
         return new Result(marginal, logZ);
+    }
+
+    /**
+     * One forward step: every state before peak t, with each option of peak t that its used entries
+     * allow, into {@code next}; returns the total weight added. Its own method so that the JIT
+     * compiles the loop once per call rather than on-stack-replacing the whole recursion.
+     */
+    private static double forwardStep(Map<BitSet, Double> before, Map<BitSet, Double> next, int t, double noneWeight,
+                                      double[] weight, int[] bit, int[] lastUser) {
+        double total = 0.0;
+        for (Map.Entry<BitSet, Double> s : before.entrySet()) {
+            BitSet used = s.getKey();
+            double f = s.getValue();
+            total += accumulate(next, project(used, -1, t + 1, lastUser), f * noneWeight);
+            for (int k = 0; k < weight.length; k++) {
+                int b = bit[k];
+                if (b >= 0 && used.get(b)) {
+                    continue;
+                }
+                total += accumulate(next, project(used, b, t + 1, lastUser), f * weight[k]);
+            }
+        }
+        return total;
+    }
+
+    /**
+     * One backward step: for every state before peak t, the weight of all completions through each
+     * option of peak t ({@code after} holds those from peak t + 1 on); adds the forward-times-backward
+     * products to {@code m} (none first, then the options) and puts each state's total into
+     * {@code here}; returns the largest total.
+     */
+    private static double backwardStep(Map<BitSet, Double> before, Map<BitSet, Double> after, Map<BitSet, Double> here,
+                                       double[] m, int t, double noneWeight, double[] weight, int[] bit,
+                                       int[] lastUser) {
+        double max = 0.0;
+        for (Map.Entry<BitSet, Double> s : before.entrySet()) {
+            BitSet used = s.getKey();
+            double f = s.getValue();
+            double b0 = noneWeight * after.getOrDefault(project(used, -1, t + 1, lastUser), 0.0);
+            double sum = b0;
+            m[0] += f * b0;
+            for (int k = 0; k < weight.length; k++) {
+                int b = bit[k];
+                if (b >= 0 && used.get(b)) {
+                    continue;
+                }
+                double bk = weight[k] * after.getOrDefault(project(used, b, t + 1, lastUser), 0.0);
+                sum += bk;
+                m[k + 1] += f * bk;
+            }
+            here.put(used, sum);
+            max = Math.max(max, sum);
+        }
+        return max;
     }
 
     private static double accumulate(Map<BitSet, Double> layer, BitSet state, double value) {
