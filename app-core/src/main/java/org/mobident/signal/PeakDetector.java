@@ -593,18 +593,10 @@ public final class PeakDetector {
             return out;
         }
 
-        /** Width at half height of a segment's top on the smoothed signal, within the segment, s. */
+        /** Width at half height of a segment's top on the smoothed signal, within the segment, s (0 when unknown). */
         private double halfWidthS(int[] segment, int top) {
-            double half = 0.5 * smooth[top];
-            int left = top;
-            while (left > segment[0] && smooth[left - 1] > half) {
-                left--;
-            }
-            int right = top;
-            while (right < segment[1] && smooth[right + 1] > half) {
-                right++;
-            }
-            return t[right] - t[left];
+            double width = halfHeightWidthS(t, smooth, top, segment[0], segment[1], 0.5 * smooth[top]);
+            return Double.isNaN(width) ? 0.0 : width;
         }
 
         /**
