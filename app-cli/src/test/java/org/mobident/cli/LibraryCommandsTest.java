@@ -11,6 +11,7 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.LinkedHashMap;
 import java.util.Map;
+import java.util.function.Predicate;
 import org.apache.commons.csv.CSVFormat;
 import org.apache.commons.csv.CSVRecord;
 import org.junit.jupiter.api.Test;
@@ -123,21 +124,8 @@ class LibraryCommandsTest {
         // mix A's runs 1-2 make the library, runs 3-4 are pooled into it: chloride ends with n = 4, not 2
         Path first = dir.resolve("runs-1.csv");
         Path second = dir.resolve("runs-2.csv");
-        StringBuilder a = new StringBuilder();
-        StringBuilder b = new StringBuilder();
-        for (String line : Files.readAllLines(DEMO.resolve("standards/standards-runs.csv"))) {
-            String fixed = line.replace("std-mix", DEMO.resolve("standards").toAbsolutePath() + "/std-mix");
-            if (line.startsWith("file,")) {
-                a.append(line).append('\n');
-                b.append(line).append('\n');
-            } else if (line.contains("std-mixA-1") || line.contains("std-mixA-2")) {
-                a.append(fixed).append('\n');
-            } else if (line.contains("std-mixA-3") || line.contains("std-mixA-4")) {
-                b.append(fixed).append('\n');
-            }
-        }
-        Files.writeString(first, a.toString());
-        Files.writeString(second, b.toString());
+        splitStandardsSheet(first, l -> l.contains("std-mixA-1") || l.contains("std-mixA-2"),
+                second, l -> l.contains("std-mixA-3") || l.contains("std-mixA-4"));
         Path lib = dir.resolve("lib.csv");
         Run built = run("library", "build", "--runs", first.toString(), "--mixes", demo("standards/mixes.csv"),
                 "--out", lib.toString());
@@ -155,21 +143,7 @@ class LibraryCommandsTest {
         // a library holding only mix A's runs; mix B's are then added: nothing pooled, five added
         Path sheetA = dir.resolve("runs-a.csv");
         Path sheetB = dir.resolve("runs-b.csv");
-        StringBuilder a = new StringBuilder();
-        StringBuilder b = new StringBuilder();
-        for (String line : Files.readAllLines(DEMO.resolve("standards/standards-runs.csv"))) {
-            String fixed = line.replace("std-mix", DEMO.resolve("standards").toAbsolutePath() + "/std-mix");
-            if (line.startsWith("file,")) {
-                a.append(line).append('\n');
-                b.append(line).append('\n');
-            } else if (line.contains(",mixA,")) {
-                a.append(fixed).append('\n');
-            } else {
-                b.append(fixed).append('\n');
-            }
-        }
-        Files.writeString(sheetA, a.toString());
-        Files.writeString(sheetB, b.toString());
+        splitStandardsSheet(sheetA, l -> l.contains(",mixA,"), sheetB, l -> !l.contains(",mixA,"));
         Path lib = dir.resolve("lib.csv");
         Run built = run("library", "build", "--runs", sheetA.toString(), "--mixes", demo("standards/mixes.csv"),
                 "--out", lib.toString());
@@ -230,5 +204,28 @@ class LibraryCommandsTest {
         assertFalse(p.out().contains("no model data (no pka"), p.out());
         assertEquals(1, p.out().lines().filter(l -> l.contains("To fix")).count(), p.out());
         assertFalse(p.out().contains("NaN"), p.out());
+    }
+
+    /**
+     * Writes two run sheets from the demo standards sheet: its header, then the rows each predicate
+     * takes, with the trace paths made absolute.
+     */
+    private static void splitStandardsSheet(Path a, Predicate<String> toA, Path b, Predicate<String> toB)
+            throws IOException {
+        StringBuilder first = new StringBuilder();
+        StringBuilder second = new StringBuilder();
+        for (String line : Files.readAllLines(DEMO.resolve("standards/standards-runs.csv"))) {
+            String fixed = line.replace("std-mix", DEMO.resolve("standards").toAbsolutePath() + "/std-mix");
+            if (line.startsWith("file,")) {
+                first.append(line).append('\n');
+                second.append(line).append('\n');
+            } else if (toA.test(line)) {
+                first.append(fixed).append('\n');
+            } else if (toB.test(line)) {
+                second.append(fixed).append('\n');
+            }
+        }
+        Files.writeString(a, first.toString());
+        Files.writeString(b, second.toString());
     }
 }
