@@ -3,6 +3,7 @@ package org.mobident.library.standards;
 import java.io.IOException;
 import java.nio.file.NoSuchFileException;
 import java.time.Instant;
+
 import java.util.ArrayList;
 import java.util.HashMap;
 import java.util.LinkedHashMap;
@@ -12,6 +13,7 @@ import java.util.Locale;
 import java.util.Map;
 import java.util.Set;
 import java.util.function.Function;
+import org.apache.commons.math3.stat.descriptive.rank.Median;
 import org.mobident.chem.BufferConditions;
 import org.mobident.chem.ReferenceIons;
 import org.mobident.library.Library;
@@ -47,6 +49,16 @@ public final class LibraryBuilder {
 
     /** Relative difference under which two conditions count as the same (they come from one sheet). */
     private static final double SAME_CONDITION_RELATIVE = 1e-9;
+
+    /**
+     * A Grubbs outlier whose own stated uncertainty (its peak's mobility SD: timing, shape and
+     * boundaries) is more than this many times the median of the other replicates' is left out of
+     * the statistics even when outliers are kept: the measurement itself says it is poor, the
+     * assignable cause under which ASTM E178 allows a value to be rejected. A modelling choice: an
+     * SD ratio of 3 is a variance ratio of 9, far beyond the scatter of SDs between replicate peaks
+     * of one standard.
+     */
+    static final double POORLY_MEASURED_RATIO = 3.0;
 
     private LibraryBuilder() {
     }
@@ -518,18 +530,24 @@ public final class LibraryBuilder {
             int skip = -1;
             if (g != null && g.outlier()) {
                 Measurement m = ms.get(g.index());
-                Outlier o = new Outlier(p.name, m.run(), m.mobility(), g.g(), g.gCritical(), settings.excludeOutliers());
+                double ratio = ownUncertaintyRatio(ms, g.index());
+                boolean poorlyMeasured = ratio > POORLY_MEASURED_RATIO;
+                boolean exclude = settings.excludeOutliers() || poorlyMeasured;
+                Outlier o = new Outlier(p.name, m.run(), m.mobility(), g.g(), g.gCritical(), exclude);
                 found.add(o);
                 outliers.add(o);
-                if (settings.excludeOutliers()) {
+                if (exclude) {
                     skip = g.index();
                 }
+                String cause = poorlyMeasured ? String.format(Locale.ROOT,
+                        " (its own uncertainty +/- %.3f is %.1f times the other replicates' median: a poorly measured"
+                                + " peak, an assignable cause)", m.mobilitySd(), ratio) : "";
                 warnings.add(new BuildWarning(BuildWarning.Kind.OUTLIER, String.join(", ", p.mixes), p.name, m.run(),
                         String.format(Locale.ROOT, "%s: the value %.3f of run %s is an outlier by the Grubbs test"
-                                        + " (G = %.3f > %.3f, %s, alpha %s, n = %d); it was %s the statistics.",
+                                        + " (G = %.3f > %.3f, %s, alpha %s, n = %d); it was %s the statistics%s.",
                                 p.name, m.mobility(), m.run(), g.g(), g.gCritical(), alternative(),
                                 NumberText.plain(settings.outlierAlpha(), "-"), all.length,
-                                settings.excludeOutliers() ? "left out of" : "kept in")));
+                                exclude ? "left out of" : "kept in", cause)));
             }
             List<Double> kept = new ArrayList<>();
             List<String> runs = new ArrayList<>();
@@ -571,6 +589,23 @@ public final class LibraryBuilder {
             }
             return new AnalyteStats(p.name, p.mixes, p.basis, ms, s.n(), s.mean(), s.sd(), min, max, rsd, tol,
                     charge, runs, found, Double.NaN);
+        }
+
+        /**
+         * The stated uncertainty of replicate {@code index} over the median of the other replicates'
+         * (NaN when either is unknown or zero).
+         */
+        private static double ownUncertaintyRatio(List<Measurement> ms, int index) {
+            double[] others = new double[ms.size() - 1];
+            int k = 0;
+            for (int i = 0; i < ms.size(); i++) {
+                if (i != index) {
+                    others[k++] = ms.get(i).mobilitySd();
+                }
+            }
+            double median = new Median().evaluate(others);
+            double own = ms.get(index).mobilitySd();
+            return median > 0 && Double.isFinite(median) && Double.isFinite(own) ? own / median : Double.NaN;
         }
 
         private LibraryEntry entry(AnalyteStats s) {
@@ -706,7 +741,10 @@ public final class LibraryBuilder {
                     + "; voltage: " + condition(cs, RunConditions::voltageKv, " kV"));
             notes.add("Replicate outliers: Grubbs test (ASTM E178), " + alternative() + ", alpha "
                     + NumberText.plain(settings.outlierAlpha(), "-") + "; outliers are reported and "
-                    + (settings.excludeOutliers() ? "left out of the statistics" : "kept in the statistics"));
+                    + (settings.excludeOutliers() ? "left out of the statistics"
+                            : "kept in the statistics unless their own uncertainty is over "
+                                    + NumberText.plain(POORLY_MEASURED_RATIO, "-")
+                                    + " times the other replicates' median"));
             notes.add("Peaks below " + percent(settings.minRelativeHeight()) + " of their run's largest were set"
                     + " aside; replicate peaks were grouped by optimal one-to-one alignment of each run to the"
                     + " group centres (join within max(" + NumberText.plain(settings.groupingSdMultiple(), "-")

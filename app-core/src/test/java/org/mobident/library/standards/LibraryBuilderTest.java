@@ -25,6 +25,8 @@ import org.junit.jupiter.api.io.TempDir;
 import org.mobident.library.Library;
 import org.mobident.library.LibraryCsv;
 import org.mobident.library.LibraryEntry;
+import org.mobident.pipeline.PeakResult;
+import org.mobident.pipeline.PeakRole;
 import org.mobident.pipeline.RunResult;
 import org.mobident.trace.RunConditions;
 
@@ -317,6 +319,41 @@ class LibraryBuilderTest {
         assertTrue(excluded.outliers().get(0).excluded());
         assertTrue(excluded.library().notes().stream().anyMatch(n -> n.contains("left out of the statistics")));
         assertTrue(kept.analyte("lithium").orElseThrow().outliers().isEmpty());
+    }
+
+    @Test
+    void poorlyMeasuredOutlierIsLeftOutEvenWhenOutliersAreKept() {
+        // n = 4: the largest possible G is (n - 1)/sqrt(n) = 1.5 (Grubbs 1969, Technometrics 11, 1), above the
+        // two-sided 5 % critical value 1.481 (Harvey, Analytical Chemistry 2.1, Appendix 7).
+        double[] sodium = {51.90, 51.95, 51.92, 53.10};
+        List<RunResult> runs = new ArrayList<>();
+        for (int r = 0; r < sodium.length; r++) {
+            runs.add(run("na" + (r + 1), 50 - r, 40.1, sodium[r]));
+        }
+        StandardsSheet s = sheet("m", analyte("lithium", 40, 0), analyte("sodium", 52, 0));
+
+        BuildResult wellMeasured = build(runs, s, DEFAULTS, null);
+        assertEquals(1, wellMeasured.outliers().size(), wellMeasured.outliers().toString());
+        assertFalse(wellMeasured.outliers().get(0).excluded());
+        assertEquals(4, wellMeasured.analyte("sodium").orElseThrow().n());
+
+        // The same value, but the run's own peak uncertainty is ten times its neighbours' (a badly cut peak).
+        RunResult last = runs.get(3);
+        List<PeakResult> peaks = new ArrayList<>();
+        for (PeakResult p : last.peaks()) {
+            boolean na = p.role() == PeakRole.ANALYTE && Math.abs(p.mobility() - 53.10) < 1e-6;
+            peaks.add(na ? new PeakResult(p.peak(), p.role(), p.mobility(), 10 * p.mobilitySd(),
+                    p.mobilityAtLibraryTemp(), p.match()) : p);
+        }
+        runs.set(3, new RunResult(last.spec(), null, last.scaleNote(), last.eofMobility(), last.scale(), peaks,
+                last.notes(), last.noiseSd()));
+        BuildResult poorlyMeasured = build(runs, s, DEFAULTS, null);
+        assertEquals(1, poorlyMeasured.outliers().size());
+        assertTrue(poorlyMeasured.outliers().get(0).excluded());
+        AnalyteStats na3 = poorlyMeasured.analyte("sodium").orElseThrow();
+        assertEquals(3, na3.n());
+        assertEquals(new DescriptiveStatistics(new double[] {51.90, 51.95, 51.92}).getMean(), na3.mean(), 1e-9);
+        assertTrue(poorlyMeasured.warnings(BuildWarning.Kind.OUTLIER).get(0).message().contains("poorly measured"));
     }
 
     @Test
