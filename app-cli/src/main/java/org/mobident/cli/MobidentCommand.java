@@ -9,7 +9,7 @@ import picocli.CommandLine.Command;
         description = "Identifies capillary zone electrophoresis peaks by effective mobility. Identification by mobility is presumptive: confirm by an orthogonal method where results carry legal, clinical or safety weight, and follow your lab's validated procedures.",
         subcommands = {IdentifyCommand.class, ReportCommand.class, PlotCommand.class, LibraryCommand.class, PredictCommand.class, RecheckCommand.class,
             AssessCommand.class, BenchCommand.class,
-            ViewCommand.class, SimulateCommand.class,
+            ViewCommand.class, SimulateCommand.class, ShellCompletionCommand.class,
             picocli.CommandLine.HelpCommand.class})
 public final class MobidentCommand implements Runnable {
     @picocli.CommandLine.Spec
