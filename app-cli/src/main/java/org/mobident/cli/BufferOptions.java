@@ -1,8 +1,11 @@
 package org.mobident.cli;
 
+import java.io.PrintWriter;
+import java.nio.file.Path;
 import org.mobident.InputException;
 import org.mobident.recheck.BufferSpec;
 import org.mobident.text.NumberText;
+import org.mobident.usecase.ReferenceData;
 import picocli.CommandLine.Option;
 
 /** The new buffer, and optionally the old buffer (the library's) when the library does not state it. */
@@ -94,5 +97,19 @@ public final class BufferOptions {
         } catch (IllegalArgumentException e) {
             throw new InputException("command line", 0, field, e.getMessage());
         }
+    }
+
+    /**
+     * The new buffer, its pH moved to the method's temperature when --buffer-substance and
+     * --ph-measured-at-c say so; the line that says what was done goes to {@code out}.
+     */
+    static BufferSpec adjustedNewBuffer(BufferOptions o, Path referenceFile, PrintWriter out)
+            throws InputException {
+        ReferenceData.AdjustedBuffer a = ReferenceData.adjusted(o.newBuffer(), o.bufferSubstance, o.phMeasuredAtC,
+                referenceFile);
+        if (a.note() != null) {
+            out.println(a.note());
+        }
+        return a.buffer();
     }
 }

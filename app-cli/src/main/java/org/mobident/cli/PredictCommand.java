@@ -13,6 +13,7 @@ import org.mobident.recheck.PhScan;
 import org.mobident.report.prediction.PhScanCsv;
 import org.mobident.report.prediction.PhScanText;
 import org.mobident.report.prediction.PredictionText;
+import org.mobident.usecase.ReferenceData;
 import org.mobident.usecase.PredictMobilities;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
@@ -76,7 +77,7 @@ public final class PredictCommand implements Callable<Integer> {
         if (scan != null) {
             return scan(library, predictor, o);
         }
-        var bufferB = ReferenceData.adjusted(buffers.newBuffer(), buffers, referenceFile, o);
+        var bufferB = BufferOptions.adjustedNewBuffer(buffers, referenceFile, o);
         var prediction = new PredictMobilities(library, predictor, buffers.oldBuffer(), analytes).inBuffer(bufferB);
         PredictionText.write(bufferB, prediction.shown(), o);
         if (out != null) {

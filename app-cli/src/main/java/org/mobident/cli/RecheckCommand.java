@@ -12,6 +12,7 @@ import org.mobident.report.recheck.RecheckHtml;
 import org.mobident.report.recheck.RecheckReportCsv;
 import org.mobident.recheck.RecheckResult;
 import org.mobident.report.recheck.RecheckSummaryText;
+import org.mobident.usecase.ReferenceData;
 import org.mobident.usecase.RecheckAssignments;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
@@ -110,6 +111,6 @@ public final class RecheckCommand implements Callable<Integer> {
     }
 
     private org.mobident.recheck.BufferSpec adjustedNewBuffer() throws org.mobident.InputException {
-        return ReferenceData.adjusted(buffers.newBuffer(), buffers, referenceFile, spec.commandLine().getOut());
+        return BufferOptions.adjustedNewBuffer(buffers, referenceFile, spec.commandLine().getOut());
     }
 }
