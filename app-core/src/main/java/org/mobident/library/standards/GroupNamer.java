@@ -22,7 +22,13 @@ import org.mobident.library.LibraryEntry;
  *   <li>the reference library: an analyte whose name the reference holds takes the nearest group of
  *       the same charge sign within max({@link BuildSettings#referenceWindow()}, entry tolerance),
  *       one-to-one, but only when that pairing is clear (see below);</li>
- *   <li>a mix of one analyte that gave exactly one group.</li>
+ *   <li>a mix of one analyte that gave exactly one group;</li>
+ *   <li>elimination: when k analytes of the mix are still unnamed and exactly k unnamed groups were
+ *       seen in (nearly) every run of the mix, k = 1 pairs them (sign agreeing and the reference value,
+ *       where there is one, within reach); for 2 ≤ k ≤ {@value #MAX_ELIMINATION} with reference values
+ *       for all, the one-to-one pairing of least total distance is taken when every other pairing is
+ *       clearly worse (by the rule below, applied to the totals); otherwise the analytes and groups are
+ *       named in a warning as pairs that nothing tells apart.</li>
  * </ol>
  * A name from steps 2 or 4 whose group has the wrong mobility sign for the analyte's charge is
  * withdrawn with a {@link BuildWarning.Kind#NAMING_CONFLICT} warning.
@@ -78,6 +84,8 @@ final class GroupNamer {
     static final double AS_STATED_SHIFT = 0.20;
     /** A rival must be at least this many times as far as the chosen pairing. */
     static final double CLEAR_RATIO = 2.0;
+    /** Most analytes left for a joint pairing by elimination (k! pairings are compared). */
+    static final int MAX_ELIMINATION = 6;
 
     private final StandardsMix mix;
     private final List<GroupInfo> groups;
@@ -118,6 +126,7 @@ final class GroupNamer {
         n.byOrder();
         n.byReference();
         n.onlyAnalyte();
+        n.byElimination();
         return new Naming(n.analyteOf, n.basisOf, n.reasons, n.warnings, n.asStated);
     }
 
@@ -383,6 +392,134 @@ final class GroupNamer {
             if (!groupOf.containsKey(a) && !reasons.containsKey(a)) {
                 assign(a, 0, NamingBasis.ONLY_ANALYTE);
                 withdrawWrongSigns(NamingBasis.ONLY_ANALYTE);
+            }
+        }
+    }
+
+    private void byElimination() {
+        List<StandardAnalyte> left = new ArrayList<>();
+        for (StandardAnalyte a : mix.analytes()) {
+            if (!groupOf.containsKey(a)) {
+                left.add(a);
+            }
+        }
+        int most = 0;
+        for (GroupInfo g : groups) {
+            most = Math.max(most, g.runCount());
+        }
+        int seenIn = most >= 3 ? most - 1 : most;
+        List<Integer> free = new ArrayList<>();
+        for (int g : freeGroupsByMobility()) {
+            if (groups.get(g).runCount() >= seenIn) {
+                free.add(g);
+            }
+        }
+        int k = left.size();
+        if (k == 0 || k != free.size() || k > MAX_ELIMINATION) {
+            return;
+        }
+        double[] target = new double[k];
+        double[] reach = new double[k];
+        boolean[] stated = new boolean[k];
+        for (int i = 0; i < k; i++) {
+            LibraryEntry e = reference == null ? null : findReference(reference, left.get(i).name());
+            target[i] = e != null && Double.isFinite(e.mobility()) ? e.mobility() : Double.NaN;
+            stated[i] = e != null && !predicted.contains(LibraryBuilder.key(e.name()));
+            double tol = e != null && Double.isFinite(e.tolerance()) ? e.tolerance() : 0.0;
+            reach[i] = stated[i] ? Math.max(reach(target[i]), tol) : Math.max(settings.referenceWindow(), tol);
+            if (k > 1 && Double.isNaN(target[i])) {
+                return;
+            }
+        }
+        int[] best = null;
+        double bestCost = Double.POSITIVE_INFINITY;
+        double secondCost = Double.POSITIVE_INFINITY;
+        for (int[] perm : permutations(k)) {
+            double cost = 0;
+            for (int i = 0; i < k && cost < Double.POSITIVE_INFINITY; i++) {
+                cost += pairCost(left.get(i), target[i], reach[i], groups.get(free.get(perm[i])).mean());
+            }
+            if (cost < bestCost) {
+                secondCost = bestCost;
+                bestCost = cost;
+                best = perm;
+            } else if (cost < secondCost) {
+                secondCost = cost;
+            }
+        }
+        if (best == null || bestCost == Double.POSITIVE_INFINITY) {
+            return;
+        }
+        boolean anyStated = false;
+        for (boolean b : stated) {
+            anyStated |= b;
+        }
+        double needed = Math.max(CLEAR_RATIO * bestCost, bestCost + margin(!anyStated));
+        if (k > 1 && secondCost < needed) {
+            List<String> names = new ArrayList<>();
+            List<String> values = new ArrayList<>();
+            List<String> means = new ArrayList<>();
+            for (int i = 0; i < k; i++) {
+                names.add(left.get(i).name());
+                values.add(String.format(Locale.ROOT, "%.3f", target[i]));
+                means.add(String.format(Locale.ROOT, "%.3f", groups.get(free.get(i)).mean()));
+            }
+            String why = String.format(Locale.ROOT, "the groups at %s are %s in some order, but their %s values (%s)"
+                            + " do not tell which: the closest pairing is %.3f units off in all, the next %.3f (a clear"
+                            + " pairing needs %.3f); give approx_mobility or order for one of them",
+                    String.join(", ", means), String.join(" and ", names), anyStated ? "reference" : "predicted",
+                    String.join(", ", values), bestCost, secondCost, needed);
+            // this one warning replaces the pairwise ones of step 3 about the same analytes
+            warnings.removeIf(w -> w.kind() == BuildWarning.Kind.DOUBTFUL_REFERENCE_NAME && names.contains(w.analyte()));
+            warnings.add(new BuildWarning(BuildWarning.Kind.DOUBTFUL_REFERENCE_NAME, mix.name(),
+                    String.join(", ", names), null, "In mix " + mix.name() + ", " + why + "."));
+            for (StandardAnalyte a : left) {
+                reasons.put(a, why);
+            }
+            return;
+        }
+        for (int i = 0; i < k; i++) {
+            assign(left.get(i), free.get(best[i]), NamingBasis.ELIMINATION);
+            reasons.remove(left.get(i));
+            String name = left.get(i).name();
+            // the pairwise doubts of step 3 about this analyte are settled
+            warnings.removeIf(w -> w.kind() == BuildWarning.Kind.DOUBTFUL_REFERENCE_NAME && name.equals(w.analyte()));
+        }
+    }
+
+    /**
+     * Distance of the pairing of analyte {@code a} (reference value {@code target}, NaN for none)
+     * with a group of mean {@code mean}; infinite where the sign disagrees or the value is out of reach.
+     */
+    private double pairCost(StandardAnalyte a, double target, double reach, double mean) {
+        if (!signAgrees(a.expectedSign(), mean)) {
+            return Double.POSITIVE_INFINITY;
+        }
+        if (Double.isNaN(target)) {
+            return 0.0;
+        }
+        double d = Math.abs(mean - target);
+        return Math.signum(target) == Math.signum(mean) && d <= reach ? d : Double.POSITIVE_INFINITY;
+    }
+
+    /** All orderings of 0 … k − 1 (Heap's algorithm would do; k ≤ {@value #MAX_ELIMINATION}). */
+    private static List<int[]> permutations(int k) {
+        List<int[]> out = new ArrayList<>();
+        permute(new int[k], new boolean[k], 0, out);
+        return out;
+    }
+
+    private static void permute(int[] current, boolean[] used, int pos, List<int[]> out) {
+        if (pos == current.length) {
+            out.add(current.clone());
+            return;
+        }
+        for (int v = 0; v < current.length; v++) {
+            if (!used[v]) {
+                used[v] = true;
+                current[pos] = v;
+                permute(current, used, pos + 1, out);
+                used[v] = false;
             }
         }
     }

@@ -385,10 +385,15 @@ public final class LibraryBuilder {
                     }
                 }
             }
-            boolean analytesLeft = found.size() < mix.analytes().size();
+            List<String> unnamedAnalytes = new ArrayList<>();
+            for (StandardAnalyte a : mix.analytes()) {
+                if (!found.contains(a)) {
+                    unnamedAnalytes.add(a.name());
+                }
+            }
             for (int g = 0; g < groups.size(); g++) {
                 if (naming.analyteOfGroup()[g] == null) {
-                    unnamedGroup(mix, groups.get(g), infos.get(g), analytesLeft);
+                    unnamedGroup(mix, groups.get(g), infos.get(g), unnamedAnalytes);
                 }
             }
             for (StandardAnalyte a : mix.analytes()) {
@@ -449,7 +454,8 @@ public final class LibraryBuilder {
         }
 
         private void unnamedGroup(StandardsMix mix, List<Measurement> group, GroupNamer.GroupInfo info,
-                                  boolean analytesLeft) {
+                                  List<String> unnamedAnalytes) {
+            boolean analytesLeft = !unnamedAnalytes.isEmpty();
             List<String> runs = group.stream().map(Measurement::run).toList();
             String reason = analytesLeft ? "probably an analyte of the mix, but nothing tells which"
                     : "fits no expected analyte of the mix";
@@ -459,9 +465,10 @@ public final class LibraryBuilder {
             StringBuilder msg = new StringBuilder(String.format(Locale.ROOT,
                     "Mix %s: a peak at mobility %.3f (in %d run(s): %s) ", mix.name(), info.mean(), runs.size(),
                     String.join(", ", runs)));
-            msg.append(analytesLeft ? "could not be named: give approx_mobility or order in the standards sheet"
+            msg.append(analytesLeft ? "could not be named (the mix's analytes not yet named: "
+                    + String.join(", ", unnamedAnalytes) + "): give approx_mobility or order in the standards sheet"
                     : "fits no expected analyte and was not entered");
-            LibraryEntry near = nearestReference(info.mean());
+            LibraryEntry near = analytesLeft ? null : nearestReference(info.mean());
             if (near != null) {
                 msg.append(String.format(Locale.ROOT, "; nearest reference entry: %s (%.3f%s)", near.name(),
                         near.mobility(), predicted.contains(key(near.name())) ? ", predicted for the buffer" : ""));

@@ -9,5 +9,11 @@ public enum NamingBasis {
     /** Nearest entry of the reference library with the analyte's name and the same charge sign. */
     REFERENCE_LIBRARY,
     /** The mix holds a single analyte and the runs a single group. */
-    ONLY_ANALYTE
+    ONLY_ANALYTE,
+    /**
+     * The last analyte of a mix still unnamed took the last group seen in its runs (its reference
+     * value, where there is one, agreeing), or the mix's last analytes took its last groups in the
+     * one pairing their reference values make clear.
+     */
+    ELIMINATION
 }
