@@ -248,8 +248,10 @@ public final class PeakDetector {
             }
             s = e + 1;
         }
+        double typicalSigma = typicalWidth / GaussianClusterFit.HALF_WIDTH_PER_SIGMA;
         Reporting reporting = new Reporting(t, raw, smooth, sampling, localNoise, correlation, significance,
-                smoothBound, settings.minSignalToNoise(), returnLevel);
+                smoothBound, settings.minSignalToNoise(), returnLevel,
+                SignalLimits.FIT_MIN_SIGMA_FACTOR * typicalSigma, SignalLimits.FIT_MAX_SIGMA_FACTOR * typicalSigma);
         List<Measured> reported = new ArrayList<>(found.size());
         for (Measured m : found) {
             Measured r = reporting.judge(m);
@@ -291,7 +293,7 @@ public final class PeakDetector {
      */
     private record Reporting(double[] t, double[] raw, double[] smooth, double sampling, LocalNoise noise,
                              double correlation, double significance, double smoothBound,
-                             double minSignalToNoise, double returnLevel) {
+                             double minSignalToNoise, double returnLevel, double minSigmaS, double maxSigmaS) {
 
         /** The peak with its S/N and centre uncertainty, or null when it is not to be reported. */
         Measured judge(Measured m) {
@@ -315,11 +317,43 @@ public final class PeakDetector {
                 return null;
             }
             double centreSd = m.centre == null ? m.centreTimeSdS
-                    : m.centre.uncertaintyS(local.rawSd(), correlation, m.apexTimeS,
+                    : m.centre.uncertaintyWithShapeS(local.rawSd(), correlation, shapeTermS(m, signalToNoise),
                             new ZoneCentre.Boundaries(m.startTimeS, aboveBaseline(m.startTimeS), m.endTimeS,
                                     aboveBaseline(m.endTimeS)),
                             m.widthHalfS, m.area);
             return m.reported(signalToNoise, centreSd);
+        }
+
+        /**
+         * The shape term of a measured peak's centre uncertainty ({@link ZoneCentre}). A skewed zone
+         * (apex and centre more than {@link SignalLimits#SKEW_CHECK_MIN_WIDTHS} w½ apart) measured
+         * well enough to fit (S/N at least the quantitation limit) gets a second estimate of its
+         * first moment, μ + τ of one exponentially modified Gaussian fitted to its samples
+         * ({@link SkewedZoneFit}; Grushka 1972): the model extrapolates the diffuse flank where the
+         * moment of the samples stops at the peak's end. The two estimates agree on a zone recorded
+         * whole and differ where the flank was cut or the baseline took part of it; their difference
+         * is the term, never below {@link SignalLimits#CENTRE_SHAPE_FLOOR_FACTOR} of the apex–centre
+         * distance. Otherwise (symmetric, faint, or no plausible fit) the term is
+         * {@link SignalLimits#CENTRE_SHAPE_FACTOR} of that distance.
+         */
+        private double shapeTermS(Measured m, double signalToNoise) {
+            double skew = m.centre.centreTimeS() - m.apexTimeS;
+            double byDistance = SignalLimits.CENTRE_SHAPE_FACTOR * Math.abs(skew);
+            if (Math.abs(skew) < SignalLimits.SKEW_CHECK_MIN_WIDTHS * m.widthHalfS
+                    || !(signalToNoise >= Tolerances.QUANTITATION_LIMIT_SIGNAL_TO_NOISE)) {
+                return byDistance;
+            }
+            SkewedZoneFit f = SkewedZoneFit.fit(t, raw, nearestIndex(t, m.startTimeS), nearestIndex(t, m.endTimeS),
+                    minSigmaS, maxSigmaS);
+            if (f == null || Math.signum(f.tauS()) != Math.signum(skew)) {
+                return byDistance;
+            }
+            double fitted = f.centreS() + f.tauS();
+            if (!(fitted > m.startTimeS && fitted < m.endTimeS)) {
+                return byDistance;
+            }
+            return Math.max(Math.abs(m.centre.centreTimeS() - fitted),
+                    SignalLimits.CENTRE_SHAPE_FLOOR_FACTOR * Math.abs(skew));
         }
 
         /** How far the smoothed corrected signal stands above the return level at a time (a peak's
@@ -668,13 +702,53 @@ public final class PeakDetector {
                 double end = k + 1 < zones.size() ? fit.dominanceBoundaryS(k) : t[last];
                 double apex = z.apexTimeS();
                 double height = z.value(apex);
-                double shape = SignalLimits.CENTRE_SHAPE_FACTOR * Math.abs(z.firstMomentS() - apex);
+                double skew = Math.abs(z.firstMomentS() - apex);
+                double shape = SignalLimits.CENTRE_SHAPE_FACTOR * skew;
+                double[] share = skewedShareMomentS(zones, k, first, last);
+                if (Double.isFinite(share[0])) {
+                    shape = Math.hypot(Math.max(Math.abs(share[0] - z.firstMomentS()),
+                            SignalLimits.CENTRE_SHAPE_FLOOR_FACTOR * skew), share[1]);
+                }
                 double centreSd = Math.hypot(z.firstMomentSdS(), shape);
                 out.add(new Measured(apex, z.centreSdS(), height, start, end, z.areaTimesS(), z.widthHalfS(), true,
                         height, null, z.firstMomentS(), centreSd, Double.NaN));
                 start = end;
             }
             return out;
+        }
+
+        /**
+         * The first moment of skewed zone k's share of the data, and how much of it rests on samples
+         * the neighbours share. Each sample of the cluster is dealt out to the zones in proportion to
+         * their fitted values (as {@link #shareCentre} does for Gaussians): the moment of zone k's
+         * part estimates the same moment as the fitted μ + τ without the model's shape, and the two
+         * agree when the zone follows the model. Where the neighbours share a sample, the deal itself
+         * rests on the model: Σ p_i (1 − f_i) |t_i − c| / A (p_i zone k's part, f_i its fraction of the
+         * sample, A the part's area) is how far the moment would move if those contested parts were
+         * all misplaced by their whole lever, an order-of-magnitude term for the overlap. Returns
+         * {moment, overlap term}, s; the moment NaN when the share has no positive area.
+         */
+        private double[] skewedShareMomentS(List<SkewedClusterFit.Zone> zones, int k, int first, int last) {
+            double[] part = new double[last - first + 1];
+            double[] fraction = new double[last - first + 1];
+            double[] times = java.util.Arrays.copyOfRange(t, first, last + 1);
+            for (int i = first; i <= last; i++) {
+                double total = 0;
+                for (SkewedClusterFit.Zone z : zones) {
+                    total += z.value(t[i]);
+                }
+                fraction[i - first] = total > 0 ? zones.get(k).value(t[i]) / total : 0.0;
+                part[i - first] = raw[i] * fraction[i - first];
+            }
+            double centre = ZoneCentre.of(times, part, 0, part.length - 1).centreTimeS();
+            double area = 0;
+            double contested = 0;
+            for (int i = 0; i < part.length; i++) {
+                double w = 0.5 * ((i > 0 ? times[i] - times[i - 1] : 0) + (i + 1 < part.length ? times[i + 1] - times[i] : 0));
+                area += w * part[i];
+                contested += w * Math.abs(part[i]) * (1 - fraction[i]) * Math.abs(times[i] - centre);
+            }
+            return new double[] {centre, area > 0 ? contested / area : Double.NaN};
         }
 
         /** Every skewed zone reportable (height and width) and no two closer than the minimum separation. */

@@ -197,6 +197,14 @@ final class SignalLimits {
      *  centre (a modelling choice, see {@code ZoneCentre}). */
     static final double CENTRE_SHAPE_FACTOR = 1.0 / 3.0;
 
+    /** A peak whose apex and centre lie more than this many half-height widths apart is skewed
+     *  enough for its centre to be checked against a fitted skewed zone (a modelling choice). */
+    static final double SKEW_CHECK_MIN_WIDTHS = 0.1;
+
+    /** Least shape term of a skewed zone whose centre a fitted zone confirms: this fraction of the
+     *  apex–centre distance (a modelling choice: the fitted shape is itself a model). */
+    static final double CENTRE_SHAPE_FLOOR_FACTOR = 0.1;
+
     /** Points of the apex fit: the top of the peak down to this fraction of the apex. */
     static final double APEX_FIT_LEVEL = 0.5;
 
