@@ -751,13 +751,19 @@ public final class PeakDetector {
             return new double[] {centre, area > 0 ? contested / area : Double.NaN};
         }
 
-        /** Every skewed zone reportable (height and width) and no two closer than the minimum separation. */
+        /**
+         * Every skewed zone reportable (height and width), placed by the fit to better than its own
+         * width at half height (a zone whose first moment the fit cannot place within its width is
+         * not resolved: two components sharing one dispersed zone give SDs of seconds to minutes),
+         * and no two closer than the minimum separation.
+         */
         private boolean plausible(SkewedClusterFit.Result fit) {
             List<SkewedClusterFit.Zone> zones = fit.zones();
             for (int k = 0; k < zones.size(); k++) {
                 SkewedClusterFit.Zone z = zones.get(k);
                 double apex = z.apexTimeS();
-                if (!(z.value(apex) >= minHeight) || !(z.widthHalfS() >= minWidth)) {
+                if (!(z.value(apex) >= minHeight) || !(z.widthHalfS() >= minWidth)
+                        || !z.placed()) {
                     return false;
                 }
                 if (k > 0 && z.firstMomentS() - zones.get(k - 1).firstMomentS()

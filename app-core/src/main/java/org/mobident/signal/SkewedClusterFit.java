@@ -100,6 +100,15 @@ final class SkewedClusterFit {
             return best;
         }
 
+        /**
+         * True when the fit places the zone's first moment to better than its own width at half
+         * height: a component the fit cannot place within its width is not a resolved zone (two
+         * components sharing one dispersed zone get SDs of seconds to minutes).
+         */
+        boolean placed() {
+            return firstMomentSdS < widthHalfS();
+        }
+
         /** The zone's full width at half its maximum, s. */
         double widthHalfS() {
             double apex = apexTimeS();
