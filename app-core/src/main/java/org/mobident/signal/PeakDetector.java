@@ -681,15 +681,39 @@ public final class PeakDetector {
             if (!(residualVariance > SignalLimits.SKEWED_CLUSTER_MISFIT_RATIO * noiseSd * noiseSd)) {
                 return null; // the Gaussians fit to the noise: nothing for skewed zones to explain
             }
-            SkewedClusterFit.Result skewed = SkewedClusterFit.fit(t, raw, first, last, start, typicalSigmaS,
-                    minSigma, maxSigma);
-            if (skewed == null || !plausible(skewed)) {
-                return null;
-            }
             int n = gaussians.points();
             double bicGaussians = n * Math.log(gaussians.residualSumOfSquares() / n) + gaussians.parameters() * Math.log(n);
-            double bicSkewed = n * Math.log(skewed.residualSumOfSquares() / n) + skewed.parameters() * Math.log(n);
-            return bicSkewed <= bicGaussians - SignalLimits.SKEWED_CLUSTER_MIN_GAIN ? skewed : null;
+            SkewedClusterFit.Result skewed = SkewedClusterFit.fit(t, raw, first, last, start, typicalSigmaS,
+                    minSigma, maxSigma);
+            if (skewed != null && plausible(skewed) && bic(skewed) <= bicGaussians - SignalLimits.SKEWED_CLUSTER_MIN_GAIN) {
+                return skewed;
+            }
+            if (start.length < 2) {
+                return null;
+            }
+            // one zone fewer: a Gaussian fit follows a long diffuse flank with an extra zone, which
+            // the skewed zones must not keep (each start left out in turn, the lowest criterion kept)
+            SkewedClusterFit.Result best = null;
+            for (int drop = 0; drop < start.length; drop++) {
+                double[] fewer = new double[start.length - 1];
+                for (int k = 0, j = 0; k < start.length; k++) {
+                    if (k != drop) {
+                        fewer[j++] = start[k];
+                    }
+                }
+                SkewedClusterFit.Result f = SkewedClusterFit.fit(t, raw, first, last, fewer, typicalSigmaS, minSigma,
+                        maxSigma);
+                if (f != null && plausible(f) && (best == null || bic(f) < bic(best))) {
+                    best = f;
+                }
+            }
+            return best != null && bic(best) <= bicGaussians - SignalLimits.SKEWED_CLUSTER_MIN_GAIN ? best : null;
+        }
+
+        /** Bayesian information criterion n ln(RSS/n) + p ln n of a skewed-cluster fit. */
+        private static double bic(SkewedClusterFit.Result fit) {
+            int n = fit.points();
+            return n * Math.log(fit.residualSumOfSquares() / n) + fit.parameters() * Math.log(n);
         }
 
         /** The measured zones of a skewed-cluster fit; the centre of each is its first moment μ + τ. */

@@ -153,6 +153,16 @@ final class SkewedClusterFit {
             return 1 + 3 * zones.size();
         }
 
+        /** True when every zone is placed to better than its width ({@link Zone#placed()}). */
+        boolean allPlaced() {
+            for (Zone z : zones) {
+                if (!z.placed()) {
+                    return false;
+                }
+            }
+            return true;
+        }
+
         /** Where zone k+1 starts to dominate zone k: the crossing of their values between their apexes. */
         double dominanceBoundaryS(int k) {
             Zone a = zones.get(k);
@@ -225,6 +235,9 @@ final class SkewedClusterFit {
         if (tailing == null || fronting == null) {
             return tailing == null ? fronting : tailing;
         }
+        if (tailing.allPlaced() != fronting.allPlaced()) {
+            return tailing.allPlaced() ? tailing : fronting;
+        }
         return tailing.residualSumOfSquares() <= fronting.residualSumOfSquares() ? tailing : fronting;
     }
 
@@ -289,17 +302,25 @@ final class SkewedClusterFit {
                 starts.add(start);
             }
         }
+        // the best fit among those that place every zone (a start that lets a zone wander onto its
+        // neighbour's flank may fit the noise a little better while placing nothing); the best of
+        // all only when none does
         Result best = null;
+        Result bestPlaced = null;
         for (double[] start : starts) {
             if (!startAreas(u, target, sign, start, k, area)) {
                 continue;
             }
-            Result r = solve(u, target, ref, span, sign, start, k, area, minTau, minSigmaS, maxSigmaS);
+            Result r = solve(u, target, ref, span, sign, start, k, area, minTau, minSigmaS, maxSigmaS, startApexS);
             if (r != null && (best == null || r.residualSumOfSquares() < best.residualSumOfSquares())) {
                 best = r;
             }
+            if (r != null && r.allPlaced()
+                    && (bestPlaced == null || r.residualSumOfSquares() < bestPlaced.residualSumOfSquares())) {
+                bestPlaced = r;
+            }
         }
-        return best;
+        return bestPlaced != null ? bestPlaced : best;
     }
 
     /** Sets the starting areas of {@code start} by linear least squares for its shapes, floored at a
@@ -327,16 +348,25 @@ final class SkewedClusterFit {
 
     /** Levenberg–Marquardt from one start; null when it fails. */
     private static Result solve(double[] u, double[] target, double ref, double span, double sign, double[] start,
-                                int k, double area, double minTau, double minSigmaS, double maxSigmaS) {
+                                int k, double area, double minTau, double minSigmaS, double maxSigmaS,
+                                double[] startApexS) {
         int n = u.length;
         int parameters = 1 + 3 * k;
         double minArea = 1e-6 * area;
+        // each zone's Gaussian centre (its sharp flank) stays between the midpoints to its neighbours'
+        // starting apexes: a zone may change its shape, not take over a neighbour's top
+        double[] lo = new double[k];
+        double[] hi = new double[k];
+        for (int j = 0; j < k; j++) {
+            lo[j] = j == 0 ? 0 : Math.max(0, 0.5 * (startApexS[j - 1] + startApexS[j]) - ref);
+            hi[j] = j == k - 1 ? span : Math.min(span, 0.5 * (startApexS[j] + startApexS[j + 1]) - ref);
+        }
         ParameterValidator validator = p -> {
             double[] q = p.toArray();
             q[0] = Math.min(maxSigmaS, Math.max(minSigmaS, q[0]));
             for (int j = 0; j < k; j++) {
                 q[1 + 3 * j] = Math.max(minArea, q[1 + 3 * j]);
-                q[2 + 3 * j] = Math.min(span, Math.max(0, q[2 + 3 * j]));
+                q[2 + 3 * j] = Math.min(hi[j], Math.max(lo[j], q[2 + 3 * j]));
                 q[3 + 3 * j] = Math.min(span, Math.max(minTau, q[3 + 3 * j]));
             }
             return new ArrayRealVector(q, false);

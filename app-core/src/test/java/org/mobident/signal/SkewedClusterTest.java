@@ -174,6 +174,38 @@ class SkewedClusterTest {
         assertTrue(!lost.placed());
     }
 
+    @Test
+    void aSmallZoneOnALongDiffuseFrontIsOneOfTwoZonesNotThree() {
+        // A concentrated zone (τ -3.8 s, σ 0.22 s) whose diffuse front carries a small zone 5 s earlier:
+        // Gaussians follow the front with an extra zone, and the skewed fit started from all their tops
+        // fails; with one start left out, two skewed zones explain the cluster. Expected first moments:
+        // 106.15 s (Grushka 1972: t_G + τ) and the small zone's 101.27 s. Two more zones follow at 114 and
+        // 116 s, as in the run this case was found in. The concentrated zone must keep its moment (Gaussians
+        // put it 1.2 s late in one of these draws); the small zone, where reported, its own (in one draw the
+        // fit cannot place it and it is absorbed, a known limit).
+        for (long seed = 1; seed <= 4; seed++) {
+            double[] t = Synthetic.regularTimes(60, 0.2, 600);
+            double[] y = new double[t.length];
+            Synthetic.addGaussian(t, y, 101.27, 0.28, 0.47);
+            addEmg(t, y, 8.32, 106.15, 0.22, -3.77);
+            Synthetic.addGaussian(t, y, 114.23, 0.30, 0.43);
+            addEmg(t, y, 2.74, 115.83, 0.31, -1.39);
+            Synthetic.addGaussian(t, y, 140.0, 0.3, 0.40);
+            Synthetic.addCorrelatedNoise(y, 0.016, 0.69, 60 + seed);
+            List<Peak> peaks = PeakDetector.analyse(Synthetic.trace(t, y), Detection.DIRECT, PeakSettings.DEFAULT)
+                    .peaks();
+            List<Peak> cluster = peaks.stream().filter(p -> p.apexTimeS() > 90 && p.apexTimeS() < 112).toList();
+            assertTrue(cluster.size() == 1 || cluster.size() == 2, "seed " + seed + ": " + cluster);
+            Peak concentrated = cluster.get(cluster.size() - 1);
+            assertEquals(106.15, concentrated.centreTimeS(), 0.5, "seed " + seed + ": concentrated zone");
+            assertTrue(Math.abs(concentrated.centreTimeS() - 106.15) <= 3 * concentrated.centreTimeSdS(),
+                    "seed " + seed + ": stated SD " + concentrated.centreTimeSdS());
+            if (cluster.size() == 2) {
+                assertEquals(101.27, cluster.get(0).centreTimeS(), 0.3, "seed " + seed + ": small zone");
+            }
+        }
+    }
+
     private static Peak nearest(List<Peak> peaks, double timeS) {
         Peak best = null;
         for (Peak p : peaks) {
