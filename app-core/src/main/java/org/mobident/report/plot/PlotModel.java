@@ -124,11 +124,24 @@ public record PlotModel(Axis axis, String title, List<Series> series, List<PeakM
      * @param dip    true when the peak points down (indirect detection): marked below
      * @param label  short text: analyte and confidence, "?" when unassigned, the marker's role
      * @param status how it is drawn
+     * @param size   the peak's height in detector units (NaN when unknown): where labels crowd, larger
+     *               peaks keep theirs
      */
-    public record PeakMark(int series, double x, double y, boolean dip, String label, PeakStatus status) {
+    public record PeakMark(int series, double x, double y, boolean dip, String label, PeakStatus status,
+                           double size) {
         public PeakMark {
             label = label == null ? "" : label;
             Objects.requireNonNull(status, "status");
+        }
+
+        /** A mark whose size is not known. */
+        public PeakMark(int series, double x, double y, boolean dip, String label, PeakStatus status) {
+            this(series, x, y, dip, label, status, Double.NaN);
+        }
+
+        /** Whether the label names something (an analyte or a marker) rather than saying "unknown". */
+        public boolean named() {
+            return !label.isEmpty() && status != PeakStatus.UNASSIGNED;
         }
     }
 
@@ -278,7 +291,7 @@ public record PlotModel(Axis axis, String title, List<Series> series, List<PeakM
             for (PeakMark m : marks) {
                 if (m.status() == PeakStatus.MARKER && !m.label().isEmpty()) {
                     if (labelled) {
-                        m = new PeakMark(m.series(), m.x(), m.y(), m.dip(), "", m.status());
+                        m = new PeakMark(m.series(), m.x(), m.y(), m.dip(), "", m.status(), m.size());
                     }
                     labelled = true;
                 }
@@ -384,7 +397,8 @@ public record PlotModel(Axis axis, String title, List<Series> series, List<PeakM
             if (!Double.isFinite(x)) {
                 return null;
             }
-            return new PeakMark(seriesIndex, x, apexSignal(trace, p), p.dip(), labelOf(pr), PeakStatus.of(pr));
+            return new PeakMark(seriesIndex, x, apexSignal(trace, p), p.dip(), labelOf(pr), PeakStatus.of(pr),
+                    Math.abs(p.height()));
         }
     }
 
