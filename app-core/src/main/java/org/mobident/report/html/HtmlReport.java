@@ -392,15 +392,7 @@ public final class HtmlReport {
 
     /** The run's scale correction a, b in words: fitted values with SDs, not fitted, or switched off. */
     static String scaleText(RunResult r) {
-        org.mobident.matching.RunScale s = r.runScale();
-        if (!r.mobilityKnown() || s.status() == org.mobident.matching.RunScale.Status.OFF) {
-            return "none";
-        }
-        if (!s.fitted()) {
-            return String.format(java.util.Locale.ROOT, "not fitted (%.1f peaks matched, 2 needed)", s.anchors());
-        }
-        return String.format(java.util.Locale.ROOT, "a = %.4f ± %.4f, b = %+.2f ± %.2f (from %.1f matched peaks)",
-                s.factor(), s.factorSd(), s.offset(), s.offsetSd(), s.anchors());
+        return org.mobident.report.ScaleCorrectionText.of(r);
     }
 
     private static void run(StringBuilder sb, int index, RunResult r, Map<String, Trace> traces, Library library) {

@@ -79,6 +79,23 @@ public record PlotModel(Axis axis, String title, List<Series> series, List<PeakM
         return b.build();
     }
 
+    /** The colour ("#rrggbb") both renderers draw series {@code index} in: the viewer's run list shows the same. */
+    public static String seriesColour(int index) {
+        return PlotStyle.seriesColour(index);
+    }
+
+    /**
+     * The plot's word for a marker of {@code role}: "marker" for the neutral marker (the legend's
+     * word for every marker) and "ref. marker" for a charged marker of known mobility; null for
+     * an analyte.
+     */
+    public static String markerWord(PeakRole role) {
+        if (role == PeakRole.NEUTRAL_MARKER) {
+            return PeakStatus.MARKER.label();
+        }
+        return role == PeakRole.MOBILITY_MARKER ? "ref. " + PeakStatus.MARKER.label() : null;
+    }
+
     public static Builder builder(Axis axis) {
         return new Builder(axis);
     }
@@ -429,11 +446,8 @@ public record PlotModel(Axis axis, String title, List<Series> series, List<PeakM
      * legend's word for it) and "ref. marker" for a charged marker of known mobility.
      */
     public static String labelOf(PeakResult pr) {
-        if (pr.role() == PeakRole.NEUTRAL_MARKER) {
-            return PeakStatus.MARKER.label();
-        }
-        if (pr.role() == PeakRole.MOBILITY_MARKER) {
-            return "ref. " + PeakStatus.MARKER.label();
+        if (pr.role() != PeakRole.ANALYTE) {
+            return markerWord(pr.role());
         }
         if (pr.match() == null || pr.match().assigned() == null || PeakStatus.of(pr) == PeakStatus.UNASSIGNED) {
             return "?";
