@@ -115,16 +115,15 @@ final class PeakDetails {
 
     /**
      * The whole description as simple HTML for a text pane, in two columns so that it fits the
-     * window's details panel without scrolling: assignment, mobilities and candidates on the left;
-     * the run (with its scale correction when {@code run} is given) and the peak's shape and size
-     * on the right.
+     * window's details panel without scrolling: run, assignment, mobilities and the candidates on
+     * the left; the run's scale correction (when {@code run} is given) and the peak's shape and
+     * size on the right.
      */
     static String html(String runName, RunResult run, PeakResult pr) {
         List<String[]> summary = summary(runName, pr);
         List<String[]> runRows = new ArrayList<>();
-        runRows.add(summary.remove(0)); // the run's name
         if (run != null) {
-            runRows.add(row("Scale correction", ScaleCorrectionText.brief(run)));
+            runRows.add(row("Run scale correction", ScaleCorrectionText.brief(run)));
         }
         StringBuilder sb = new StringBuilder("<html><body><table cellspacing='0' cellpadding='0'><tr><td valign='top'>");
         rows(sb, summary);
@@ -154,22 +153,28 @@ final class PeakDetails {
                 }
             }
         }
-        sb.append("</td><td width='18'></td><td valign='top'>");
-        rows(sb, runRows);
+        sb.append("</td><td width='14'></td><td valign='top'>");
+        rows(sb, runRows, true);
         List<String[]> shape = shape(pr);
         if (!shape.isEmpty()) {
-            sb.append("<div style='margin-top:6px'><b>Peak</b></div>");
-            rows(sb, shape);
+            sb.append("<div><b>Peak</b></div>");
+            rows(sb, shape, true); // the shorter column: its labels may take two lines
         }
         sb.append("</td></tr></table></body></html>");
         return sb.toString();
     }
 
     private static void rows(StringBuilder sb, List<String[]> rows) {
+        rows(sb, rows, false);
+    }
+
+    /** A table of label and value rows; values never wrap, labels only when {@code wrapLabels}. */
+    private static void rows(StringBuilder sb, List<String[]> rows, boolean wrapLabels) {
         sb.append("<table cellspacing='0' cellpadding='1'>");
         for (String[] r : rows) {
-            sb.append("<tr><td nowrap><font color='" + LABEL_COLOUR + "'>").append(Markup.escape(r[0]))
-                    .append("</font>&nbsp;&nbsp;</td><td nowrap>").append(Markup.escape(r[1])).append("</td></tr>");
+            sb.append(wrapLabels ? "<tr><td>" : "<tr><td nowrap>").append("<font color='" + LABEL_COLOUR + "'>")
+                    .append(Markup.escape(r[0]))
+                    .append("</font>&nbsp;</td><td nowrap>").append(Markup.escape(r[1])).append("</td></tr>");
         }
         sb.append("</table>");
     }

@@ -47,16 +47,19 @@ final class ViewerWindow implements PlotPanel.Gestures {
     static final String HINT = "Wheel: zoom   Drag: zoom to range   Shift-drag: pan   Click: select a peak";
 
     /** Share of the height the plot gets when the window opens. */
-    static final double PLOT_SHARE = 0.58;
+    static final double PLOT_SHARE = 0.55;
 
     /** The window's size when the screen allows it. */
     static final Dimension WINDOW = new Dimension(1400, 900);
 
     /** Width of the run list, px. */
-    static final int RUN_LIST_WIDTH = 280;
+    static final int RUN_LIST_WIDTH = 245;
 
-    /** Width of the details panel when the window opens, px (wide enough for its two columns). */
-    static final int DETAILS_WIDTH = 640;
+    /** Width of the peak table when the window opens, px. */
+    static final int PEAK_TABLE_WIDTH = 510;
+
+    /** Preferred width of the details panel, px (wide enough for its two columns). */
+    static final int DETAILS_WIDTH = 600;
 
     /** Gap between controls and around panels, px. */
     private static final int GAP = 8;
@@ -65,6 +68,7 @@ final class ViewerWindow implements PlotPanel.Gestures {
     private final JFrame frame;
     private JSplitPane centreSplit;
     private JSplitPane bottomSplit;
+    private JSplitPane mainSplit;
     private JScrollPane detailsPane;
     private final PlotPanel plot = new PlotPanel();
     private final RunListModel runModel = new RunListModel();
@@ -145,7 +149,7 @@ final class ViewerWindow implements PlotPanel.Gestures {
                 ToleranceBand.matching(setup.library(), setup.settings().matchSettings()), setup.initialRuns());
         ViewerWindow w = new ViewerWindow(data, initialState(setup, data), setup.title(), onClosed, true);
         w.frame.setVisible(true);
-        w.centreSplit.setDividerLocation(PLOT_SHARE);
+        w.placeDividers();
         w.peakTable.requestFocusInWindow();
         w.startLoading(setup);
         return w;
@@ -159,9 +163,19 @@ final class ViewerWindow implements PlotPanel.Gestures {
         ViewerWindow w = new ViewerWindow(data, state, "", () -> { }, false);
         w.content.setSize(width, height);
         layOut(w.content);
-        w.centreSplit.setDividerLocation(PLOT_SHARE);
+        w.placeDividers();
         layOut(w.content);
         return w;
+    }
+
+    /**
+     * Sets the dividers as the window opens: the run list and the peak table at their widths,
+     * the plot at its share of the height; the details panel takes the rest of the width.
+     */
+    private void placeDividers() {
+        mainSplit.setDividerLocation(RUN_LIST_WIDTH);
+        bottomSplit.setDividerLocation(PEAK_TABLE_WIDTH);
+        centreSplit.setDividerLocation(PLOT_SHARE);
     }
 
     /** Lays out {@code c} and everything in it, top down, as a shown window does. */
@@ -223,16 +237,17 @@ final class ViewerWindow implements PlotPanel.Gestures {
         runTable.setRowSelectionAllowed(false);
         runTable.setShowGrid(false);
         runTable.setIntercellSpacing(new Dimension(0, 0));
-        runTable.getColumnModel().getColumn(0).setMaxWidth(44);
-        runTable.getColumnModel().getColumn(1).setPreferredWidth(150);
+        runTable.getColumnModel().getColumn(0).setMaxWidth(30);
+        runTable.getColumnModel().getColumn(0).setPreferredWidth(30);
+        runTable.getColumnModel().getColumn(1).setPreferredWidth(120);
         runTable.getColumnModel().getColumn(1).setCellRenderer(new RunNameRenderer());
-        runTable.getColumnModel().getColumn(2).setPreferredWidth(110);
+        runTable.getColumnModel().getColumn(2).setPreferredWidth(90);
         JScrollPane runs = titled(new JScrollPane(runTable), "Runs");
         runs.setPreferredSize(new Dimension(RUN_LIST_WIDTH, 400));
 
         peakTable.setAutoCreateRowSorter(true);
         int[] digits = {-1, 2, 2, 3};
-        int[] widths = {110, 70, 70, 55, 120, 80, 80};
+        int[] widths = {78, 70, 62, 48, 86, 88, 76};
         for (int c = 0; c < widths.length; c++) {
             peakTable.getColumnModel().getColumn(c).setPreferredWidth(widths[c]);
             if (c < digits.length && digits[c] >= 0) {
@@ -268,11 +283,12 @@ final class ViewerWindow implements PlotPanel.Gestures {
         details.setEditable(false);
         details.putClientProperty(JEditorPane.HONOR_DISPLAY_PROPERTIES, Boolean.TRUE);
         details.setFont(peakTable.getFont());
-        details.setBorder(BorderFactory.createEmptyBorder(GAP / 2, GAP, GAP / 2, GAP));
+        details.setBorder(BorderFactory.createEmptyBorder(GAP / 2, GAP - 2, GAP / 2, GAP - 2));
         detailsPane = titled(new JScrollPane(details), "Selected peak");
         detailsPane.setPreferredSize(new Dimension(DETAILS_WIDTH, 290));
+        detailsPane.setMinimumSize(new Dimension(DETAILS_WIDTH / 2, 100));
         JScrollPane peaksPane = titled(new JScrollPane(peakTable), "Peaks");
-        peaksPane.setPreferredSize(new Dimension(460, 290));
+        peaksPane.setPreferredSize(new Dimension(PEAK_TABLE_WIDTH, 290));
         JSplitPane bottom = new JSplitPane(JSplitPane.HORIZONTAL_SPLIT, peaksPane, detailsPane);
         bottomSplit = bottom;
         bottom.setResizeWeight(1.0);
@@ -284,6 +300,7 @@ final class ViewerWindow implements PlotPanel.Gestures {
         centre.setResizeWeight(PLOT_SHARE);
         centre.setBorder(null);
         JSplitPane main = new JSplitPane(JSplitPane.HORIZONTAL_SPLIT, runs, centre);
+        mainSplit = main;
         main.setResizeWeight(0);
         main.setBorder(null);
 
@@ -630,7 +647,7 @@ final class ViewerWindow implements PlotPanel.Gestures {
     /** The run list: a tick to draw a run, its name and where it stands. */
     private final class RunListModel extends AbstractTableModel {
         private static final long serialVersionUID = 1L;
-        private final String[] columns = {"Show", "Run", "Status"};
+        private final String[] columns = {"", "Run", "Status"};
 
         @Override
         public int getRowCount() {

@@ -1,14 +1,17 @@
 package org.mobident.report;
 
-import java.util.Locale;
 import org.mobident.matching.RunScale;
 import org.mobident.pipeline.RunResult;
+import org.mobident.text.NumberText;
 
 /**
  * A run's scale correction μ_obs = a·μ_lib + b in words, the same in the HTML report and the
  * viewer: the fitted a and b with their SDs, why they were not fitted, or that the correction is off.
  */
 public final class ScaleCorrectionText {
+
+    /** Written where a number is not known. */
+    private static final String MISSING = "–";
 
     private ScaleCorrectionText() {
     }
@@ -20,10 +23,11 @@ public final class ScaleCorrectionText {
             return "none";
         }
         if (!s.fitted()) {
-            return String.format(Locale.ROOT, "not fitted (%.1f peaks matched, 2 needed)", s.anchors());
+            return "not fitted (" + NumberText.fixed(s.anchors(), 1, MISSING) + " peaks matched, 2 needed)";
         }
-        return String.format(Locale.ROOT, "a = %.4f ± %.4f, b = %+.2f ± %.2f (from %.1f matched peaks)",
-                s.factor(), s.factorSd(), s.offset(), s.offsetSd(), s.anchors());
+        return "a = " + NumberText.fixed(s.factor(), 4, MISSING) + " ± " + NumberText.fixed(s.factorSd(), 4, MISSING)
+                + ", b = " + NumberText.signed(s.offset(), 2, MISSING) + " ± " + NumberText.fixed(s.offsetSd(), 2, MISSING)
+                + " (from " + NumberText.fixed(s.anchors(), 1, MISSING) + " matched peaks)";
     }
 
     /** The short form for narrow places: "a = 1.0021, b = +0.12", "not fitted", "none". */
@@ -35,6 +39,6 @@ public final class ScaleCorrectionText {
         if (!s.fitted()) {
             return "not fitted";
         }
-        return String.format(Locale.ROOT, "a = %.4f, b = %+.2f", s.factor(), s.offset());
+        return "a = " + NumberText.fixed(s.factor(), 4, MISSING) + ", b = " + NumberText.signed(s.offset(), 2, MISSING);
     }
 }
