@@ -25,8 +25,8 @@ final class PeakDetails {
     /** Most candidates listed; the rest are counted (they carry little probability). */
     static final int MAX_CANDIDATES_SHOWN = 4;
 
-    /** Colour of the row labels. */
-    private static final String LABEL_COLOUR = "#5a636c";
+    /** Colour of the row labels when the look and feel names none. */
+    private static final String DEFAULT_LABEL_COLOUR = "#5a636c";
 
     /** Mobilities closer than this are shown once (run and library temperature agree), mobility units. */
     private static final double SAME_MOBILITY = 1e-9;
@@ -148,7 +148,7 @@ final class PeakDetails {
                 }
                 sb.append("</table>");
                 if (cand.size() > MAX_CANDIDATES_SHOWN) {
-                    sb.append("<div><font color='" + LABEL_COLOUR + "'>and ").append(cand.size() - MAX_CANDIDATES_SHOWN)
+                    sb.append("<div><font color='" + labelColour() + "'>and ").append(cand.size() - MAX_CANDIDATES_SHOWN)
                             .append(" less likely</font></div>");
                 }
             }
@@ -172,11 +172,27 @@ final class PeakDetails {
     private static void rows(StringBuilder sb, List<String[]> rows, boolean wrapLabels) {
         sb.append("<table cellspacing='0' cellpadding='1'>");
         for (String[] r : rows) {
-            sb.append(wrapLabels ? "<tr><td>" : "<tr><td nowrap>").append("<font color='" + LABEL_COLOUR + "'>")
+            sb.append(wrapLabels ? "<tr><td>" : "<tr><td nowrap>").append("<font color='" + labelColour() + "'>")
                     .append(Markup.escape(r[0]))
                     .append("</font>&nbsp;</td><td nowrap>").append(Markup.escape(r[1])).append("</td></tr>");
         }
         sb.append("</table>");
+    }
+
+    /** The colour of row labels on a dark background. */
+    private static final String DARK_LABEL_COLOUR = "#a3abb4";
+
+    /** Brightness (0 to 1) below which a panel counts as dark. */
+    private static final float DARK_BACKGROUND = 0.5f;
+
+    /** The colour for secondary text, readable in the light and the dark theme, as "#rrggbb". */
+    static String labelColour() {
+        java.awt.Color bg = javax.swing.UIManager.getColor("Panel.background");
+        if (bg == null) {
+            return DEFAULT_LABEL_COLOUR;
+        }
+        float[] hsb = java.awt.Color.RGBtoHSB(bg.getRed(), bg.getGreen(), bg.getBlue(), null);
+        return hsb[2] < DARK_BACKGROUND ? DARK_LABEL_COLOUR : DEFAULT_LABEL_COLOUR;
     }
 
     static String percent(double p) {

@@ -451,7 +451,7 @@ final class ViewerWindow implements PlotPanel.Gestures {
         PeakRef ref = state.selectedPeak();
         PeakResult pr = data.peak(ref);
         String html = pr == null
-                ? "<html><body><p><font color='#66707a'>Click a peak in the plot, or pick one in the table, "
+                ? "<html><body><p><font color='" + PeakDetails.labelColour() + "'>Click a peak in the plot, or pick one in the table, "
                         + "to see its measures and candidate analytes.</font></p></body></html>"
                 : PeakDetails.html(data.runs().get(ref.run()).name(), data.runs().get(ref.run()).result(), pr);
         details.setText(html);

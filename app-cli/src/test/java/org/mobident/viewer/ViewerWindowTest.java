@@ -172,6 +172,25 @@ class ViewerWindowTest {
     }
 
     @Test
+    void theDarkThemeKeepsTheDetailsReadable() {
+        try {
+            assertTrue(Look.install(Viewer.Theme.DARK));
+            java.awt.Color bg = javax.swing.UIManager.getColor("Panel.background");
+            java.awt.Color label = Color.decode(PeakDetails.labelColour());
+            // the labels stand out from the dark panel by at least half the brightness scale
+            assertTrue(brightness(label) - brightness(bg) > 0.4, "labels " + label + " on " + bg);
+        } finally {
+            Look.install(Viewer.Theme.LIGHT);
+        }
+        java.awt.Color bg = javax.swing.UIManager.getColor("Panel.background");
+        assertTrue(brightness(bg) - brightness(Color.decode(PeakDetails.labelColour())) > 0.4, "and on the light one");
+    }
+
+    private static float brightness(Color c) {
+        return Color.RGBtoHSB(c.getRed(), c.getGreen(), c.getBlue(), null)[2];
+    }
+
+    @Test
     void theMarkerHasThePlotsWordInTheTable() {
         PeakResult marker = ViewerFixtures.run("early", 200, true).result().peaks().get(1);
         assertEquals("marker", PeakTableModel.assigned(marker));
