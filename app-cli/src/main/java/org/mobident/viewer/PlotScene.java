@@ -7,7 +7,9 @@ import java.util.List;
 import java.util.Map;
 import org.mobident.mobility.MobilityScale;
 import org.mobident.pipeline.PeakResult;
+import org.mobident.pipeline.RunResult;
 import org.mobident.report.plot.Axis;
+import org.mobident.report.plot.BufferGroups;
 import org.mobident.report.plot.PlotLayout;
 import org.mobident.report.plot.PlotModel;
 import org.mobident.signal.Peak;
@@ -41,13 +43,15 @@ public final class PlotScene {
     private final boolean hasCurves;
     /** Run index to the index of its curve in the model (runs drawn only). */
     private final Map<Integer, Integer> seriesOfRun;
+    private final List<BufferGroups.Group> bufferGroups;
 
     private PlotScene(ViewState state, PlotModel model, List<PeakSpot> spots, XRange limits,
-                      Map<Integer, Integer> seriesOfRun) {
+                      Map<Integer, Integer> seriesOfRun, List<BufferGroups.Group> bufferGroups) {
         this.state = state;
         this.model = model;
         this.spots = List.copyOf(spots);
         this.seriesOfRun = Map.copyOf(seriesOfRun);
+        this.bufferGroups = List.copyOf(bufferGroups);
         this.current = new XRange(model.xMin(), model.xMax());
         this.limits = limits.union(current);
         this.hasCurves = !model.series().isEmpty();
@@ -98,13 +102,24 @@ public final class PlotScene {
         }
         // the curves are the added runs in order, less those the model could not place
         Map<Integer, Integer> seriesOfRun = new HashMap<>();
+        List<RunResult> drawn = new ArrayList<>();
         int series = 0;
         for (int k = 0; k < added.size(); k++) {
             if (!model.omittedRuns().contains(added.get(k))) {
                 seriesOfRun.put(addedRuns.get(k), series++);
+                drawn.add(data.runs().get(addedRuns.get(k)).result());
             }
         }
-        return new PlotScene(state, model, spots, dataExtent(model), seriesOfRun);
+        return new PlotScene(state, model, spots, dataExtent(model), seriesOfRun, BufferGroups.of(drawn));
+    }
+
+    /**
+     * The buffer groups ({@link BufferGroups}) of the drawn runs, in list order: more than one
+     * means runs of different buffers, or anion and cation runs, share this one axis (the plot
+     * command and the report draw them in panels of their own).
+     */
+    public List<BufferGroups.Group> bufferGroups() {
+        return bufferGroups;
     }
 
     /** The colour ("#rrggbb") run {@code run} is drawn in, or null when it is not drawn. */

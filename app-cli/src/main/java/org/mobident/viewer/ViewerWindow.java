@@ -247,7 +247,7 @@ final class ViewerWindow implements PlotPanel.Gestures {
 
         peakTable.setAutoCreateRowSorter(true);
         int[] digits = {-1, 2, 2, 3};
-        int[] widths = {78, 70, 62, 48, 86, 88, 76};
+        int[] widths = {74, 70, 62, 48, 84, 94, 76};
         for (int c = 0; c < widths.length; c++) {
             peakTable.getColumnModel().getColumn(c).setPreferredWidth(widths[c]);
             if (c < digits.length && digits[c] >= 0) {
@@ -477,6 +477,11 @@ final class ViewerWindow implements PlotPanel.Gestures {
         return "The ticked runs could not be processed; point at a run to see why.";
     }
 
+    /** The status line, for tests. */
+    String statusText() {
+        return status.getText();
+    }
+
     private void updateStatus() {
         int ready = 0;
         for (ViewerRun r : data.runs()) {
@@ -491,6 +496,14 @@ final class ViewerWindow implements PlotPanel.Gestures {
         sb.append(", ").append(scene.spots().size()).append(" peaks");
         if (!scene.omittedRuns().isEmpty()) {
             sb.append(".  No mobility scale, so not on this axis: ").append(String.join(", ", scene.omittedRuns()));
+        }
+        if (scene.bufferGroups().size() > 1) {
+            List<String> groups = new ArrayList<>();
+            for (var g : scene.bufferGroups()) {
+                groups.add(g.title());
+            }
+            sb.append(".  Runs of ").append(groups.size()).append(" buffers share this axis (")
+                    .append(String.join("; ", groups)).append("); 'mobident plot' draws a panel for each");
         }
         status.setText(sb.toString());
     }

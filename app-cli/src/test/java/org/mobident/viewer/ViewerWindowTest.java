@@ -191,6 +191,28 @@ class ViewerWindowTest {
     }
 
     @Test
+    void runsOfTwoBuffersOnOneAxisAreNamedInTheStatusLine() {
+        ViewerData d = richData();
+        ViewerRun late = d.runs().get(1);
+        org.mobident.trace.RunSpec other = new org.mobident.trace.RunSpec("late", late.spec().traceFile(),
+                new org.mobident.trace.RunConditions(60, 50, 25, 0, 25, "acetate", Double.NaN, Double.NaN,
+                        org.mobident.trace.Detection.DIRECT, Double.NaN, Double.NaN, Double.NaN), "runs.csv", 3);
+        RunResult r = late.result();
+        RunResult moved = new RunResult(other, null, r.scaleNote(), r.eofMobility(), r.scale(), r.peaks(), r.notes(),
+                r.noiseSd());
+        List<ViewerRun> runs = new ArrayList<>(d.runs());
+        runs.set(1, new ViewerRun(other, late.trace(), moved));
+        ViewerData mixed = new ViewerData(d.library(), ToleranceBand.matching(d.library(), MatchSettings.DEFAULT), runs);
+        ViewerWindow w = ViewerWindow.offScreen(mixed, ViewState.initial(Axis.MOBILITY, List.of(0, 1)), WIDTH, HEIGHT);
+        assertEquals(2, w.scene().bufferGroups().size());
+        assertTrue(w.statusText().contains("Runs of 2 buffers share this axis (Buffer borate, anions: 1 run; "
+                + "Buffer acetate, anions: 1 run)"), w.statusText());
+        ViewerWindow same = window(ViewState.initial(Axis.MOBILITY, List.of(0, 1)));
+        assertEquals(1, same.scene().bufferGroups().size());
+        assertFalse(same.statusText().contains("buffers"), same.statusText());
+    }
+
+    @Test
     void theMarkerHasThePlotsWordInTheTable() {
         PeakResult marker = ViewerFixtures.run("early", 200, true).result().peaks().get(1);
         assertEquals("marker", PeakTableModel.assigned(marker));
