@@ -123,7 +123,8 @@ final class PeakDetails {
         List<String[]> summary = summary(runName, pr);
         List<String[]> runRows = new ArrayList<>();
         if (run != null) {
-            runRows.add(row("Run scale correction", ScaleCorrectionText.brief(run)));
+            // may break after the comma only
+            runRows.add(row("Run scale correction", ScaleCorrectionText.brief(run).replace(" = ", "\u00a0=\u00a0")));
         }
         StringBuilder sb = new StringBuilder("<html><body><table cellspacing='0' cellpadding='0'><tr><td valign='top'>");
         rows(sb, summary);
@@ -154,11 +155,11 @@ final class PeakDetails {
             }
         }
         sb.append("</td><td width='14'></td><td valign='top'>");
-        rows(sb, runRows, true);
+        rows(sb, runRows, true, true);
         List<String[]> shape = shape(pr);
         if (!shape.isEmpty()) {
             sb.append("<div><b>Peak</b></div>");
-            rows(sb, shape, true); // the shorter column: its labels may take two lines
+            rows(sb, shape, true); // the shorter column: its rows may take two lines
         }
         sb.append("</td></tr></table></body></html>");
         return sb.toString();
@@ -168,13 +169,20 @@ final class PeakDetails {
         rows(sb, rows, false);
     }
 
-    /** A table of label and value rows; values never wrap, labels only when {@code wrapLabels}. */
+    /**
+     * A table of label and value rows. Values stay on one line (write U+00A0 between words that
+     * must stay together in a value that may wrap); labels too, unless {@code wrapLabels}.
+     */
     private static void rows(StringBuilder sb, List<String[]> rows, boolean wrapLabels) {
+        rows(sb, rows, wrapLabels, false);
+    }
+
+    private static void rows(StringBuilder sb, List<String[]> rows, boolean wrapLabels, boolean wrapValues) {
         sb.append("<table cellspacing='0' cellpadding='1'>");
         for (String[] r : rows) {
             sb.append(wrapLabels ? "<tr><td>" : "<tr><td nowrap>").append("<font color='" + labelColour() + "'>")
-                    .append(Markup.escape(r[0]))
-                    .append("</font>&nbsp;</td><td nowrap>").append(Markup.escape(r[1])).append("</td></tr>");
+                    .append(Markup.escape(r[0])).append("</font>&nbsp;</td>")
+                    .append(wrapValues ? "<td>" : "<td nowrap>").append(Markup.escape(r[1])).append("</td></tr>");
         }
         sb.append("</table>");
     }

@@ -56,7 +56,7 @@ final class ViewerWindow implements PlotPanel.Gestures {
     static final int RUN_LIST_WIDTH = 245;
 
     /** Width of the peak table when the window opens, px. */
-    static final int PEAK_TABLE_WIDTH = 510;
+    static final int PEAK_TABLE_WIDTH = 530;
 
     /** Preferred width of the details panel, px (wide enough for its two columns). */
     static final int DETAILS_WIDTH = 600;
@@ -247,7 +247,7 @@ final class ViewerWindow implements PlotPanel.Gestures {
 
         peakTable.setAutoCreateRowSorter(true);
         int[] digits = {-1, 2, 2, 3};
-        int[] widths = {74, 70, 62, 48, 84, 94, 76};
+        int[] widths = {80, 66, 62, 48, 84, 90, 74};
         for (int c = 0; c < widths.length; c++) {
             peakTable.getColumnModel().getColumn(c).setPreferredWidth(widths[c]);
             if (c < digits.length && digits[c] >= 0) {

@@ -80,7 +80,8 @@ class ViewerWindowTest {
         String html = w.details().getText();
         assertTrue(html.contains("nitrite") && !html.contains("iodide"), "four candidates listed");
         assertTrue(html.contains("and 2 less likely"));
-        assertTrue(html.contains("a = 1.0020, b = +0.30"), "the run's scale correction is shown");
+        String plain = html.replace('\u00a0', ' ').replace("&#160;", " ").replace("&nbsp;", " ");
+        assertTrue(plain.contains("a = 1.0020, b = +0.30"), "the run's scale correction is shown");
 
         java.awt.Dimension extent = w.detailsPane().getViewport().getExtentSize();
         Insets in = w.details().getInsets();
