@@ -5,7 +5,7 @@ import java.io.PrintWriter;
 import java.nio.file.Path;
 import java.util.Locale;
 import org.mobident.io.SafeFiles;
-import org.mobident.report.plot.PlotModel;
+import org.mobident.report.plot.PlotFigure;
 import org.mobident.report.plot.PngPlot;
 import org.mobident.report.plot.SvgPlot;
 
@@ -46,14 +46,14 @@ enum ImageKind {
         return new int[] {w, h};
     }
 
-    /** Renders the plot into {@code out}, replacing it only when allowed. */
-    void write(PlotModel model, int w, int h, Path out, boolean overwrite) throws OutputException {
+    /** Renders the figure into {@code out} (each panel {@code w} × {@code h}), replacing it only when allowed. */
+    void write(PlotFigure figure, int w, int h, Path out, boolean overwrite) throws OutputException {
         try {
             if (this == SVG) {
-                String svg = SvgPlot.render(model, w, h);
+                String svg = SvgPlot.render(figure, w, h);
                 SafeFiles.write(out, overwrite, "add --overwrite to replace it", wr -> wr.write(svg));
             } else {
-                PngPlot.write(model, w, h, out, overwrite);
+                PngPlot.write(figure, w, h, out, overwrite);
             }
         } catch (IOException e) {
             throw new OutputException(out + ": " + e.getMessage(), e);

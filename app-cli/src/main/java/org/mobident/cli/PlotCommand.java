@@ -39,7 +39,8 @@ public final class PlotCommand implements Callable<Integer> {
             description = "Image to write: a name ending in .png or .svg.")
     Path out;
 
-    @Option(names = "--size", paramLabel = "WxH", description = "Image size in pixels (default ${DEFAULT-VALUE}).")
+    @Option(names = "--size", paramLabel = "WxH",
+            description = "Image size in pixels (default ${DEFAULT-VALUE}); runs of several buffers get a panel of this size each, stacked.")
     String size = "1200x520";
 
     @Option(names = "--no-bands", description = "Do not draw the library's match windows.")
@@ -76,8 +77,10 @@ public final class PlotCommand implements Callable<Integer> {
             err.println("mobident plot: no run could be drawn");
             return Outputs.reportRunProblems(done, err) == ExitCodes.OK ? ExitCodes.BAD_INPUT : ExitCodes.SOME_RUNS_FAILED;
         }
-        kind.write(drawing.model(), wh[0], wh[1], out, overwrite);
-        spec.commandLine().getOut().println("plot of " + drawing.drawn() + " run(s) written to " + out);
+        kind.write(drawing.figure(), wh[0], wh[1], out, overwrite);
+        int panels = drawing.figure().size();
+        spec.commandLine().getOut().println("plot of " + drawing.drawn() + " run(s) written to " + out
+                + (panels > 1 ? " (" + panels + " panels, one per buffer)" : ""));
         return Outputs.reportRunProblems(done, err);
     }
 }

@@ -53,6 +53,9 @@ public final class ViewCommand implements Callable<Integer> {
                     + "first run), as in 'plot'.")
     List<String> shown = new ArrayList<>();
 
+    @Option(names = "--theme", paramLabel = "THEME", description = "Window colours: light (default) or dark; the plot stays white.")
+    Viewer.Theme theme = Viewer.Theme.LIGHT;
+
     @Mixin
     MatchOptions matching;
 
@@ -81,7 +84,7 @@ public final class ViewCommand implements Callable<Integer> {
                 : inputs.traces.size() + " traces")
                 + " · " + libraryFile.getFileName();
         CountDownLatch closed = Viewer.open(new Viewer.Setup(title, job, runs, rejected, settings,
-                TraceFiles::read, axis, ticked));
+                TraceFiles::read, axis, ticked, theme));
         try {
             closed.await();
         } catch (InterruptedException e) {

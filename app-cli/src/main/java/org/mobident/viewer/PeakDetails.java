@@ -6,6 +6,8 @@ import org.mobident.matching.Candidate;
 import org.mobident.matching.PeakMatch;
 import org.mobident.pipeline.PeakResult;
 import org.mobident.pipeline.PeakRole;
+import org.mobident.pipeline.RunResult;
+import org.mobident.report.ScaleCorrectionText;
 import org.mobident.report.plot.Markup;
 import org.mobident.report.plot.PeakStatus;
 import org.mobident.signal.Peak;
@@ -20,6 +22,12 @@ final class PeakDetails {
     /** Mobility unit as written next to values. */
     static final String MOBILITY_UNIT = "10⁻⁹ m²/(V s)";
 
+    /** Most candidates listed; the rest are counted (they carry little probability). */
+    static final int MAX_CANDIDATES_SHOWN = 4;
+
+    /** Colour of the row labels when the look and feel names none. */
+    private static final String DEFAULT_LABEL_COLOUR = "#5a636c";
+
     /** Mobilities closer than this are shown once (run and library temperature agree), mobility units. */
     private static final double SAME_MOBILITY = 1e-9;
 
@@ -32,14 +40,16 @@ final class PeakDetails {
         Peak p = pr.peak();
         PeakStatus status = PeakStatus.of(pr);
         rows.add(row("Run", runName));
-        rows.add(row("Role", pr.role().label()));
-        rows.add(row("Status", status.label()));
-        if (pr.role() == PeakRole.ANALYTE) {
+        if (pr.role() != PeakRole.ANALYTE) {
+            rows.add(row("Role", pr.role().label()));
+        } else {
             PeakMatch m = pr.match();
             if (m != null && m.assigned() != null && status != PeakStatus.UNASSIGNED) {
-                rows.add(row("Assigned", m.assigned() + " (" + percent(m.confidence()) + ")"));
+                rows.add(row("Assigned", m.assigned() + " (" + percent(m.confidence()) + "), " + status.label()));
             } else if (m != null) {
                 rows.add(row("Assigned", "none; not in the library: " + percent(m.confidence())));
+            } else {
+                rows.add(row("Assigned", "none"));
             }
         }
         rows.add(row("Mobility", withSd(pr.mobility(), 2, pr.mobilitySd(), 3) + " " + MOBILITY_UNIT));
@@ -50,7 +60,7 @@ final class PeakDetails {
         if (Double.isFinite(pr.mobilityCorrected())
                 && !(Math.abs(pr.mobilityCorrected() - pr.mobilityAtLibraryTemp()) < SAME_MOBILITY)) {
             rows.add(row("Compared with library",
-                    NumberText.fixed(pr.mobilityCorrected(), 2, UNKNOWN) + " (run scale corrected)"));
+                    NumberText.fixed(pr.mobilityCorrected(), 2, UNKNOWN) + " (scale corrected)"));
         }
         if (p != null) {
             rows.add(row("Apex time", withSd(p.apexTimeS(), 2, p.apexTimeSdS(), 3) + " s"));
@@ -67,8 +77,7 @@ final class PeakDetails {
         }
         rows.add(row("Start – end",
                 NumberText.fixed(p.startTimeS(), 2, UNKNOWN) + " – " + NumberText.fixed(p.endTimeS(), 2, UNKNOWN) + " s"));
-        rows.add(row("Direction", p.dip() ? "dip (below the baseline)" : "rise (above the baseline)"));
-        rows.add(row("Height", NumberText.fixed(p.height(), 4, UNKNOWN)));
+        rows.add(row("Height", NumberText.fixed(p.height(), 4, UNKNOWN) + (p.dip() ? " (dip)" : " (rise)")));
         rows.add(row("Area", NumberText.fixed(p.area(), 4, UNKNOWN)));
         rows.add(row("Area / time", NumberText.fixed(p.correctedArea(), 5, UNKNOWN)));
         rows.add(row("Width at half height", NumberText.fixed(p.widthHalfS(), 3, UNKNOWN) + " s"));
@@ -101,45 +110,97 @@ final class PeakDetails {
 
     /** The whole description as simple HTML for a text pane: summary, candidates, shape. */
     static String html(String runName, PeakResult pr) {
-        StringBuilder sb = new StringBuilder("<html><body>");
-        rows(sb, summary(runName, pr));
+        return html(runName, null, pr);
+    }
+
+    /**
+     * The whole description as simple HTML for a text pane, in two columns so that it fits the
+     * window's details panel without scrolling: run, assignment, mobilities and the candidates on
+     * the left; the run's scale correction (when {@code run} is given) and the peak's shape and
+     * size on the right.
+     */
+    static String html(String runName, RunResult run, PeakResult pr) {
+        List<String[]> summary = summary(runName, pr);
+        List<String[]> runRows = new ArrayList<>();
+        if (run != null) {
+            // may break after the comma only
+            runRows.add(row("Run scale correction", ScaleCorrectionText.brief(run).replace(" = ", "\u00a0=\u00a0")));
+        }
+        StringBuilder sb = new StringBuilder("<html><body><table cellspacing='0' cellpadding='0'><tr><td valign='top'>");
+        rows(sb, summary);
         if (pr.role() == PeakRole.ANALYTE) {
             List<String[]> cand = candidates(pr.match());
-            sb.append("<p><b>Candidates</b></p>");
+            sb.append("<div style='margin-top:6px'><b>Candidates</b></div>");
             if (cand.isEmpty()) {
-                sb.append("<p>No library analyte has this peak inside its window.</p>");
+                sb.append("<div>No library analyte has this peak inside its window.</div>");
             } else {
-                sb.append("<table cellspacing='0' cellpadding='3'><tr>");
+                sb.append("<table cellspacing='0' cellpadding='1'><tr>");
                 for (String h : new String[] {"Analyte", "Library μ", "Residual", "z", "Probability"}) {
-                    sb.append("<th align='left'>").append(Markup.escape(h)).append("</th>");
+                    sb.append("<th align='left' nowrap>").append(Markup.escape(h)).append("&nbsp;</th>");
                 }
                 sb.append("</tr>");
-                for (String[] r : cand) {
+                for (String[] r : cand.subList(0, Math.min(cand.size(), MAX_CANDIDATES_SHOWN))) {
                     sb.append("<tr>");
                     for (int i = 0; i < r.length; i++) {
-                        sb.append(i == 0 ? "<td>" : "<td align='right'>").append(Markup.escape(r[i])).append("</td>");
+                        sb.append(i == 0 ? "<td>" : "<td align='right' nowrap>").append(Markup.escape(r[i]))
+                                .append("&nbsp;</td>");
                     }
                     sb.append("</tr>");
                 }
                 sb.append("</table>");
+                if (cand.size() > MAX_CANDIDATES_SHOWN) {
+                    sb.append("<div><font color='" + labelColour() + "'>and ").append(cand.size() - MAX_CANDIDATES_SHOWN)
+                            .append(" less likely</font></div>");
+                }
             }
         }
+        sb.append("</td><td width='14'></td><td valign='top'>");
+        rows(sb, runRows, true, true);
         List<String[]> shape = shape(pr);
         if (!shape.isEmpty()) {
-            sb.append("<p><b>Peak</b></p>");
-            rows(sb, shape);
+            sb.append("<div><b>Peak</b></div>");
+            rows(sb, shape, true); // the shorter column: its rows may take two lines
         }
-        sb.append("</body></html>");
+        sb.append("</td></tr></table></body></html>");
         return sb.toString();
     }
 
     private static void rows(StringBuilder sb, List<String[]> rows) {
-        sb.append("<table cellspacing='0' cellpadding='2'>");
+        rows(sb, rows, false);
+    }
+
+    /**
+     * A table of label and value rows. Values stay on one line (write U+00A0 between words that
+     * must stay together in a value that may wrap); labels too, unless {@code wrapLabels}.
+     */
+    private static void rows(StringBuilder sb, List<String[]> rows, boolean wrapLabels) {
+        rows(sb, rows, wrapLabels, false);
+    }
+
+    private static void rows(StringBuilder sb, List<String[]> rows, boolean wrapLabels, boolean wrapValues) {
+        sb.append("<table cellspacing='0' cellpadding='1'>");
         for (String[] r : rows) {
-            sb.append("<tr><td><font color='#5a636c'>").append(Markup.escape(r[0]))
-                    .append("</font></td><td>").append(Markup.escape(r[1])).append("</td></tr>");
+            sb.append(wrapLabels ? "<tr><td>" : "<tr><td nowrap>").append("<font color='" + labelColour() + "'>")
+                    .append(Markup.escape(r[0])).append("</font>&nbsp;</td>")
+                    .append(wrapValues ? "<td>" : "<td nowrap>").append(Markup.escape(r[1])).append("</td></tr>");
         }
         sb.append("</table>");
+    }
+
+    /** The colour of row labels on a dark background. */
+    private static final String DARK_LABEL_COLOUR = "#a3abb4";
+
+    /** Brightness (0 to 1) below which a panel counts as dark. */
+    private static final float DARK_BACKGROUND = 0.5f;
+
+    /** The colour for secondary text, readable in the light and the dark theme, as "#rrggbb". */
+    static String labelColour() {
+        java.awt.Color bg = javax.swing.UIManager.getColor("Panel.background");
+        if (bg == null) {
+            return DEFAULT_LABEL_COLOUR;
+        }
+        float[] hsb = java.awt.Color.RGBtoHSB(bg.getRed(), bg.getGreen(), bg.getBlue(), null);
+        return hsb[2] < DARK_BACKGROUND ? DARK_LABEL_COLOUR : DEFAULT_LABEL_COLOUR;
     }
 
     static String percent(double p) {

@@ -5,6 +5,7 @@ import javax.swing.table.AbstractTableModel;
 import org.mobident.pipeline.PeakResult;
 import org.mobident.pipeline.PeakRole;
 import org.mobident.report.plot.PeakStatus;
+import org.mobident.report.plot.PlotModel;
 
 /** The peaks of the ticked runs as table rows; refilled from the data, never edited. */
 final class PeakTableModel extends AbstractTableModel {
@@ -78,11 +79,8 @@ final class PeakTableModel extends AbstractTableModel {
     }
 
     static String assigned(PeakResult pr) {
-        if (pr.role() == PeakRole.NEUTRAL_MARKER) {
-            return "neutral marker";
-        }
-        if (pr.role() == PeakRole.MOBILITY_MARKER) {
-            return "mobility marker";
+        if (pr.role() != PeakRole.ANALYTE) {
+            return PlotModel.markerWord(pr.role()); // the plot's label and legend word
         }
         if (pr.match() == null || pr.match().assigned() == null || PeakStatus.of(pr) == PeakStatus.UNASSIGNED) {
             return "?";

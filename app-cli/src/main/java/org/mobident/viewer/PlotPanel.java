@@ -10,6 +10,9 @@ import java.awt.FontMetrics;
 import java.awt.Graphics;
 import java.awt.Graphics2D;
 import java.awt.RenderingHints;
+import java.awt.event.ActionEvent;
+import java.awt.event.FocusAdapter;
+import java.awt.event.FocusEvent;
 import java.awt.event.MouseAdapter;
 import java.awt.event.MouseEvent;
 import java.awt.event.MouseWheelEvent;
@@ -17,7 +20,9 @@ import java.awt.geom.Ellipse2D;
 import java.awt.geom.Line2D;
 import java.awt.geom.Rectangle2D;
 import java.awt.image.BufferedImage;
+import javax.swing.AbstractAction;
 import javax.swing.JComponent;
+import javax.swing.KeyStroke;
 import javax.swing.SwingUtilities;
 import org.mobident.report.plot.PlotLayout;
 import org.mobident.report.plot.PngPlot;
@@ -26,7 +31,8 @@ import org.mobident.report.plot.PngPlot;
  * The electropherogram component. It paints the current {@link PlotScene} through the same
  * routine as the PNG and SVG files ({@link PngPlot#paint}), marks the selected peak, and turns
  * mouse gestures into calls on {@link Gestures} in data units: wheel = zoom about the mouse,
- * drag = zoom to the dragged range, shift-drag or right-drag = pan, click = pick a peak.
+ * drag = zoom to the dragged range, shift-drag or right-drag = pan, click = pick a peak; and
+ * keys into the same calls ({@link #KEYS_HINT}).
  */
 final class PlotPanel extends JComponent {
     private static final long serialVersionUID = 1L;
@@ -56,7 +62,19 @@ final class PlotPanel extends JComponent {
 
         /** The mouse is over x (NaN when it left the plot area). */
         void hover(double x);
+
+        /** Select the peak {@code step} places to the right (positive) or left of the selected one. */
+        void step(int step);
+
+        /** Zoom by {@code factor} about the centre of the range shown (below 1: in). */
+        void zoomCentre(double factor);
+
+        /** Back to the range chosen from the peaks and data. */
+        void resetView();
     }
+
+    /** Keys of the plot, with what they do (also shown in the status line's hint). */
+    static final String KEYS_HINT = "←/→: previous/next peak   +/−: zoom   Home: reset   Esc: clear";
 
     private transient PlotScene scene;
     private transient PlotLayout layout;
@@ -76,6 +94,51 @@ final class PlotPanel extends JComponent {
         addMouseListener(mouse);
         addMouseMotionListener(mouse);
         addMouseWheelListener(mouse);
+        setFocusable(true);
+        bindKeys();
+        addFocusListener(new FocusAdapter() {
+            @Override
+            public void focusGained(FocusEvent e) {
+                repaint();
+            }
+
+            @Override
+            public void focusLost(FocusEvent e) {
+                repaint();
+            }
+        });
+    }
+
+    /** The plot's keys: they act while the plot has the keyboard focus (a click gives it). */
+    private void bindKeys() {
+        key("LEFT", "previous-peak", () -> gestures.step(-1));
+        key("RIGHT", "next-peak", () -> gestures.step(1));
+        key("ESCAPE", "clear-selection", () -> gestures.clicked(null));
+        key("PLUS", "zoom-in", () -> gestures.zoomCentre(ViewState.ZOOM_STEP));
+        key("EQUALS", "zoom-in", () -> gestures.zoomCentre(ViewState.ZOOM_STEP));
+        key("ADD", "zoom-in", () -> gestures.zoomCentre(ViewState.ZOOM_STEP));
+        key("MINUS", "zoom-out", () -> gestures.zoomCentre(1 / ViewState.ZOOM_STEP));
+        key("SUBTRACT", "zoom-out", () -> gestures.zoomCentre(1 / ViewState.ZOOM_STEP));
+        key("HOME", "reset-view", () -> gestures.resetView());
+    }
+
+    private void key(String keyStroke, String name, Runnable action) {
+        getInputMap(WHEN_FOCUSED).put(KeyStroke.getKeyStroke(keyStroke), name);
+        getActionMap().put(name, new AbstractAction(name) {
+            private static final long serialVersionUID = 1L;
+
+            @Override
+            public void actionPerformed(ActionEvent e) {
+                if (gestures != null && scene != null) {
+                    action.run();
+                }
+            }
+        });
+    }
+
+    /** Carries out the plot's key binding {@code name} (as a key press would). */
+    void pressKey(String name) {
+        getActionMap().get(name).actionPerformed(new ActionEvent(this, ActionEvent.ACTION_PERFORMED, name));
     }
 
     void setGestures(Gestures g) {
@@ -107,6 +170,11 @@ final class PlotPanel extends JComponent {
         try {
             layout = paintPlot(g2, getWidth(), getHeight());
             paintDragRange(g2);
+            if (isFocusOwner()) {
+                g2.setColor(SELECTION);
+                g2.setStroke(new BasicStroke(1f));
+                g2.drawRect(0, 0, getWidth() - 1, getHeight() - 1);
+            }
         } finally {
             g2.dispose();
         }

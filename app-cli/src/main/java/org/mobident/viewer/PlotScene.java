@@ -1,10 +1,15 @@
 package org.mobident.viewer;
 
 import java.util.ArrayList;
+import java.util.Comparator;
+import java.util.HashMap;
 import java.util.List;
+import java.util.Map;
 import org.mobident.mobility.MobilityScale;
 import org.mobident.pipeline.PeakResult;
+import org.mobident.pipeline.RunResult;
 import org.mobident.report.plot.Axis;
+import org.mobident.report.plot.BufferGroups;
 import org.mobident.report.plot.PlotLayout;
 import org.mobident.report.plot.PlotModel;
 import org.mobident.signal.Peak;
@@ -36,11 +41,17 @@ public final class PlotScene {
     private final XRange current;
     private final XRange limits;
     private final boolean hasCurves;
+    /** Run index to the index of its curve in the model (runs drawn only). */
+    private final Map<Integer, Integer> seriesOfRun;
+    private final List<BufferGroups.Group> bufferGroups;
 
-    private PlotScene(ViewState state, PlotModel model, List<PeakSpot> spots, XRange limits) {
+    private PlotScene(ViewState state, PlotModel model, List<PeakSpot> spots, XRange limits,
+                      Map<Integer, Integer> seriesOfRun, List<BufferGroups.Group> bufferGroups) {
         this.state = state;
         this.model = model;
         this.spots = List.copyOf(spots);
+        this.seriesOfRun = Map.copyOf(seriesOfRun);
+        this.bufferGroups = List.copyOf(bufferGroups);
         this.current = new XRange(model.xMin(), model.xMax());
         this.limits = limits.union(current);
         this.hasCurves = !model.series().isEmpty();
@@ -52,6 +63,7 @@ public final class PlotScene {
         PlotModel.Builder b = PlotModel.builder(axis).peakLabels(true);
         List<PeakSpot> spots = new ArrayList<>();
         List<String> added = new ArrayList<>();
+        List<Integer> addedRuns = new ArrayList<>();
         for (int i : state.tickedRuns()) {
             if (i >= data.runs().size() || !data.runs().get(i).drawable()) {
                 continue;
@@ -59,6 +71,7 @@ public final class PlotScene {
             ViewerRun run = data.runs().get(i);
             b.run(run.trace(), run.result());
             added.add(run.result().spec().name());
+            addedRuns.add(i);
             MobilityScale scale = run.result().scale();
             if (axis == Axis.MOBILITY && scale == null) {
                 continue;
@@ -87,7 +100,55 @@ public final class PlotScene {
             // a run the model could not place has no peaks to pick either
             spots.removeIf(s -> model.omittedRuns().contains(data.runs().get(s.ref().run()).name()));
         }
-        return new PlotScene(state, model, spots, dataExtent(model));
+        // the curves are the added runs in order, less those the model could not place
+        Map<Integer, Integer> seriesOfRun = new HashMap<>();
+        List<RunResult> drawn = new ArrayList<>();
+        int series = 0;
+        for (int k = 0; k < added.size(); k++) {
+            if (!model.omittedRuns().contains(added.get(k))) {
+                seriesOfRun.put(addedRuns.get(k), series++);
+                drawn.add(data.runs().get(addedRuns.get(k)).result());
+            }
+        }
+        return new PlotScene(state, model, spots, dataExtent(model), seriesOfRun, BufferGroups.of(drawn));
+    }
+
+    /**
+     * The buffer groups ({@link BufferGroups}) of the drawn runs, in list order: more than one
+     * means runs of different buffers, or anion and cation runs, share this one axis (the plot
+     * command and the report draw them in panels of their own).
+     */
+    public List<BufferGroups.Group> bufferGroups() {
+        return bufferGroups;
+    }
+
+    /** The colour ("#rrggbb") run {@code run} is drawn in, or null when it is not drawn. */
+    public String colourOf(int run) {
+        Integer series = seriesOfRun.get(run);
+        return series == null ? null : PlotModel.seriesColour(series);
+    }
+
+    /**
+     * The peak next to {@code ref} along the axis, {@code step} peaks to the right (positive) or
+     * left (negative), for stepping through the peaks with the keyboard; peaks of overlaid runs at
+     * the same position are taken in run order. Without a current peak, the first peak (stepping
+     * right) or the last (stepping left). Null when there is no peak; at either end it stays there.
+     */
+    public PeakRef neighbour(PeakRef ref, int step) {
+        if (spots.isEmpty() || step == 0) {
+            return spots.isEmpty() ? null : ref;
+        }
+        List<PeakSpot> byX = new ArrayList<>(spots);
+        byX.sort(Comparator.comparingDouble(PeakSpot::x).thenComparingInt(p -> p.ref().run())
+                .thenComparingInt(p -> p.ref().peak()));
+        int at = -1;
+        for (int i = 0; i < byX.size(); i++) {
+            if (byX.get(i).ref().equals(ref)) {
+                at = i;
+            }
+        }
+        int next = at < 0 ? (step > 0 ? 0 : byX.size() - 1) : Math.max(0, Math.min(byX.size() - 1, at + step));
+        return byX.get(next).ref();
     }
 
     public ViewState state() {

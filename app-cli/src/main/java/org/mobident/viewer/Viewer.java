@@ -16,6 +16,9 @@ import org.mobident.usecase.IdentifyBatch;
 /** Opens the viewer window. The only entry point the command line needs. */
 public final class Viewer {
 
+    /** The window's colours. */
+    public enum Theme { LIGHT, DARK }
+
     private Viewer() {
     }
 
@@ -30,9 +33,11 @@ public final class Viewer {
      * @param loader         reads a trace file
      * @param axis           the axis shown first
      * @param tickedAtStart  indices (into {@code runs} followed by {@code rejected}) ticked at start
+     * @param theme          light or dark window (the plot stays white)
      */
     public record Setup(String title, IdentifyBatch job, List<RunSpec> runs, List<RunResult> rejected,
-                        IdentifySettings settings, TraceLoader loader, Axis axis, List<Integer> tickedAtStart) {
+                        IdentifySettings settings, TraceLoader loader, Axis axis, List<Integer> tickedAtStart,
+                        Theme theme) {
         public Setup {
             title = title == null ? "" : title;
             Objects.requireNonNull(job, "job");
@@ -42,6 +47,7 @@ public final class Viewer {
             Objects.requireNonNull(loader, "loader");
             Objects.requireNonNull(axis, "axis");
             tickedAtStart = List.copyOf(tickedAtStart);
+            theme = theme == null ? Theme.LIGHT : theme;
         }
 
         /** The library the runs are matched against. */

@@ -85,6 +85,27 @@ class OneInterfaceTest {
     }
 
     @Test
+    void plotDrawsAPanelPerBufferOfTheChosenSize() throws IOException {
+        // The demo sheet holds anion runs in CHR-8 and a cation run in IMZ-4.5.
+        Path png = dir.resolve("all.png");
+        BadInputCatalogueTest.Run r = run("plot", "--runs", DEMO.resolve("runs.csv").toString(), "--library",
+                DEMO.resolve("library.csv").toString(), "--size", "900x400", "--out", png.toString());
+        assertEquals(ExitCodes.OK, r.code(), r.err());
+        assertTrue(r.out().contains("2 panels, one per buffer"), r.out());
+        java.awt.image.BufferedImage img = javax.imageio.ImageIO.read(png.toFile());
+        assertEquals(900, img.getWidth());
+        assertEquals(800, img.getHeight(), "two panels of 400 px");
+        Path svg = dir.resolve("one.svg");
+        BadInputCatalogueTest.Run one = run("plot", "--runs", DEMO.resolve("runs.csv").toString(), "--library",
+                DEMO.resolve("library.csv").toString(), "--show", "spring-01,well-01", "--size", "900x400",
+                "--out", svg.toString());
+        assertEquals(ExitCodes.OK, one.code(), one.err());
+        String text = Files.readString(svg);
+        assertTrue(text.contains("height=\"400\""), "runs of one buffer: one panel");
+        assertTrue(text.contains(">chloride</text>"), "the library bands are named");
+    }
+
+    @Test
     void aMissingPhIsAUsageMistakeInPredictAsInRecheck() throws IOException {
         BadInputCatalogueTest.Run predict = run("predict", "--library", DEMO.resolve("library.csv").toString(),
                 "--ionic-strength-mm", "10");

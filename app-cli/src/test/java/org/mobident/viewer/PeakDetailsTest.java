@@ -25,8 +25,9 @@ class PeakDetailsTest {
         ViewerRun run = ViewerFixtures.run("early", 200, true);
         PeakResult pr = run.result().peaks().get(0);
         Map<String, String> m = asMap(PeakDetails.measures("early", pr));
-        assertEquals("ambiguous", m.get("Status"));
-        assertEquals("lithium (55 %)", m.get("Assigned"));
+        assertEquals("lithium (55 %), ambiguous", m.get("Assigned"));
+        assertEquals("early", m.get("Run"));
+        assertEquals("8.0000 (rise)", m.get("Height"));
         assertEquals("20.00 ± 0.050 " + PeakDetails.MOBILITY_UNIT, m.get("Mobility"));
         // apex 12000/(20 + 60) = 150 s
         assertEquals("150.00 ± 0.010 s", m.get("Apex time"));

@@ -21,6 +21,8 @@ import org.mobident.recheck.RecheckResult;
 import org.mobident.recheck.Verdict;
 import org.mobident.report.PeakTableCsv;
 import org.mobident.report.plot.Axis;
+import org.mobident.report.plot.PlotLayout;
+import org.mobident.report.plot.PlotModel;
 
 /**
  * Recheck, assess and plot from one identification of the demo batch (invented data; truth in
@@ -99,18 +101,50 @@ class RecheckAndAssessTest {
     }
 
     @Test
+    void aBatchOfAnionAndCationBuffersIsDrawnInOnePanelPerBuffer() {
+        // The demo sheet: six anion runs in CHR-8 and one cation run in IMZ-4.5.
+        PlotRuns.Drawing all = PlotRuns.plot(batch, List.of(), Axis.MOBILITY, true);
+        assertEquals(2, all.figure().size());
+        PlotModel anions = all.figure().panels().get(0);
+        PlotModel cations = all.figure().panels().get(1);
+        assertEquals("Buffer CHR-8, anions: 6 runs", anions.title());
+        assertEquals("Buffer IMZ-4.5, cations: 1 run", cations.title());
+        assertEquals(6, anions.series().size());
+        assertEquals(1, cations.series().size());
+        assertEquals(List.of("well-04-cations"), cations.series().stream().map(PlotModel.Series::label).toList());
+        assertFalse(anions.peakLabels(), "six runs: markers only");
+        assertTrue(cations.peakLabels(), "a single run keeps its labels");
+        for (PlotModel.PeakMark p : anions.peaks()) {
+            assertTrue(p.x() < 1, "only anions and the neutral marker in the anion panel: " + p.x());
+        }
+        for (PlotModel.PeakMark p : cations.peaks()) {
+            assertTrue(p.x() > -1, "only cations and the neutral marker in the cation panel: " + p.x());
+        }
+        assertTrue(cations.xMin() > -20 && anions.xMax() < 20, "each panel keeps to its own ions' range: "
+                + anions.xMin() + ".." + anions.xMax() + " and " + cations.xMin() + ".." + cations.xMax());
+        assertTrue(anions.bandLabels() && cations.bandLabels());
+        PlotRuns.Drawing time = PlotRuns.plot(batch, List.of(), Axis.TIME, false);
+        assertEquals(2, time.figure().size(), "on the time axis too");
+    }
+
+    @Test
     void thePlotDrawsTheRunsAskedFor() {
         PlotRuns.Drawing two = PlotRuns.plot(batch, List.of("spring-01", " well-02"), Axis.MOBILITY, true);
         assertEquals(2, two.drawn());
-        assertEquals(2, two.model().series().size());
-        assertTrue(two.model().peakLabels());
-        assertFalse(two.model().bands().isEmpty());
+        assertEquals(1, two.figure().size(), "two runs of one buffer share a panel");
+        PlotModel m = two.figure().panels().get(0);
+        assertEquals(2, m.series().size());
+        assertTrue(m.peakLabels());
+        assertFalse(m.bands().isEmpty());
+        assertTrue(m.bandLabels(), "an overlay names its library bands");
+        assertTrue(PlotLayout.of(m, 1200, 520).bandLabels().size() >= 3, "band names are drawn");
         PlotRuns.Drawing all = PlotRuns.plot(batch, List.of(), Axis.TIME, false);
         assertEquals(batch.results().size(), all.drawn());
-        assertFalse(all.model().peakLabels());
-        assertTrue(all.model().bands().isEmpty());
+        for (PlotModel p : all.figure().panels()) {
+            assertTrue(p.bands().isEmpty());
+        }
         PlotRuns.Drawing unknown = PlotRuns.plot(batch, List.of("spring-01", "nowhere"), Axis.MOBILITY, true);
-        assertNull(unknown.model());
+        assertNull(unknown.figure());
         assertEquals("nowhere", unknown.unknownName());
     }
 }

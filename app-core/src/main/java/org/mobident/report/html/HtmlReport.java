@@ -15,11 +15,14 @@ import org.mobident.summary.SampleCalls;
 import org.mobident.matching.PeakMatch;
 import org.mobident.pipeline.PeakResult;
 import org.mobident.pipeline.RunResult;
+import org.mobident.matching.MatchSettings;
 import org.mobident.report.plot.Axis;
+import org.mobident.report.plot.BufferGroups;
 import org.mobident.report.plot.Markup;
 import org.mobident.report.plot.PeakStatus;
 import org.mobident.report.plot.PlotModel;
 import org.mobident.report.plot.SvgPlot;
+import org.mobident.report.plot.ToleranceBand;
 import org.mobident.signal.Peak;
 import org.mobident.text.NumberText;
 import org.mobident.trace.RunConditions;
@@ -335,12 +338,8 @@ public final class HtmlReport {
     private static void overlay(StringBuilder sb, List<RunResult> results, Map<String, Trace> traces,
                                 Library library) {
         sb.append("<section id=\"overlay\">\n<h2>All runs on the mobility axis</h2>\n");
-        PlotModel.Builder b = PlotModel.builder(Axis.MOBILITY).peakLabels(false).bandLabels(true);
-        if (library != null) {
-            b.library(library);
-        }
         List<String> missing = new ArrayList<>();
-        int drawn = 0;
+        List<RunResult> placed = new ArrayList<>();
         for (RunResult r : results) {
             Trace t = traces.get(runName(r));
             if (r.failed()) {
@@ -350,19 +349,35 @@ public final class HtmlReport {
             } else if (r.scale() == null) {
                 missing.add(runName(r) + " (no mobility scale)");
             } else {
-                b.run(t, r);
-                drawn++;
+                placed.add(r);
             }
         }
-        if (drawn == 0) {
+        if (placed.isEmpty()) {
             sb.append("<p>No run could be placed on the mobility axis.</p>\n");
-        } else {
+        }
+        // one panel per buffer (and sign of the ions): other buffers share no windows and no range
+        List<BufferGroups.Group> groups = BufferGroups.of(placed);
+        for (BufferGroups.Group g : groups) {
+            PlotModel.Builder b = PlotModel.builder(Axis.MOBILITY).peakLabels(false).bandLabels(true);
+            if (groups.size() > 1) {
+                b.title(g.title());
+            }
+            if (library != null) {
+                b.library(library.forBuffer(g.buffer()), ToleranceBand.matching(library, MatchSettings.DEFAULT));
+            }
+            for (RunResult r : g.runs()) {
+                b.run(traces.get(runName(r)), r);
+            }
             PlotModel model = b.build();
             for (String name : model.omittedRuns()) {
                 missing.add(name + " (no usable mobility range)");
             }
             sb.append("<figure>\n").append(plot(model, OVERLAY_WIDTH, OVERLAY_HEIGHT));
-            sb.append("<figcaption>Each curve is one run, placed by its own mobility scale, so runs with "
+            sb.append("<figcaption>");
+            if (groups.size() > 1) {
+                sb.append(esc(g.title())).append(". ");
+            }
+            sb.append("Each curve is one run, placed by its own mobility scale, so runs with "
                     + "different electro-osmotic flow line up. Markers show each peak's status");
             if (library != null) {
                 sb.append("; shaded bands are the library analytes with their tolerance windows");
@@ -377,15 +392,7 @@ public final class HtmlReport {
 
     /** The run's scale correction a, b in words: fitted values with SDs, not fitted, or switched off. */
     static String scaleText(RunResult r) {
-        org.mobident.matching.RunScale s = r.runScale();
-        if (!r.mobilityKnown() || s.status() == org.mobident.matching.RunScale.Status.OFF) {
-            return "none";
-        }
-        if (!s.fitted()) {
-            return String.format(java.util.Locale.ROOT, "not fitted (%.1f peaks matched, 2 needed)", s.anchors());
-        }
-        return String.format(java.util.Locale.ROOT, "a = %.4f ± %.4f, b = %+.2f ± %.2f (from %.1f matched peaks)",
-                s.factor(), s.factorSd(), s.offset(), s.offsetSd(), s.anchors());
+        return org.mobident.report.ScaleCorrectionText.of(r);
     }
 
     private static void run(StringBuilder sb, int index, RunResult r, Map<String, Trace> traces, Library library) {

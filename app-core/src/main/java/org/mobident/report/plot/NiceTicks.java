@@ -58,6 +58,45 @@ public record NiceTicks(double first, double last, double step, int fractionDigi
     }
 
     /**
+     * Ticks at nice values lying inside [{@code min}, {@code max}], for an axis whose ends are the
+     * data's own (a tight axis): the step is chosen as in {@link #of}, then the ticks are the
+     * multiples of the step within the range (Heckbert's "tight" labelling) instead of widening
+     * the range to them. When fewer than {@link #MIN_TIGHT_TICKS} multiples fall inside, the next finer
+     * nice step is taken, so the axis always carries a scale.
+     *
+     * @throws IllegalArgumentException as {@link #of}
+     */
+    public static NiceTicks within(double min, double max, int targetTicks) {
+        NiceTicks loose = of(min, max, targetTicks);
+        if (min == max) {
+            return loose;
+        }
+        double step = loose.step();
+        for (int finer = 0; finer < MAX_REFINEMENTS; finer++) {
+            double first = Math.ceil(min / step - STEP_ROUNDING) * step;
+            double last = Math.floor(max / step + STEP_ROUNDING) * step;
+            if (Math.round((last - first) / step) + 1 >= MIN_TIGHT_TICKS) {
+                int digits = Math.max(0, -(int) Math.floor(Math.log10(step)));
+                return new NiceTicks(clean(first, digits), clean(last, digits), step, digits);
+            }
+            step = niceNumber(step * FINER_STEP, true);
+        }
+        return loose;
+    }
+
+    /** Fewest ticks inside a tight range: two ticks show a scale, three make it readable. */
+    public static final int MIN_TIGHT_TICKS = 3;
+
+    /** Steps tried below the first when too few ticks fall inside a tight range. */
+    private static final int MAX_REFINEMENTS = 4;
+
+    /** A finer step is the nice number nearest to this fraction of the last one (10 → 5 → 2 → 1). */
+    private static final double FINER_STEP = 0.45;
+
+    /** Relative slack when deciding whether a tick at the very end of a tight range is inside it. */
+    private static final double STEP_ROUNDING = 1e-9;
+
+    /**
      * Heckbert's "nicenum": a number of the form {1, 2, 5, 10}·10ⁿ near {@code x} (&gt; 0). With
      * {@code round} the nearest such number (thresholds 1.5, 3, 7); without, the smallest one
      * not below {@code x}.

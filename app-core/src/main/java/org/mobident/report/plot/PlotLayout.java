@@ -19,12 +19,24 @@ public final class PlotLayout {
     static final int X_TICKS = 8;
     /** Target number of ticks on the y axis. */
     static final int Y_TICKS = 5;
-    /** Room above the highest signal for labels, as a fraction of the signal range. */
-    static final double LABEL_HEADROOM = 0.28;
-    /** Room above and below the signal when no labels need it, as a fraction of its range. */
-    static final double PLAIN_HEADROOM = 0.05;
-    /** How many rows a label may be raised to avoid its neighbours. */
+    /** Rows of labels kept free beyond the highest peak (or below the deepest dip), px per row as a label's. */
+    static final int LABEL_ROOM_ROWS = 2;
+    /** Room between the signal and the plot's edge where no marker or label needs it, px. */
+    static final double PLAIN_PAD_PX = 6;
+    /** Least share of the plot's height the signal itself keeps, however much room labels ask for. */
+    static final double MIN_SIGNAL_SHARE = 0.55;
+    /** Rows of band names at the top of the plot. */
+    static final int BAND_LABEL_ROWS = 2;
+    /** How many rows a label may be moved away from its peak to avoid its neighbours. */
     static final int MAX_LABEL_LEVELS = 6;
+    /**
+     * Sideways moves tried for a label at each row, in half label widths (plus a small gap) from
+     * the position centred on its peak; a label moved sideways or up is joined to its peak by a
+     * leader line.
+     */
+    static final double[] LABEL_SHIFTS = {0, -1, 1, -2, 2};
+    /** Least free space between two labels, and between a label and a marker, px. */
+    static final double LABEL_GAP = 2;
     /** Most curves named in the legend; the rest are summed up as "+ n more". */
     static final int MAX_LEGEND_SERIES = 12;
 
@@ -32,6 +44,8 @@ public final class PlotLayout {
     private static final double LEGEND_ROW = 18;
     private static final double LEGEND_SWATCH = 16;
     private static final double LEGEND_GAP = 16;
+    /** Most rounds of fitting the y tick labels, the legend and the y range to each other. */
+    private static final int MAX_LAYOUT_PASSES = 4;
 
     private final PlotModel model;
     private final int width;
@@ -49,6 +63,11 @@ public final class PlotLayout {
     private final List<TextBox> bandLabels;
     private final List<LegendItem> legend;
     private final double legendTop;
+    /** The signal at the bottom and at the top of the plot area (the y axis ends; tight, not widened to ticks). */
+    private double yLow;
+    private double yHigh;
+    /** Labels left out because no free place was found for them. */
+    private int hiddenLabels;
 
     /** A decimated curve in pixels. */
     public record Polyline(int series, double[] xs, double[] ys) {
@@ -83,6 +102,52 @@ public final class PlotLayout {
             return left < o.right() + gap && o.left < right() + gap
                     && top() < o.bottom() + gap && o.top() < bottom() + gap;
         }
+
+        /** Whether the box comes within {@code gap} of the rectangle [x1, x2] × [y1, y2]. */
+        boolean overlaps(double x1, double y1, double x2, double y2, double gap) {
+            return left < x2 + gap && x1 < right() + gap && top() < y2 + gap && y1 < bottom() + gap;
+        }
+
+        /** Where the leader line meets the box: the point of its near edge closest to the anchor. */
+        public double leaderEndX() {
+            return Math.max(left, Math.min(right(), anchorX));
+        }
+
+        /** See {@link #leaderEndX()}. */
+        public double leaderEndY() {
+            return anchorY < top() ? top() - 1 : bottom() + 1;
+        }
+
+        /** Whether the leader line from the anchor to the box passes through {@code o}. */
+        boolean leaderCrosses(TextBox o) {
+            return leader && segmentMeetsBox(anchorX, anchorY, leaderEndX(), leaderEndY(),
+                    o.left, o.top(), o.right(), o.bottom());
+        }
+    }
+
+    /** Whether the segment (x1, y1)–(x2, y2) passes through the rectangle [l, r] × [t, b] (Liang–Barsky clipping). */
+    static boolean segmentMeetsBox(double x1, double y1, double x2, double y2, double l, double t, double r, double b) {
+        double dx = x2 - x1;
+        double dy = y2 - y1;
+        double[] p = {-dx, dx, -dy, dy};
+        double[] q = {x1 - l, r - x1, y1 - t, b - y1};
+        double u0 = 0;
+        double u1 = 1;
+        for (int i = 0; i < 4; i++) {
+            if (p[i] == 0) {
+                if (q[i] < 0) {
+                    return false;
+                }
+            } else {
+                double u = q[i] / p[i];
+                if (p[i] < 0) {
+                    u0 = Math.max(u0, u);
+                } else {
+                    u1 = Math.min(u1, u);
+                }
+            }
+        }
+        return u0 <= u1;
     }
 
     /** A band's horizontal extent in pixels, already cut to the plot area. */
@@ -104,45 +169,46 @@ public final class PlotLayout {
         this.width = width;
         this.height = height;
 
-        boolean labelsUp = false;
-        boolean labelsDown = false;
-        if (model.peakLabels()) {
-            for (PlotModel.PeakMark p : model.peaks()) {
-                labelsUp |= !p.dip();
-                labelsDown |= p.dip();
-            }
-        }
-        double range = model.yMax() - model.yMin();
-        double yLo = model.yMin() - range * (labelsDown ? LABEL_HEADROOM : PLAIN_HEADROOM);
-        double yHi = model.yMax() + range * (labelsUp ? LABEL_HEADROOM : PLAIN_HEADROOM);
-        if (model.bandLabels() && !model.bands().isEmpty()) {
-            yHi += range * PLAIN_HEADROOM * 2;
-        }
-        this.yTicks = NiceTicks.of(yLo, yHi, Y_TICKS);
         this.xTicks = NiceTicks.of(model.xMin(), model.xMax(), X_TICKS);
-
-        double yLabelWidth = 0;
-        for (double v : yTicks.values()) {
-            yLabelWidth = Math.max(yLabelWidth, PlotStyle.textWidth(yTicks.format(v), PlotStyle.TICK_FONT));
-        }
         double[] xv = xTicks.values();
         double lastXLabel = PlotStyle.textWidth(xTicks.format(xv[xv.length - 1]), PlotStyle.TICK_FONT);
-
-        this.left = OUTER + PlotStyle.AXIS_TITLE_FONT + 8 + yLabelWidth + 4 + PlotStyle.TICK_LENGTH;
         this.right = width - Math.max(OUTER + 8, lastXLabel / 2 + OUTER);
         this.top = model.title().isEmpty() ? OUTER + 4 : OUTER + PlotStyle.TITLE_FONT + 12;
-
         List<LegendItem> items = legendItems();
-        int rows = legendRows(items);
-        double legendHeight = rows == 0 ? 0 : rows * LEGEND_ROW + 4;
         double axisBlock = PlotStyle.TICK_LENGTH + 4 + PlotStyle.TICK_FONT + 8 + PlotStyle.AXIS_TITLE_FONT + 6;
-        this.bottom = height - OUTER - legendHeight - axisBlock;
-        if (!(bottom - top > 20 && right - left > 20)) {
-            throw new IllegalArgumentException("plot too small for its axes and legend: "
-                    + width + "×" + height + " px");
+
+        // The y tick labels decide the left edge, the left edge the legend's rows, the rows the
+        // plot's height, the height the y range and so the tick labels: repeat until they agree
+        // (the width only grows, so this ends at once in practice).
+        double yLabelWidth = PlotStyle.textWidth("-0.0", PlotStyle.TICK_FONT);
+        NiceTicks ticks = null;
+        double l = 0;
+        double b = 0;
+        for (int pass = 0; pass < MAX_LAYOUT_PASSES; pass++) {
+            l = OUTER + PlotStyle.AXIS_TITLE_FONT + 8 + yLabelWidth + 4 + PlotStyle.TICK_LENGTH;
+            int rows = legendRows(items, l);
+            double legendHeight = rows == 0 ? 0 : rows * LEGEND_ROW + 4;
+            b = height - OUTER - legendHeight - axisBlock;
+            if (!(b - top > 20 && right - l > 20)) {
+                throw new IllegalArgumentException("plot too small for its axes and legend: "
+                        + width + "×" + height + " px");
+            }
+            chooseYRange(b - top);
+            ticks = NiceTicks.within(yLow, yHigh, Y_TICKS);
+            double needed = 0;
+            for (double v : ticks.values()) {
+                needed = Math.max(needed, PlotStyle.textWidth(ticks.format(v), PlotStyle.TICK_FONT));
+            }
+            if (needed <= yLabelWidth) {
+                break;
+            }
+            yLabelWidth = needed;
         }
+        this.yTicks = ticks;
+        this.left = l;
+        this.bottom = b;
         this.legendTop = bottom + axisBlock;
-        this.legend = placeLegend(items);
+        this.legend = placeLegend(items, left);
 
         this.curves = new ArrayList<>();
         for (int i = 0; i < model.series().size(); i++) {
@@ -205,7 +271,22 @@ public final class PlotLayout {
 
     /** Pixel row of the signal value {@code y}. */
     public double py(double y) {
-        return bottom - (y - yTicks.first()) / (yTicks.last() - yTicks.first()) * (bottom - top);
+        return bottom - (y - yLow) / (yHigh - yLow) * (bottom - top);
+    }
+
+    /** The signal at the bottom of the plot area (the lower end of the y axis). */
+    public double yAxisLow() {
+        return yLow;
+    }
+
+    /** The signal at the top of the plot area. */
+    public double yAxisHigh() {
+        return yHigh;
+    }
+
+    /** How many peak labels were left out because no free place was found for them. */
+    public int hiddenLabels() {
+        return hiddenLabels;
     }
 
     public List<Polyline> curves() {
@@ -342,7 +423,8 @@ public final class PlotLayout {
         List<BandSpot> sorted = new ArrayList<>(bands);
         sorted.sort(Comparator.comparingDouble(b -> (b.left() + b.right()) / 2));
         double baseline = top + 3 + PlotStyle.ASCENT_EM * PlotStyle.BAND_FONT;
-        double[] rowEnds = {Double.NEGATIVE_INFINITY, Double.NEGATIVE_INFINITY};
+        double[] rowEnds = new double[BAND_LABEL_ROWS];
+        Arrays.fill(rowEnds, Double.NEGATIVE_INFINITY);
         for (BandSpot b : sorted) {
             String text = b.band().name();
             double w = PlotStyle.textWidth(text, PlotStyle.BAND_FONT);
@@ -363,16 +445,62 @@ public final class PlotLayout {
         return out;
     }
 
+    /**
+     * The tight y range: the signal's own range, with just the room in pixels that markers,
+     * labels and band names need above or below it (a plot area of {@code areaPx} px).
+     */
+    private void chooseYRange(double areaPx) {
+        boolean up = false;
+        boolean down = false;
+        boolean labelsUp = false;
+        boolean labelsDown = false;
+        for (PlotModel.PeakMark p : model.peaks()) {
+            up |= !p.dip();
+            down |= p.dip();
+            boolean labelled = model.peakLabels() && !p.label().isEmpty();
+            labelsUp |= labelled && !p.dip();
+            labelsDown |= labelled && p.dip();
+        }
+        double markerRoom = PlotStyle.MARKER_GAP + 2 * PlotStyle.MARKER_RADIUS + PLAIN_PAD_PX;
+        double labelRoom = PlotStyle.MARKER_GAP + PlotStyle.MARKER_RADIUS + markerReach() + LABEL_GAP + 1
+                + LABEL_ROOM_ROWS * labelRowStep();
+        double roomUp = labelsUp ? labelRoom : up ? markerRoom : PLAIN_PAD_PX;
+        double roomDown = labelsDown ? labelRoom : down ? markerRoom : PLAIN_PAD_PX;
+        if (model.bandLabels() && !model.bands().isEmpty()) {
+            roomUp += bandLabelsHeight();
+        }
+        double signalPx = areaPx - roomUp - roomDown;
+        if (signalPx < MIN_SIGNAL_SHARE * areaPx) {
+            double shrink = (1 - MIN_SIGNAL_SHARE) * areaPx / (roomUp + roomDown);
+            roomUp *= shrink;
+            roomDown *= shrink;
+            signalPx = MIN_SIGNAL_SHARE * areaPx;
+        }
+        double perPx = (model.yMax() - model.yMin()) / signalPx;
+        yLow = model.yMin() - roomDown * perPx;
+        yHigh = model.yMax() + roomUp * perPx;
+    }
+
+    private static double labelRowStep() {
+        return PlotStyle.LABEL_FONT + LABEL_GAP;
+    }
+
+    private static double bandLabelsHeight() {
+        return 3 + BAND_LABEL_ROWS * (PlotStyle.BAND_FONT + 2);
+    }
+
+    /**
+     * Markers for every peak in the plot; then labels, most important first (named peaks before
+     * markers before unassigned ones, larger peaks before smaller), each at the first free place:
+     * next to its peak, moved sideways, or moved further away row by row with a leader line. A
+     * place is free when the label keeps {@link #LABEL_GAP} from every label and marker already
+     * there and no leader line crosses it or is crossed by it. A label with no free place is left
+     * out (counted in {@link #hiddenLabels()}); its marker stays.
+     */
     private void placePeaks() {
         List<PlotModel.PeakMark> sorted = new ArrayList<>(model.peaks());
         sorted.sort(Comparator.comparingDouble(PlotModel.PeakMark::x));
-        double labelTop = top + 1;
-        for (TextBox b : bandLabels) {
-            labelTop = Math.max(labelTop, b.bottom() + 2);
-        }
         double r = PlotStyle.MARKER_RADIUS;
-        double font = PlotStyle.LABEL_FONT;
-        double rowStep = font + 2;
         for (PlotModel.PeakMark p : sorted) {
             double x = px(p.x());
             if (x < left || x > right) {
@@ -382,37 +510,101 @@ public final class PlotLayout {
             double cy = p.dip() ? apexY + PlotStyle.MARKER_GAP + r : apexY - PlotStyle.MARKER_GAP - r;
             cy = Math.max(top + r, Math.min(bottom - r, cy));
             markers.add(new MarkerSpot(p, x, cy));
-            if (!model.peakLabels() || p.label().isEmpty()) {
-                continue;
-            }
-            double w = PlotStyle.textWidth(p.label(), font);
-            double lx = Math.max(left + 2, Math.min(right - 2 - w, x - w / 2));
-            TextBox chosen = null;
-            TextBox fallback = null;
-            for (int level = 0; level < MAX_LABEL_LEVELS; level++) {
-                double baseline = p.dip()
-                        ? cy + r + 3 + PlotStyle.ASCENT_EM * font + level * rowStep
-                        : cy - r - 3 - PlotStyle.DESCENT_EM * font - level * rowStep;
-                TextBox box = new TextBox(p.label(), lx, baseline, w, font, level > 0, x,
-                        p.dip() ? cy + r : cy - r);
-                if (box.top() < labelTop || box.bottom() > bottom - 1) {
-                    break;
-                }
-                if (fallback == null) {
-                    fallback = box;
-                }
-                if (peakLabels.stream().noneMatch(o -> o.overlaps(box, 2))) {
-                    chosen = box;
-                    break;
-                }
-            }
-            if (chosen == null) {
-                chosen = fallback;
-            }
-            if (chosen != null) {
-                peakLabels.add(chosen);
+        }
+        if (!model.peakLabels()) {
+            return;
+        }
+        double labelTop = top + 1;
+        for (TextBox b : bandLabels) {
+            labelTop = Math.max(labelTop, b.bottom() + 2);
+        }
+        List<MarkerSpot> queue = new ArrayList<>();
+        for (MarkerSpot m : markers) {
+            if (!m.mark().label().isEmpty()) {
+                queue.add(m);
             }
         }
+        queue.sort(Comparator.comparingInt((MarkerSpot m) -> labelRank(m.mark()))
+                .thenComparingDouble(m -> Double.isNaN(m.mark().size()) ? 0 : -m.mark().size())
+                .thenComparingDouble(MarkerSpot::cx));
+        for (MarkerSpot m : queue) {
+            TextBox box = placeLabel(m, labelTop);
+            if (box == null) {
+                hiddenLabels++;
+            } else {
+                peakLabels.add(box);
+            }
+        }
+        peakLabels.sort(Comparator.comparingDouble(TextBox::left).thenComparingDouble(TextBox::baseline));
+    }
+
+    /** Which labels go first where they crowd: named analytes, then markers, then unassigned peaks. */
+    private static int labelRank(PlotModel.PeakMark p) {
+        if (p.status() == PeakStatus.UNASSIGNED || !p.named()) {
+            return 2;
+        }
+        return p.status() == PeakStatus.MARKER ? 1 : 0;
+    }
+
+    /** The first free place for the label of {@code m}, or null. */
+    private TextBox placeLabel(MarkerSpot m, double labelTop) {
+        PlotModel.PeakMark p = m.mark();
+        double r = PlotStyle.MARKER_RADIUS;
+        double font = PlotStyle.LABEL_FONT;
+        double w = PlotStyle.textWidth(p.label(), font);
+        double anchorY = p.dip() ? m.cy() + r : m.cy() - r;
+        double offset = markerReach() + LABEL_GAP + 1;
+        for (int level = 0; level < MAX_LABEL_LEVELS; level++) {
+            double baseline = p.dip()
+                    ? m.cy() + offset + PlotStyle.ASCENT_EM * font + level * labelRowStep()
+                    : m.cy() - offset - PlotStyle.DESCENT_EM * font - level * labelRowStep();
+            double boxTop = baseline - PlotStyle.ASCENT_EM * font;
+            double boxBottom = baseline + PlotStyle.DESCENT_EM * font;
+            if (boxTop < labelTop || boxBottom > bottom - 1) {
+                return null;
+            }
+            for (double shift : LABEL_SHIFTS) {
+                double centred = m.cx() - w / 2 + shift * (w / 2 + LABEL_GAP + r);
+                double lx = Math.max(left + 2, Math.min(right - 2 - w, centred));
+                boolean away = level > 0 || m.cx() < lx || m.cx() > lx + w;
+                TextBox box = new TextBox(p.label(), lx, baseline, w, font, away, m.cx(), anchorY);
+                if (free(box, m)) {
+                    return box;
+                }
+            }
+        }
+        return null;
+    }
+
+    /** Whether {@code box} (the label of {@code own}) keeps clear of labels, markers and leader lines. */
+    private boolean free(TextBox box, MarkerSpot own) {
+        for (TextBox o : peakLabels) {
+            if (box.overlaps(o, LABEL_GAP) || box.leaderCrosses(o) || o.leaderCrosses(box)) {
+                return false;
+            }
+        }
+        for (TextBox o : bandLabels) {
+            if (box.overlaps(o, LABEL_GAP)) {
+                return false;
+            }
+        }
+        double reach = markerReach();
+        for (MarkerSpot m : markers) {
+            if (box.overlaps(m.cx() - reach, m.cy() - reach, m.cx() + reach, m.cy() + reach, LABEL_GAP)) {
+                return false;
+            }
+            boolean touchesOwn = Math.abs(m.cx() - own.cx()) < 2 * reach && Math.abs(m.cy() - own.cy()) < 2 * reach;
+            if (!touchesOwn && box.leader() && segmentMeetsBox(box.anchorX(), box.anchorY(), box.leaderEndX(),
+                    box.leaderEndY(), m.cx() - reach, m.cy() - reach, m.cx() + reach, m.cy() + reach)) {
+                return false;
+            }
+        }
+        return true;
+    }
+
+    /** Half the side of the square every marker shape fits in, px (the diamond is the widest). */
+    static double markerReach() {
+        return PlotStyle.MARKER_RADIUS * 1.3 + PlotStyle.MARKER_STROKE / 2;
     }
 
     private List<LegendItem> legendItems() {
@@ -440,7 +632,7 @@ public final class PlotLayout {
         return LEGEND_SWATCH + 6 + PlotStyle.textWidth(item.text(), PlotStyle.LEGEND_FONT) + LEGEND_GAP;
     }
 
-    private int legendRows(List<LegendItem> items) {
+    private int legendRows(List<LegendItem> items, double left) {
         if (items.isEmpty()) {
             return 0;
         }
@@ -457,7 +649,7 @@ public final class PlotLayout {
         return rows;
     }
 
-    private List<LegendItem> placeLegend(List<LegendItem> items) {
+    private List<LegendItem> placeLegend(List<LegendItem> items, double left) {
         List<LegendItem> out = new ArrayList<>();
         double x = left;
         int row = 0;

@@ -79,6 +79,23 @@ public record PlotModel(Axis axis, String title, List<Series> series, List<PeakM
         return b.build();
     }
 
+    /** The colour ("#rrggbb") both renderers draw series {@code index} in: the viewer's run list shows the same. */
+    public static String seriesColour(int index) {
+        return PlotStyle.seriesColour(index);
+    }
+
+    /**
+     * The plot's word for a marker of {@code role}: "marker" for the neutral marker (the legend's
+     * word for every marker) and "ref. marker" for a charged marker of known mobility; null for
+     * an analyte.
+     */
+    public static String markerWord(PeakRole role) {
+        if (role == PeakRole.NEUTRAL_MARKER) {
+            return PeakStatus.MARKER.label();
+        }
+        return role == PeakRole.MOBILITY_MARKER ? "ref. " + PeakStatus.MARKER.label() : null;
+    }
+
     public static Builder builder(Axis axis) {
         return new Builder(axis);
     }
@@ -124,11 +141,24 @@ public record PlotModel(Axis axis, String title, List<Series> series, List<PeakM
      * @param dip    true when the peak points down (indirect detection): marked below
      * @param label  short text: analyte and confidence, "?" when unassigned, the marker's role
      * @param status how it is drawn
+     * @param size   the peak's height in detector units (NaN when unknown): where labels crowd, larger
+     *               peaks keep theirs
      */
-    public record PeakMark(int series, double x, double y, boolean dip, String label, PeakStatus status) {
+    public record PeakMark(int series, double x, double y, boolean dip, String label, PeakStatus status,
+                           double size) {
         public PeakMark {
             label = label == null ? "" : label;
             Objects.requireNonNull(status, "status");
+        }
+
+        /** A mark whose size is not known. */
+        public PeakMark(int series, double x, double y, boolean dip, String label, PeakStatus status) {
+            this(series, x, y, dip, label, status, Double.NaN);
+        }
+
+        /** Whether the label names something (an analyte or a marker) rather than saying "unknown". */
+        public boolean named() {
+            return !label.isEmpty() && status != PeakStatus.UNASSIGNED;
         }
     }
 
@@ -278,7 +308,7 @@ public record PlotModel(Axis axis, String title, List<Series> series, List<PeakM
             for (PeakMark m : marks) {
                 if (m.status() == PeakStatus.MARKER && !m.label().isEmpty()) {
                     if (labelled) {
-                        m = new PeakMark(m.series(), m.x(), m.y(), m.dip(), "", m.status());
+                        m = new PeakMark(m.series(), m.x(), m.y(), m.dip(), "", m.status(), m.size());
                     }
                     labelled = true;
                 }
@@ -384,7 +414,8 @@ public record PlotModel(Axis axis, String title, List<Series> series, List<PeakM
             if (!Double.isFinite(x)) {
                 return null;
             }
-            return new PeakMark(seriesIndex, x, apexSignal(trace, p), p.dip(), labelOf(pr), PeakStatus.of(pr));
+            return new PeakMark(seriesIndex, x, apexSignal(trace, p), p.dip(), labelOf(pr), PeakStatus.of(pr),
+                    Math.abs(p.height()));
         }
     }
 
@@ -415,11 +446,8 @@ public record PlotModel(Axis axis, String title, List<Series> series, List<PeakM
      * legend's word for it) and "ref. marker" for a charged marker of known mobility.
      */
     public static String labelOf(PeakResult pr) {
-        if (pr.role() == PeakRole.NEUTRAL_MARKER) {
-            return PeakStatus.MARKER.label();
-        }
-        if (pr.role() == PeakRole.MOBILITY_MARKER) {
-            return "ref. " + PeakStatus.MARKER.label();
+        if (pr.role() != PeakRole.ANALYTE) {
+            return markerWord(pr.role());
         }
         if (pr.match() == null || pr.match().assigned() == null || PeakStatus.of(pr) == PeakStatus.UNASSIGNED) {
             return "?";

@@ -62,8 +62,7 @@ final class PlotPainter {
             c.begin("peaks");
             for (PlotLayout.TextBox box : layout.peakLabels()) {
                 if (box.leader()) {
-                    double y = box.anchorY() < box.top() ? box.top() - 1 : box.bottom() + 1;
-                    c.line(box.anchorX(), box.anchorY(), box.anchorX(), y, PlotStyle.LEADER, 0.8);
+                    c.line(box.anchorX(), box.anchorY(), box.leaderEndX(), box.leaderEndY(), PlotStyle.LEADER, 0.8);
                 }
             }
             for (PlotLayout.MarkerSpot m : layout.markers()) {

@@ -5,6 +5,8 @@ import java.awt.RenderingHints;
 import java.awt.image.BufferedImage;
 import java.io.IOException;
 import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
 import javax.imageio.ImageIO;
 import org.mobident.io.SafeFiles;
 
@@ -42,12 +44,49 @@ public final class PngPlot {
      */
     public static PlotLayout paint(Graphics2D g, PlotModel model, int widthPx, int heightPx) {
         PlotLayout layout = PlotLayout.of(model, widthPx, heightPx);
+        hints(g);
+        PlotPainter.paint(layout, new Java2dCanvas(g));
+        return layout;
+    }
+
+    private static void hints(Graphics2D g) {
         g.setRenderingHint(RenderingHints.KEY_ANTIALIASING, RenderingHints.VALUE_ANTIALIAS_ON);
         g.setRenderingHint(RenderingHints.KEY_TEXT_ANTIALIASING, RenderingHints.VALUE_TEXT_ANTIALIAS_ON);
         g.setRenderingHint(RenderingHints.KEY_STROKE_CONTROL, RenderingHints.VALUE_STROKE_PURE);
         g.setRenderingHint(RenderingHints.KEY_RENDERING, RenderingHints.VALUE_RENDER_QUALITY);
-        PlotPainter.paint(layout, new Java2dCanvas(g));
-        return layout;
+    }
+
+    /**
+     * The figure as one RGB image: its panels stacked top to bottom, each {@code widthPx} ×
+     * {@code panelHeightPx}, laid out as {@link SvgPlot#render(PlotFigure, int, int)} lays them out.
+     */
+    public static BufferedImage render(PlotFigure figure, int widthPx, int panelHeightPx) {
+        List<PlotLayout> layouts = new ArrayList<>();
+        for (PlotModel m : figure.panels()) {
+            layouts.add(PlotLayout.of(m, widthPx, panelHeightPx));
+        }
+        BufferedImage image = new BufferedImage(widthPx, figure.heightPx(panelHeightPx), BufferedImage.TYPE_INT_RGB);
+        Graphics2D g = image.createGraphics();
+        try {
+            for (int i = 0; i < layouts.size(); i++) {
+                Graphics2D panel = (Graphics2D) g.create(0, i * panelHeightPx, widthPx, panelHeightPx);
+                try {
+                    hints(panel);
+                    PlotPainter.paint(layouts.get(i), new Java2dCanvas(panel));
+                } finally {
+                    panel.dispose();
+                }
+            }
+        } finally {
+            g.dispose();
+        }
+        return image;
+    }
+
+    /** Renders the figure and writes it as a PNG file, atomically (see {@link SafeFiles}). */
+    public static void write(PlotFigure figure, int widthPx, int panelHeightPx, Path target, boolean overwrite)
+            throws IOException {
+        writeImage(render(figure, widthPx, panelHeightPx), target, overwrite);
     }
 
     /**
@@ -57,7 +96,10 @@ public final class PngPlot {
      */
     public static void write(PlotModel model, int widthPx, int heightPx, Path target, boolean overwrite)
             throws IOException {
-        BufferedImage image = render(model, widthPx, heightPx);
+        writeImage(render(model, widthPx, heightPx), target, overwrite);
+    }
+
+    private static void writeImage(BufferedImage image, Path target, boolean overwrite) throws IOException {
         SafeFiles.writeBytes(target, overwrite, out -> {
             if (!ImageIO.write(image, "png", out)) {
                 throw new IOException("no PNG writer available in this Java runtime");

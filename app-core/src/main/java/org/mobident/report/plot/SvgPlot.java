@@ -1,5 +1,8 @@
 package org.mobident.report.plot;
 
+import java.util.ArrayList;
+import java.util.List;
+
 /**
  * Renders a {@link PlotModel} as a standalone SVG document (also valid inline in XHTML-style
  * HTML5). The output depends only on the model and the size, so equal inputs give equal bytes.
@@ -21,6 +24,41 @@ public final class SvgPlot {
                 .append("\">\n");
         sb.append("  <title>").append(Markup.escape(label)).append("</title>\n");
         PlotPainter.paint(layout, new SvgCanvas(sb));
+        sb.append("</svg>\n");
+        return sb.toString();
+    }
+
+    /**
+     * The figure as one {@code <svg>} element: its panels stacked top to bottom, each
+     * {@code widthPx} × {@code panelHeightPx} in a group of class "panel". A figure of one panel
+     * gives exactly {@link #render(PlotModel, int, int)}.
+     */
+    public static String render(PlotFigure figure, int widthPx, int panelHeightPx) {
+        if (figure.size() == 1) {
+            return render(figure.panels().get(0), widthPx, panelHeightPx);
+        }
+        List<PlotLayout> layouts = new ArrayList<>();
+        for (PlotModel m : figure.panels()) {
+            layouts.add(PlotLayout.of(m, widthPx, panelHeightPx));
+        }
+        int heightPx = figure.heightPx(panelHeightPx);
+        StringBuilder sb = new StringBuilder(64 * 1024 * figure.size());
+        List<String> titles = new ArrayList<>();
+        for (PlotModel m : figure.panels()) {
+            titles.add(m.title().isEmpty() ? "Electropherogram" : m.title());
+        }
+        String label = String.join("; ", titles);
+        sb.append("<svg xmlns=\"http://www.w3.org/2000/svg\" width=\"").append(widthPx)
+                .append("\" height=\"").append(heightPx).append("\" viewBox=\"0 0 ").append(widthPx)
+                .append(' ').append(heightPx).append("\" role=\"img\" aria-label=\"")
+                .append(Markup.escape(label)).append("\" font-family=\"").append(PlotStyle.FONT_FAMILY)
+                .append("\">\n");
+        sb.append("  <title>").append(Markup.escape(label)).append("</title>\n");
+        for (int i = 0; i < layouts.size(); i++) {
+            sb.append("  <g class=\"panel\" transform=\"translate(0 ").append(i * panelHeightPx).append(")\">\n");
+            PlotPainter.paint(layouts.get(i), new SvgCanvas(sb));
+            sb.append("  </g>\n");
+        }
         sb.append("</svg>\n");
         return sb.toString();
     }

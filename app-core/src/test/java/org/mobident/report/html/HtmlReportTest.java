@@ -82,6 +82,27 @@ class HtmlReportTest {
     }
 
     @Test
+    void theOverlayHasOnePanelPerBuffer() throws Exception {
+        RunResult other = new RunResult(PlotFixtures.spec("acetate run", "acetate 10 mM"), null,
+                evil.result().scaleNote(), evil.result().eofMobility(), evil.result().scale(), evil.result().peaks(),
+                List.of(), 0.01);
+        Map<String, Trace> traces = traces();
+        traces.put("acetate run", evil.trace());
+        StringWriter out = new StringWriter();
+        HtmlReport.write(List.of(a.result(), other), traces, PlotFixtures.library(),
+                HtmlReport.Options.defaults().withGeneratedAt("now"), out);
+        Element overlay = section(parseXhtml(out.toString()), "overlay");
+        NodeList figures = overlay.getElementsByTagName("figure");
+        assertEquals(2, figures.getLength(), "borate and acetate are drawn apart");
+        assertTrue(figures.item(0).getTextContent().contains("Buffer borate 20 mM, anions: 1 run"));
+        assertTrue(figures.item(1).getTextContent().contains("Buffer acetate 10 mM, anions: 1 run"));
+        for (int i = 0; i < figures.getLength(); i++) {
+            assertEquals(1, ((Element) figures.item(i)).getElementsByTagNameNS("http://www.w3.org/2000/svg", "polyline")
+                    .getLength(), "one curve in each panel");
+        }
+    }
+
+    @Test
     void userTextIsEscapedEverywhere() throws Exception {
         String html = page(EVIL);
         assertFalse(html.toLowerCase(Locale.ROOT).contains("<script"), "no script element can appear");
