@@ -36,6 +36,16 @@ final class PeakDetails {
 
     /** Label and value rows naming the peak and its assignment (shown above the candidates). */
     static List<String[]> summary(String runName, PeakResult pr) {
+        return summary(runName, null, pr);
+    }
+
+    /**
+     * As {@link #summary(String, PeakResult)}; with the peak's run given, the ± beside the mobility
+     * compared with the library is the uncertainty that decided its match (as in the terminal and
+     * HTML reports), and apex timing keeps its own row.
+     */
+    static List<String[]> summary(String runName, RunResult run, PeakResult pr) {
+        double u = run == null ? pr.mobilitySd() : run.decidingSd(pr);
         List<String[]> rows = new ArrayList<>();
         Peak p = pr.peak();
         PeakStatus status = PeakStatus.of(pr);
@@ -52,15 +62,16 @@ final class PeakDetails {
                 rows.add(row("Assigned", "none"));
             }
         }
-        rows.add(row("Mobility", withSd(pr.mobility(), 2, pr.mobilitySd(), 3) + " " + MOBILITY_UNIT));
+        boolean corrected = Double.isFinite(pr.mobilityCorrected())
+                && !(Math.abs(pr.mobilityCorrected() - pr.mobilityAtLibraryTemp()) < SAME_MOBILITY);
+        rows.add(row("Mobility", (corrected ? NumberText.fixed(pr.mobility(), 2, UNKNOWN) : withSd(pr.mobility(), 2, u, 3))
+                + " " + MOBILITY_UNIT));
         if (Double.isFinite(pr.mobilityAtLibraryTemp())
                 && !(Math.abs(pr.mobilityAtLibraryTemp() - pr.mobility()) < SAME_MOBILITY)) {
             rows.add(row("At library temperature", NumberText.fixed(pr.mobilityAtLibraryTemp(), 2, UNKNOWN)));
         }
-        if (Double.isFinite(pr.mobilityCorrected())
-                && !(Math.abs(pr.mobilityCorrected() - pr.mobilityAtLibraryTemp()) < SAME_MOBILITY)) {
-            rows.add(row("Compared with library",
-                    NumberText.fixed(pr.mobilityCorrected(), 2, UNKNOWN) + " (scale corrected)"));
+        if (corrected) {
+            rows.add(row("Compared with library", withSd(pr.mobilityCorrected(), 2, u, 3) + " (scale corrected)"));
         }
         if (p != null) {
             rows.add(row("Apex time", withSd(p.apexTimeS(), 2, p.apexTimeSdS(), 3) + " s"));
@@ -120,7 +131,7 @@ final class PeakDetails {
      * size on the right.
      */
     static String html(String runName, RunResult run, PeakResult pr) {
-        List<String[]> summary = summary(runName, pr);
+        List<String[]> summary = summary(runName, run, pr);
         List<String[]> runRows = new ArrayList<>();
         if (run != null) {
             // may break after the comma only

@@ -11,7 +11,7 @@ import org.mobident.report.plot.PlotModel;
 final class PeakTableModel extends AbstractTableModel {
     private static final long serialVersionUID = 1L;
 
-    static final String[] COLUMNS = {"Run", "Time (s)", "Mobility", "± SD", "Assigned", "Confidence", "Status"};
+    static final String[] COLUMNS = {"Run", "Time (s)", "Mobility", "± u", "Assigned", "Confidence", "Status"};
 
     private transient ViewerData data;
     private transient List<PeakRef> rows = List.of();
@@ -66,7 +66,9 @@ final class PeakTableModel extends AbstractTableModel {
                 // the value compared with the library (at its temperature, corrected for the run's scale)
                 return finiteOrNull(Double.isFinite(pr.mobilityCorrected()) ? pr.mobilityCorrected() : pr.mobility());
             case 3:
-                return finiteOrNull(pr.mobilitySd());
+                // the uncertainty that decided the match (times, scale correction, library spread), as in
+                // the terminal and HTML reports; apex timing is in the details
+                return finiteOrNull(data.runs().get(ref.run()).result().decidingSd(pr));
             case 4:
                 return assigned(pr);
             case 5:

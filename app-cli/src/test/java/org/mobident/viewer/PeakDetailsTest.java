@@ -41,6 +41,17 @@ class PeakDetailsTest {
     }
 
     @Test
+    void withItsRunThePlusMinusIsTheUncertaintyThatDecidedTheMatch() {
+        // lithium's candidate: residual -0.10 at z -0.20, so the combined SD that decided it is
+        // |-0.10 / -0.20| = 0.5, not the 0.05 of the apex timing alone
+        ViewerRun run = ViewerFixtures.run("early", 200, true);
+        PeakResult pr = run.result().peaks().get(0);
+        Map<String, String> m = asMap(PeakDetails.summary("early", run.result(), pr));
+        assertEquals("20.00 ± 0.500 " + PeakDetails.MOBILITY_UNIT, m.get("Mobility"));
+        assertEquals("150.00 ± 0.010 s", m.get("Apex time"));
+    }
+
+    @Test
     void markersAndUnassignedPeaksSayWhatTheyAre() {
         ViewerRun run = ViewerFixtures.run("early", 200, true);
         Map<String, String> marker = asMap(PeakDetails.measures("early", run.result().peaks().get(1)));
