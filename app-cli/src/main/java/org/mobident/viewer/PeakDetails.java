@@ -11,6 +11,7 @@ import org.mobident.report.ScaleCorrectionText;
 import org.mobident.report.plot.Markup;
 import org.mobident.report.plot.PeakStatus;
 import org.mobident.signal.Peak;
+import org.mobident.summary.RecurringUnknowns;
 import org.mobident.text.NumberText;
 
 /** The words and numbers shown for a selected peak: its measures and its candidate analytes. */
@@ -98,6 +99,12 @@ final class PeakDetails {
         return rows;
     }
 
+    /** A recurring unknown in a few words: its name, mean mobility and in how many of the runs it is seen. */
+    static String recurrence(RecurringUnknowns.Group g) {
+        return g.name() + ": μ ≈ " + NumberText.fixed(g.meanMobility(), 2, UNKNOWN) + " in " + g.runs().size()
+                + " of " + g.runsInBuffer() + " runs";
+    }
+
     /** Every label and value row: {@link #summary} then {@link #shape}. */
     static List<String[]> measures(String runName, PeakResult pr) {
         List<String[]> rows = new ArrayList<>(summary(runName, pr));
@@ -131,7 +138,18 @@ final class PeakDetails {
      * size on the right.
      */
     static String html(String runName, RunResult run, PeakResult pr) {
-        List<String[]> summary = summary(runName, run, pr);
+        return html(runName, run, pr, null);
+    }
+
+    /**
+     * As {@link #html(String, RunResult, PeakResult)}, saying for an unassigned peak which recurring
+     * unknown of the loaded runs it belongs to ({@code recurring}, or null).
+     */
+    static String html(String runName, RunResult run, PeakResult pr, RecurringUnknowns.Group recurring) {
+        List<String[]> summary = new ArrayList<>(summary(runName, run, pr));
+        if (recurring != null) {
+            summary.add(row("Recurs as", recurrence(recurring)));
+        }
         List<String[]> runRows = new ArrayList<>();
         if (run != null) {
             // may break after the comma only

@@ -5,7 +5,9 @@ import java.util.List;
 import java.util.Objects;
 import org.mobident.library.Library;
 import org.mobident.pipeline.PeakResult;
+import org.mobident.pipeline.RunResult;
 import org.mobident.report.plot.ToleranceBand;
+import org.mobident.summary.RecurringUnknowns;
 
 /**
  * Everything loaded: the library, the rule for its windows, and the runs in the order given.
@@ -24,6 +26,36 @@ public record ViewerData(Library library, ToleranceBand bandRule, List<ViewerRun
         List<ViewerRun> copy = new ArrayList<>(runs);
         copy.set(index, Objects.requireNonNull(run, "run"));
         return new ViewerData(library, bandRule, copy);
+    }
+
+    /**
+     * The unknowns that recur in the loaded runs: unassigned peaks grouped by mobility within each
+     * buffer ({@link RecurringUnknowns}, the same groups as the batch reports).
+     */
+    public List<RecurringUnknowns.Group> recurringUnknowns() {
+        List<RunResult> results = new ArrayList<>();
+        for (ViewerRun r : runs) {
+            if (r.result() != null) {
+                results.add(r.result());
+            }
+        }
+        return RecurringUnknowns.of(results, library);
+    }
+
+    /** The recurring unknown the peak {@code ref} belongs to, or null. */
+    public RecurringUnknowns.Group recurringUnknownOf(PeakRef ref) {
+        if (peak(ref) == null) {
+            return null;
+        }
+        String run = runs.get(ref.run()).result().spec().name();
+        for (RecurringUnknowns.Group g : recurringUnknowns()) {
+            for (RecurringUnknowns.Member m : g.members()) {
+                if (m.run().equals(run) && m.peakNumber() == ref.peak() + 1) {
+                    return g;
+                }
+            }
+        }
+        return null;
     }
 
     /** The peak {@code ref} names, or null when it names none (run waiting, index out of range). */

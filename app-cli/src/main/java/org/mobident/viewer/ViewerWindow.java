@@ -33,6 +33,7 @@ import org.mobident.pipeline.PeakResult;
 import org.mobident.report.ScaleCorrectionText;
 import org.mobident.report.plot.Axis;
 import org.mobident.report.plot.ToleranceBand;
+import org.mobident.summary.RecurringUnknowns;
 import org.mobident.text.NumberText;
 import org.mobident.trace.RunSpec;
 
@@ -453,7 +454,8 @@ final class ViewerWindow implements PlotPanel.Gestures {
         String html = pr == null
                 ? "<html><body><p><font color='" + PeakDetails.labelColour() + "'>Click a peak in the plot, or pick one in the table, "
                         + "to see its measures and candidate analytes.</font></p></body></html>"
-                : PeakDetails.html(data.runs().get(ref.run()).name(), data.runs().get(ref.run()).result(), pr);
+                : PeakDetails.html(data.runs().get(ref.run()).name(), data.runs().get(ref.run()).result(), pr,
+                        data.recurringUnknownOf(ref));
         details.setText(html);
         details.setCaretPosition(0);
     }
@@ -504,6 +506,14 @@ final class ViewerWindow implements PlotPanel.Gestures {
             }
             sb.append(".  Runs of ").append(groups.size()).append(" buffers share this axis (")
                     .append(String.join("; ", groups)).append("); 'mobident plot' draws a panel for each");
+        }
+        List<RecurringUnknowns.Group> recurring = data.recurringUnknowns();
+        if (!recurring.isEmpty()) {
+            List<String> names = new ArrayList<>();
+            for (RecurringUnknowns.Group g : recurring) {
+                names.add(PeakDetails.recurrence(g));
+            }
+            sb.append(".  Recurring unknowns: ").append(String.join("; ", names));
         }
         status.setText(sb.toString());
     }
