@@ -72,9 +72,13 @@ final class PeakTableModel extends AbstractTableModel {
             case 4:
                 return assigned(pr);
             case 5:
-                return pr.role() == PeakRole.ANALYTE && pr.match() != null && pr.match().assigned() != null
-                        && PeakStatus.of(pr) != PeakStatus.UNASSIGNED
-                        ? PeakDetails.percent(pr.match().confidence()) : "";
+                if (pr.role() != PeakRole.ANALYTE || pr.match() == null || !Double.isFinite(pr.match().confidence())) {
+                    return "";
+                }
+                // as in the terminal and HTML reports: an unassigned peak's confidence is that it is none
+                return pr.match().assigned() != null && PeakStatus.of(pr) != PeakStatus.UNASSIGNED
+                        ? PeakDetails.percent(pr.match().confidence())
+                        : PeakDetails.percent(pr.match().confidence()) + " none";
             default:
                 return PeakStatus.of(pr).label();
         }

@@ -40,4 +40,19 @@ class RecurringUnknownsViewTest {
         assertTrue(d.recurringUnknowns().isEmpty());
         assertNull(d.recurringUnknownOf(new PeakRef(0, 2)));
     }
+
+    @Test
+    void thePeakTableShowsAnUnassignedPeaksConfidenceAsTheReportsDo() {
+        // the terminal and HTML reports write an unassigned peak's confidence as "93 % none", the table too;
+        // its '± u' column is the uncertainty that decided the match (lithium: |-0.1 / -0.2| = 0.5)
+        ViewerData d = data(ViewerFixtures.run("early", 200, true));
+        PeakTableModel table = new PeakTableModel();
+        table.show(d, List.of(0));
+        int unassigned = table.rowOf(new PeakRef(0, 2));
+        int lithium = table.rowOf(new PeakRef(0, 0));
+        assertEquals("93 % none", table.getValueAt(unassigned, 5));
+        assertEquals("55 %", table.getValueAt(lithium, 5));
+        assertEquals(0.5, (Double) table.getValueAt(lithium, 3), 1e-12);
+        assertEquals("± u", table.getColumnName(3));
+    }
 }
