@@ -641,15 +641,12 @@ public final class PeakDetector {
          * symmetric model cannot. Null when the share has no positive area.
          */
         private ZoneCentre shareCentre(List<GaussianClusterFit.Component> c, int k, int first, int last) {
-            double[] part = new double[last - first + 1];
-            double[] times = java.util.Arrays.copyOfRange(t, first, last + 1);
-            for (int i = first; i <= last; i++) {
-                double total = 0;
-                for (GaussianClusterFit.Component z : c) {
-                    total += z.value(t[i]);
-                }
-                part[i - first] = total > 0 ? raw[i] * c.get(k).value(t[i]) / total : 0.0;
+            List<java.util.function.DoubleUnaryOperator> values = new ArrayList<>(c.size());
+            for (GaussianClusterFit.Component z : c) {
+                values.add(z::value);
             }
+            double[] part = shares(values, k, first, last, null);
+            double[] times = java.util.Arrays.copyOfRange(t, first, last + 1);
             ZoneCentre centre = ZoneCentre.of(times, part, 0, part.length - 1);
             return Double.isNaN(centre.centreTimeS()) ? null : centre;
         }
@@ -742,6 +739,28 @@ public final class PeakDetector {
         }
 
         /**
+         * Zone k's part of each sample of [first, last] when the cluster's samples are dealt out to
+         * the zones in proportion to their fitted values there: raw · v_k / Σ v (0 where Σ v is not
+         * positive). With {@code fraction} given, v_k / Σ v is written into it.
+         */
+        private double[] shares(List<java.util.function.DoubleUnaryOperator> zones, int k, int first, int last,
+                                double[] fraction) {
+            double[] part = new double[last - first + 1];
+            for (int i = first; i <= last; i++) {
+                double total = 0;
+                for (java.util.function.DoubleUnaryOperator z : zones) {
+                    total += z.applyAsDouble(t[i]);
+                }
+                double own = zones.get(k).applyAsDouble(t[i]);
+                part[i - first] = total > 0 ? raw[i] * own / total : 0.0;
+                if (fraction != null) {
+                    fraction[i - first] = total > 0 ? own / total : 0.0;
+                }
+            }
+            return part;
+        }
+
+        /**
          * The first moment of skewed zone k's share of the data, and how much of it rests on samples
          * the neighbours share. Each sample of the cluster is dealt out to the zones in proportion to
          * their fitted values (as {@link #shareCentre} does for Gaussians): the moment of zone k's
@@ -753,17 +772,13 @@ public final class PeakDetector {
          * {moment, overlap term}, s; the moment NaN when the share has no positive area.
          */
         private double[] skewedShareMomentS(List<SkewedClusterFit.Zone> zones, int k, int first, int last) {
-            double[] part = new double[last - first + 1];
-            double[] fraction = new double[last - first + 1];
-            double[] times = java.util.Arrays.copyOfRange(t, first, last + 1);
-            for (int i = first; i <= last; i++) {
-                double total = 0;
-                for (SkewedClusterFit.Zone z : zones) {
-                    total += z.value(t[i]);
-                }
-                fraction[i - first] = total > 0 ? zones.get(k).value(t[i]) / total : 0.0;
-                part[i - first] = raw[i] * fraction[i - first];
+            List<java.util.function.DoubleUnaryOperator> values = new ArrayList<>(zones.size());
+            for (SkewedClusterFit.Zone z : zones) {
+                values.add(z::value);
             }
+            double[] fraction = new double[last - first + 1];
+            double[] part = shares(values, k, first, last, fraction);
+            double[] times = java.util.Arrays.copyOfRange(t, first, last + 1);
             double centre = ZoneCentre.of(times, part, 0, part.length - 1).centreTimeS();
             double area = 0;
             double contested = 0;

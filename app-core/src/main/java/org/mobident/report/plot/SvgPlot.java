@@ -17,12 +17,7 @@ public final class SvgPlot {
         PlotLayout layout = PlotLayout.of(model, widthPx, heightPx);
         StringBuilder sb = new StringBuilder(64 * 1024);
         String label = model.title().isEmpty() ? "Electropherogram" : model.title();
-        sb.append("<svg xmlns=\"http://www.w3.org/2000/svg\" width=\"").append(widthPx)
-                .append("\" height=\"").append(heightPx).append("\" viewBox=\"0 0 ").append(widthPx)
-                .append(' ').append(heightPx).append("\" role=\"img\" aria-label=\"")
-                .append(Markup.escape(label)).append("\" font-family=\"").append(PlotStyle.FONT_FAMILY)
-                .append("\">\n");
-        sb.append("  <title>").append(Markup.escape(label)).append("</title>\n");
+        openSvg(sb, widthPx, heightPx, label);
         PlotPainter.paint(layout, new SvgCanvas(sb));
         sb.append("</svg>\n");
         return sb.toString();
@@ -48,12 +43,7 @@ public final class SvgPlot {
             titles.add(m.title().isEmpty() ? "Electropherogram" : m.title());
         }
         String label = String.join("; ", titles);
-        sb.append("<svg xmlns=\"http://www.w3.org/2000/svg\" width=\"").append(widthPx)
-                .append("\" height=\"").append(heightPx).append("\" viewBox=\"0 0 ").append(widthPx)
-                .append(' ').append(heightPx).append("\" role=\"img\" aria-label=\"")
-                .append(Markup.escape(label)).append("\" font-family=\"").append(PlotStyle.FONT_FAMILY)
-                .append("\">\n");
-        sb.append("  <title>").append(Markup.escape(label)).append("</title>\n");
+        openSvg(sb, widthPx, heightPx, label);
         for (int i = 0; i < layouts.size(); i++) {
             sb.append("  <g class=\"panel\" transform=\"translate(0 ").append(i * panelHeightPx).append(")\">\n");
             PlotPainter.paint(layouts.get(i), new SvgCanvas(sb));
@@ -78,5 +68,15 @@ public final class SvgPlot {
         PlotPainter.marker(c, status, half, half, sizePx * 0.3);
         sb.append(body.toString().replace("\n", "").replace("  <", "<")).append("</svg>");
         return sb.toString();
+    }
+
+    /** The opening {@code <svg>} tag of a plot of that size with its accessible label, and its title. */
+    private static void openSvg(StringBuilder sb, int widthPx, int heightPx, String label) {
+        sb.append("<svg xmlns=\"http://www.w3.org/2000/svg\" width=\"").append(widthPx)
+                .append("\" height=\"").append(heightPx).append("\" viewBox=\"0 0 ").append(widthPx)
+                .append(' ').append(heightPx).append("\" role=\"img\" aria-label=\"")
+                .append(Markup.escape(label)).append("\" font-family=\"").append(PlotStyle.FONT_FAMILY)
+                .append("\">\n");
+        sb.append("  <title>").append(Markup.escape(label)).append("</title>\n");
     }
 }
