@@ -441,7 +441,9 @@ public final class PeakDetector {
      * much wider than its neighbours, so it has the width that diffusion and injection give every
      * zone at that time (w½ grows about in proportion to t); broad low bumps at that level are the
      * baseline's waves. The lower quartile, because the concentrated zones among the references
-     * are themselves dispersed.
+     * are themselves dispersed. Likewise a faint peak far narrower than that width (below
+     * {@link SignalLimits#FAINT_MIN_WIDTH_RATIO} of it) is no zone: narrow faint tops are spikes
+     * that escaped the spike filter and noise.
      */
     private static List<Measured> withoutDoubtfulFaintPeaks(List<Measured> reported, double firstTimeS,
                                                             double lastTimeS) {
@@ -455,13 +457,15 @@ public final class PeakDetector {
         java.util.Arrays.sort(ratios, 0, count);
         double maxRatio = count >= MIN_WIDTH_REFERENCES
                 ? SignalLimits.FAINT_MAX_WIDTH_RATIO * ratios[(count - 1) / 4] : Double.POSITIVE_INFINITY;
+        double minRatio = count >= MIN_WIDTH_REFERENCES ? SignalLimits.FAINT_MIN_WIDTH_RATIO * ratios[(count - 1) / 4] : 0.0;
         List<Measured> kept = new ArrayList<>(reported.size());
         for (Measured m : reported) {
             boolean faint = m.signalToNoise < Tolerances.DETECTION_LIMIT_SIGNAL_TO_NOISE;
             boolean cut = m.startTimeS <= firstTimeS || m.endTimeS >= lastTimeS
                     || m.apexTimeS - firstTimeS < m.widthHalfS || lastTimeS - m.apexTimeS < m.widthHalfS;
             boolean broad = m.apexTimeS > 0 && m.widthHalfS / m.apexTimeS > maxRatio;
-            if (!(faint && (cut || broad))) {
+            boolean narrow = m.apexTimeS > 0 && m.widthHalfS / m.apexTimeS < minRatio;
+            if (!(faint && (cut || broad || narrow))) {
                 kept.add(m);
             }
         }
