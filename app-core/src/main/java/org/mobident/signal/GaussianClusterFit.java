@@ -166,12 +166,12 @@ final class GaussianClusterFit {
         }
         double[] p = solution.point();
         double rss = solution.rss();
-        RealMatrix covariance = solution.covariance();
+        double[][] covariance = solution.covariance();
         int dof = n - 3 * k;
         double residualVariance = rss / dof;
         List<Component> components = new ArrayList<>(k);
         for (int j = 0; j < k; j++) {
-            double varApex = covariance.getEntry(3 * j + 1, 3 * j + 1) * residualVariance;
+            double varApex = covariance[3 * j + 1][3 * j + 1] * residualVariance;
             if (!(varApex >= 0) || !Double.isFinite(p[3 * j + 1])) {
                 return null;
             }
