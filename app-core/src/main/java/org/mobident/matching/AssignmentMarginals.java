@@ -48,13 +48,32 @@ final class AssignmentMarginals {
 
     /** As {@link #compute}, with ln Z; null when too large. */
     static Result computeWithNormaliser(int[][] entryOf, double[][] logWeight, int maxStates) {
+        // each pass is a method of its own, so that the JIT compiles the loop it runs in (and the
+        // pass runs long enough to be compiled while it runs) without the rest of the computation
         int peaks = entryOf.length;
-        double logZ = 0.0;
-        // Entries wanted by two or more peaks get a bit; remember the last peak that wants each.
-        Map<Integer, Integer> firstUser = new HashMap<>();
         Map<Integer, Integer> bitOf = new HashMap<>();
+        int[] lastUser = sharedEntries(entryOf, bitOf);
+        double[] noneWeight = new double[peaks];
+        double[][] weight = new double[peaks][];
+        int[][] bit = new int[peaks][];
+        double logZ = optionWeights(entryOf, logWeight, bitOf, noneWeight, weight, bit, 0.0);
+        List<Map<BitSet, Double>> forward = new ArrayList<>(peaks + 1);
+        double[] logZHolder = {logZ};
+        if (!forwardPass(forward, logZHolder, noneWeight, weight, bit, lastUser, maxStates)) {
+            return null;
+        }
+        double[][] marginal = backwardPass(forward, noneWeight, weight, bit, lastUser);
+        return marginal == null ? null : new Result(marginal, logZHolder[0]);
+    }
+
+    /**
+     * Entries wanted by two or more peaks get a bit (in {@code bitOf}); returns, per bit, the last
+     * peak that wants the entry.
+     */
+    private static int[] sharedEntries(int[][] entryOf, Map<Integer, Integer> bitOf) {
+        Map<Integer, Integer> firstUser = new HashMap<>();
         List<Integer> lastUserOfBit = new ArrayList<>();
-        for (int t = 0; t < peaks; t++) {
+        for (int t = 0; t < entryOf.length; t++) {
             for (int e : entryOf[t]) {
                 Integer first = firstUser.putIfAbsent(e, t);
                 if (first != null && first != t) {
@@ -68,12 +87,17 @@ final class AssignmentMarginals {
                 }
             }
         }
-        int[] lastUser = lastUserOfBit.stream().mapToInt(Integer::intValue).toArray();
-        // Option weights per peak, scaled so that the largest is 1 (the scale cancels).
-        double[] noneWeight = new double[peaks];
-        double[][] weight = new double[peaks][];
-        int[][] bit = new int[peaks][];
-        for (int t = 0; t < peaks; t++) {
+        return lastUserOfBit.stream().mapToInt(Integer::intValue).toArray();
+    }
+
+    /**
+     * Option weights per peak, scaled so that the largest is 1 (the scale cancels), filled into
+     * {@code noneWeight}, {@code weight} and {@code bit}; returns {@code logZ} plus the logs of
+     * the scales, added peak by peak.
+     */
+    private static double optionWeights(int[][] entryOf, double[][] logWeight, Map<Integer, Integer> bitOf,
+                                        double[] noneWeight, double[][] weight, int[][] bit, double logZ) {
+        for (int t = 0; t < entryOf.length; t++) {
             double maxLog = 0.0;
             for (double lw : logWeight[t]) {
                 maxLog = Math.max(maxLog, lw);
@@ -87,26 +111,37 @@ final class AssignmentMarginals {
                 bit[t][k] = bitOf.getOrDefault(entryOf[t][k], -1);
             }
         }
+        return logZ;
+    }
 
-        List<Map<BitSet, Double>> forward = new ArrayList<>(peaks + 1);
+    /**
+     * The forward layers (normalised), appended to {@code forward}; the log of each layer's total
+     * is added to {@code logZ[0]}. False when a layer exceeds {@code maxStates}.
+     */
+    private static boolean forwardPass(List<Map<BitSet, Double>> forward, double[] logZ, double[] noneWeight,
+                                       double[][] weight, int[][] bit, int[] lastUser, int maxStates) {
         Map<BitSet, Double> start = new HashMap<>();
         start.put(new BitSet(), 1.0);
         forward.add(start);
-        for (int t = 0; t < peaks; t++) {
+        for (int t = 0; t < noneWeight.length; t++) {
             Map<BitSet, Double> next = new HashMap<>();
             double total = forwardStep(forward.get(t), next, t, noneWeight[t], weight[t], bit[t], lastUser);
             if (next.size() > maxStates) {
-                return null;
+                return false;
             }
             if (total > 0) {
-                logZ += Math.log(total);
-                for (Map.Entry<BitSet, Double> s : next.entrySet()) {
-                    s.setValue(s.getValue() / total);
-                }
+                logZ[0] += Math.log(total);
+                divideValues(next, total);
             }
             forward.add(next);
         }
+        return true;
+    }
 
+    /** The marginals, peak by peak from the last; null when a peak's options have no finite positive sum. */
+    private static double[][] backwardPass(List<Map<BitSet, Double>> forward, double[] noneWeight,
+                                           double[][] weight, int[][] bit, int[] lastUser) {
+        int peaks = noneWeight.length;
         double[][] marginal = new double[peaks][];
         Map<BitSet, Double> after = new HashMap<>();
         after.put(new BitSet(), 1.0);
@@ -125,19 +160,19 @@ final class AssignmentMarginals {
                 m[k] /= z;
             }
             marginal[t] = m;
-            for (Map.Entry<BitSet, Double> s : here.entrySet()) {
-                s.setValue(s.getValue() / max);
-            }
+            divideValues(here, max);
             after = here;
         }
-        return new Result(marginal, logZ);
+        return marginal;
     }
 
-    /**
-     * One forward step: every state before peak t, with each option of peak t that its used entries
-     * allow, into {@code next}; returns the total weight added. Its own method so that the JIT
-     * compiles the loop once per call rather than on-stack-replacing the whole recursion.
-     */
+    /** Divides every value of the map by {@code divisor}, in place. */
+    private static void divideValues(Map<BitSet, Double> layer, double divisor) {
+        for (Map.Entry<BitSet, Double> s : layer.entrySet()) {
+            s.setValue(s.getValue() / divisor);
+        }
+    }
+
     private static double forwardStep(Map<BitSet, Double> before, Map<BitSet, Double> next, int t, double noneWeight,
                                       double[] weight, int[] bit, int[] lastUser) {
         double total = 0.0;

@@ -344,47 +344,57 @@ public final class LibraryMatcher {
                     throw new IllegalArgumentException("peak " + i + ": negative mobility uncertainty " + sd);
                 }
                 peakVariance[i] = Double.isNaN(sd) ? 0.0 : sd * sd;
-                List<double[]> kept = new ArrayList<>();
-                if (Double.isFinite(mobility[i])) {
-                    for (int j = 0; j < m; j++) {
-                        LibraryEntry e = entries.get(j);
-                        double x = adjuster.adjust(mobility[i], e);
-                        if (!Double.isFinite(x) || !Double.isFinite(e.mobility())) {
-                            continue;
-                        }
-                        double reach;
-                        if (prior == null) {
-                            reach = window(j, peakVariance[i]);
-                        } else {
-                            double priorVar = RunScale.prior(ScalePrior.DEFAULT, 0).varianceAt(e.mobility())
-                                    + RunScale.prior(prior, 0).varianceAt(e.mobility());
-                            reach = prior.maxFactorDeviation() * Math.abs(e.mobility()) + prior.maxOffset()
-                                    + window(j, peakVariance[i] + priorVar) * (1 + prior.maxFactorDeviation());
-                        }
-                        if (Math.abs(x - e.mobility()) <= reach) {
-                            kept.add(new double[] {j, x});
-                        }
+                fillPairs(i, adjuster, prior);
+            }
+        }
+
+        /**
+         * The candidate pairs of peak i (entries within reach) and their base terms, into
+         * {@code pairEntry[i]} … {@code baseLog[i]}: a method of its own, so that the JIT compiles
+         * this loop over the entries without the rest of the constructor.
+         */
+        private void fillPairs(int i, MobilityAdjuster adjuster, ScalePrior prior) {
+            int m = entries.size();
+            List<double[]> kept = new ArrayList<>();
+            if (Double.isFinite(mobility[i])) {
+                for (int j = 0; j < m; j++) {
+                    LibraryEntry e = entries.get(j);
+                    double x = adjuster.adjust(mobility[i], e);
+                    if (!Double.isFinite(x) || !Double.isFinite(e.mobility())) {
+                        continue;
+                    }
+                    double reach;
+                    if (prior == null) {
+                        reach = window(j, peakVariance[i]);
+                    } else {
+                        double priorVar = RunScale.prior(ScalePrior.DEFAULT, 0).varianceAt(e.mobility())
+                                + RunScale.prior(prior, 0).varianceAt(e.mobility());
+                        reach = prior.maxFactorDeviation() * Math.abs(e.mobility()) + prior.maxOffset()
+                                + window(j, peakVariance[i] + priorVar) * (1 + prior.maxFactorDeviation());
+                    }
+                    if (Math.abs(x - e.mobility()) <= reach) {
+                        kept.add(new double[] {j, x});
                     }
                 }
-                int c = kept.size();
-                pairEntry[i] = new int[c];
-                pairX[i] = new double[c];
-                baseVar[i] = new double[c];
-                baseDf[i] = new double[c];
-                baseWindow[i] = new double[c];
-                baseLog[i] = new double[c];
-                for (int k = 0; k < c; k++) {
-                    int j = (int) kept.get(k)[0];
-                    pairEntry[i][k] = j;
-                    pairX[i][k] = kept.get(k)[1];
-                    double v = spread.predictiveVariance(j) + peakVariance[i];
-                    double df = MatchWindow.combinedDf(v, spread.estimatedVariance(j), spread.degreesOfFreedom(j));
-                    baseVar[i][k] = v;
-                    baseDf[i][k] = df;
-                    baseWindow[i][k] = window(j, peakVariance[i]);
-                    baseLog[i][k] = logOdds[j] - 0.5 * Math.log(v)
-                            + (df < MatchWindow.NORMAL_DF ? logDensityConstant(df) : -LOG_SQRT_2PI);
-                }
+            }
+            int c = kept.size();
+            pairEntry[i] = new int[c];
+            pairX[i] = new double[c];
+            baseVar[i] = new double[c];
+            baseDf[i] = new double[c];
+            baseWindow[i] = new double[c];
+            baseLog[i] = new double[c];
+            for (int k = 0; k < c; k++) {
+                int j = (int) kept.get(k)[0];
+                pairEntry[i][k] = j;
+                pairX[i][k] = kept.get(k)[1];
+                double v = spread.predictiveVariance(j) + peakVariance[i];
+                double df = MatchWindow.combinedDf(v, spread.estimatedVariance(j), spread.degreesOfFreedom(j));
+                baseVar[i][k] = v;
+                baseDf[i][k] = df;
+                baseWindow[i][k] = window(j, peakVariance[i]);
+                baseLog[i][k] = logOdds[j] - 0.5 * Math.log(v)
+                        + (df < MatchWindow.NORMAL_DF ? logDensityConstant(df) : -LOG_SQRT_2PI);
             }
         }
 
@@ -435,27 +445,10 @@ public final class LibraryMatcher {
             int nb = Math.max(1, (int) Math.ceil((hiB - loB) / OFFSET_GRID_STEP) + 1);
             double a0 = na == 1 ? prior.factorCentre() : loA;
             double b0 = nb == 1 ? prior.offsetCentre() : loB;
-            double[][] score = new double[na][nb];
-            double best = Double.NEGATIVE_INFINITY;
-            for (int ia = 0; ia < na; ia++) {
-                double a = a0 + ia * FACTOR_GRID_STEP;
-                for (int ib = 0; ib < nb; ib++) {
-                    double b = b0 + ib * OFFSET_GRID_STEP;
-                    double v = prior.logDensity(a, b) + independentLogScore(a, b);
-                    score[ia][ib] = v;
-                    best = Math.max(best, v);
-                }
-            }
-            List<int[]> seeds = new ArrayList<>();
-            for (int ia = 0; ia < na; ia++) {
-                for (int ib = 0; ib < nb; ib++) {
-                    double v = score[ia][ib];
-                    if (v < best - MODE_LOG_DROP || !localMaximum(score, ia, ib)) {
-                        continue;
-                    }
-                    seeds.add(new int[] {ia, ib});
-                }
-            }
+            // the grid and its seeds in methods of their own: their loops are the long ones, and
+            // the JIT then compiles them without the rest of the search
+            double[][] score = scoreGrid(prior, a0, b0, na, nb);
+            List<int[]> seeds = seeds(score, largest(score));
             seeds.sort(Comparator.comparingDouble((int[] c) -> -score[c[0]][c[1]]));
             List<Fit> fits = new ArrayList<>();
             for (int[] c : seeds) {
@@ -473,6 +466,45 @@ public final class LibraryMatcher {
                 }
             }
             return fits;
+        }
+
+        /** The log posterior score on the grid a0 + ia·step, b0 + ib·step. */
+        private double[][] scoreGrid(ScalePrior prior, double a0, double b0, int na, int nb) {
+            double[][] score = new double[na][nb];
+            for (int ia = 0; ia < na; ia++) {
+                double a = a0 + ia * FACTOR_GRID_STEP;
+                for (int ib = 0; ib < nb; ib++) {
+                    double b = b0 + ib * OFFSET_GRID_STEP;
+                    score[ia][ib] = prior.logDensity(a, b) + independentLogScore(a, b);
+                }
+            }
+            return score;
+        }
+
+        /** The largest score (NaN when any is NaN, as Math.max gives). */
+        private static double largest(double[][] score) {
+            double best = Double.NEGATIVE_INFINITY;
+            for (double[] row : score) {
+                for (double v : row) {
+                    best = Math.max(best, v);
+                }
+            }
+            return best;
+        }
+
+        /** The grid cells that are local maxima within {@link #MODE_LOG_DROP} of the best, in grid order. */
+        private static List<int[]> seeds(double[][] score, double best) {
+            List<int[]> seeds = new ArrayList<>();
+            for (int ia = 0; ia < score.length; ia++) {
+                for (int ib = 0; ib < score[ia].length; ib++) {
+                    double v = score[ia][ib];
+                    if (v < best - MODE_LOG_DROP || !localMaximum(score, ia, ib)) {
+                        continue;
+                    }
+                    seeds.add(new int[] {ia, ib});
+                }
+            }
+            return seeds;
         }
 
         private static boolean localMaximum(double[][] score, int ia, int ib) {

@@ -134,12 +134,7 @@ final class GaussianClusterFit {
         double span = t[last] - ref;
         double[] u = new double[n];
         double[] target = new double[n];
-        double maxValue = 0;
-        for (int i = 0; i < n; i++) {
-            u[i] = t[first + i] - ref;
-            target[i] = v[first + i];
-            maxValue = Math.max(maxValue, target[i]);
-        }
+        double maxValue = window(t, v, first, ref, u, target);
         if (!(maxValue > 0)) {
             return null;
         }
@@ -171,12 +166,12 @@ final class GaussianClusterFit {
         }
         double[] p = solution.point();
         double rss = solution.rss();
-        RealMatrix covariance = solution.covariance();
+        double[][] covariance = solution.covariance();
         int dof = n - 3 * k;
         double residualVariance = rss / dof;
         List<Component> components = new ArrayList<>(k);
         for (int j = 0; j < k; j++) {
-            double varApex = covariance.getEntry(3 * j + 1, 3 * j + 1) * residualVariance;
+            double varApex = covariance[3 * j + 1][3 * j + 1] * residualVariance;
             if (!(varApex >= 0) || !Double.isFinite(p[3 * j + 1])) {
                 return null;
             }
@@ -184,6 +179,22 @@ final class GaussianClusterFit {
         }
         components.sort(Comparator.comparingDouble(Component::apexTimeS));
         return new Result(components, rss, n);
+    }
+
+    /**
+     * Fills {@code u} with the times from {@code ref} and {@code target} with the values of the
+     * samples from {@code first} on; returns the largest value (0 when none is positive). A method of
+     * its own, so that the JIT compiles this loop over the cluster's samples without all of
+     * {@link #fit}.
+     */
+    private static double window(double[] t, double[] v, int first, double ref, double[] u, double[] target) {
+        double maxValue = 0;
+        for (int i = 0; i < u.length; i++) {
+            u[i] = t[first + i] - ref;
+            target[i] = v[first + i];
+            maxValue = Math.max(maxValue, target[i]);
+        }
+        return maxValue;
     }
 
     /**

@@ -6,7 +6,6 @@ import org.apache.commons.math3.fitting.leastsquares.LeastSquaresOptimizer;
 import org.apache.commons.math3.fitting.leastsquares.LevenbergMarquardtOptimizer;
 import org.apache.commons.math3.fitting.leastsquares.MultivariateJacobianFunction;
 import org.apache.commons.math3.fitting.leastsquares.ParameterValidator;
-import org.apache.commons.math3.linear.RealMatrix;
 import org.apache.commons.math3.linear.SingularMatrixException;
 
 /**
@@ -26,9 +25,12 @@ final class LevenbergMarquardt {
      * @param point       the parameters
      * @param rss         residual sum of squares
      * @param covariance  (JᵀJ)⁻¹ at the optimum (multiply by the residual variance for the
-     *                    parameters' covariance), or null when not asked for
+     *                    parameters' covariance), by row, or null when not asked for; plain arrays,
+     *                    so that the callers' reads do not meet two matrix classes (the optimiser's
+     *                    inverse is a block matrix, the models' Jacobians are not), which made the
+     *                    JIT throw their compiled code away and compile it again
      */
-    record Solution(double[] point, double rss, RealMatrix covariance) {
+    record Solution(double[] point, double rss, double[][] covariance) {
     }
 
     private LevenbergMarquardt() {
@@ -56,7 +58,7 @@ final class LevenbergMarquardt {
                 return null;
             }
             return new Solution(optimum.getPoint().toArray(), rss,
-                    covariance ? optimum.getCovariances(SINGULARITY_THRESHOLD) : null);
+                    covariance ? optimum.getCovariances(SINGULARITY_THRESHOLD).getData() : null);
         } catch (MathIllegalStateException | SingularMatrixException e) {
             return null;
         }

@@ -135,9 +135,7 @@ public final class PeakDetector {
         double[] y = trace.signals();
         int n = y.length;
         if (dip) {
-            for (int i = 0; i < n; i++) {
-                y[i] = -y[i];
-            }
+            negate(y);
         }
         if (n < SignalLimits.MIN_POINTS) {
             double sigma = flooredNoise(y);
@@ -159,10 +157,7 @@ public final class PeakDetector {
         boolean smoothing = halfWidth >= 1 && SMOOTHING_ORDER < 2 * halfWidth;
         double[] smoothWeights = smoothing ? SavitzkyGolay.weights(halfWidth, SMOOTHING_ORDER) : new double[] {1.0};
         double smoothGain = Math.sqrt(PeakWidthEstimator.sumOfSquares(smoothWeights));
-        double smoothBound = 0;
-        for (double w : smoothWeights) {
-            smoothBound += Math.abs(w);
-        }
+        double smoothBound = sumOfMagnitudes(smoothWeights);
         int typicalPoints = (int) Math.round(SignalLimits.PEAK_TO_PEAK_WINDOW_WIDTHS * typicalWidth / sampling) + 1;
         double typicalRange = NoiseEstimator.expectedNormalRange(Math.max(2, Math.min(n, typicalPoints)));
 
@@ -185,11 +180,7 @@ public final class PeakDetector {
                 SignalLimits.GROUP_GAP_IN_WIDTHS * typicalWidth, SignalLimits.GROUP_EDGE_IN_WIDTHS * typicalWidth,
                 SignalLimits.GROUP_MAX_SPAN_IN_WIDTHS * typicalWidth,
                 SignalLimits.WIDE_ZONE_IN_WIDTHS * typicalWidth);
-        double[] raw = new double[n];
-        for (int i = 0; i < n; i++) {
-            raw[i] = y[i] - baseline[i];
-            smooth[i] -= baseline[i];
-        }
+        double[] raw = minusBaseline(y, smooth, baseline);
 
         // the samples of the peaks (runs passing 5 noise levels, with their feet), left out of the
         // local noise
@@ -224,30 +215,8 @@ public final class PeakDetector {
                 typicalWidth / GaussianClusterFit.HALF_WIDTH_PER_SIGMA, structureHeight, minWidth, sigma);
 
         List<int[]> segments = PeakSegmenter.segments(smooth, returnLevel, hysteresis);
-        List<Measured> found = new ArrayList<>();
-        int s = 0;
-        while (s < segments.size()) {
-            // a region: segments that share a valley point above the return level
-            int e = s;
-            while (e + 1 < segments.size() && segments.get(e)[1] == segments.get(e + 1)[0]
-                    && smooth[segments.get(e)[1]] > returnLevel) {
-                e++;
-            }
-            List<int[]> region = segments.subList(s, e + 1);
-            List<Measured> resolved = cluster.resolve(region);
-            if (resolved != null) {
-                found.addAll(resolved);
-            } else {
-                for (int[] segment : region) {
-                    Measured m = measure(t, raw, smooth, segment[0], segment[1], whiteSigma, halfWidth,
-                            prefilter, minWidth);
-                    if (m != null) {
-                        found.add(m);
-                    }
-                }
-            }
-            s = e + 1;
-        }
+        List<Measured> found = measureRegions(segments, cluster, t, raw, smooth, returnLevel, whiteSigma, halfWidth,
+                prefilter, minWidth);
         double typicalSigma = typicalWidth / GaussianClusterFit.HALF_WIDTH_PER_SIGMA;
         Reporting reporting = new Reporting(t, raw, smooth, sampling, localNoise, correlation, significance,
                 smoothBound, settings.minSignalToNoise(), returnLevel,
@@ -282,6 +251,39 @@ public final class PeakDetector {
                     plates, resolution, m.signalToNoise, dip));
         }
         return new TraceAnalysis(peaks, sigma, peakToPeak);
+    }
+
+    /**
+     * The measured peaks of every region (segments that share a valley point above the return
+     * level): the zones of a confirmed cluster, else each segment measured on its own.
+     */
+    private static List<Measured> measureRegions(List<int[]> segments, Cluster cluster, double[] t, double[] raw,
+                                                 double[] smooth, double returnLevel, double whiteSigma,
+                                                 int halfWidth, double prefilter, double minWidth) {
+        List<Measured> found = new ArrayList<>();
+        int s = 0;
+        while (s < segments.size()) {
+            int e = s;
+            while (e + 1 < segments.size() && segments.get(e)[1] == segments.get(e + 1)[0]
+                    && smooth[segments.get(e)[1]] > returnLevel) {
+                e++;
+            }
+            List<int[]> region = segments.subList(s, e + 1);
+            List<Measured> resolved = cluster.resolve(region);
+            if (resolved != null) {
+                found.addAll(resolved);
+            } else {
+                for (int[] segment : region) {
+                    Measured m = measure(t, raw, smooth, segment[0], segment[1], whiteSigma, halfWidth,
+                            prefilter, minWidth);
+                    if (m != null) {
+                        found.add(m);
+                    }
+                }
+            }
+            s = e + 1;
+        }
+        return found;
     }
 
     /**
@@ -526,12 +528,7 @@ public final class PeakDetector {
             List<Double> moreStart = new ArrayList<>();
             for (int k = 0; k < region.size(); k++) {
                 int[] segment = region.get(k);
-                int top = segment[0];
-                for (int i = segment[0] + 1; i <= segment[1]; i++) {
-                    if (smooth[i] > smooth[top]) {
-                        top = i;
-                    }
-                }
+                int top = highest(smooth, segment[0], segment[1]);
                 tops[k] = top;
                 fewerStart[k] = t[top];
                 boolean seen = false;
@@ -840,12 +837,7 @@ public final class PeakDetector {
      */
     private static Measured measure(double[] t, double[] raw, double[] smooth, int first, int last,
                                     double sigma, int halfWidth, double prefilter, double minWidth) {
-        int apex = first;
-        for (int i = first + 1; i <= last; i++) {
-            if (smooth[i] > smooth[apex]) {
-                apex = i;
-            }
-        }
+        int apex = highest(smooth, first, last);
         if (!(smooth[apex] >= prefilter)) {
             return null; // far too low to pass the checks: skip the fit
         }
@@ -1056,6 +1048,51 @@ public final class PeakDetector {
             return t.length - 1;
         }
         return time - t[after - 1] <= t[after] - time ? after - 1 : after;
+    }
+
+    /*
+     * The whole-trace loops of analyse live in small methods of their own: a loop over every
+     * sample inside analyse would have the JIT compile all of analyse (and what it inlines) while
+     * that loop runs, again for each such loop and again after each rarely taken branch, which
+     * cost more compiler time in a batch than the loops themselves.
+     */
+
+    /** The index of the first largest value in [first, last]. */
+    private static int highest(double[] v, int first, int last) {
+        int top = first;
+        for (int i = first + 1; i <= last; i++) {
+            if (v[i] > v[top]) {
+                top = i;
+            }
+        }
+        return top;
+    }
+
+    /** Flips the sign of every value, in place. */
+    private static void negate(double[] y) {
+        for (int i = 0; i < y.length; i++) {
+            y[i] = -y[i];
+        }
+    }
+
+    /** Σ|w|. */
+    private static double sumOfMagnitudes(double[] w) {
+        double sum = 0;
+        for (double v : w) {
+            sum += Math.abs(v);
+        }
+        return sum;
+    }
+
+    /** The raw signal minus the baseline (a new array); the baseline is taken off {@code smooth} in place. */
+    private static double[] minusBaseline(double[] y, double[] smooth, double[] baseline) {
+        int n = y.length;
+        double[] raw = new double[n];
+        for (int i = 0; i < n; i++) {
+            raw[i] = y[i] - baseline[i];
+            smooth[i] -= baseline[i];
+        }
+        return raw;
     }
 
     /** Median sampling interval, from an evenly strided subset of at most

@@ -6,7 +6,6 @@ import org.apache.commons.math3.fitting.leastsquares.MultivariateJacobianFunctio
 import org.apache.commons.math3.fitting.leastsquares.ParameterValidator;
 import org.apache.commons.math3.linear.Array2DRowRealMatrix;
 import org.apache.commons.math3.linear.ArrayRealVector;
-import org.apache.commons.math3.linear.RealMatrix;
 import org.apache.commons.math3.linear.SingularMatrixException;
 import org.apache.commons.math3.util.Pair;
 
@@ -378,15 +377,15 @@ final class SkewedClusterFit {
         }
         double[] p = solution.point();
         double rss = solution.rss();
-        RealMatrix covariance = solution.covariance();
+        double[][] covariance = solution.covariance();
         double residualVariance = rss / (n - parameters);
         List<Zone> zones = new ArrayList<>(k);
         for (int j = 0; j < k; j++) {
             int c = 2 + 3 * j;
             int a = 3 + 3 * j;
-            double varCentre = covariance.getEntry(c, c) * residualVariance;
-            double varMoment = (covariance.getEntry(c, c) + covariance.getEntry(a, a)
-                    + 2 * sign * covariance.getEntry(c, a)) * residualVariance;
+            double varCentre = covariance[c][c] * residualVariance;
+            double varMoment = (covariance[c][c] + covariance[a][a]
+                    + 2 * sign * covariance[c][a]) * residualVariance;
             if (!(varCentre >= 0) || !(varMoment >= 0) || !Double.isFinite(p[c])) {
                 return null;
             }

@@ -65,6 +65,14 @@ public final class NumberText {
         if (!Double.isFinite(value)) {
             return missing;
         }
+        if (decimals >= 0 && decimals < POW10.length) {
+            // the fast path of trimmed, with the zeros kept (same bound and tie margin)
+            long scale = POW10[decimals];
+            double scaled = Math.abs(value * scale);
+            if (scaled < FAST_LIMIT && Math.abs(scaled - Math.floor(scaled) - 0.5) > TIE_MARGIN) {
+                return fixedDigits(value < 0, Math.round(scaled), scale, decimals);
+            }
+        }
         return dropNegativeZero(String.format(Locale.ROOT, "%." + decimals + "f", value));
     }
 
@@ -186,6 +194,19 @@ public final class NumberText {
                 end--;
             }
             sb.append('.').append(f, 0, end);
+        }
+        return sb.toString();
+    }
+
+    /** {@code rounded / scale} with exactly {@code decimals} decimals (scale = 10^decimals), no negative zero. */
+    private static String fixedDigits(boolean negative, long rounded, long scale, int decimals) {
+        StringBuilder sb = new StringBuilder(24);
+        if (negative && rounded != 0) {
+            sb.append('-');
+        }
+        sb.append(rounded / scale);
+        if (decimals > 0) {
+            sb.append('.').append(Long.toString(rounded % scale + scale), 1, decimals + 1);
         }
         return sb.toString();
     }

@@ -145,6 +145,24 @@ class NumberTextTest {
         }
     }
 
+    /** The fast path of {@link NumberText#fixed} gives what Formatter's %f gives (no negative zero). */
+    @Test
+    void fixedAgreesWithFormatter() {
+        SplittableRandom random = new SplittableRandom(13);
+        for (int i = 0; i < 200_000; i++) {
+            double v = randomValue(random);
+            if (i % 4 == 0) {
+                v = Math.round(v * 1000) / 1000.0 + (random.nextBoolean() ? 0.0005 : -0.0005); // near ties
+            }
+            int decimals = random.nextInt(8);
+            String viaFormatter = String.format(Locale.ROOT, "%." + decimals + "f", v);
+            if (viaFormatter.matches("-0(\\.0*)?")) {
+                viaFormatter = viaFormatter.substring(1);
+            }
+            assertEquals(viaFormatter, NumberText.fixed(v, decimals, null), v + " with " + decimals + " decimals");
+        }
+    }
+
     private static double randomValue(SplittableRandom random) {
         double magnitude = Math.pow(10, random.nextInt(-8, 13));
         return (random.nextBoolean() ? 1 : -1) * random.nextDouble() * magnitude;
