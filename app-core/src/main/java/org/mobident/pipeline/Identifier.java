@@ -453,6 +453,23 @@ public final class Identifier {
         return out;
     }
 
+    /**
+     * The detected peaks and, of the faint zones the marker search added ({@code more} without
+     * {@code peaks}), only those that {@code choice} takes as a marker.
+     */
+    private static List<Peak> chosenSearchPeaks(List<Peak> peaks, List<Peak> more, MarkerLocator.Choice choice) {
+        MarkerLocator.Hypothesis best = choice.best();
+        List<Peak> out = new ArrayList<>(more.size());
+        for (int i = 0; i < more.size(); i++) {
+            Peak p = more.get(i);
+            boolean marker = best != null && (i == best.neutralIndex() || i == best.refIndex());
+            if (marker || peaks.contains(p)) {
+                out.add(p);
+            }
+        }
+        return out;
+    }
+
     /** The failure a run's conditions (with its trace) make inevitable, or null. */
     private RunResult conditionProblem(RunSpec run, Trace trace) {
         RunConditions c = run.conditions();
@@ -524,8 +541,17 @@ public final class Identifier {
         if (searchWindow != null && (!MarkerLocator.settled(choice, c) || faintMarker(choice, peaks))) {
             List<Peak> more = withWeakMarkers(c, searchWindow, peaks);
             if (more.size() > peaks.size()) {
-                peaks = more;
-                choice = locator.locate(c, peaks, evaluator);
+                // the faint zones found by the search are marker candidates, not analyte peaks: only the
+                // one chosen as a marker stays (the others lie below the detection limit asked for)
+                MarkerLocator.Choice withMore = locator.locate(c, more, evaluator);
+                List<Peak> kept = chosenSearchPeaks(peaks, more, withMore);
+                if (kept.size() == more.size()) {
+                    peaks = more;
+                    choice = withMore;
+                } else if (kept.size() > peaks.size()) {
+                    peaks = kept;
+                    choice = locator.locate(c, peaks, evaluator);
+                }
             }
         }
         Detected settled = d.settled(peaks);

@@ -288,6 +288,35 @@ class IdentifierEndToEndTest {
         RunResult r = new Identifier(ANIONS, IdentifySettings.defaults().withThreads(1))
                 .identify(new RunSpec("faint", Path.of("faint.csv"), c, "test", 0), t);
         assertEquals(-48.0, r.eofMobility(), 0.1, "the real marker: EOF mobility used to synthesise; " + r.notes());
+        // the search went down to S/N 1.5 for marker candidates only: no analyte peak below the default
+        // detection limit (S/N 2, ICH Q2 "3 or 2:1") is reported
+        for (PeakResult pr : r.peaks()) {
+            if (pr.role() == PeakRole.ANALYTE) {
+                assertTrue(pr.peak().signalToNoise() >= 2.0, "reported below the detection limit: " + pr.peak());
+            }
+        }
+    }
+
+    @Test
+    void theWindowSearchReportsOnlyTheMarkerItChoseAmongItsFaintZones() {
+        // a marker about 5 noise SDs tall (S/N below 2: the window holds no detected peak) and a foreign
+        // zone of mobility +4 about 6 noise SDs tall in the window: the search finds both down to S/N 1.5
+        // and takes the marker; the other, below the detection limit asked for (S/N 2, ICH Q2 "3 or
+        // 2:1"), is not reported as an analyte peak (it was, in both draws, before the rule)
+        for (long seed = 66; seed <= 67; seed++) {
+            List<Truth> zones = draw(ANIONS, new SplittableRandom(seed), 0);
+            Trace t = anionTrace("two-faint", -48.0, 0.02, zones, new double[][] {{4.0, 0.024}}, seed);
+            RunConditions c = conditions(80, 72, -20, 0, Detection.INDIRECT, 380, 800);
+            RunResult r = new Identifier(ANIONS, IdentifySettings.defaults().withThreads(1))
+                    .identify(new RunSpec("two-faint", Path.of("two-faint.csv"), c, "test", 0), t);
+            assertEquals(-48.0, r.eofMobility(), 0.05, "seed " + seed + ": the real marker; " + r.notes());
+            for (PeakResult pr : r.peaks()) {
+                if (pr.role() == PeakRole.ANALYTE) {
+                    assertTrue(pr.peak().signalToNoise() >= 2.0,
+                            "seed " + seed + ": reported below the detection limit: " + pr.peak());
+                }
+            }
+        }
     }
 
     @Test
