@@ -1,8 +1,10 @@
 package org.mobident.signal;
 
 import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.List;
 import java.util.Objects;
+import java.util.function.DoubleUnaryOperator;
 import org.apache.commons.math3.special.Erf;
 import org.mobident.Tolerances;
 import org.mobident.trace.Detection;
@@ -366,7 +368,7 @@ public final class PeakDetector {
 
         /** The smoothed corrected signal at a time, by linear interpolation between samples. */
         private double valueAt(double timeS) {
-            int i = java.util.Arrays.binarySearch(t, timeS);
+            int i = Arrays.binarySearch(t, timeS);
             if (i >= 0) {
                 return smooth[i];
             }
@@ -456,7 +458,7 @@ public final class PeakDetector {
                 ratios[count++] = m.widthHalfS / m.apexTimeS;
             }
         }
-        java.util.Arrays.sort(ratios, 0, count);
+        Arrays.sort(ratios, 0, count);
         double maxRatio = count >= MIN_WIDTH_REFERENCES
                 ? SignalLimits.FAINT_MAX_WIDTH_RATIO * ratios[(count - 1) / 4] : Double.POSITIVE_INFINITY;
         double minRatio = count >= MIN_WIDTH_REFERENCES ? SignalLimits.FAINT_MIN_WIDTH_RATIO * ratios[(count - 1) / 4] : 0.0;
@@ -571,7 +573,7 @@ public final class PeakDetector {
                 for (int k = 0; k < start.length; k++) {
                     start[k] = moreStart.get(k);
                 }
-                java.util.Arrays.sort(start); // a handful of values, once per cluster
+                Arrays.sort(start); // a handful of values, once per cluster
                 GaussianClusterFit.Result more = GaussianClusterFit.fit(t, raw, first, last, start,
                         typicalSigmaS, minSigma, maxSigma);
                 if (more != null && plausible(more)
@@ -642,12 +644,12 @@ public final class PeakDetector {
          * symmetric model cannot. Null when the share has no positive area.
          */
         private ZoneCentre shareCentre(List<GaussianClusterFit.Component> c, int k, int first, int last) {
-            List<java.util.function.DoubleUnaryOperator> values = new ArrayList<>(c.size());
+            List<DoubleUnaryOperator> values = new ArrayList<>(c.size());
             for (GaussianClusterFit.Component z : c) {
                 values.add(z::value);
             }
             double[] part = shares(values, k, first, last, null);
-            double[] times = java.util.Arrays.copyOfRange(t, first, last + 1);
+            double[] times = Arrays.copyOfRange(t, first, last + 1);
             ZoneCentre centre = ZoneCentre.of(times, part, 0, part.length - 1);
             return Double.isNaN(centre.centreTimeS()) ? null : centre;
         }
@@ -744,12 +746,12 @@ public final class PeakDetector {
          * the zones in proportion to their fitted values there: raw · v_k / Σ v (0 where Σ v is not
          * positive). With {@code fraction} given, v_k / Σ v is written into it.
          */
-        private double[] shares(List<java.util.function.DoubleUnaryOperator> zones, int k, int first, int last,
+        private double[] shares(List<DoubleUnaryOperator> zones, int k, int first, int last,
                                 double[] fraction) {
             double[] part = new double[last - first + 1];
             for (int i = first; i <= last; i++) {
                 double total = 0;
-                for (java.util.function.DoubleUnaryOperator z : zones) {
+                for (DoubleUnaryOperator z : zones) {
                     total += z.applyAsDouble(t[i]);
                 }
                 double own = zones.get(k).applyAsDouble(t[i]);
@@ -773,13 +775,13 @@ public final class PeakDetector {
          * {moment, overlap term}, s; the moment NaN when the share has no positive area.
          */
         private double[] skewedShareMomentS(List<SkewedClusterFit.Zone> zones, int k, int first, int last) {
-            List<java.util.function.DoubleUnaryOperator> values = new ArrayList<>(zones.size());
+            List<DoubleUnaryOperator> values = new ArrayList<>(zones.size());
             for (SkewedClusterFit.Zone z : zones) {
                 values.add(z::value);
             }
             double[] fraction = new double[last - first + 1];
             double[] part = shares(values, k, first, last, fraction);
-            double[] times = java.util.Arrays.copyOfRange(t, first, last + 1);
+            double[] times = Arrays.copyOfRange(t, first, last + 1);
             double centre = ZoneCentre.of(times, part, 0, part.length - 1).centreTimeS();
             double area = 0;
             double contested = 0;
@@ -1036,7 +1038,7 @@ public final class PeakDetector {
     }
 
     private static int nearestIndex(double[] t, double time) {
-        int i = java.util.Arrays.binarySearch(t, time);
+        int i = Arrays.binarySearch(t, time);
         if (i >= 0) {
             return i;
         }

@@ -65,13 +65,10 @@ public final class NumberText {
         if (!Double.isFinite(value)) {
             return missing;
         }
-        if (decimals >= 0 && decimals < POW10.length) {
-            // the fast path of trimmed, with the zeros kept (same bound and tie margin)
-            long scale = POW10[decimals];
-            double scaled = Math.abs(value * scale);
-            if (scaled < FAST_LIMIT && Math.abs(scaled - Math.floor(scaled) - 0.5) > TIE_MARGIN) {
-                return fixedDigits(value < 0, Math.round(scaled), scale, decimals);
-            }
+        long rounded = fastRounded(value, decimals);
+        if (rounded >= 0) {
+            // the fast path of trimmed, with the zeros kept
+            return fixedDigits(value < 0, rounded, POW10[decimals], decimals);
         }
         return dropNegativeZero(String.format(Locale.ROOT, "%." + decimals + "f", value));
     }
@@ -96,12 +93,9 @@ public final class NumberText {
         if (!Double.isFinite(value)) {
             return missing;
         }
-        if (maxDecimals >= 0 && maxDecimals < POW10.length) {
-            long scale = POW10[maxDecimals];
-            double scaled = Math.abs(value * scale);
-            if (scaled < FAST_LIMIT && Math.abs(scaled - Math.floor(scaled) - 0.5) > TIE_MARGIN) {
-                return plainDigits(value < 0, Math.round(scaled), scale);
-            }
+        long rounded = fastRounded(value, maxDecimals);
+        if (rounded >= 0) {
+            return plainDigits(value < 0, rounded, POW10[maxDecimals]);
         }
         return stripZeros(fixed(value, maxDecimals, missing));
     }
@@ -151,6 +145,20 @@ public final class NumberText {
     public static String percent(double fraction, int decimals, String missing) {
         String s = fixed(PERCENT * fraction, decimals, null);
         return s == null ? missing : s + " %";
+    }
+
+    /**
+     * |value|·10^decimals rounded half-up when the fast paths may write it (decimals 0 to 6, below
+     * {@link #FAST_LIMIT}, not within {@link #TIE_MARGIN} of a tie, where the binary value may lie
+     * on either side); −1 otherwise, and {@link String#format} decides.
+     */
+    private static long fastRounded(double value, int decimals) {
+        if (decimals < 0 || decimals >= POW10.length) {
+            return -1;
+        }
+        double scaled = Math.abs(value * POW10[decimals]);
+        return scaled < FAST_LIMIT && Math.abs(scaled - Math.floor(scaled) - 0.5) > TIE_MARGIN
+                ? Math.round(scaled) : -1;
     }
 
     /**
