@@ -16,13 +16,16 @@ public final class Tolerances {
     public static final double LOWEST_DETECTION_LIMIT_SIGNAL_TO_NOISE = 2.0;
 
     /**
-     * Default signal-to-noise threshold for a peak to be reported: the lower end of the detection
-     * limit, 2:1. Peaks between 2 and 3 are reported and marked "at detection limit", those between
-     * 3 and 10 "below quantitation limit". With S/N = 2H/h and h the peak-to-peak noise, S/N 2 is
-     * a height of about 4–5 noise SDs; faint peaks below 3 must also have the width of the run's
-     * zones and stand significantly above the smoothed noise (see {@code PeakDetector}).
+     * Default signal-to-noise threshold for a peak to be reported: none (0). Whether a peak is
+     * there is decided by its statistical significance against the noise around it (see
+     * {@code PeakDetector} and {@code FaintZoneSearch}: one false peak in about a hundred runs), not
+     * by its S/N = 2H/h, which falls with the sampling rate and the peak's width for the same height
+     * in noise SDs (a zone three noise SDs tall has S/N 0.9–1.6). Every peak's S/N is reported and
+     * classed against the ICH limits: below 2 "below detection limit", 2 to 3 "at detection
+     * limit", 3 to 10 "below quantitation limit". A lab that reports only down to its validated
+     * limit sets {@code --min-sn} to it.
      */
-    public static final double DEFAULT_MIN_SIGNAL_TO_NOISE = LOWEST_DETECTION_LIMIT_SIGNAL_TO_NOISE;
+    public static final double DEFAULT_MIN_SIGNAL_TO_NOISE = 0.0;
 
     private Tolerances() {
     }

@@ -13,10 +13,11 @@ public final class CommonOptions {
 
     @Option(names = "--min-sn", paramLabel = "S/N",
             description = "Smallest signal-to-noise ratio of a reported peak, S/N = 2H/h with h the peak-to-peak"
-                    + " noise over 5 peak widths around it (Ph. Eur. 2.2.46). Default ${DEFAULT-VALUE}, the lower end of the"
-                    + " ICH Q2 detection limit (3:1 or 2:1); peaks below 3 and below 10 (the quantitation limit)"
-                    + " are marked in the sn_class column. Every peak must also stand significantly above the"
-                    + " smoothed noise around it, and one below 3 must be about as narrow as the run's zones.")
+                    + " noise over 5 peak widths around it (Ph. Eur. 2.2.46). Default ${DEFAULT-VALUE}: every peak"
+                    + " that stands significantly above the noise around it is reported (about one false peak in"
+                    + " a hundred runs), whatever its S/N; the sn_class column marks those below 2 and 3 (the ICH Q2"
+                    + " detection limit) and below 10 (the quantitation limit). Set your validated limit, e.g. 3,"
+                    + " to report only peaks above it.")
     double minSignalToNoise = PeakSettings.DEFAULT.minSignalToNoise();
 
     @Option(names = "--threads", paramLabel = "N", description = "Runs processed at once (default: all cores).")

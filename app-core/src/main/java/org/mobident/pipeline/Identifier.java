@@ -314,7 +314,7 @@ public final class Identifier {
                 settings.peakSettings());
         RunConditions c = run.conditions();
         Trace window = c.hasMarkerWindow() ? markerWindow(c, trace, analysis.peaks())
-                : settings.peakSettings().minSignalToNoise() > MARKER_SEARCH_MIN_SN && c.hasGeometry() ? trace : null;
+                : c.hasGeometry() ? trace : null;
         return new Detected(run, null, analysis.peaks(), analysis.noiseSd(), window);
     }
 
@@ -398,7 +398,7 @@ public final class Identifier {
      * otherwise. Only the window is kept, and only until the run's first matching.
      */
     private Trace markerWindow(RunConditions c, Trace trace, List<Peak> peaks) {
-        if (!c.hasMarkerWindow() || settings.peakSettings().minSignalToNoise() <= MARKER_SEARCH_MIN_SN) {
+        if (!c.hasMarkerWindow()) {
             return null;
         }
         int inside = 0;
@@ -416,10 +416,11 @@ public final class Identifier {
     /**
      * A targeted search for a weak neutral marker: when the marker window holds at most one
      * detected peak and the marker chosen among the peaks leaves the run poorly explained (or lies
-     * outside the window, or is uncertain), the window alone is analysed again down to S/N
-     * {@value #MARKER_SEARCH_MIN_SN}, and the zones found there that are not already peaks are added.
-     * A marker is expected in that window, so a lower threshold there is no fishing in noise: the
-     * marker choice still has to make the library explain the run.
+     * outside the window, or is uncertain), the window alone is analysed again, with its own baseline
+     * and widths, down to S/N {@value #MARKER_SEARCH_MIN_SN}, and the zones found there that are not
+     * already peaks are added (only the one chosen as the marker is reported). A marker is expected in
+     * that window, so this is no fishing in noise: the marker choice still has to make the library
+     * explain the run.
      */
     private List<Peak> withWeakMarkers(RunConditions c, Trace window, List<Peak> peaks) {
         double widthPerTime = typicalWidthPerTime(peaks);

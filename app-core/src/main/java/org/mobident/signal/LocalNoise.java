@@ -72,6 +72,11 @@ final class LocalNoise {
         minSamples = (int) Math.min(kept[n], Math.ceil(SignalLimits.LOCAL_NOISE_MIN_SAMPLES * inflation));
     }
 
+    /** The whole run's estimate. */
+    Estimate global() {
+        return global;
+    }
+
     /**
      * The noise around sample {@code centre}, from the baseline samples within
      * {@code halfWindow} samples of it (the window widened as needed, see the class notes).

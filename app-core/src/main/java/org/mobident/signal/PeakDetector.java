@@ -5,6 +5,7 @@ import java.util.Arrays;
 import java.util.List;
 import java.util.Objects;
 import java.util.function.DoubleUnaryOperator;
+import java.util.function.IntToDoubleFunction;
 import org.apache.commons.math3.special.Erf;
 import org.mobident.Tolerances;
 import org.mobident.trace.Detection;
@@ -66,13 +67,18 @@ import org.mobident.trace.Trace;
  *     {@link SignalLimits#NOISE_SUPPORT_WIDTHS} of the peak's widths around it; the peak-to-peak
  *     noise h = d₂(n)·σ_local over a window of {@link SignalLimits#PEAK_TO_PEAK_WINDOW_WIDTHS} of its
  *     widths (n samples; see below); S/N = 2H/h. A peak is reported when (a) its S/N reaches
- *     {@link PeakSettings#minSignalToNoise()} (by default 2, the lower end of the detection limit), (b) its smoothed
+ *     {@link PeakSettings#segmentMinSignalToNoise()} (by default 2, the lower end of the detection limit), (b) its smoothed
  *     height stands z = Φ⁻¹(1 − α/M) local smoothed-noise SDs above the baseline, α =
  *     {@link SignalLimits#DETECTION_FALSE_ALARM_PER_RUN} the chance of a false peak anywhere in the
  *     run and M the number of smoothing windows in it (the significance of the detection itself,
  *     measured on the smoothed signal, not assumed white), and (c) when it is narrower than
  *     {@link SignalLimits#SPIKE_CHECK_WIDTH_SAMPLES} samples, its top has shoulders (a barely
  *     sampled zone, not a spike). Then the uncertainty of its centre time is set.</li>
+ * <li>Faint zones between the peaks ({@link FaintZoneSearch}): a matched filter as wide as the
+ *     run's zones at each time finds zones down to about three noise SDs tall, whatever their S/N,
+ *     at the same family-wise false-alarm rate α; each is fitted by one Gaussian and judged as
+ *     above, without test (b), which the filter replaces, and with {@link PeakSettings#minSignalToNoise()}
+ *     (by default none) for (a).</li>
  * </ol>
  *
  * <p><b>The peak-to-peak noise and the detection limit.</b> Ph. Eur. 2.2.46 defines h as the range
@@ -91,8 +97,11 @@ import org.mobident.trace.Trace;
  * from memory), marked as at the detection limit below 3, and take the window of 5 w½ that the
  * pharmacopoeia asked for from Supplement 6.4 and advises again (see
  * {@link SignalLimits#PEAK_TO_PEAK_WINDOW_WIDTHS}); the older 20 w½ would lower every S/N further.
- * A peak below 2 but significant on the smoothed signal is reported only when
- * {@code minSignalToNoise} is set lower, and then marked so ({@link SignalToNoiseClass}). Below 3,
+ * A segment below 2 but significant on the smoothed signal is reported only when
+ * {@code minSignalToNoise} is set lower; below 2 the segments are mostly the narrow tops of noise
+ * and spike residues. Fainter zones are found by the matched filter instead, which looks only for
+ * zones as wide as the run's and so needs no S/N floor; they are marked "below detection limit"
+ * ({@link SignalToNoiseClass}). Below 3,
  * a peak must also have both flanks inside the recording and be about as narrow as the run's zones at its time (see
  * {@code withoutDoubtfulFaintPeaks}), and how peaks are split and fitted never uses a height below
  * the 3:1 limit, so that faint peaks do not change how the large zones are cut.
@@ -143,7 +152,8 @@ public final class PeakDetector {
             double sigma = flooredNoise(y);
             return new TraceAnalysis(List.of(), sigma, NoiseEstimator.expectedNormalRange(2) * sigma);
         }
-        SpikeFilter.despike(t, y);
+        List<int[]> spikes = new ArrayList<>();
+        SpikeFilter.despike(t, y, spikes);
         double floor = noiseFloor(y);
         double whiteSigma = Math.max(NoiseEstimator.robustSd(y), floor);
         double sampling = medianInterval(t);
@@ -192,7 +202,8 @@ public final class PeakDetector {
                 new LocalNoise.Estimate(sigma, smoothSigma, n), floor, floor * smoothGain);
 
         double peakToPeak = typicalRange * sigma;
-        double minHeight = settings.minSignalToNoise() * peakToPeak / 2;
+        double segmentSn = settings.segmentMinSignalToNoise();
+        double minHeight = segmentSn * peakToPeak / 2;
         // how peaks are split and fitted does not go below the detection limit: reporting fainter
         // isolated peaks must not let noise and spikes split the large zones
         double structureHeight = Math.max(settings.minSignalToNoise(), Tolerances.DETECTION_LIMIT_SIGNAL_TO_NOISE)
@@ -221,16 +232,17 @@ public final class PeakDetector {
                 prefilter, minWidth);
         double typicalSigma = typicalWidth / GaussianClusterFit.HALF_WIDTH_PER_SIGMA;
         Reporting reporting = new Reporting(t, raw, smooth, sampling, localNoise, correlation, significance,
-                smoothBound, settings.minSignalToNoise(), returnLevel,
+                smoothBound, segmentSn, settings.minSignalToNoise(), returnLevel,
                 SignalLimits.FIT_MIN_SIGMA_FACTOR * typicalSigma, SignalLimits.FIT_MAX_SIGMA_FACTOR * typicalSigma);
         List<Measured> reported = new ArrayList<>(found.size());
         for (Measured m : found) {
-            Measured r = reporting.judge(m);
+            Measured r = reporting.judge(m, false);
             if (r != null) {
                 reported.add(r);
             }
         }
         reported = withoutDoubtfulFaintPeaks(reported, t[0], t[n - 1]);
+        reported = withFaintZones(reported, t, raw, inPeak, spikes, sampling, localNoise, reporting);
         List<Peak> peaks = new ArrayList<>(reported.size());
         for (int k = 0; k < reported.size(); k++) {
             Measured m = reported.get(k);
@@ -297,22 +309,24 @@ public final class PeakDetector {
      */
     private record Reporting(double[] t, double[] raw, double[] smooth, double sampling, LocalNoise noise,
                              double correlation, double significance, double smoothBound,
-                             double minSignalToNoise, double returnLevel, double minSigmaS, double maxSigmaS) {
+                             double segmentMinSignalToNoise, double minSignalToNoise, double returnLevel,
+                             double minSigmaS, double maxSigmaS) {
 
-        /** The peak with its S/N and centre uncertainty, or null when it is not to be reported. */
-        Measured judge(Measured m) {
+        /** The peak with its S/N and centre uncertainty, or null when it is not to be reported;
+         *  {@code significant} when the matched filter has already shown it significant. */
+        Measured judge(Measured m, boolean significant) {
             int apex = nearestIndex(t, m.apexTimeS);
             int support = (int) Math.ceil(0.5 * SignalLimits.NOISE_SUPPORT_WIDTHS * m.widthHalfS / sampling);
             LocalNoise.Estimate local = noise.around(apex, support, false);
             long points = Math.max(2, Math.round(SignalLimits.PEAK_TO_PEAK_WINDOW_WIDTHS * m.widthHalfS / sampling) + 1);
             double peakToPeak = NoiseEstimator.expectedNormalRange(points) * local.rawSd();
             double signalToNoise = 2 * m.height / peakToPeak;
-            if (!(signalToNoise >= minSignalToNoise)) {
+            if (!(signalToNoise >= (significant ? minSignalToNoise : segmentMinSignalToNoise))) {
                 return null;
             }
             // the smoothed noise SD never exceeds Σ|w| times the raw one, whatever the correlation
             // (|Cov| ≤ σ²): a peak above z·Σ|w|·σ_raw is significant without measuring it
-            if (!(m.smoothedHeight >= significance * smoothBound * local.rawSd())
+            if (!significant && !(m.smoothedHeight >= significance * smoothBound * local.rawSd())
                     && !(m.smoothedHeight >= significance * noise.around(apex, support, true).smoothSd())) {
                 return null;
             }
@@ -451,17 +465,9 @@ public final class PeakDetector {
      */
     private static List<Measured> withoutDoubtfulFaintPeaks(List<Measured> reported, double firstTimeS,
                                                             double lastTimeS) {
-        double[] ratios = new double[reported.size()];
-        int count = 0;
-        for (Measured m : reported) {
-            if (m.signalToNoise >= Tolerances.DETECTION_LIMIT_SIGNAL_TO_NOISE && m.apexTimeS > 0) {
-                ratios[count++] = m.widthHalfS / m.apexTimeS;
-            }
-        }
-        Arrays.sort(ratios, 0, count);
-        double maxRatio = count >= MIN_WIDTH_REFERENCES
-                ? SignalLimits.FAINT_MAX_WIDTH_RATIO * ratios[(count - 1) / 4] : Double.POSITIVE_INFINITY;
-        double minRatio = count >= MIN_WIDTH_REFERENCES ? SignalLimits.FAINT_MIN_WIDTH_RATIO * ratios[(count - 1) / 4] : 0.0;
+        double reference = widthReference(reported);
+        double maxRatio = Double.isNaN(reference) ? Double.POSITIVE_INFINITY : SignalLimits.FAINT_MAX_WIDTH_RATIO * reference;
+        double minRatio = Double.isNaN(reference) ? 0.0 : SignalLimits.FAINT_MIN_WIDTH_RATIO * reference;
         List<Measured> kept = new ArrayList<>(reported.size());
         for (Measured m : reported) {
             boolean faint = m.signalToNoise < Tolerances.DETECTION_LIMIT_SIGNAL_TO_NOISE;
@@ -474,6 +480,80 @@ public final class PeakDetector {
             }
         }
         return kept;
+    }
+
+    /**
+     * The reported peaks with the faint zones that the matched filter finds between them
+     * ({@link FaintZoneSearch}), judged like the others (S/N, then the width checks below the
+     * detection limit). The expected width of a zone at time t is w½/t of the run's narrower
+     * quantifiable zones (the lower quartile, as for the width checks) times t, but never below
+     * {@link FaintZoneSearch#EARLY_WIDTH_FRACTION} of the narrowest of them (the injected plug
+     * gives every zone a width that does not shrink with t); nothing is searched when fewer than
+     * {@value #MIN_WIDTH_REFERENCES} quantifiable zones give the width. A fitted zone's apex uncertainty
+     * (s²(JᵀJ)⁻¹, white-noise theory) is widened by √((1 + ρ)/(1 − ρ)) for noise of lag-one
+     * correlation ρ (the variance inflation of a mean of correlated samples; see {@link LocalNoise}).
+     */
+    private static List<Measured> withFaintZones(List<Measured> reported, double[] t, double[] raw, boolean[] inPeak,
+                                                 List<int[]> spikes, double sampling, LocalNoise localNoise,
+                                                 Reporting reporting) {
+        double ratio = widthReference(reported);
+        if (Double.isNaN(ratio)) {
+            return reported; // no width to look for: the run's zones do not give it
+        }
+        double narrowest = Double.POSITIVE_INFINITY;
+        for (Measured m : reported) {
+            if (m.signalToNoise >= Tolerances.DETECTION_LIMIT_SIGNAL_TO_NOISE) {
+                narrowest = Math.min(narrowest, m.widthHalfS);
+            }
+        }
+        double floor = Math.max(FaintZoneSearch.EARLY_WIDTH_FRACTION * narrowest,
+                FaintZoneSearch.MIN_BOX_SAMPLES * sampling);
+        IntToDoubleFunction expected = i -> Math.max(ratio * t[i], floor);
+        List<double[]> occupied = new ArrayList<>(reported.size());
+        for (Measured m : reported) {
+            occupied.add(new double[] {m.startTimeS, m.endTimeS});
+        }
+        IntToDoubleFunction localSd = i -> localNoise.around(i,
+                (int) Math.ceil(0.5 * SignalLimits.NOISE_SUPPORT_WIDTHS * expected.applyAsDouble(i) / sampling),
+                false).rawSd();
+        List<FaintZoneSearch.Zone> zones = FaintZoneSearch.find(t, raw, inPeak, spikes, occupied, expected, sampling,
+                localNoise.global().rawSd(), localSd);
+        if (zones.isEmpty()) {
+            return reported;
+        }
+        double inflation = Math.sqrt((1 + reporting.correlation()) / (1 - reporting.correlation()));
+        List<Measured> all = new ArrayList<>(reported);
+        for (FaintZoneSearch.Zone zone : zones) {
+            GaussianClusterFit.Component z = zone.fit();
+            double sd = z.apexTimeSdS() * inflation;
+            double half = z.widthHalfS();
+            Measured m = new Measured(z.apexTimeS(), sd, z.height(), Math.max(t[zone.first()], z.apexTimeS() - half),
+                    Math.min(t[zone.last()], z.apexTimeS() + half), z.area(), z.widthHalfS(), true, z.height(), null,
+                    z.apexTimeS(), sd, Double.NaN);
+            Measured judged = reporting.judge(m, true);
+            if (judged != null) {
+                all.add(judged);
+            }
+        }
+        all.sort((a, b) -> Double.compare(a.apexTimeS, b.apexTimeS));
+        return withoutDoubtfulFaintPeaks(all, t[0], t[t.length - 1]);
+    }
+
+    /** w½/t of the run's narrower quantifiable zones: the lower quartile over the reported peaks
+     *  with S/N of at least the detection limit; NaN when fewer than {@value #MIN_WIDTH_REFERENCES}. */
+    private static double widthReference(List<Measured> reported) {
+        double[] ratios = new double[reported.size()];
+        int count = 0;
+        for (Measured m : reported) {
+            if (m.signalToNoise >= Tolerances.DETECTION_LIMIT_SIGNAL_TO_NOISE && m.apexTimeS > 0) {
+                ratios[count++] = m.widthHalfS / m.apexTimeS;
+            }
+        }
+        if (count < MIN_WIDTH_REFERENCES) {
+            return Double.NaN;
+        }
+        Arrays.sort(ratios, 0, count);
+        return ratios[(count - 1) / 4];
     }
 
     /** Fewest detected peaks that give the run's width scale for {@link #withoutDoubtfulFaintPeaks}. */

@@ -6,8 +6,8 @@ import org.mobident.Tolerances;
  * Settings of peak detection.
  *
  * @param minSignalToNoise  peaks with a lower S/N (Ph. Eur. 2.2.46, see {@link PeakDetector}) are not
- *                          reported; by default 2, the lower end of the ICH Q2 detection limit (3:1 or 2:1). Whatever its value, a
- *                          peak must also stand significantly above the smoothed noise around it
+ *                          reported; by default 0 (none). Whatever its value, a peak must stand
+ *                          significantly above the noise around it
  * @param smoothingWindowS  width of the smoothing window in s; NaN chooses it from the data
  * @param minWidthS         narrower features (spikes) are not peaks, s; NaN chooses from the data
  * @param zoneWidthS        typical width at half height of the zones, s, which sets the smoothing,
@@ -24,8 +24,8 @@ public record PeakSettings(double minSignalToNoise, double smoothingWindowS, dou
     }
 
     public PeakSettings {
-        if (!(minSignalToNoise > 0)) {
-            throw new IllegalArgumentException("minimum S/N must be positive, got " + minSignalToNoise);
+        if (!(minSignalToNoise >= 0) || !Double.isFinite(minSignalToNoise)) {
+            throw new IllegalArgumentException("minimum S/N must be zero or more, got " + minSignalToNoise);
         }
     }
 
@@ -40,6 +40,17 @@ public record PeakSettings(double minSignalToNoise, double smoothingWindowS, dou
             return this;
         }
         return new PeakSettings(minSignalToNoise, smoothingWindowS, minWidthS, widthHalfS);
+    }
+
+    /**
+     * The least S/N of a peak found as a segment of the smoothed signal: {@link #minSignalToNoise()}
+     * when one is set, otherwise (0, the default) the lower end of the ICH Q2 detection limit, 2.
+     * Fainter zones are then found by the matched filter alone ({@code FaintZoneSearch}), which
+     * looks for zones as wide as the run's: below S/N 2 the segments of the smoothed signal are
+     * mostly the narrow tops of noise and of what the spike filter left.
+     */
+    public double segmentMinSignalToNoise() {
+        return minSignalToNoise > 0 ? minSignalToNoise : Tolerances.LOWEST_DETECTION_LIMIT_SIGNAL_TO_NOISE;
     }
 
     public PeakSettings withMinSignalToNoise(double sn) {

@@ -18,8 +18,8 @@ public enum SignalToNoiseClass {
      *  up to {@link Tolerances#DETECTION_LIMIT_SIGNAL_TO_NOISE} (3:1), the range ICH Q2(R1) § 6.2
      *  accepts for the detection limit: seen, but barely. */
     AT_DETECTION_LIMIT("at detection limit"),
-    /** Below the detection limit: reported only when a lower {@code --min-sn} asks for it, on the
-     *  strength of the significance test on the smoothed signal. */
+    /** Below the detection limit (S/N under 2): a zone the matched filter found significant
+     *  ({@code FaintZoneSearch}), or a segment reported because a lower {@code --min-sn} asks for it. */
     BELOW_DETECTION_LIMIT("below detection limit");
 
     private final String label;

@@ -1,5 +1,7 @@
 package org.mobident.signal;
 
+import java.util.List;
+
 /**
  * Finds and removes electrical spikes: features one or two samples wide, of either sign, that no
  * migrating zone can produce.
@@ -67,6 +69,15 @@ final class SpikeFilter {
      * @return the number of spikes removed
      */
     static int despike(double[] t, double[] y) {
+        return despike(t, y, null);
+    }
+
+    /**
+     * As {@link #despike(double[], double[])}, and adds to {@code touched} (when not null) the first
+     * and last sample that each removed spike's replacement rests on: the block and its shoulders and
+     * anchors, whose noise the parabola carries into the replaced values.
+     */
+    static int despike(double[] t, double[] y, List<int[]> touched) {
         int n = y.length;
         if (n < 2 * REACH + MAX_SPIKE_SAMPLES) {
             return 0;
@@ -101,6 +112,9 @@ final class SpikeFilter {
             // r holds the block residuals: subtracting them leaves the parabola's values
             for (int k = 0; k < width; k++) {
                 y[i + k] -= r[k];
+            }
+            if (touched != null) {
+                touched.add(new int[] {i - REACH, i + width + REACH - 1});
             }
             removed++;
             // the samples just before had this spike among their anchors: look at them again

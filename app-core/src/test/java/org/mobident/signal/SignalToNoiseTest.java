@@ -75,10 +75,15 @@ class SignalToNoiseTest {
     }
 
     @Test
-    void theLowerEndOfTheDetectionLimitIsTheDefaultAndFaintPeaksAreMarked() {
+    void significanceDecidesByDefaultAndFaintPeaksAreMarked() {
         // ICH Q2(R1) § 6.2: "a signal-to-noise ratio between 3 or 2:1 is generally considered
-        // acceptable for estimating the detection limit"; § 7.2: quantitation limit 10:1 (from memory)
-        assertEquals(2.0, PeakSettings.DEFAULT.minSignalToNoise());
+        // acceptable for estimating the detection limit"; § 7.2: quantitation limit 10:1 (from memory).
+        // By default no S/N floor: segments of the smoothed signal down to the lower end, 2:1, and
+        // fainter zones by the matched filter; a floor that is set applies to both
+        assertEquals(0.0, PeakSettings.DEFAULT.minSignalToNoise());
+        assertEquals(2.0, PeakSettings.DEFAULT.segmentMinSignalToNoise());
+        assertEquals(3.0, PeakSettings.DEFAULT.withMinSignalToNoise(3.0).segmentMinSignalToNoise());
+        assertEquals(1.5, PeakSettings.DEFAULT.withMinSignalToNoise(1.5).segmentMinSignalToNoise());
         assertEquals(SignalToNoiseClass.BELOW_DETECTION_LIMIT, SignalToNoiseClass.of(1.99));
         assertEquals(SignalToNoiseClass.AT_DETECTION_LIMIT, SignalToNoiseClass.of(2.0));
         assertEquals(SignalToNoiseClass.AT_DETECTION_LIMIT, SignalToNoiseClass.of(2.99));
