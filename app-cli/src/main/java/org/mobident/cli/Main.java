@@ -14,7 +14,7 @@ public final class Main {
 
     /** Runs the command line with the given writers and returns the exit code (for tests). */
     public static int run(String[] args, PrintWriter out, PrintWriter err) {
-        CommandLine cl = new CommandLine(new MobidentCommand());
+        CommandLine cl = commandLineFor(args);
         cl.setOut(out);
         cl.setErr(err);
         cl.setCaseInsensitiveEnumValuesAllowed(true);
@@ -31,6 +31,41 @@ public final class Main {
         out.flush();
         err.flush();
         return code;
+    }
+
+    /**
+     * The command line for these arguments. Building the model of every subcommand by reflection
+     * costs about a third of a second, most of a single run's start-up; when the first argument names
+     * one subcommand, only it is built, under a top command of the same name and options
+     * ({@link SingleCommandTop}), so what the user sees is the same. The whole tree is built for
+     * the top command's own help and version, {@code help}, {@code shell-completion} (which walks the
+     * tree) and anything not recognised (for picocli's suggestions).
+     */
+    static CommandLine commandLineFor(String[] args) {
+        if (args.length > 0 && !args[0].startsWith("-")) {
+            for (Class<?> sub : MobidentCommand.class.getAnnotation(CommandLine.Command.class).subcommands()) {
+                CommandLine.Command c = sub.getAnnotation(CommandLine.Command.class);
+                if (c != null && c.name().equals(args[0]) && !WHOLE_TREE.contains(c.name())) {
+                    CommandLine top = new CommandLine(new SingleCommandTop());
+                    top.addSubcommand(new CommandLine(newInstance(sub)));
+                    return top;
+                }
+            }
+        }
+        return new CommandLine(new MobidentCommand());
+    }
+
+    /** Subcommands that need the whole command tree. */
+    private static final java.util.Set<String> WHOLE_TREE = java.util.Set.of("help", "shell-completion");
+
+    private static Object newInstance(Class<?> type) {
+        try {
+            var constructor = type.getDeclaredConstructor();
+            constructor.setAccessible(true);
+            return constructor.newInstance();
+        } catch (ReflectiveOperationException e) {
+            throw new IllegalStateException("cannot create " + type.getName(), e);
+        }
     }
 
     /**
