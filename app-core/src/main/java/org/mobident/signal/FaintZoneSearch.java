@@ -26,7 +26,10 @@ import org.apache.commons.math3.special.Erf;
  * <li>At each block whose box lies wholly in a free stretch, the mean of the baseline-corrected
  *     signal over the box less its mean over a ring (the free samples of two flanks as long as the
  *     box, from {@link #RING_GAP_WIDTHS} widths out, beyond a zone's reach), so that what is left
- *     of a baseline offset or slow wave under the box does not count; divided by
+ *     of a baseline offset or slow wave under the box does not count (peaks found keep only their
+ *     core, {@link #CORE_WIDTHS} of their widths around apex and centre, out of the search: their
+ *     tails may hold faint zones, and a fitted zone must stand above the straight line through the
+ *     ends of its fitting window, which takes a tail's slope away); divided by
  *     √(1/box + 1/ring) it has SD σ for white noise of SD σ, whatever the box; for
  *     correlated noise or a baseline that still waves at the zones' scale it has more, which is
  *     measured, not assumed: the ratio of its robust SD to that of the signal, over the free
@@ -45,6 +48,9 @@ import org.apache.commons.math3.special.Erf;
  */
 final class FaintZoneSearch {
 
+    /** Around each peak found, this many of its widths at half height beyond its apex and centre
+     *  are its core, where no box goes; its tails beyond may hold faint zones. */
+    static final double CORE_WIDTHS = 2.0;
     /** The box is this many expected widths at half height long (2.8 SDs of a Gaussian zone,
      *  where the box mean's signal-to-noise ratio is highest). */
     static final double BOX_WIDTHS = 1.19;
@@ -325,11 +331,11 @@ final class FaintZoneSearch {
                     continue;
                 }
                 int box = boxLast(j) - boxFirst(j) + 1;
-                int ringCount = ringCount(j);
+                int gap = groupGap[j / WIDTH_UPDATE_BLOCKS];
+                int ringCount = freeCount(j - gap - 2 * h, j - gap) + freeCount(j + gap, j + gap + 2 * h);
                 if (ringCount < box) {
                     continue;
                 }
-                int gap = groupGap[j / WIDTH_UPDATE_BLOCKS];
                 double ringSum = freeSum(j - gap - 2 * h, j - gap) + freeSum(j + gap, j + gap + 2 * h);
                 double contrast = (sums[hi + 1] - sums[lo]) / box - ringSum / ringCount;
                 out.score[j] = contrast / Math.sqrt(1.0 / box + 1.0 / ringCount);
@@ -455,6 +461,35 @@ final class FaintZoneSearch {
         return Math.max(1, (int) Math.round(0.5 * (BOX_WIDTHS * widthS / sampling - 1)));
     }
 
+    /**
+     * {@code v} (a window of samples at times {@code t}) with the straight line through the means of
+     * its first and last {@code edge} samples taken away, in place (a peak's tail or a baseline slope
+     * under a faint zone).
+     */
+    private static double[] detrended(double[] t, double[] v, int edge) {
+        int n = v.length;
+        int k = Math.max(1, Math.min(edge, n / 4));
+        double t0 = 0;
+        double v0 = 0;
+        double t1 = 0;
+        double v1 = 0;
+        for (int j = 0; j < k; j++) {
+            t0 += t[j];
+            v0 += v[j];
+            t1 += t[n - 1 - j];
+            v1 += v[n - 1 - j];
+        }
+        t0 /= k;
+        v0 /= k;
+        t1 /= k;
+        v1 /= k;
+        double slope = t1 > t0 ? (v1 - v0) / (t1 - t0) : 0.0;
+        for (int j = 0; j < n; j++) {
+            v[j] -= v0 + slope * (t[j] - t0);
+        }
+        return v;
+    }
+
     /** One Gaussian fitted around candidate sample {@code i} within its free stretch, or null. */
     private static Zone fitted(double[] t, double[] raw, Busy busy, int i, double width, double sampling,
                                double significance, double noiseSd) {
@@ -462,7 +497,10 @@ final class FaintZoneSearch {
         int first = Math.max(Math.max(0, i - reach), busy.before(i) + 1);
         int last = Math.min(Math.min(raw.length - 1, i + reach), busy.after(i, raw.length) - 1);
         double sigma = width / GaussianClusterFit.HALF_WIDTH_PER_SIGMA;
-        GaussianClusterFit.Result fit = GaussianClusterFit.fit(t, raw, first, last, new double[] {t[i]}, sigma,
+        double[] times = Arrays.copyOfRange(t, first, last + 1);
+        double[] local = detrended(times, Arrays.copyOfRange(raw, first, last + 1),
+                Math.max(2, (int) Math.round(EDGE_WIDTHS * width / sampling)));
+        GaussianClusterFit.Result fit = GaussianClusterFit.fit(times, local, 0, last - first, new double[] {t[i]}, sigma,
                 SignalLimits.FAINT_MIN_WIDTH_RATIO * sigma, MAX_WIDTH_RATIO * sigma);
         if (fit == null) {
             return null;

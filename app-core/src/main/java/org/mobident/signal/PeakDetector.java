@@ -511,7 +511,11 @@ public final class PeakDetector {
         IntToDoubleFunction expected = i -> Math.max(ratio * t[i], floor);
         List<double[]> occupied = new ArrayList<>(reported.size());
         for (Measured m : reported) {
-            occupied.add(new double[] {m.startTimeS, m.endTimeS});
+            // a peak's core: its samples beyond it, on its tails, may hold a faint zone (the search's
+            // ring takes away a tail's slope)
+            double reach = FaintZoneSearch.CORE_WIDTHS * m.widthHalfS;
+            occupied.add(new double[] {Math.max(m.startTimeS, Math.min(m.apexTimeS, m.centreTimeS) - reach),
+                    Math.min(m.endTimeS, Math.max(m.apexTimeS, m.centreTimeS) + reach)});
         }
         IntToDoubleFunction localSd = i -> localNoise.around(i,
                 (int) Math.ceil(0.5 * SignalLimits.NOISE_SUPPORT_WIDTHS * expected.applyAsDouble(i) / sampling),
