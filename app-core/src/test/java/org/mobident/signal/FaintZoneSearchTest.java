@@ -109,19 +109,21 @@ class FaintZoneSearchTest {
     @Test
     void noiseAloneMakesNoFaintZone() {
         // 20 runs each of white noise, first-order autoregressive noise of lag-one correlation 0.5,
-        // 0.8 and 0.95 (Box & Jenkins 1970; a detector time constant), and white noise over two slow
-        // sinusoids of 5 noise SDs and a quadratic drift of 20 (the lab-day bench's baseline): the
-        // search's family-wise false-alarm rate is 0.01 per run (Bonferroni over the box lengths,
-        // conservative for correlated looks), so about one run of the 100 may show a false zone by
-        // chance; at most 3 are allowed (P(X ≥ 4) = 1.8 % for a binomial of n = 100, p = 0.01)
+        // 0.8 and 0.95 (Box & Jenkins 1970; a detector time constant), white noise over two slow
+        // sinusoids of 5 noise SDs and a quadratic drift of 20 (the lab-day bench's baseline), and
+        // white noise on sample times jittered by ±30 % of the interval: the search's family-wise
+        // false-alarm rate is 0.01 per run (Bonferroni over the box lengths, conservative for
+        // correlated looks), so about one run of the 120 may show a false zone by chance; at most 4
+        // are allowed (P(X ≥ 5) = 0.7 % for a binomial of n = 120, p = 0.01)
         int falseRuns = 0;
         List<String> seen = new ArrayList<>();
-        for (int kind = 0; kind < 5; kind++) {
+        for (int kind = 0; kind < 6; kind++) {
             for (int seed = 0; seed < 20; seed++) {
-                double[] t = Synthetic.regularTimes(0, 0.1, 6_000);
+                double[] t = kind == 5 ? Synthetic.jitteredTimes(0, 0.1, 6_000, 0.3, 7_000 + seed)
+                        : Synthetic.regularTimes(0, 0.1, 6_000);
                 double[] y = run(t);
                 long s = 3_000 + 100L * kind + seed;
-                if (kind == 0) {
+                if (kind == 0 || kind == 5) {
                     Synthetic.addNoise(y, NOISE, s);
                 } else if (kind < 4) {
                     Synthetic.addCorrelatedNoise(y, NOISE, new double[] {0.5, 0.8, 0.95}[kind - 1], s);
@@ -153,7 +155,7 @@ class FaintZoneSearchTest {
                 }
             }
         }
-        assertTrue(falseRuns <= 3, falseRuns + " runs with a false zone: " + seen);
+        assertTrue(falseRuns <= 4, falseRuns + " runs with a false zone: " + seen);
     }
 
     /** The run's four quantifiable zones, noiseless. */
