@@ -488,17 +488,18 @@ public final class PeakDetector {
      * detection limit). The expected width of a zone at time t is w½/t of the run's narrower
      * quantifiable zones (the lower quartile, as for the width checks) times t, but never below
      * {@link FaintZoneSearch#EARLY_WIDTH_FRACTION} of the narrowest of them (the injected plug
-     * gives every zone a width that does not shrink with t); nothing is searched when fewer than
-     * {@value #MIN_WIDTH_REFERENCES} quantifiable zones give the width. A fitted zone's apex uncertainty
+     * gives every zone a width that does not shrink with t); with fewer than four quantifiable zones
+     * the narrowest gives the width (a neutral marker, never dispersed by its own concentration, is
+     * a good one), and without any nothing is searched. A fitted zone's apex uncertainty
      * (s²(JᵀJ)⁻¹, white-noise theory) is widened by √((1 + ρ)/(1 − ρ)) for noise of lag-one
      * correlation ρ (the variance inflation of a mean of correlated samples; see {@link LocalNoise}).
      */
     private static List<Measured> withFaintZones(List<Measured> reported, double[] t, double[] raw, boolean[] inPeak,
                                                  List<int[]> spikes, double sampling, LocalNoise localNoise,
                                                  Reporting reporting) {
-        double ratio = widthReference(reported);
+        double ratio = widthReference(reported, 1);
         if (Double.isNaN(ratio)) {
-            return reported; // no width to look for: the run's zones do not give it
+            return reported; // no width to look for: no quantifiable zone gives it
         }
         double narrowest = Double.POSITIVE_INFINITY;
         for (Measured m : reported) {
@@ -546,6 +547,12 @@ public final class PeakDetector {
     /** w½/t of the run's narrower quantifiable zones: the lower quartile over the reported peaks
      *  with S/N of at least the detection limit; NaN when fewer than {@value #MIN_WIDTH_REFERENCES}. */
     private static double widthReference(List<Measured> reported) {
+        return widthReference(reported, MIN_WIDTH_REFERENCES);
+    }
+
+    /** As {@link #widthReference(List)} from at least {@code fewest} quantifiable zones (the
+     *  narrowest when there are fewer than four). */
+    private static double widthReference(List<Measured> reported, int fewest) {
         double[] ratios = new double[reported.size()];
         int count = 0;
         for (Measured m : reported) {
@@ -553,7 +560,7 @@ public final class PeakDetector {
                 ratios[count++] = m.widthHalfS / m.apexTimeS;
             }
         }
-        if (count < MIN_WIDTH_REFERENCES) {
+        if (count < fewest) {
             return Double.NaN;
         }
         Arrays.sort(ratios, 0, count);
