@@ -70,6 +70,23 @@ final class FaintZoneSearch {
      *  box contrast is below this fraction of the least height cannot be fitted that tall: it is
      *  not fitted. */
     static final double BOX_MEAN_FRACTION = 0.75;
+    /** The two flanks of a ring are uneven when their means differ by more than this many SDs of
+     *  the difference (white noise; correlated noise makes them uneven more often, which only makes
+     *  the test stricter). */
+    static final double UNEVEN_RING_SIGMAS = 3.0;
+    /** A faint zone is at most this many local noise SDs tall: a zone that clear is a segment of the
+     *  smoothed signal, so a fit that tall between the peaks found follows an artefact (a glitch of
+     *  a few samples that the spike filter left drags the baseline down beside it). */
+    static final double MAX_HEIGHT_SIGMAS = 25.0;
+    /** The least mean of a zone the fit accepts over the box, in units of its height: 0.40 for a
+     *  Gaussian 0.45 times as wide as expected (the box then spans ±3.1 of its SDs), 0.92 for one
+     *  twice as wide; a little less, for the noise. A fitted height above the box contrast divided
+     *  by this (plus the least height, for the noise) is not the zone the box saw. */
+    static final double LEAST_BOX_MEAN_FRACTION = 0.35;
+    /** Each end of a fitting window gives the level of the straight line taken away under a faint
+     *  zone as the median of at least this many samples (a glitch of up to three samples that the
+     *  spike filter left does not tilt it). */
+    static final int MIN_EDGE_SAMPLES = 7;
     /** Two faint zones are at least this many expected widths apart (closer maxima are one zone's
      *  noise). */
     static final double SEPARATION_WIDTHS = 1.5;
@@ -139,7 +156,7 @@ final class FaintZoneSearch {
         int n = raw.length;
         Busy busy = Busy.of(t, spikes, occupied);
         int stride = Math.max(1, halfBox(expectedWidth.applyAsDouble(0), sampling) / 2);
-        Blocks blocks = new Blocks(raw, busy, stride, expectedWidth, sampling);
+        Blocks blocks = new Blocks(raw, busy, stride, expectedWidth, sampling, rawSd);
         Scores scores = blocks.scores(inPeak);
         if ((long) scores.eligible * stride < MIN_NOISE_SAMPLES || !(rawSd > 0)) {
             return List.of();
@@ -158,7 +175,7 @@ final class FaintZoneSearch {
             double z = scores.score[j] / sd;
             if (z >= threshold && clippedScore(raw, blocks, j, scores.score[j]) >= threshold * sd
                     && blocks.contrast(j, scores.score[j]) >= BOX_MEAN_FRACTION * MIN_HEIGHT_SIGMAS * sd / inflation) {
-                significant.add(new double[] {i, z});
+                significant.add(new double[] {i, z, blocks.contrast(j, scores.score[j])});
             }
         }
         significant.sort((a, b) -> Double.compare(b[1], a[1]));
@@ -174,7 +191,7 @@ final class FaintZoneSearch {
             if (!apart) {
                 continue;
             }
-            Zone zone = fitted(t, raw, busy, i, width, sampling, c[1], localSd.applyAsDouble(i));
+            Zone zone = fitted(t, raw, busy, i, width, sampling, c[1], c[2], localSd.applyAsDouble(i));
             if (zone != null) {
                 zones.add(zone);
                 taken.add(t[i]);
@@ -245,8 +262,11 @@ final class FaintZoneSearch {
         final int[] busyBefore;
         final int[] groupHalf;
         final int[] groupGap;
+        final double noiseSd;
 
-        Blocks(double[] raw, Busy busy, int stride, IntToDoubleFunction expectedWidth, double sampling) {
+        Blocks(double[] raw, Busy busy, int stride, IntToDoubleFunction expectedWidth, double sampling,
+               double noiseSd) {
+            this.noiseSd = noiseSd;
             this.n = raw.length;
             this.stride = stride;
             this.m = (n + stride - 1) / stride;
@@ -307,15 +327,53 @@ final class FaintZoneSearch {
 
         /** The box mean less the ring mean of block j, from its score. */
         double contrast(int j, double score) {
-            int box = boxLast(j) - boxFirst(j) + 1;
-            return score * Math.sqrt(1.0 / box + 1.0 / ringCount(j));
+            return score * scale(j, boxLast(j) - boxFirst(j) + 1);
         }
 
-        /** Free samples in the ring of block j (its two flanks, each as long as the box). */
-        int ringCount(int j) {
+        /**
+         * The background under block j's box from its ring (two flanks, each as long as the box,
+         * {@link #RING_GAP_WIDTHS} widths out): when the two flanks differ clearly ({@code uneven}), the
+         * higher of their two means, so that a dip or a glitch on one side (or the fall of a tail)
+         * never lifts the box above its background; otherwise the mean of the free samples of both.
+         */
+        double background(int j, int box) {
             int h = half(j);
             int gap = groupGap[j / WIDTH_UPDATE_BLOCKS];
-            return freeCount(j - gap - 2 * h, j - gap) + freeCount(j + gap, j + gap + 2 * h);
+            int left = freeCount(j - gap - 2 * h, j - gap);
+            int right = freeCount(j + gap, j + gap + 2 * h);
+            double leftSum = freeSum(j - gap - 2 * h, j - gap);
+            double rightSum = freeSum(j + gap, j + gap + 2 * h);
+            if (uneven(left, right, leftSum, rightSum, box)) {
+                return Math.max(leftSum / left, rightSum / right);
+            }
+            return (leftSum + rightSum) / (left + right);
+        }
+
+        /** The white-noise SD, in noise SDs, of block j's box mean less its background, or NaN when
+         *  the ring holds fewer free samples than the box. */
+        double scale(int j, int box) {
+            int h = half(j);
+            int gap = groupGap[j / WIDTH_UPDATE_BLOCKS];
+            int left = freeCount(j - gap - 2 * h, j - gap);
+            int right = freeCount(j + gap, j + gap + 2 * h);
+            if (left + right < box) {
+                return Double.NaN;
+            }
+            double leftSum = freeSum(j - gap - 2 * h, j - gap);
+            double rightSum = freeSum(j + gap, j + gap + 2 * h);
+            int ring = uneven(left, right, leftSum, rightSum, box) ? Math.min(left, right) : left + right;
+            return Math.sqrt(1.0 / box + 1.0 / ring);
+        }
+
+        /** True when both flanks of a ring are at least half free and their means differ by more
+         *  than {@link #UNEVEN_RING_SIGMAS} of their white-noise SD: one side holds a dip, a glitch or
+         *  a tail's fall, and only the higher side is a fair background. */
+        private boolean uneven(int left, int right, double leftSum, double rightSum, int box) {
+            if (2 * left < box || 2 * right < box) {
+                return false;
+            }
+            double difference = Math.abs(leftSum / left - rightSum / right);
+            return difference > UNEVEN_RING_SIGMAS * noiseSd * Math.sqrt(1.0 / left + 1.0 / right);
         }
 
         /** The score of every block whose box is free and whose ring holds enough free samples. */
@@ -331,14 +389,11 @@ final class FaintZoneSearch {
                     continue;
                 }
                 int box = boxLast(j) - boxFirst(j) + 1;
-                int gap = groupGap[j / WIDTH_UPDATE_BLOCKS];
-                int ringCount = freeCount(j - gap - 2 * h, j - gap) + freeCount(j + gap, j + gap + 2 * h);
-                if (ringCount < box) {
+                double scale = scale(j, box);
+                if (Double.isNaN(scale)) {
                     continue;
                 }
-                double ringSum = freeSum(j - gap - 2 * h, j - gap) + freeSum(j + gap, j + gap + 2 * h);
-                double contrast = (sums[hi + 1] - sums[lo]) / box - ringSum / ringCount;
-                out.score[j] = contrast / Math.sqrt(1.0 / box + 1.0 / ringCount);
+                out.score[j] = ((sums[hi + 1] - sums[lo]) / box - background(j, box)) / scale;
                 out.excluded[j] = inPeak[centre(j)];
                 out.eligible++;
                 out.looks += (double) stride / box;
@@ -452,8 +507,7 @@ final class FaintZoneSearch {
             return score;
         }
         int box = to - from + 1;
-        double scale = Math.sqrt(1.0 / box + 1.0 / blocks.ringCount(j));
-        return score - ((first - third) + (second - third)) / box / scale;
+        return score - ((first - third) + (second - third)) / box / blocks.scale(j, box);
     }
 
     /** Half the box length in samples for an expected width at half height. */
@@ -462,27 +516,17 @@ final class FaintZoneSearch {
     }
 
     /**
-     * {@code v} (a window of samples at times {@code t}) with the straight line through the means of
-     * its first and last {@code edge} samples taken away, in place (a peak's tail or a baseline slope
+     * {@code v} (a window of samples at times {@code t}) with the straight line through the medians
+     * of its first and last {@code edge} samples (at least {@link #MIN_EDGE_SAMPLES}) taken away, in place (a peak's tail or a baseline slope
      * under a faint zone).
      */
     private static double[] detrended(double[] t, double[] v, int edge) {
         int n = v.length;
-        int k = Math.max(1, Math.min(edge, n / 4));
-        double t0 = 0;
-        double v0 = 0;
-        double t1 = 0;
-        double v1 = 0;
-        for (int j = 0; j < k; j++) {
-            t0 += t[j];
-            v0 += v[j];
-            t1 += t[n - 1 - j];
-            v1 += v[n - 1 - j];
-        }
-        t0 /= k;
-        v0 /= k;
-        t1 /= k;
-        v1 /= k;
+        int k = Math.max(1, Math.min(Math.max(edge, MIN_EDGE_SAMPLES), n / 4));
+        double t0 = 0.5 * (t[0] + t[k - 1]);
+        double t1 = 0.5 * (t[n - k] + t[n - 1]);
+        double v0 = Selection.median(Arrays.copyOfRange(v, 0, k));
+        double v1 = Selection.median(Arrays.copyOfRange(v, n - k, n));
         double slope = t1 > t0 ? (v1 - v0) / (t1 - t0) : 0.0;
         for (int j = 0; j < n; j++) {
             v[j] -= v0 + slope * (t[j] - t0);
@@ -492,7 +536,7 @@ final class FaintZoneSearch {
 
     /** One Gaussian fitted around candidate sample {@code i} within its free stretch, or null. */
     private static Zone fitted(double[] t, double[] raw, Busy busy, int i, double width, double sampling,
-                               double significance, double noiseSd) {
+                               double significance, double contrast, double noiseSd) {
         int reach = (int) Math.ceil(FIT_HALF_WINDOW_WIDTHS * width / sampling);
         int first = Math.max(Math.max(0, i - reach), busy.before(i) + 1);
         int last = Math.min(Math.min(raw.length - 1, i + reach), busy.after(i, raw.length) - 1);
@@ -506,8 +550,10 @@ final class FaintZoneSearch {
             return null;
         }
         GaussianClusterFit.Component zone = fit.components().get(0);
-        if (!(zone.height() >= MIN_HEIGHT_SIGMAS * noiseSd)) {
-            return null;
+        if (!(zone.height() >= MIN_HEIGHT_SIGMAS * noiseSd)
+                || zone.height() > contrast / LEAST_BOX_MEAN_FRACTION + MIN_HEIGHT_SIGMAS * noiseSd
+                || zone.height() > MAX_HEIGHT_SIGMAS * noiseSd) {
+            return null; // too low, far taller than its box said, or too tall to be missed as a segment
         }
         double low = SignalLimits.FAINT_MIN_WIDTH_RATIO * sigma;
         double high = MAX_WIDTH_RATIO * sigma;
