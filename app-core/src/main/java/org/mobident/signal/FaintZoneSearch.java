@@ -19,29 +19,34 @@ import org.apache.commons.math3.special.Erf;
  *
  * <p>Steps, each linear in the number of samples:
  * <ol>
- * <li>The free stretches: the samples outside every peak already found (their start to end) and
- *     away from the spikes removed.</li>
+ * <li>The free stretches: the samples outside the core of every peak already found
+ *     ({@link #CORE_WIDTHS} of its widths around its apex and centre; its tails beyond may hold
+ *     faint zones) and away from the spikes removed.</li>
  * <li>Sums over blocks of about a quarter of the shortest box (one pass over the samples; a zone's
  *     score changes little over a quarter of its box).</li>
  * <li>At each block whose box lies wholly in a free stretch, the mean of the baseline-corrected
- *     signal over the box less its mean over a ring (the free samples of two flanks as long as the
- *     box, from {@link #RING_GAP_WIDTHS} widths out, beyond a zone's reach), so that what is left
- *     of a baseline offset or slow wave under the box does not count (peaks found keep only their
- *     core, {@link #CORE_WIDTHS} of their widths around apex and centre, out of the search: their
- *     tails may hold faint zones, and a fitted zone must stand above the straight line through the
- *     ends of its fitting window, which takes a tail's slope away); divided by
- *     √(1/box + 1/ring) it has SD σ for white noise of SD σ, whatever the box; for
- *     correlated noise or a baseline that still waves at the zones' scale it has more, which is
- *     measured, not assumed: the ratio of its robust SD to that of the signal, over the free
- *     samples outside the peak mask, scales the local noise SD of the signal around each
- *     candidate.</li>
+ *     signal over the box less its background from a ring (the free samples of two flanks as long
+ *     as the box, from {@link #RING_GAP_WIDTHS} widths out, beyond a zone's reach: their mean, or
+ *     the higher flank's when the two differ clearly, so that a dip, a glitch or a falling tail on
+ *     one side never lifts the box), so that what is left of a baseline offset or slow wave under
+ *     the box does not count. Divided by its white-noise SD in noise SDs (√(1/box + 1/ring)) this
+ *     score has SD σ for white noise of SD σ, whatever the box; for correlated noise or a baseline
+ *     that still waves at the zones' scale it has more, which is measured, not assumed: the ratio of
+ *     its SD ({@link #scoreSd}) to that of the signal, over the free samples outside the peak mask,
+ *     scales the local noise SD of the signal around each candidate.</li>
  * <li>The threshold is z = Φ⁻¹(1 − α/M), α = {@link SignalLimits#DETECTION_FALSE_ALARM_PER_RUN}
  *     and M the number of box lengths in the free stretches (the Bonferroni bound over the
- *     independent looks; the same family-wise false-alarm rate as the other detection test).</li>
- * <li>The local maxima above it, strongest first, at least {@link #SEPARATION_WIDTHS} widths apart,
- *     are each fitted by one Gaussian ({@link GaussianClusterFit}) over
- *     ±{@link #FIT_HALF_WINDOW_WIDTHS} widths within their free stretch; a fit that fails or puts
- *     the apex near the edge of its window is no zone.</li>
+ *     independent looks; the same family-wise false-alarm rate as the other detection test). A
+ *     candidate must also pass with its box clipped at its {@value #CLIP_RANK}rd highest sample (a
+ *     spike's residue does not), and its contrast must allow a zone {@link #MIN_HEIGHT_SIGMAS} noise
+ *     SDs tall.</li>
+ * <li>The local maxima, strongest first, at least {@link #SEPARATION_WIDTHS} widths apart, are each
+ *     fitted by one Gaussian ({@link GaussianClusterFit}) over ±{@link #FIT_HALF_WINDOW_WIDTHS}
+ *     widths within their free stretch, after the straight line through the medians of the window's
+ *     ends is taken away (a tail's slope). The zone stands when the fit puts its apex inside the
+ *     window, its width within 0.45–{@link #MAX_WIDTH_RATIO} times the expected (not pressed against
+ *     a bound), and its height between {@link #MIN_HEIGHT_SIGMAS} and {@link #MAX_HEIGHT_SIGMAS}
+ *     local noise SDs and no taller than its box contrast allows.</li>
  * </ol>
  * What the fit gives (apex, height, width, area) is then judged like any peak ({@code PeakDetector}):
  * S/N, and the width checks for peaks below the detection limit.
