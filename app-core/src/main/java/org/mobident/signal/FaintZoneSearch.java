@@ -336,26 +336,31 @@ final class FaintZoneSearch {
         }
 
         /**
-         * The background under block j's box from its ring (two flanks, each as long as the box,
-         * {@link #RING_GAP_WIDTHS} widths out): when the two flanks differ clearly ({@code uneven}), the
-         * higher of their two means, so that a dip or a glitch on one side (or the fall of a tail)
-         * never lifts the box above its background; otherwise the mean of the free samples of both.
+         * The score of block j: its box mean less the background from its ring (two flanks, each as
+         * long as the box, {@link #RING_GAP_WIDTHS} widths out), divided by {@link #scale}. The
+         * background is the mean of the ring's free samples or, when the two flanks differ clearly
+         * ({@code uneven}), the higher of their two means, so that a dip or a glitch on one side (or
+         * the fall of a tail) never lifts the box above its background. NaN when the ring holds fewer
+         * free samples than the box.
          */
-        double background(int j, int box) {
+        double score(int j, int box, double boxMean) {
             int h = half(j);
             int gap = groupGap[j / WIDTH_UPDATE_BLOCKS];
             int left = freeCount(j - gap - 2 * h, j - gap);
             int right = freeCount(j + gap, j + gap + 2 * h);
+            if (left + right < box) {
+                return Double.NaN;
+            }
             double leftSum = freeSum(j - gap - 2 * h, j - gap);
             double rightSum = freeSum(j + gap, j + gap + 2 * h);
-            if (uneven(left, right, leftSum, rightSum, box)) {
-                return Math.max(leftSum / left, rightSum / right);
-            }
-            return (leftSum + rightSum) / (left + right);
+            boolean uneven = uneven(left, right, leftSum, rightSum, box);
+            double background = uneven ? Math.max(leftSum / left, rightSum / right) : (leftSum + rightSum) / (left + right);
+            int ring = uneven ? Math.min(left, right) : left + right;
+            return (boxMean - background) / Math.sqrt(1.0 / box + 1.0 / ring);
         }
 
-        /** The white-noise SD, in noise SDs, of block j's box mean less its background, or NaN when
-         *  the ring holds fewer free samples than the box. */
+        /** The white-noise SD, in noise SDs, of block j's box mean less its background (as
+         *  {@link #score} takes it), or NaN when the ring holds fewer free samples than the box. */
         double scale(int j, int box) {
             int h = half(j);
             int gap = groupGap[j / WIDTH_UPDATE_BLOCKS];
@@ -394,11 +399,11 @@ final class FaintZoneSearch {
                     continue;
                 }
                 int box = boxLast(j) - boxFirst(j) + 1;
-                double scale = scale(j, box);
-                if (Double.isNaN(scale)) {
+                double score = score(j, box, (sums[hi + 1] - sums[lo]) / box);
+                if (Double.isNaN(score)) {
                     continue;
                 }
-                out.score[j] = ((sums[hi + 1] - sums[lo]) / box - background(j, box)) / scale;
+                out.score[j] = score;
                 out.excluded[j] = inPeak[centre(j)];
                 out.eligible++;
                 out.looks += (double) stride / box;
