@@ -132,9 +132,8 @@ final class FaintZoneSearch {
      * @param fit          the Gaussian fitted to it
      * @param first        first sample of the fitting window
      * @param last         last sample of the fitting window
-     * @param significance box-sum height in its noise SDs
      */
-    record Zone(GaussianClusterFit.Component fit, int first, int last, double significance) {
+    record Zone(GaussianClusterFit.Component fit, int first, int last) {
     }
 
     private FaintZoneSearch() {
@@ -196,7 +195,7 @@ final class FaintZoneSearch {
             if (!apart) {
                 continue;
             }
-            Zone zone = fitted(t, raw, busy, i, width, sampling, c[1], c[2], localSd.applyAsDouble(i));
+            Zone zone = fitted(t, raw, busy, i, width, sampling, c[2], localSd.applyAsDouble(i));
             if (zone != null) {
                 zones.add(zone);
                 taken.add(t[i]);
@@ -549,7 +548,7 @@ final class FaintZoneSearch {
 
     /** One Gaussian fitted around candidate sample {@code i} within its free stretch, or null. */
     private static Zone fitted(double[] t, double[] raw, Busy busy, int i, double width, double sampling,
-                               double significance, double contrast, double noiseSd) {
+                               double contrast, double noiseSd) {
         int reach = (int) Math.ceil(FIT_HALF_WINDOW_WIDTHS * width / sampling);
         int first = Math.max(Math.max(0, i - reach), busy.before(i) + 1);
         int last = Math.min(Math.min(raw.length - 1, i + reach), busy.after(i, raw.length) - 1);
@@ -577,6 +576,6 @@ final class FaintZoneSearch {
         if (!(zone.apexTimeS() >= t[first] + edge && zone.apexTimeS() <= t[last] - edge)) {
             return null;
         }
-        return new Zone(zone, first, last, significance);
+        return new Zone(zone, first, last);
     }
 }
