@@ -267,6 +267,8 @@ final class FaintZoneSearch {
         final int[] groupHalf;
         final int[] groupGap;
         final double noiseSd;
+        /** {@link #ring}'s result: the background and the samples it rests on (one search, one thread). */
+        private final double[] ringWork = new double[2];
 
         Blocks(double[] raw, Busy busy, int stride, IntToDoubleFunction expectedWidth, double sampling,
                double noiseSd) {
@@ -335,43 +337,48 @@ final class FaintZoneSearch {
         }
 
         /**
-         * The score of block j: its box mean less the background from its ring (two flanks, each as
-         * long as the box, {@link #RING_GAP_WIDTHS} widths out), divided by {@link #scale}. The
-         * background is the mean of the ring's free samples or, when the two flanks differ clearly
-         * ({@code uneven}), the higher of their two means, so that a dip or a glitch on one side (or
-         * the fall of a tail) never lifts the box above its background. NaN when the ring holds fewer
-         * free samples than the box.
+         * The score of block j: its box mean less the background from its ring, divided by
+         * {@link #scale}; NaN when the ring holds fewer free samples than the box (see {@link #ring}).
          */
         double score(int j, int box, double boxMean) {
-            int h = half(j);
-            int gap = groupGap[j / WIDTH_UPDATE_BLOCKS];
-            int left = freeCount(j - gap - 2 * h, j - gap);
-            int right = freeCount(j + gap, j + gap + 2 * h);
-            if (left + right < box) {
+            if (!ring(j, box)) {
                 return Double.NaN;
             }
-            double leftSum = freeSum(j - gap - 2 * h, j - gap);
-            double rightSum = freeSum(j + gap, j + gap + 2 * h);
-            boolean uneven = uneven(left, right, leftSum, rightSum, box);
-            double background = uneven ? Math.max(leftSum / left, rightSum / right) : (leftSum + rightSum) / (left + right);
-            int ring = uneven ? Math.min(left, right) : left + right;
-            return (boxMean - background) / Math.sqrt(1.0 / box + 1.0 / ring);
+            return (boxMean - ringWork[0]) / Math.sqrt(1.0 / box + 1.0 / ringWork[1]);
         }
 
         /** The white-noise SD, in noise SDs, of block j's box mean less its background (as
          *  {@link #score} takes it), or NaN when the ring holds fewer free samples than the box. */
         double scale(int j, int box) {
+            return ring(j, box) ? Math.sqrt(1.0 / box + 1.0 / ringWork[1]) : Double.NaN;
+        }
+
+        /**
+         * Block j's ring (two flanks, each as long as the box, {@link #RING_GAP_WIDTHS} widths out)
+         * into {@code ringWork}: the background and the number of samples it rests on. The background
+         * is the mean of the ring's free samples or, when the two flanks differ clearly
+         * ({@code uneven}), the higher of their two means (resting on the smaller flank), so that a
+         * dip or a glitch on one side (or the fall of a tail) never lifts the box above its
+         * background. False when the ring holds fewer free samples than the box.
+         */
+        private boolean ring(int j, int box) {
             int h = half(j);
             int gap = groupGap[j / WIDTH_UPDATE_BLOCKS];
             int left = freeCount(j - gap - 2 * h, j - gap);
             int right = freeCount(j + gap, j + gap + 2 * h);
             if (left + right < box) {
-                return Double.NaN;
+                return false;
             }
             double leftSum = freeSum(j - gap - 2 * h, j - gap);
             double rightSum = freeSum(j + gap, j + gap + 2 * h);
-            int ring = uneven(left, right, leftSum, rightSum, box) ? Math.min(left, right) : left + right;
-            return Math.sqrt(1.0 / box + 1.0 / ring);
+            if (uneven(left, right, leftSum, rightSum, box)) {
+                ringWork[0] = Math.max(leftSum / left, rightSum / right);
+                ringWork[1] = Math.min(left, right);
+            } else {
+                ringWork[0] = (leftSum + rightSum) / (left + right);
+                ringWork[1] = left + right;
+            }
+            return true;
         }
 
         /** True when both flanks of a ring are at least half free and their means differ by more
