@@ -5,6 +5,7 @@ import java.nio.file.Path;
 import java.util.concurrent.Callable;
 import org.mobident.library.Library;
 import org.mobident.library.LibraryCsv;
+import org.mobident.simulate.ElectromigrationDispersion;
 import org.mobident.simulate.LabDayBench;
 import org.mobident.simulate.LabDaySummary;
 import org.mobident.usecase.SimulateRuns;
@@ -64,13 +65,29 @@ public final class SimulateCommand implements Callable<Integer> {
     @Option(names = {"-o", "--out"}, required = true, paramLabel = "DIR", description = "Folder to write into.")
     Path out;
 
+    @Option(names = "--skew-shape", paramLabel = "FORM", description = "lab-day: the form of zones skewed by "
+            + "electromigration dispersion: exponential (default; exponentially modified Gaussians) or triangle "
+            + "(sharp front, straight diffuse flank, smoothed by diffusion). Zones, times and noise stay the same, "
+            + "so a detector can be tried on a zone form it was not built around.")
+    String skewShape = "exponential";
+
     @Option(names = "--overwrite", description = "Replace files that already exist.")
     boolean overwrite;
 
     @Override
     public Integer call() throws Exception {
+        ElectromigrationDispersion.Shape shape = switch (skewShape.trim().toLowerCase(java.util.Locale.ROOT)) {
+            case "exponential" -> ElectromigrationDispersion.Shape.EXPONENTIAL;
+            case "triangle" -> ElectromigrationDispersion.Shape.TRIANGLE;
+            default -> null;
+        };
+        if (shape == null) {
+            spec.commandLine().getErr().println("mobident simulate: unknown --skew-shape '" + skewShape
+                    + "'; choose exponential or triangle");
+            return ExitCodes.USAGE;
+        }
         var request = new SimulateRuns.Request(scenario, libraryFile != null, count, points, seed, out, overwrite,
-                OVERWRITE_HINT);
+                OVERWRITE_HINT, shape);
         if (request.problem() != null) {
             spec.commandLine().getErr().println("mobident simulate: " + request.problem());
             return ExitCodes.USAGE;

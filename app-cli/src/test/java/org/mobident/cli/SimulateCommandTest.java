@@ -79,7 +79,35 @@ class SimulateCommandTest {
         Run unknown = run("simulate", "--scenario", "lab-night", "--out", out);
         assertEquals(ExitCodes.USAGE, unknown.code());
         assertTrue(unknown.err().contains("lab-day"), unknown.err());
+        Run badShape = run("simulate", "--scenario", "lab-day", "--skew-shape", "square", "--out", out);
+        assertEquals(ExitCodes.USAGE, badShape.code());
+        assertTrue(badShape.err().contains("triangle"), badShape.err());
+        Run archiveShape = run("simulate", "--library", DEMO_LIBRARY.toString(), "--skew-shape", "triangle",
+                "--out", out);
+        assertEquals(ExitCodes.USAGE, archiveShape.code());
+        assertTrue(archiveShape.err().contains("lab-day"), archiveShape.err());
         assertFalse(Files.exists(Path.of(out)), "nothing written on a usage error");
+    }
+
+    @Test
+    void triangularZonesChangeTheTracesButNotWhatTheyHold() throws IOException {
+        Path emg = dir.resolve("emg");
+        Path tri = dir.resolve("tri");
+        assertEquals(ExitCodes.OK, run("simulate", "--scenario", "lab-day", "--count", "3", "--seed", "4",
+                "--out", emg.toString()).code());
+        assertEquals(ExitCodes.OK, run("simulate", "--scenario", "lab-day", "--count", "3", "--seed", "4",
+                "--skew-shape", "triangle", "--out", tri.toString()).code());
+        assertEquals(Files.readString(emg.resolve("truth.csv")), Files.readString(tri.resolve("truth.csv")));
+        assertEquals(Files.readString(emg.resolve("samples/runs.csv")), Files.readString(tri.resolve("samples/runs.csv")));
+        java.util.List<String> files = Files.readString(emg.resolve("samples/runs.csv")).lines()
+                .filter(l -> !l.startsWith("#")).skip(1).map(l -> l.split(",")[0]).toList();
+        assertEquals(3, files.size());
+        long differ = 0;
+        for (String f : files) {
+            differ += Files.readString(emg.resolve("samples").resolve(f))
+                    .equals(Files.readString(tri.resolve("samples").resolve(f))) ? 0 : 1;
+        }
+        assertTrue(differ > 0, "the skewed zones are drawn anew");
     }
 
     @Test

@@ -19,6 +19,13 @@ public record LabDayPlan(long seed, List<LabDayMethod> methods, double standards
         samples = List.copyOf(samples);
     }
 
+    /** The same plan with every dispersed zone drawn in another form. */
+    public LabDayPlan withZoneShape(ElectromigrationDispersion.Shape shape) {
+        return new LabDayPlan(seed, methods, standardsTemperatureOffsetC,
+                standards.stream().map(r -> r.withZoneShape(shape)).toList(),
+                samples.stream().map(r -> r.withZoneShape(shape)).toList());
+    }
+
     /** Standards runs of one method. */
     public List<LabDayRun> standards(LabDayMethod method) {
         return standards.stream().filter(r -> r.method().equals(method)).toList();

@@ -80,7 +80,8 @@ final class LabDayReadme {
                   1-2 %% separation.
                 - EOF drift up to +/-%.0f %% around each method's nominal EOF (standards too).
                 - Electromigration dispersion: the standards are slightly skewed; sample zones range from %.1f to
-                  %.0f times the standards' concentration, taller zones being both higher and more skewed.
+                  %.0f times the standards' concentration, taller zones being both higher and more skewed;
+                  skewed zones are drawn as %s.
                 - Neutral marker: in about %.0f %% of sample runs it is only %.0f-%.0f %% of its usual height; in
                   about %.0f %% a foreign zone of small mobility (|mu| %.0f-%.0f) arrives beside it, %.1f-%.0f times
                   taller; about %.0f %% of sample rows give no marker window. Otherwise the window is the nominal
@@ -101,7 +102,7 @@ final class LabDayReadme {
                 """,
                 LabDayPlanner.SAMPLE_TEMPERATURE_SPREAD_C, plan.standardsTemperatureOffsetC(),
                 100 * LabDayPlanner.EOF_DRIFT, LabDayPlanner.MIN_CONCENTRATION_FACTOR,
-                LabDayPlanner.MAX_CONCENTRATION_FACTOR, 100 * LabDayPlanner.WEAK_MARKER_PROBABILITY,
+                LabDayPlanner.MAX_CONCENTRATION_FACTOR, zoneForm(plan), 100 * LabDayPlanner.WEAK_MARKER_PROBABILITY,
                 100 * LabDayPlanner.WEAK_MARKER_MIN_FRACTION, 100 * LabDayPlanner.WEAK_MARKER_MAX_FRACTION,
                 100 * LabDayPlanner.TALL_FOREIGN_PROBABILITY, LabDayPlanner.TALL_FOREIGN_MIN_MOBILITY,
                 LabDayPlanner.TALL_FOREIGN_MAX_MOBILITY, LabDayPlanner.TALL_FOREIGN_MIN_RATIO,
@@ -138,6 +139,14 @@ final class LabDayReadme {
     }
 
     /** One decimal at most, with a plus sign when positive ("+45.2", "-20", "0"). */
+    /** How the plan draws its skewed zones. */
+    private static String zoneForm(LabDayPlan plan) {
+        boolean triangles = plan.samples().stream()
+                .anyMatch(r -> r.dispersion().shape() == ElectromigrationDispersion.Shape.TRIANGLE);
+        return triangles ? "triangles with a sharp front and a straight diffuse flank, smoothed by diffusion"
+                : "exponentially modified Gaussians";
+    }
+
     private static String signed(double v) {
         String s = NumberText.trimmed(v, 1, "");
         return s.startsWith("-") || s.equals("0") ? s : "+" + s;

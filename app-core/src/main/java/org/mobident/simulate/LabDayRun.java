@@ -61,6 +61,12 @@ public record LabDayRun(String name, String fileName, LabDayMethod method, Strin
         return truth.stream().filter(r -> r.kind() == kind).toList();
     }
 
+    /** The same run with its dispersed zones drawn in another form (same zones, times and noise). */
+    public LabDayRun withZoneShape(ElectromigrationDispersion.Shape shape) {
+        return new LabDayRun(name, fileName, method, mix, sampleText, actualTemperatureC, eofMobilityAt25C, spec,
+                dispersion.withShape(shape), style, truth, weakMarker, tallForeignNearMarker);
+    }
+
     /** The simulated trace (noise from the run's seed, so always the same). */
     public Trace trace() {
         return TraceSimulator.simulate(name, spec, dispersion);

@@ -167,6 +167,7 @@ public final class TraceSimulator {
             fronting = faster == migratesTowardsDetector;
         }
         boolean skewed = tau > NEGLIGIBLE_TAU_RATIO * sigma;
+        boolean triangle = skewed && dispersion.shape() == ElectromigrationDispersion.Shape.TRIANGLE;
         double reachBefore = GAUSSIAN_REACH_SIGMAS * sigma + (skewed ? (fronting ? EXPONENTIAL_REACH_TAUS : 1) * tau : 0);
         double reachAfter = GAUSSIAN_REACH_SIGMAS * sigma + (skewed ? (fronting ? 1 : EXPONENTIAL_REACH_TAUS) * tau : 0);
         int from = lowerIndex(time, centre - reachBefore);
@@ -177,7 +178,8 @@ public final class TraceSimulator {
             if (skewed) {
                 // The EMG's first moment lies τ after its Gaussian centre; shifting by τ keeps the
                 // zone's centroid at the predicted migration time (the apex moves to the sharp flank).
-                shape = emgShape((fronting ? -x : x) + tau, sigma, tau);
+                shape = triangle ? triangleShape((fronting ? -x : x) + tau, sigma, TRIANGLE_BASE_TAUS * tau)
+                        : emgShape((fronting ? -x : x) + tau, sigma, tau);
             } else {
                 shape = Math.exp(-0.5 * (x / sigma) * (x / sigma));
             }
@@ -203,6 +205,32 @@ public final class TraceSimulator {
             return scale * Math.exp(sigma * sigma / (2 * tau * tau) - x / tau) * Erf.erfc(z);
         }
         return scale * Math.exp(-0.5 * (x / sigma) * (x / sigma)) * erfcx(z);
+    }
+
+    /** Base of a triangular zone in units of τ: its first moment then lies τ from its front, as an EMG's. */
+    static final double TRIANGLE_BASE_TAUS = 3.0;
+
+    /**
+     * A right triangle of base L, highest at its front (y = 0) and falling linearly to zero at
+     * y = L, convolved with a Gaussian of SD σ, with the area of a unit-height Gaussian σ√(2π):
+     * with peak value h = 2σ√(2π)/L, a = (y − L)/σ, b = y/σ, Φ and φ the standard normal
+     * distribution and density,
+     * f(y) = h·[(1 − y/L)(Φ(b) − Φ(a)) + (σ/L)(φ(a) − φ(b))]
+     * (the two integrals of the linear flank against the Gaussian, worked out by substituting
+     * u = y − σz).
+     */
+    static double triangleShape(double y, double sigma, double baseS) {
+        double h = 2 * sigma * Math.sqrt(2 * Math.PI) / baseS;
+        double a = (y - baseS) / sigma;
+        double b = y / sigma;
+        double mass = normalCdf(b) - normalCdf(a);
+        double density = (Math.exp(-0.5 * a * a) - Math.exp(-0.5 * b * b)) / Math.sqrt(2 * Math.PI);
+        return h * ((1 - y / baseS) * mass + sigma / baseS * density);
+    }
+
+    /** Standard normal distribution function, Φ(z) = erfc(−z/√2)/2. */
+    private static double normalCdf(double z) {
+        return 0.5 * Erf.erfc(-z / SQRT_2);
     }
 
     /**

@@ -5,7 +5,11 @@ import java.nio.file.Path;
 import java.util.Objects;
 import org.mobident.library.Library;
 import org.mobident.simulate.ArchiveGenerator;
+import org.mobident.simulate.ElectromigrationDispersion;
 import org.mobident.simulate.LabDayBench;
+import org.mobident.simulate.LabDayMethods;
+import org.mobident.simulate.LabDayPlan;
+import org.mobident.simulate.LabDayPlanner;
 import org.mobident.simulate.LabDaySummary;
 
 /**
@@ -41,10 +45,18 @@ public final class SimulateRuns {
      * @param overwriteHint what to tell the user when a file exists and may not be replaced
      */
     public record Request(String scenario, boolean libraryGiven, Integer count, Integer points, long seed, Path out,
-                          boolean overwrite, String overwriteHint) {
+                          boolean overwrite, String overwriteHint, ElectromigrationDispersion.Shape skewShape) {
         public Request {
             Objects.requireNonNull(scenario, "scenario");
             Objects.requireNonNull(out, "out");
+            Objects.requireNonNull(skewShape, "skewShape");
+        }
+
+        /** A request whose skewed zones are exponentially modified Gaussians. */
+        public Request(String scenario, boolean libraryGiven, Integer count, Integer points, long seed, Path out,
+                       boolean overwrite, String overwriteHint) {
+            this(scenario, libraryGiven, count, points, seed, out, overwrite, overwriteHint,
+                    ElectromigrationDispersion.Shape.EXPONENTIAL);
         }
 
         /** Archive runs or lab-day samples to write. */
@@ -63,6 +75,9 @@ public final class SimulateRuns {
                 int n = pointsPerRun();
                 if (runs() < 1 || runs() > MAX_ARCHIVE_RUNS || n < MIN_POINTS || n > MAX_POINTS) {
                     return "--count must be 1.." + MAX_ARCHIVE_RUNS + " and --points " + MIN_POINTS + ".." + MAX_POINTS;
+                }
+                if (skewShape != ElectromigrationDispersion.Shape.EXPONENTIAL) {
+                    return "the archive scenario draws symmetric zones; --skew-shape is for lab-day";
                 }
                 return libraryGiven ? null : "the archive scenario draws its anions from a library: give --library FILE";
             }
@@ -93,7 +108,8 @@ public final class SimulateRuns {
 
     /** Writes the lab-day bench; returns what it holds. */
     public static LabDaySummary labDay(Request request) throws IOException {
-        return LabDayBench.write(request.runs(), request.seed(), request.out(), request.overwrite(),
-                request.overwriteHint());
+        LabDayPlan plan = LabDayPlanner.plan(LabDayMethods.builtIn(), request.runs(), request.seed())
+                .withZoneShape(request.skewShape());
+        return LabDayBench.write(plan, request.out(), request.overwrite(), request.overwriteHint());
     }
 }
