@@ -49,8 +49,9 @@ import org.mobident.trace.Trace;
  *     segment; the extra zones stand when the extra-sum-of-squares F-test accepts them at
  *     {@link SignalLimits#SHOULDER_F_TEST_ALPHA}, every zone reaches the minimum height and width,
  *     and no two zones are closer than {@link SignalLimits#SHOULDER_MIN_SEPARATION_SIGMAS} σ; a
- *     shoulder inside a single segment must moreover beat one skewed zone ({@link SkewedZoneFit})
- *     by the same test. A deeply overlapped region without extra zones keeps the one-per-segment
+ *     shoulder inside a single segment must moreover beat one skewed zone, of whichever form
+ *     ({@link OneSkewedZone}: exponentially modified Gaussian or smoothed triangle) fits it
+ *     closer, by the same test. A deeply overlapped region without extra zones keeps the one-per-segment
  *     fit on the same checks. Every zone of an accepted fit is one peak: apex time, its standard
  *     error (s²(JᵀJ)⁻¹) and height from the fit, area H σ √(2π) and width at half height
  *     2.3548 σ from the fitted Gaussian, start and end at the time where the neighbouring zone
@@ -346,9 +347,11 @@ public final class PeakDetector {
          * The shape term of a measured peak's centre uncertainty ({@link ZoneCentre}). A skewed zone
          * (apex and centre more than {@link SignalLimits#SKEW_CHECK_MIN_WIDTHS} w½ apart) measured
          * well enough to fit (S/N at least the quantitation limit) gets a second estimate of its
-         * first moment, μ + τ of one exponentially modified Gaussian fitted to its samples
-         * ({@link SkewedZoneFit}; Grushka 1972): the model extrapolates the diffuse flank where the
-         * moment of the samples stops at the peak's end. The two estimates agree on a zone recorded
+         * first moment, that of one skewed zone fitted to its samples, in the form that fits it
+         * better ({@link OneSkewedZone}: μ + τ of an exponentially modified Gaussian, Grushka 1972,
+         * or the centroid of a smoothed triangle; an EMG's μ + τ on a triangular zone is off by up
+         * to a second, which had left such zones ambiguous): the model extrapolates the diffuse
+         * flank where the moment of the samples stops at the peak's end. The two estimates agree on a zone recorded
          * whole and differ where the flank was cut or the baseline took part of it; their difference
          * is the term, never below {@link SignalLimits#CENTRE_SHAPE_FLOOR_FACTOR} of the apex–centre
          * distance. Otherwise (symmetric, faint, or no plausible fit) the term is
@@ -361,12 +364,12 @@ public final class PeakDetector {
                     || !(signalToNoise >= Tolerances.QUANTITATION_LIMIT_SIGNAL_TO_NOISE)) {
                 return byDistance;
             }
-            SkewedZoneFit f = SkewedZoneFit.fit(t, raw, nearestIndex(t, m.startTimeS), nearestIndex(t, m.endTimeS),
-                    minSigmaS, maxSigmaS);
-            if (f == null || Math.signum(f.tauS()) != Math.signum(skew)) {
+            OneSkewedZone f = OneSkewedZone.better(t, raw, nearestIndex(t, m.startTimeS),
+                    nearestIndex(t, m.endTimeS), minSigmaS, maxSigmaS);
+            if (f == null || f.direction() != Math.signum(skew)) {
                 return byDistance;
             }
-            double fitted = f.centreS() + f.tauS();
+            double fitted = f.firstMomentS();
             if (!(fitted > m.startTimeS && fitted < m.endTimeS)) {
                 return byDistance;
             }
@@ -673,15 +676,15 @@ public final class PeakDetector {
                     chosenStart = start;
                 }
                 if (chosen != null && region.size() == 1) {
-                    SkewedZoneFit one = SkewedZoneFit.fit(t, raw, first, last, minSigma, maxSigma);
+                    OneSkewedZone one = OneSkewedZone.closest(t, raw, first, last, minSigma, maxSigma);
                     if (oneSkewedZone(one, more)) {
                         // the shoulder may be the diffuse flank of one skewed zone, or a second
                         // skewed zone: the split must beat one skewed zone on its own
                         SkewedClusterFit.Result split = SkewedClusterFit.fit(t, raw, first, last, start,
-                                typicalSigmaS, minSigma, maxSigma);
+                                typicalSigmaS, minSigma, maxSigma, noiseSd);
                         if (split != null && plausible(split) && GaussianClusterFit.extraParametersPValue(
                                 one.residualSumOfSquares(), split.residualSumOfSquares(),
-                                split.parameters() - SkewedZoneFit.PARAMETERS, split.points() - split.parameters())
+                                split.parameters() - one.parameters(), split.points() - split.parameters())
                                 <= SignalLimits.SKEWED_SPLIT_F_TEST_ALPHA) {
                             return skewedZones(split, first, last);
                         }
@@ -752,8 +755,8 @@ public final class PeakDetector {
          * dispersion gives a zone one long flank, which a sum of Gaussians follows with a false extra
          * zone.
          */
-        private static boolean oneSkewedZone(SkewedZoneFit skewed, GaussianClusterFit.Result zones) {
-            return skewed != null && zones.parameters() > SkewedZoneFit.PARAMETERS
+        private static boolean oneSkewedZone(OneSkewedZone skewed, GaussianClusterFit.Result zones) {
+            return skewed != null && zones.parameters() > skewed.parameters()
                     && skewed.pValueAgainst(zones) > SignalLimits.SHOULDER_F_TEST_ALPHA;
         }
 
@@ -764,7 +767,9 @@ public final class PeakDetector {
          * {@link SignalLimits#SKEWED_CLUSTER_MIN_GAIN}, and every zone reportable; null otherwise.
          * Zones of electromigration dispersion have long diffuse flanks that run into the
          * neighbour, and Gaussians put both the zones and their shares of the signal in the wrong
-         * places.
+         * places. When the fit fails, the fits with one zone fewer are tried (the best criterion
+         * kept); when it comes out as smoothed triangles, they must also beat those (two triangles
+         * end to end can follow the convex flank of one EMG zone).
          */
         private SkewedClusterFit.Result skewedAlternative(GaussianClusterFit.Result gaussians, double[] start,
                                                          int first, int last, double minSigma, double maxSigma) {
@@ -775,12 +780,16 @@ public final class PeakDetector {
             int n = gaussians.points();
             double bicGaussians = n * Math.log(gaussians.residualSumOfSquares() / n) + gaussians.parameters() * Math.log(n);
             SkewedClusterFit.Result skewed = SkewedClusterFit.fit(t, raw, first, last, start, typicalSigmaS,
-                    minSigma, maxSigma);
-            if (skewed != null && plausible(skewed) && bic(skewed) <= bicGaussians - SignalLimits.SKEWED_CLUSTER_MIN_GAIN) {
+                    minSigma, maxSigma, noiseSd);
+            boolean kept = skewed != null && plausible(skewed)
+                    && bic(skewed) <= bicGaussians - SignalLimits.SKEWED_CLUSTER_MIN_GAIN;
+            if (kept && skewed.zones().get(0).form() == ZoneForm.EXPONENTIAL) {
                 return skewed;
             }
+            // two smoothed triangles end to end can follow the convex flank of one EMG zone: triangles
+            // must also beat every fit with one zone fewer
             if (start.length < 2) {
-                return null;
+                return kept ? skewed : null;
             }
             // one zone fewer: a Gaussian fit follows a long diffuse flank with an extra zone, which
             // the skewed zones must not keep (each start left out in turn, the lowest criterion kept)
@@ -793,12 +802,16 @@ public final class PeakDetector {
                     }
                 }
                 SkewedClusterFit.Result f = SkewedClusterFit.fit(t, raw, first, last, fewer, typicalSigmaS, minSigma,
-                        maxSigma);
+                        maxSigma, noiseSd);
                 if (f != null && plausible(f) && (best == null || bic(f) < bic(best))) {
                     best = f;
                 }
             }
-            return best != null && bic(best) <= bicGaussians - SignalLimits.SKEWED_CLUSTER_MIN_GAIN ? best : null;
+            if (best != null && bic(best) <= bicGaussians - SignalLimits.SKEWED_CLUSTER_MIN_GAIN
+                    && (!kept || bic(best) <= bic(skewed))) {
+                return best;
+            }
+            return kept ? skewed : null;
         }
 
         /** Bayesian information criterion n ln(RSS/n) + p ln n of a skewed-cluster fit. */

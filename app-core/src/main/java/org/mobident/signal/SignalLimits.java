@@ -263,6 +263,19 @@ final class SignalLimits {
      *  773 call a difference above 10 very strong evidence; from memory). */
     static final double SKEWED_CLUSTER_MIN_GAIN = 10.0;
 
+    /** Least fall of n·ln(RSS) (nats; both forms have as many parameters, so it is the fall of the
+     *  Bayesian information criterion) for which zones are taken as smoothed triangles rather than
+     *  exponentially modified Gaussians (a modelling choice, on the evidence scale of
+     *  {@link #SKEWED_CLUSTER_MIN_GAIN}: the EMG stays the form of mildly skewed zones, where the two
+     *  fit about equally and a change of form would only move the zones by the noise). */
+    static final double TRIANGLE_FORM_MIN_GAIN = 10.0;
+
+    /** A cluster whose triangles do not fit down to the noise is still taken as triangles when they
+     *  leave at most this fraction's inverse of the EMGs' residual sum of squares (a modelling
+     *  choice: on the lab-day bench, triangular zones left EMG sums 10–100 times the triangles'
+     *  residual, while an EMG pair that neither form fitted to the noise left 2.8 times). */
+    static final double TRIANGLE_FORM_MIN_RSS_RATIO = 3.0;
+
     /** Fitted zones closer than this many SDs (the larger of the two) are one zone whose shape
      *  the Gaussian does not fit, not two (two equal zones 1σ apart show no curvature minimum
      *  of their own). */

@@ -10,9 +10,11 @@ import org.apache.commons.math3.linear.SingularMatrixException;
 import org.apache.commons.math3.util.Pair;
 
 /**
- * Least-squares fit of a sum of skewed zones to one cluster: K exponentially modified Gaussians
- * (Grushka, Anal. Chem. 44 (1972) 1733) that share their Gaussian SD σ and their skew direction,
- * each with its own area A_k, Gaussian centre μ_k and exponential time constant a_k = |τ_k|.
+ * Least-squares fit of a sum of skewed zones to one cluster: K zones of one form
+ * ({@link ZoneForm}: exponentially modified Gaussians, Grushka, Anal. Chem. 44 (1972) 1733, or
+ * triangles smoothed by diffusion) that share their Gaussian SD σ, their form and their skew
+ * direction, each with its own area A_k, sharp-side position μ_k and size a_k (the distance from
+ * its sharp side to its first moment: the EMG's |τ_k|, a third of the triangle's base).
  *
  * <p><b>Why.</b> Two analytes one or two per cent apart in mobility, one of them concentrated, give
  * two zones whose diffuse flanks (electromigration dispersion: Mikkers, Everaerts &amp; Verheggen,
@@ -21,14 +23,15 @@ import org.apache.commons.math3.util.Pair;
  * two zones; the sum of skewed zones recovers each zone and its first moment μ_k + τ_k (Grushka
  * 1972), the time that belongs to its mobility.
  *
- * <p><b>Model.</b> {@code f(t) = Σ_k A_k g(t − μ_k; σ, s·a_k)} with g the unit-area EMG of
- * {@link SkewedZoneFit#shape} and s = ±1 the common direction (tailing +1, fronting −1; both are
- * fitted and the better kept): zones one or two per cent apart sit on the same side of the
- * background co-ion's mobility, so their dispersion has the same direction. The
- * zones are close in time, so diffusion gives them the same σ (a modelling choice that takes a
- * parameter per extra zone away). Parameters by Levenberg–Marquardt (Apache Commons Math) with
- * the analytic Jacobian of {@link SkewedZoneFit}; a_k is kept at least
- * {@link SkewedZoneFit#MIN_TAU_FRACTION} of the starting σ.
+ * <p><b>Model.</b> {@code f(t) = Σ_k A_k g(s(t − μ_k); σ, a_k)} with g the unit-area form of {@link
+ * ZoneForm} and s = ±1 the common direction (tailing +1, fronting −1; both directions and both
+ * forms are fitted, and the fit that places every zone with the smallest residual is kept: a sum of
+ * EMGs follows a triangle's straight flank with a zone too many): zones one or two per cent apart
+ * sit on the same side of the background co-ion's mobility, so their dispersion has the same
+ * direction. The zones are close in time, so diffusion gives them the same σ (a modelling choice
+ * that takes a parameter per extra zone away). Parameters by Levenberg–Marquardt (Apache Commons
+ * Math) with the analytic Jacobian of {@link ZoneForm}; a_k is kept at least {@link
+ * SkewedZoneFit#MIN_TAU_FRACTION} of the starting σ.
  *
  * <p><b>Uncertainty.</b> s²(JᵀJ)⁻¹ at the optimum with s² = RSS/(n − p) (Bates &amp; Watts 1988
  * §2.3; from memory); the centre's variance is Var(μ) + Var(a) + 2s·Cov(μ, a).
@@ -46,7 +49,6 @@ final class SkewedClusterFit {
     private static final int STEPS_PER_SIGMA = 8;
     /** Bisection steps for a crossing (2⁻⁴⁰ of the bracket). */
     private static final int BISECTION_STEPS = 40;
-    private static final double SQRT_2PI = Math.sqrt(2 * Math.PI);
 
     /**
      * One fitted skewed zone.
@@ -59,7 +61,7 @@ final class SkewedClusterFit {
      * @param centreSdS  standard uncertainty of μ, s
      */
     record Zone(double areaTimesS, double centreS, double sigmaS, double tauS, double firstMomentSdS,
-                double centreSdS) {
+                double centreSdS, ZoneForm form) {
 
         /** The first moment μ + τ (Grushka 1972), s. */
         double firstMomentS() {
@@ -68,7 +70,7 @@ final class SkewedClusterFit {
 
         /** The zone's value at a time. */
         double value(double timeS) {
-            return areaTimesS * SkewedZoneFit.shape(timeS - centreS, sigmaS, tauS);
+            return areaTimesS * form.value(Math.signum(tauS) * (timeS - centreS), sigmaS, Math.abs(tauS));
         }
 
         /** The time of the zone's maximum (between μ and the first moment for an EMG), s. */
@@ -204,6 +206,22 @@ final class SkewedClusterFit {
      */
     static Result fit(double[] t, double[] v, int first, int last, double[] startApexS, double startSigmaS,
                       double minSigmaS, double maxSigmaS) {
+        return fit(t, v, first, last, startApexS, startSigmaS, minSigmaS, maxSigmaS, Double.NaN);
+    }
+
+    /**
+     * As {@link #fit(double[], double[], int, int, double[], double, double, double)}, knowing the
+     * noise SD of the samples: zones are then taken as smoothed triangles only when the triangles
+     * explain the cluster down to the noise (residual variance at most
+     * {@link SignalLimits#SKEWED_CLUSTER_MISFIT_RATIO} times the noise variance). Where neither form
+     * reaches the noise, the zones have some third form, and the EMG, the form the detector was
+     * first built and checked with, stays: a sum of triangles, more flexible on a straight flank,
+     * was seen to fit such a pair better with its zones in the wrong places.
+     *
+     * @param noiseSd SD of the noise of {@code v}; NaN when not known
+     */
+    static Result fit(double[] t, double[] v, int first, int last, double[] startApexS, double startSigmaS,
+                      double minSigmaS, double maxSigmaS, double noiseSd) {
         int k = startApexS.length;
         int n = last - first + 1;
         int parameters = 1 + 3 * k;
@@ -229,20 +247,42 @@ final class SkewedClusterFit {
         if (!(area > 0)) {
             return null;
         }
-        Result tailing = fit(u, target, w, area, ref, span, +1, startApexS, startSigmaS, minSigmaS, maxSigmaS);
-        Result fronting = fit(u, target, w, area, ref, span, -1, startApexS, startSigmaS, minSigmaS, maxSigmaS);
-        if (tailing == null || fronting == null) {
-            return tailing == null ? fronting : tailing;
+        Result emg = better(
+                fit(u, target, w, area, ref, span, +1, ZoneForm.EXPONENTIAL, startApexS, startSigmaS, minSigmaS,
+                        maxSigmaS),
+                fit(u, target, w, area, ref, span, -1, ZoneForm.EXPONENTIAL, startApexS, startSigmaS, minSigmaS,
+                        maxSigmaS));
+        Result triangle = better(
+                fit(u, target, w, area, ref, span, +1, ZoneForm.TRIANGLE, startApexS, startSigmaS, minSigmaS,
+                        maxSigmaS),
+                fit(u, target, w, area, ref, span, -1, ZoneForm.TRIANGLE, startApexS, startSigmaS, minSigmaS,
+                        maxSigmaS));
+        if (emg == null || triangle == null) {
+            return emg == null ? triangle : emg;
         }
-        if (tailing.allPlaced() != fronting.allPlaced()) {
-            return tailing.allPlaced() ? tailing : fronting;
-        }
-        return tailing.residualSumOfSquares() <= fronting.residualSumOfSquares() ? tailing : fronting;
+        // the EMG stays the form unless triangles fit clearly better (OneSkewedZone.clearlyBetter),
+        // place every zone as well, and fit down to the noise
+        boolean adequate = Double.isNaN(noiseSd) || triangle.residualSumOfSquares()
+                / (n - triangle.parameters()) <= SignalLimits.SKEWED_CLUSTER_MISFIT_RATIO * noiseSd * noiseSd
+                || emg.residualSumOfSquares() >= SignalLimits.TRIANGLE_FORM_MIN_RSS_RATIO * triangle.residualSumOfSquares();
+        return adequate && OneSkewedZone.clearlyBetter(triangle.residualSumOfSquares(), emg.residualSumOfSquares(), n)
+                && (triangle.allPlaced() || !emg.allPlaced()) ? triangle : emg;
     }
 
-    /** One fit with the skew direction {@code sign} (+1 tailing, −1 fronting); offsets u from {@code ref}. */
+    /** Of two fits (either may be null), the one that places every zone, else the smaller residual. */
+    private static Result better(Result a, Result b) {
+        if (a == null || b == null) {
+            return a == null ? b : a;
+        }
+        if (a.allPlaced() != b.allPlaced()) {
+            return a.allPlaced() ? a : b;
+        }
+        return a.residualSumOfSquares() <= b.residualSumOfSquares() ? a : b;
+    }
+
+    /** One fit with the skew direction {@code sign} (+1 tailing, −1 fronting) and one form; offsets u from {@code ref}. */
     private static Result fit(double[] u, double[] target, double[] w, double area, double ref, double span,
-                              double sign, double[] startApexS, double startSigmaS, double minSigmaS,
+                              double sign, ZoneForm form, double[] startApexS, double startSigmaS, double minSigmaS,
                               double maxSigmaS) {
         int k = startApexS.length;
         int n = u.length;
@@ -307,10 +347,11 @@ final class SkewedClusterFit {
         Result best = null;
         Result bestPlaced = null;
         for (double[] start : starts) {
-            if (!startAreas(u, target, sign, start, k, area)) {
+            if (!startAreas(u, target, sign, form, start, k, area)) {
                 continue;
             }
-            Result r = solve(u, target, ref, span, sign, start, k, area, minTau, minSigmaS, maxSigmaS, startApexS);
+            Result r = solve(u, target, ref, span, sign, form, start, k, area, minTau, minSigmaS, maxSigmaS,
+                    startApexS);
             if (r != null && (best == null || r.residualSumOfSquares() < best.residualSumOfSquares())) {
                 best = r;
             }
@@ -324,12 +365,13 @@ final class SkewedClusterFit {
 
     /** Sets the starting areas of {@code start} by linear least squares for its shapes, floored at a
      *  twentieth of the cluster's area; false when the shapes are not independent. */
-    private static boolean startAreas(double[] u, double[] target, double sign, double[] start, int k, double area) {
+    private static boolean startAreas(double[] u, double[] target, double sign, ZoneForm form, double[] start, int k,
+                                      double area) {
         int n = u.length;
         double[][] x = new double[n][k];
         for (int i = 0; i < n; i++) {
             for (int j = 0; j < k; j++) {
-                x[i][j] = SkewedZoneFit.shape(u[i] - start[2 + 3 * j], start[0], sign * start[3 + 3 * j]);
+                x[i][j] = form.value(sign * (u[i] - start[2 + 3 * j]), start[0], start[3 + 3 * j]);
             }
         }
         double[] a;
@@ -346,9 +388,9 @@ final class SkewedClusterFit {
     }
 
     /** Levenberg–Marquardt from one start; null when it fails. */
-    private static Result solve(double[] u, double[] target, double ref, double span, double sign, double[] start,
-                                int k, double area, double minTau, double minSigmaS, double maxSigmaS,
-                                double[] startApexS) {
+    private static Result solve(double[] u, double[] target, double ref, double span, double sign, ZoneForm form,
+                                double[] start, int k, double area, double minTau, double minSigmaS,
+                                double maxSigmaS, double[] startApexS) {
         int n = u.length;
         int parameters = 1 + 3 * k;
         double minArea = 1e-6 * area;
@@ -370,7 +412,7 @@ final class SkewedClusterFit {
             }
             return new ArrayRealVector(q, false);
         };
-        LevenbergMarquardt.Solution solution = LevenbergMarquardt.fit(start, model(u, k, sign), target, validator,
+        LevenbergMarquardt.Solution solution = LevenbergMarquardt.fit(start, model(u, k, sign, form), target, validator,
                 MAX_EVALUATIONS, MAX_ITERATIONS, true);
         if (solution == null) {
             return null;
@@ -390,34 +432,32 @@ final class SkewedClusterFit {
                 return null;
             }
             zones.add(new Zone(p[1 + 3 * j], ref + p[c], p[0], sign * p[a], Math.sqrt(varMoment),
-                    Math.sqrt(varCentre)));
+                    Math.sqrt(varCentre), form));
         }
         zones.sort(java.util.Comparator.comparingDouble(Zone::firstMomentS));
         return new Result(zones, rss, n);
     }
 
-    /** The sum of EMGs and its Jacobian (parameters σ, then A, μ, a per zone). */
-    private static MultivariateJacobianFunction model(double[] u, int k, double s) {
+    /** The sum of zones of one form and its Jacobian (parameters σ, then A, μ, a per zone). */
+    private static MultivariateJacobianFunction model(double[] u, int k, double s, ZoneForm form) {
         return point -> {
             double[] p = point.toArray();
             double sigma = p[0];
             int n = u.length;
             double[] value = new double[n];
             double[][] jacobian = new double[n][1 + 3 * k];
+            double[] g = new double[4];
             for (int j = 0; j < k; j++) {
                 double area = p[1 + 3 * j];
                 double mu = p[2 + 3 * j];
                 double a = p[3 + 3 * j];
                 for (int i = 0; i < n; i++) {
-                    double x = s * (u[i] - mu);
-                    double g = SkewedZoneFit.shape(u[i] - mu, sigma, s * a);
-                    double phi = Math.exp(-0.5 * (x / sigma) * (x / sigma)) / (sigma * SQRT_2PI);
-                    value[i] += area * g;
-                    jacobian[i][0] += area * ((sigma / (a * a)) * (g - phi) - phi * x / (sigma * a));
-                    jacobian[i][1 + 3 * j] = g;
-                    jacobian[i][2 + 3 * j] = -s * area * (phi - g) / a;
-                    jacobian[i][3 + 3 * j] = area * (g * (x / (a * a) - 1 / a - sigma * sigma / (a * a * a))
-                            + phi * sigma * sigma / (a * a * a));
+                    form.evaluate(s * (u[i] - mu), sigma, a, g);
+                    value[i] += area * g[0];
+                    jacobian[i][0] += area * g[2];
+                    jacobian[i][1 + 3 * j] = g[0];
+                    jacobian[i][2 + 3 * j] = -s * area * g[1];
+                    jacobian[i][3 + 3 * j] = area * g[3];
                 }
             }
             return new Pair<>(new ArrayRealVector(value, false), new Array2DRowRealMatrix(jacobian, false));

@@ -4,7 +4,6 @@ import org.apache.commons.math3.fitting.leastsquares.MultivariateJacobianFunctio
 import org.apache.commons.math3.fitting.leastsquares.ParameterValidator;
 import org.apache.commons.math3.linear.Array2DRowRealMatrix;
 import org.apache.commons.math3.linear.ArrayRealVector;
-import org.apache.commons.math3.special.Erf;
 import org.apache.commons.math3.util.Pair;
 
 /**
@@ -20,10 +19,8 @@ import org.apache.commons.math3.util.Pair;
  * {@code f = A/(2a) · exp(σ²/(2a²) − x/a) · erfc((σ/a − x/σ)/√2)}, evaluated where the erfc argument
  * z is not negative as {@code A/(2a) · exp(−x²/(2σ²)) · erfcx(z)} (erfcx(z) = exp(z²) erfc(z)), which
  * neither overflows nor underflows. A is the area. Parameters (A, μ, σ, τ) by Levenberg–Marquardt
- * (Apache Commons Math) with the analytic Jacobian: with g = f/A and φ the normal density of SD σ at
- * x, ∂g/∂x = (φ − g)/a, ∂g/∂σ = (σ/a²)(g − φ) − φx/(σa), ∂g/∂a = g(x/a² − 1/a − σ²/a³) + φσ²/a³
- * (differentiated here from the definition). The skew direction is fixed from the sign of the
- * third central moment of the samples and a kept at least {@link #MIN_TAU_FRACTION} of the
+ * (Apache Commons Math) with the analytic Jacobian of {@link ZoneForm#EXPONENTIAL}. The skew
+ * direction is fixed from the sign of the third central moment of the samples and a kept at least {@link #MIN_TAU_FRACTION} of the
  * starting σ, so the fit never has to pass through τ = 0, where the form degenerates to a
  * Gaussian. Starting values by the method of moments (Grushka 1972: mean μ + τ, variance σ² + τ²,
  * third central moment 2τ³).
@@ -36,52 +33,41 @@ import org.apache.commons.math3.util.Pair;
  * @param points      samples fitted
  */
 record SkewedZoneFit(double areaTimesS, double centreS, double sigmaS, double tauS, double residualSumOfSquares,
-                     int points) {
+                     int points) implements OneSkewedZone {
 
     /** Parameters of the model. */
     static final int PARAMETERS = 4;
     /** |τ| is kept at least this fraction of the starting σ. */
     static final double MIN_TAU_FRACTION = 0.05;
-    /** Above this argument erfcx uses its asymptotic series (erfc itself would underflow). */
-    private static final double ERFCX_ASYMPTOTIC_FROM = 25.0;
-    private static final double SQRT_2 = Math.sqrt(2.0);
-    private static final double SQRT_PI = Math.sqrt(Math.PI);
-    private static final double SQRT_2PI = Math.sqrt(2 * Math.PI);
     /** Caps of one fit. */
     private static final int MAX_EVALUATIONS = 400;
     private static final int MAX_ITERATIONS = 200;
 
     /** The first moment of the zone, μ + τ, s (Grushka 1972). */
-    double firstMomentS() {
+    @Override
+    public double firstMomentS() {
         return centreS + tauS;
     }
 
+    @Override
+    public double direction() {
+        return Math.signum(tauS);
+    }
+
+    @Override
+    public int parameters() {
+        return PARAMETERS;
+    }
+
     /**
-     * Fits one EMG to {@code v[first..last]}.
-     *
-     * @param t         sample times, s
-     * @param v         baseline-corrected signal, peak up
-     * @param minSigmaS least σ allowed, s (&gt; 0)
-     * @param maxSigmaS largest σ allowed, s
-     * @return the fit, or null when the samples show no skew, are too few, or the fit fails
+     * Area, mean, variance and third central moment of the positive part of {@code target} over
+     * the offsets {@code u} (trapezoid weights), or null when it has no area, spread or skew.
      */
-    static SkewedZoneFit fit(double[] t, double[] v, int first, int last, double minSigmaS, double maxSigmaS) {
-        int n = last - first + 1;
-        if (n <= PARAMETERS + 1) {
-            return null;
-        }
-        double ref = t[first];
-        double span = t[last] - ref;
-        double[] u = new double[n];
-        double[] target = new double[n];
+    static double[] positiveMoments(double[] u, double[] target) {
+        int n = u.length;
+        double[] w = new double[n];
         double area = 0;
         double m1 = 0;
-        for (int i = 0; i < n; i++) {
-            u[i] = t[first + i] - ref;
-            target[i] = v[first + i];
-        }
-        // moments of the positive part, trapezoid weights
-        double[] w = new double[n];
         for (int i = 0; i < n; i++) {
             double left = i > 0 ? u[i] - u[i - 1] : 0;
             double right = i < n - 1 ? u[i + 1] - u[i] : 0;
@@ -102,10 +88,42 @@ record SkewedZoneFit(double areaTimesS, double centreS, double sigmaS, double ta
         }
         m2 /= area;
         m3 /= area;
-        double sd = Math.sqrt(m2);
-        if (!(sd > 0) || m3 == 0) {
+        if (!(m2 > 0) || m3 == 0) {
             return null;
         }
+        return new double[] {area, m1, m2, m3};
+    }
+
+    /**
+     * Fits one EMG to {@code v[first..last]}.
+     *
+     * @param t         sample times, s
+     * @param v         baseline-corrected signal, peak up
+     * @param minSigmaS least σ allowed, s (&gt; 0)
+     * @param maxSigmaS largest σ allowed, s
+     * @return the fit, or null when the samples show no skew, are too few, or the fit fails
+     */
+    static SkewedZoneFit fit(double[] t, double[] v, int first, int last, double minSigmaS, double maxSigmaS) {
+        int n = last - first + 1;
+        if (n <= PARAMETERS + 1) {
+            return null;
+        }
+        double ref = t[first];
+        double span = t[last] - ref;
+        double[] u = new double[n];
+        double[] target = new double[n];
+        for (int i = 0; i < n; i++) {
+            u[i] = t[first + i] - ref;
+            target[i] = v[first + i];
+        }
+        double[] moments = positiveMoments(u, target);
+        if (moments == null) {
+            return null;
+        }
+        double area = moments[0];
+        double m1 = moments[1];
+        double m2 = moments[2];
+        double m3 = moments[3];
         double sign = Math.signum(m3);
         double tau0 = sign * Math.cbrt(Math.abs(m3) / 2);
         double sigma0 = Math.sqrt(Math.max(m2 - tau0 * tau0, 0.25 * m2));
@@ -133,43 +151,9 @@ record SkewedZoneFit(double areaTimesS, double centreS, double sigmaS, double ta
         return new SkewedZoneFit(p[0], ref + p[1], p[2], p[3], rss, n);
     }
 
-    /**
-     * p-value of the extra-sum-of-squares F-test of this one skewed zone against a fit of several
-     * Gaussian zones to the same samples: the probability of an improvement at least as large if
-     * one skewed zone were the truth. The models are not nested, so the test is approximate
-     * (Bates &amp; Watts, Nonlinear Regression Analysis and Its Applications, 1988, §3.5; from memory);
-     * it is used only to keep a split that the data clearly ask for.
-     */
-    double pValueAgainst(GaussianClusterFit.Result zones) {
-        if (zones.points() != points) {
-            throw new IllegalArgumentException("the Gaussian fit must have more parameters on the same samples");
-        }
-        return GaussianClusterFit.extraParametersPValue(residualSumOfSquares, zones.residualSumOfSquares(),
-                zones.parameters() - PARAMETERS, zones.points() - zones.parameters());
-    }
-
-    /** The unit-area EMG g at offset {@code time − centre} (see the class notes); s = sign of τ. */
+    /** The unit-area EMG g at offset {@code time − centre} ({@link ZoneForm#EXPONENTIAL}); s = sign of τ. */
     static double shape(double offsetS, double sigmaS, double tauS) {
-        double s = Math.signum(tauS);
-        double a = Math.abs(tauS);
-        double x = s * offsetS;
-        double z = (sigmaS / a - x / sigmaS) / SQRT_2;
-        if (z >= 0) {
-            return Math.exp(-0.5 * (x / sigmaS) * (x / sigmaS)) * erfcx(z) / (2 * a);
-        }
-        return Math.exp(0.5 * (sigmaS / a) * (sigmaS / a) - x / a) * Erf.erfc(z) / (2 * a);
-    }
-
-    /**
-     * Scaled complementary error function exp(z²)·erfc(z) for z ≥ 0; beyond
-     * {@link #ERFCX_ASYMPTOTIC_FROM} its asymptotic series (Abramowitz &amp; Stegun 7.1.23).
-     */
-    static double erfcx(double z) {
-        if (z < ERFCX_ASYMPTOTIC_FROM) {
-            return Math.exp(z * z) * Erf.erfc(z);
-        }
-        double inv2 = 1.0 / (2 * z * z);
-        return (1 - inv2 + 3 * inv2 * inv2 - 15 * inv2 * inv2 * inv2) / (z * SQRT_PI);
+        return ZoneForm.EXPONENTIAL.value(Math.signum(tauS) * offsetS, sigmaS, Math.abs(tauS));
     }
 
     /** The EMG and its Jacobian at the offsets u (parameters A, μ, σ, τ). */
@@ -185,16 +169,14 @@ record SkewedZoneFit(double areaTimesS, double centreS, double sigmaS, double ta
             int n = u.length;
             double[] value = new double[n];
             double[][] jacobian = new double[n][PARAMETERS];
+            double[] g = new double[4];
             for (int i = 0; i < n; i++) {
-                double x = s * (u[i] - mu);
-                double g = shape(u[i] - mu, sigma, tau);
-                double phi = Math.exp(-0.5 * (x / sigma) * (x / sigma)) / (sigma * SQRT_2PI);
-                value[i] = area * g;
-                jacobian[i][0] = g;
-                jacobian[i][1] = -s * area * (phi - g) / a;
-                jacobian[i][2] = area * ((sigma / (a * a)) * (g - phi) - phi * x / (sigma * a));
-                jacobian[i][3] = s * area * (g * (x / (a * a) - 1 / a - sigma * sigma / (a * a * a))
-                        + phi * sigma * sigma / (a * a * a));
+                ZoneForm.EXPONENTIAL.evaluate(s * (u[i] - mu), sigma, a, g);
+                value[i] = area * g[0];
+                jacobian[i][0] = g[0];
+                jacobian[i][1] = -s * area * g[1];
+                jacobian[i][2] = area * g[2];
+                jacobian[i][3] = s * area * g[3];
             }
             return new Pair<>(new ArrayRealVector(value, false), new Array2DRowRealMatrix(jacobian, false));
         };

@@ -167,8 +167,10 @@ class SkewedClusterTest {
         // σ 0.25 s and τ -2.5 s: w½ of the EMG is about 1.9 s (its full width at half maximum, computed by
         // the zone itself). A first-moment SD of 0.3 s places the zone; one of 8 s (seen on fits that put
         // two components on one dispersed zone) does not.
-        SkewedClusterFit.Zone placed = new SkewedClusterFit.Zone(1.0, 108.0, 0.25, -2.5, 0.3, 0.3);
-        SkewedClusterFit.Zone lost = new SkewedClusterFit.Zone(1.0, 108.0, 0.25, -2.5, 8.0, 8.0);
+        SkewedClusterFit.Zone placed = new SkewedClusterFit.Zone(1.0, 108.0, 0.25, -2.5, 0.3, 0.3,
+                ZoneForm.EXPONENTIAL);
+        SkewedClusterFit.Zone lost = new SkewedClusterFit.Zone(1.0, 108.0, 0.25, -2.5, 8.0, 8.0,
+                ZoneForm.EXPONENTIAL);
         assertTrue(placed.widthHalfS() > 1.0 && placed.widthHalfS() < 3.0, "w1/2 " + placed.widthHalfS());
         assertTrue(placed.placed());
         assertTrue(!lost.placed());
