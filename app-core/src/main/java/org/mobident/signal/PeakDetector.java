@@ -50,7 +50,7 @@ import org.mobident.trace.Trace;
  *     {@link SignalLimits#SHOULDER_F_TEST_ALPHA}, every zone reaches the minimum height and width,
  *     and no two zones are closer than {@link SignalLimits#SHOULDER_MIN_SEPARATION_SIGMAS} σ; a
  *     shoulder inside a single segment must moreover beat one skewed zone, of whichever form
- *     ({@link OneSkewedZone}: exponentially modified Gaussian or smoothed triangle) fits it
+ *     ({@link SkewedZoneFit}: exponentially modified Gaussian or smoothed triangle) fits it
  *     closer, by the same test. A deeply overlapped region without extra zones keeps the one-per-segment
  *     fit on the same checks. Every zone of an accepted fit is one peak: apex time, its standard
  *     error (s²(JᵀJ)⁻¹) and height from the fit, area H σ √(2π) and width at half height
@@ -348,7 +348,7 @@ public final class PeakDetector {
          * (apex and centre more than {@link SignalLimits#SKEW_CHECK_MIN_WIDTHS} w½ apart) measured
          * well enough to fit (S/N at least the quantitation limit) gets a second estimate of its
          * first moment, that of one skewed zone fitted to its samples, in the form that fits it
-         * better ({@link OneSkewedZone}: μ + τ of an exponentially modified Gaussian, Grushka 1972,
+         * better ({@link SkewedZoneFit#better}: μ + τ of an exponentially modified Gaussian, Grushka 1972,
          * or the centroid of a smoothed triangle; an EMG's μ + τ on a triangular zone is off by up
          * to a second, which had left such zones ambiguous): the model extrapolates the diffuse
          * flank where the moment of the samples stops at the peak's end. The two estimates agree on a zone recorded
@@ -364,7 +364,7 @@ public final class PeakDetector {
                     || !(signalToNoise >= Tolerances.QUANTITATION_LIMIT_SIGNAL_TO_NOISE)) {
                 return byDistance;
             }
-            OneSkewedZone f = OneSkewedZone.better(t, raw, nearestIndex(t, m.startTimeS),
+            SkewedZoneFit f = SkewedZoneFit.better(t, raw, nearestIndex(t, m.startTimeS),
                     nearestIndex(t, m.endTimeS), minSigmaS, maxSigmaS);
             if (f == null || f.direction() != Math.signum(skew)) {
                 return byDistance;
@@ -676,7 +676,7 @@ public final class PeakDetector {
                     chosenStart = start;
                 }
                 if (chosen != null && region.size() == 1) {
-                    OneSkewedZone one = OneSkewedZone.closest(t, raw, first, last, minSigma, maxSigma);
+                    SkewedZoneFit one = SkewedZoneFit.closest(t, raw, first, last, minSigma, maxSigma);
                     if (oneSkewedZone(one, more)) {
                         // the shoulder may be the diffuse flank of one skewed zone, or a second
                         // skewed zone: the split must beat one skewed zone on its own
@@ -684,7 +684,7 @@ public final class PeakDetector {
                                 typicalSigmaS, minSigma, maxSigma, noiseSd);
                         if (split != null && plausible(split) && GaussianClusterFit.extraParametersPValue(
                                 one.residualSumOfSquares(), split.residualSumOfSquares(),
-                                split.parameters() - one.parameters(), split.points() - split.parameters())
+                                split.parameters() - SkewedZoneFit.PARAMETERS, split.points() - split.parameters())
                                 <= SignalLimits.SKEWED_SPLIT_F_TEST_ALPHA) {
                             return skewedZones(split, first, last);
                         }
@@ -755,8 +755,8 @@ public final class PeakDetector {
          * dispersion gives a zone one long flank, which a sum of Gaussians follows with a false extra
          * zone.
          */
-        private static boolean oneSkewedZone(OneSkewedZone skewed, GaussianClusterFit.Result zones) {
-            return skewed != null && zones.parameters() > skewed.parameters()
+        private static boolean oneSkewedZone(SkewedZoneFit skewed, GaussianClusterFit.Result zones) {
+            return skewed != null && zones.parameters() > SkewedZoneFit.PARAMETERS
                     && skewed.pValueAgainst(zones) > SignalLimits.SHOULDER_F_TEST_ALPHA;
         }
 

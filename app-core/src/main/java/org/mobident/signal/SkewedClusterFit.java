@@ -260,12 +260,12 @@ final class SkewedClusterFit {
         if (emg == null || triangle == null) {
             return emg == null ? triangle : emg;
         }
-        // the EMG stays the form unless triangles fit clearly better (OneSkewedZone.clearlyBetter),
+        // the EMG stays the form unless triangles fit clearly better (SkewedZoneFit.clearlyBetter),
         // place every zone as well, and fit down to the noise
         boolean adequate = Double.isNaN(noiseSd) || triangle.residualSumOfSquares()
                 / (n - triangle.parameters()) <= SignalLimits.SKEWED_CLUSTER_MISFIT_RATIO * noiseSd * noiseSd
                 || emg.residualSumOfSquares() >= SignalLimits.TRIANGLE_FORM_MIN_RSS_RATIO * triangle.residualSumOfSquares();
-        return adequate && OneSkewedZone.clearlyBetter(triangle.residualSumOfSquares(), emg.residualSumOfSquares(), n)
+        return adequate && SkewedZoneFit.clearlyBetter(triangle.residualSumOfSquares(), emg.residualSumOfSquares(), n)
                 && (triangle.allPlaced() || !emg.allPlaced()) ? triangle : emg;
     }
 

@@ -7,33 +7,36 @@ import org.apache.commons.math3.linear.ArrayRealVector;
 import org.apache.commons.math3.util.Pair;
 
 /**
- * One skewed zone fitted to the samples of a peak: the exponentially modified Gaussian (EMG,
- * Grushka, Anal. Chem. 44 (1972) 1733), a Gaussian of SD σ convolved with an exponential of time
- * constant |τ|, tailing for τ &gt; 0 and mirrored (fronting) for τ &lt; 0. Electromigration
- * dispersion gives a concentrated CZE zone a sharp and a diffuse flank (Mikkers, Everaerts &amp;
- * Verheggen, J. Chromatogr. 169 (1979) 1); the EMG is the usual simple model of such a zone. It
- * serves one question: whether a peak that the curvature shows as two zones (a shoulder) is not
- * rather one skewed zone, whose long flank a sum of Gaussians can only follow with an extra zone.
+ * One skewed zone fitted to the samples of a peak, in one of the two forms of {@link ZoneForm}:
+ * the exponentially modified Gaussian (EMG, Grushka, Anal. Chem. 44 (1972) 1733) of a mildly
+ * overloaded zone, or the triangle smoothed by diffusion of a strongly overloaded one.
+ * Electromigration dispersion gives a concentrated CZE zone a sharp and a diffuse flank (Mikkers,
+ * Everaerts &amp; Verheggen, J. Chromatogr. 169 (1979) 1). The fit serves two questions: whether a
+ * peak that the curvature shows as two zones (a shoulder) is not rather one skewed zone, whose long
+ * flank a sum of Gaussians can only follow with an extra zone ({@link #closest}); and where the
+ * zone's first moment lies, as a check on the moment of its samples ({@link #better}).
  *
- * <p><b>Model.</b> With x = s(t − μ), s the sign of τ and a = |τ|:
- * {@code f = A/(2a) · exp(σ²/(2a²) − x/a) · erfc((σ/a − x/σ)/√2)}, evaluated where the erfc argument
- * z is not negative as {@code A/(2a) · exp(−x²/(2σ²)) · erfcx(z)} (erfcx(z) = exp(z²) erfc(z)), which
- * neither overflows nor underflows. A is the area. Parameters (A, μ, σ, τ) by Levenberg–Marquardt
- * (Apache Commons Math) with the analytic Jacobian of {@link ZoneForm#EXPONENTIAL}. The skew
- * direction is fixed from the sign of the third central moment of the samples and a kept at least {@link #MIN_TAU_FRACTION} of the
- * starting σ, so the fit never has to pass through τ = 0, where the form degenerates to a
- * Gaussian. Starting values by the method of moments (Grushka 1972: mean μ + τ, variance σ² + τ²,
- * third central moment 2τ³).
+ * <p><b>Model.</b> {@code f(t) = A·g(s(t − μ); σ, |τ|)} with g the unit-area form, s the sign of τ
+ * (tailing +1, fronting −1), μ the zone's sharp side (the EMG's Gaussian centre, the triangle's
+ * front) and |τ| its size, the distance from the sharp side to the first moment μ + τ (the EMG's
+ * time constant, a third of the triangle's base). Parameters (A, μ, σ, τ) by Levenberg–Marquardt
+ * (Apache Commons Math) with the analytic Jacobian of {@link ZoneForm}. The skew direction is fixed
+ * from the sign of the third central moment of the samples and |τ| kept at least
+ * {@link #MIN_TAU_FRACTION} of the starting σ, so the fit never has to pass through τ = 0, where
+ * the form degenerates to a Gaussian. Starting values by the method of moments: mean μ + τ,
+ * variance σ² + v·τ², third central moment c·τ³ (EMG: v = 1, c = 2, Grushka 1972; triangle of base
+ * 3|τ|: v = 1/2, c = 1/5, those of the triangular distribution).
  *
  * @param areaTimesS  A, signal units × s
- * @param centreS     μ, the centre of the Gaussian part, s
+ * @param centreS     μ, the zone's sharp side, s
  * @param sigmaS      σ, s
  * @param tauS        τ, s, signed (negative: fronting)
  * @param residualSumOfSquares RSS of the fit, signal units²
  * @param points      samples fitted
+ * @param form        the zone's form
  */
 record SkewedZoneFit(double areaTimesS, double centreS, double sigmaS, double tauS, double residualSumOfSquares,
-                     int points) implements OneSkewedZone {
+                     int points, ZoneForm form) {
 
     /** Parameters of the model. */
     static final int PARAMETERS = 4;
@@ -43,20 +46,68 @@ record SkewedZoneFit(double areaTimesS, double centreS, double sigmaS, double ta
     private static final int MAX_EVALUATIONS = 400;
     private static final int MAX_ITERATIONS = 200;
 
-    /** The first moment of the zone, μ + τ, s (Grushka 1972). */
-    @Override
-    public double firstMomentS() {
+    /** The first moment of the zone, μ + τ, s (Grushka 1972 for the EMG; the centroid of the triangle). */
+    double firstMomentS() {
         return centreS + tauS;
     }
 
-    @Override
-    public double direction() {
+    /** +1 when the diffuse flank trails (tailing), −1 when it leads (fronting). */
+    double direction() {
         return Math.signum(tauS);
     }
 
-    @Override
-    public int parameters() {
-        return PARAMETERS;
+    /**
+     * p-value of the extra-sum-of-squares F-test of this one zone against a fit of several
+     * Gaussian zones to the same samples: the probability of an improvement at least as large if
+     * one skewed zone were the truth. The models are not nested, so the test is approximate
+     * (Bates &amp; Watts, Nonlinear Regression Analysis and Its Applications, 1988, §3.5; from memory);
+     * it is used only to keep a split that the data clearly ask for.
+     */
+    double pValueAgainst(GaussianClusterFit.Result zones) {
+        if (zones.points() != points) {
+            throw new IllegalArgumentException("the Gaussian fit must have more parameters on the same samples");
+        }
+        return GaussianClusterFit.extraParametersPValue(residualSumOfSquares, zones.residualSumOfSquares(),
+                zones.parameters() - PARAMETERS, zones.points() - zones.parameters());
+    }
+
+    /**
+     * The form that describes the zone, fitted to {@code v[first..last]}, or null when neither
+     * fits: the triangle when it lowers n·ln(RSS) by at least
+     * {@link SignalLimits#TRIANGLE_FORM_MIN_GAIN} (both forms have four parameters), the EMG
+     * otherwise. For the zone's first moment.
+     */
+    static SkewedZoneFit better(double[] t, double[] v, int first, int last, double minSigmaS, double maxSigmaS) {
+        SkewedZoneFit emg = fit(ZoneForm.EXPONENTIAL, t, v, first, last, minSigmaS, maxSigmaS);
+        SkewedZoneFit triangle = fit(ZoneForm.TRIANGLE, t, v, first, last, minSigmaS, maxSigmaS);
+        if (emg == null || triangle == null) {
+            return emg == null ? triangle : emg;
+        }
+        return clearlyBetter(triangle.residualSumOfSquares, emg.residualSumOfSquares, emg.points) ? triangle : emg;
+    }
+
+    /**
+     * Of the two forms fitted to {@code v[first..last]}, the one with the smaller residual, or null
+     * when neither fits. Against it a split into several zones is judged: the samples are one zone
+     * when either form explains them as well as the split does (two triangles can follow an
+     * exponential flank, and two EMGs a straight one).
+     */
+    static SkewedZoneFit closest(double[] t, double[] v, int first, int last, double minSigmaS, double maxSigmaS) {
+        SkewedZoneFit emg = fit(ZoneForm.EXPONENTIAL, t, v, first, last, minSigmaS, maxSigmaS);
+        SkewedZoneFit triangle = fit(ZoneForm.TRIANGLE, t, v, first, last, minSigmaS, maxSigmaS);
+        if (emg == null || triangle == null) {
+            return emg == null ? triangle : emg;
+        }
+        return triangle.residualSumOfSquares < emg.residualSumOfSquares ? triangle : emg;
+    }
+
+    /**
+     * True when a fit of residual sum of squares {@code rss} beats one of {@code reference} with as
+     * many parameters on the same {@code points} by {@link SignalLimits#TRIANGLE_FORM_MIN_GAIN} in
+     * n·ln(RSS).
+     */
+    static boolean clearlyBetter(double rss, double reference, int points) {
+        return points * Math.log(reference / rss) >= SignalLimits.TRIANGLE_FORM_MIN_GAIN;
     }
 
     /**
@@ -94,8 +145,13 @@ record SkewedZoneFit(double areaTimesS, double centreS, double sigmaS, double ta
         return new double[] {area, m1, m2, m3};
     }
 
+    /** Fits one EMG to {@code v[first..last]}; see {@link #fit(ZoneForm, double[], double[], int, int, double, double)}. */
+    static SkewedZoneFit fit(double[] t, double[] v, int first, int last, double minSigmaS, double maxSigmaS) {
+        return fit(ZoneForm.EXPONENTIAL, t, v, first, last, minSigmaS, maxSigmaS);
+    }
+
     /**
-     * Fits one EMG to {@code v[first..last]}.
+     * Fits one zone of {@code form} to {@code v[first..last]}.
      *
      * @param t         sample times, s
      * @param v         baseline-corrected signal, peak up
@@ -103,7 +159,8 @@ record SkewedZoneFit(double areaTimesS, double centreS, double sigmaS, double ta
      * @param maxSigmaS largest σ allowed, s
      * @return the fit, or null when the samples show no skew, are too few, or the fit fails
      */
-    static SkewedZoneFit fit(double[] t, double[] v, int first, int last, double minSigmaS, double maxSigmaS) {
+    static SkewedZoneFit fit(ZoneForm form, double[] t, double[] v, int first, int last, double minSigmaS,
+                             double maxSigmaS) {
         int n = last - first + 1;
         if (n <= PARAMETERS + 1) {
             return null;
@@ -125,13 +182,11 @@ record SkewedZoneFit(double areaTimesS, double centreS, double sigmaS, double ta
         double m2 = moments[2];
         double m3 = moments[3];
         double sign = Math.signum(m3);
-        double tau0 = sign * Math.cbrt(Math.abs(m3) / 2);
-        double sigma0 = Math.sqrt(Math.max(m2 - tau0 * tau0, 0.25 * m2));
+        double size0 = Math.cbrt(Math.abs(m3) / form.thirdMomentPerCubedSize());
+        double sigma0 = Math.sqrt(Math.max(m2 - form.variancePerSquaredSize() * size0 * size0, 0.25 * m2));
         sigma0 = Math.min(maxSigmaS, Math.max(minSigmaS, sigma0));
         double minTau = MIN_TAU_FRACTION * sigma0;
-        if (Math.abs(tau0) < minTau) {
-            tau0 = sign * minTau;
-        }
+        double tau0 = sign * Math.max(minTau, size0);
         double[] start = {area, m1 - tau0, sigma0, tau0};
         ParameterValidator validator = p -> {
             double[] q = p.toArray();
@@ -141,14 +196,13 @@ record SkewedZoneFit(double areaTimesS, double centreS, double sigmaS, double ta
             q[3] = sign * Math.min(span, Math.max(minTau, sign * q[3]));
             return new ArrayRealVector(q, false);
         };
-        LevenbergMarquardt.Solution solution = LevenbergMarquardt.fit(start, model(u), target, validator,
+        LevenbergMarquardt.Solution solution = LevenbergMarquardt.fit(start, model(u, form), target, validator,
                 MAX_EVALUATIONS, MAX_ITERATIONS, false);
         if (solution == null) {
             return null;
         }
         double[] p = solution.point();
-        double rss = solution.rss();
-        return new SkewedZoneFit(p[0], ref + p[1], p[2], p[3], rss, n);
+        return new SkewedZoneFit(p[0], ref + p[1], p[2], p[3], solution.rss(), n, form);
     }
 
     /** The unit-area EMG g at offset {@code time − centre} ({@link ZoneForm#EXPONENTIAL}); s = sign of τ. */
@@ -156,8 +210,8 @@ record SkewedZoneFit(double areaTimesS, double centreS, double sigmaS, double ta
         return ZoneForm.EXPONENTIAL.value(Math.signum(tauS) * offsetS, sigmaS, Math.abs(tauS));
     }
 
-    /** The EMG and its Jacobian at the offsets u (parameters A, μ, σ, τ). */
-    private static MultivariateJacobianFunction model(double[] u) {
+    /** One zone of {@code form} and its Jacobian at the offsets u (parameters A, μ, σ, τ). */
+    private static MultivariateJacobianFunction model(double[] u, ZoneForm form) {
         return point -> {
             double[] p = point.toArray();
             double area = p[0];
@@ -171,7 +225,7 @@ record SkewedZoneFit(double areaTimesS, double centreS, double sigmaS, double ta
             double[][] jacobian = new double[n][PARAMETERS];
             double[] g = new double[4];
             for (int i = 0; i < n; i++) {
-                ZoneForm.EXPONENTIAL.evaluate(s * (u[i] - mu), sigma, a, g);
+                form.evaluate(s * (u[i] - mu), sigma, a, g);
                 value[i] = area * g[0];
                 jacobian[i][0] = g[0];
                 jacobian[i][1] = -s * area * g[1];

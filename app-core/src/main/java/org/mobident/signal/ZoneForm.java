@@ -21,7 +21,7 @@ enum ZoneForm {
      * ∂g/∂σ = (σ/a²)(g − φ) − φx/(σa), ∂g/∂a = g(x/a² − 1/a − σ²/a³) + φσ²/a³ (differentiated
      * here from the definition).
      */
-    EXPONENTIAL {
+    EXPONENTIAL(1.0, 2.0) {
         @Override
         double value(double x, double sigma, double a) {
             double z = (sigma / a - x / sigma) / SQRT_2;
@@ -52,7 +52,7 @@ enum ZoneForm {
      * ∂g/∂x = (2/L)·[φ(β)/σ − D/L], ∂g/∂σ = (2/L)·[E/L − β·φ(β)/σ],
      * ∂g/∂L = −g/L + 2(xD − σE)/L³, and ∂g/∂a = 3·∂g/∂L.
      */
-    TRIANGLE {
+    TRIANGLE(0.5, 0.2) {
         @Override
         double value(double x, double sigma, double a) {
             double base = TRIANGLE_BASE_PER_SIZE * a;
@@ -78,6 +78,26 @@ enum ZoneForm {
             out[3] = TRIANGLE_BASE_PER_SIZE * (-g / base + 2 * (x * d - sigma * e) / (base * base * base));
         }
     };
+
+    private final double variancePerSquaredSize;
+    private final double thirdMomentPerCubedSize;
+
+    ZoneForm(double variancePerSquaredSize, double thirdMomentPerCubedSize) {
+        this.variancePerSquaredSize = variancePerSquaredSize;
+        this.thirdMomentPerCubedSize = thirdMomentPerCubedSize;
+    }
+
+    /** What the skew adds to the Gaussian's variance, per a²: 1 for the EMG (Grushka 1972), 1/2 for
+     *  the triangle (a right triangle of base L has variance L²/18, and L = 3a). */
+    double variancePerSquaredSize() {
+        return variancePerSquaredSize;
+    }
+
+    /** The third central moment per a³: 2 for the EMG (Grushka 1972), 1/5 for the triangle (a right
+     *  triangle of base L has L³/135). */
+    double thirdMomentPerCubedSize() {
+        return thirdMomentPerCubedSize;
+    }
 
     /** The triangle's base per unit of size: its centroid lies a third of the base behind the front. */
     static final double TRIANGLE_BASE_PER_SIZE = 3.0;
