@@ -18,7 +18,8 @@ import org.mobident.trace.Detection;
  */
 class SkewedClusterTest {
 
-    private static void addEmg(double[] t, double[] y, double area, double firstMomentS, double sigmaS, double tauS) {
+    /** Adds an EMG of {@code area} whose first moment is at {@code firstMomentS}. */
+    static void addEmg(double[] t, double[] y, double area, double firstMomentS, double sigmaS, double tauS) {
         double centre = firstMomentS - tauS; // Grushka 1972: first moment = t_G + τ
         for (int i = 0; i < t.length; i++) {
             y[i] += area * SkewedZoneFit.shape(t[i] - centre, sigmaS, tauS);

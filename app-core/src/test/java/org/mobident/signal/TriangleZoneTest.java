@@ -161,11 +161,8 @@ class TriangleZoneTest {
         // the pair of SkewedClusterTest drawn as EMGs: the triangles must not take it over
         double[] t = Synthetic.regularTimes(85, 0.04, 750);
         double[] y = new double[t.length];
-        for (double[] z : new double[][] {{2.4, 103.66, 0.30, -3.6}, {0.30, 104.70, 0.30, -1.0}}) {
-            for (int i = 0; i < t.length; i++) {
-                y[i] += z[0] * SkewedZoneFit.shape(t[i] - (z[1] - z[3]), z[2], z[3]);
-            }
-        }
+        SkewedClusterTest.addEmg(t, y, 2.4, 103.66, 0.30, -3.6);
+        SkewedClusterTest.addEmg(t, y, 0.30, 104.70, 0.30, -1.0);
         Synthetic.addNoise(y, 0.002, 11);
         SkewedClusterFit.Result fit = SkewedClusterFit.fit(t, y, 0, t.length - 1, new double[] {105.24, 106.72},
                 0.4, 0.05, 4.0, 0.002);
