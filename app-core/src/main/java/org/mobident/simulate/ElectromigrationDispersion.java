@@ -37,7 +37,9 @@ public record ElectromigrationDispersion(double coIonMobility, double strength, 
          * concentration-overloaded zones). The triangle's base is 3τ, so that its first moment lies
          * τ from the front, as the EMG's lies τ after its Gaussian centre.
          */
-        TRIANGLE
+        TRIANGLE,
+        /** No skew at all: every zone Gaussian, as in a sample diluted far below the background. */
+        NONE
     }
 
     /** Exponentially modified zones. */

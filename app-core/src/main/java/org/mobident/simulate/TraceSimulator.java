@@ -158,7 +158,8 @@ public final class TraceSimulator {
         double sigma = sigmaS(centre, plates);
         double tau = 0;
         boolean fronting = false;
-        if (dispersion != null && mobility != 0 && Math.signum(mobility) == Math.signum(dispersion.coIonMobility())) {
+        if (dispersion != null && dispersion.shape() != ElectromigrationDispersion.Shape.NONE && mobility != 0
+                && Math.signum(mobility) == Math.signum(dispersion.coIonMobility())) {
             double mismatch = Math.abs(mobility - dispersion.coIonMobility()) / Math.abs(dispersion.coIonMobility());
             tau = strength * centre * mismatch;
             boolean faster = Math.abs(mobility) > Math.abs(dispersion.coIonMobility());

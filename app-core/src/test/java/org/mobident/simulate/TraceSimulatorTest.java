@@ -248,6 +248,17 @@ class TraceSimulatorTest {
         assertTrue(bend(exponential, middle, d) > 0.1, "EMG bends by " + bend(exponential, middle, d));
     }
 
+    @Test
+    void withoutSkewEveryZoneIsGaussian() {
+        SimulationSpec spec = normal(Detection.DIRECT).zone("fast", 60, 2, 100_000).build();
+        Trace none = TraceSimulator.simulate("none", spec, new ElectromigrationDispersion(30, 0.02,
+                ElectromigrationDispersion.Shape.NONE));
+        Trace plain = TraceSimulator.simulate("plain", spec);
+        for (int i = 0; i < plain.size(); i++) {
+            assertEquals(plain.signal(i), none.signal(i), 0.0);
+        }
+    }
+
     /** |y(t + d) − 2y(t) + y(t − d)| / |y(t + d) − y(t − d)| on samples k apart, k the nearest to d. */
     private static double bend(Trace tr, double t, double d) {
         int i = tr.indexAtOrAfter(t);
