@@ -67,7 +67,8 @@ public final class SimulateCommand implements Callable<Integer> {
 
     @Option(names = "--skew-shape", paramLabel = "FORM", description = "lab-day: the form of zones skewed by "
             + "electromigration dispersion: exponential (default; exponentially modified Gaussians) or triangle "
-            + "(sharp front, straight diffuse flank, smoothed by diffusion) or none (every zone Gaussian). Zones, times "
+            + "(sharp front, straight diffuse flank, smoothed by diffusion), mixed (triangles where a zone is at least "
+            + "three times as dispersed as the standards, exponential below) or none (every zone Gaussian). Zones, times "
             + "and noise stay the same, "
             + "so a detector can be tried on a zone form it was not built around.")
     String skewShape = "exponential";
@@ -81,11 +82,12 @@ public final class SimulateCommand implements Callable<Integer> {
             case "exponential" -> ElectromigrationDispersion.Shape.EXPONENTIAL;
             case "triangle" -> ElectromigrationDispersion.Shape.TRIANGLE;
             case "none" -> ElectromigrationDispersion.Shape.NONE;
+            case "mixed" -> ElectromigrationDispersion.Shape.MIXED;
             default -> null;
         };
         if (shape == null) {
             spec.commandLine().getErr().println("mobident simulate: unknown --skew-shape '" + skewShape
-                    + "'; choose exponential, triangle or none");
+                    + "'; choose exponential, triangle, mixed or none");
             return ExitCodes.USAGE;
         }
         var request = new SimulateRuns.Request(scenario, libraryFile != null, count, points, seed, out, overwrite,

@@ -39,7 +39,22 @@ public record ElectromigrationDispersion(double coIonMobility, double strength, 
          */
         TRIANGLE,
         /** No skew at all: every zone Gaussian, as in a sample diluted far below the background. */
-        NONE
+        NONE,
+        /**
+         * Each zone as its overload makes it: an exponentially modified Gaussian while its
+         * dispersion strength is below {@link #TRIANGLE_FROM_STRENGTH_RATIO} times the common one,
+         * a smoothed triangle from there on (a modelling choice: mild overload skews a zone, strong
+         * overload makes it triangular).
+         */
+        MIXED
+    }
+
+    /** Under {@link Shape#MIXED}, zones at least this many times as dispersed as the common strength are triangles. */
+    public static final double TRIANGLE_FROM_STRENGTH_RATIO = 3.0;
+
+    /** True when a zone of dispersion {@code zoneStrength} is drawn as a triangle. */
+    public boolean triangular(double zoneStrength) {
+        return shape == Shape.TRIANGLE || (shape == Shape.MIXED && zoneStrength >= TRIANGLE_FROM_STRENGTH_RATIO * strength);
     }
 
     /** Exponentially modified zones. */

@@ -168,7 +168,7 @@ public final class TraceSimulator {
             fronting = faster == migratesTowardsDetector;
         }
         boolean skewed = tau > NEGLIGIBLE_TAU_RATIO * sigma;
-        boolean triangle = skewed && dispersion.shape() == ElectromigrationDispersion.Shape.TRIANGLE;
+        boolean triangle = skewed && dispersion.triangular(strength);
         double reachBefore = GAUSSIAN_REACH_SIGMAS * sigma + (skewed ? (fronting ? EXPONENTIAL_REACH_TAUS : 1) * tau : 0);
         double reachAfter = GAUSSIAN_REACH_SIGMAS * sigma + (skewed ? (fronting ? 1 : EXPONENTIAL_REACH_TAUS) * tau : 0);
         int from = lowerIndex(time, centre - reachBefore);

@@ -249,6 +249,24 @@ class TraceSimulatorTest {
     }
 
     @Test
+    void mixedDrawsStronglyOverloadedZonesAsTriangles() {
+        // the common strength is 0.004; a zone of 0.02 (5 times) is a triangle, one of 0.008 (2 times)
+        // an EMG: each trace equals the one drawn in that form alone
+        for (double own : new double[] {0.02, 0.008}) {
+            SimulationSpec spec = normal(Detection.DIRECT)
+                    .zone(new SimulatedZone("fast", 60, 2, 100_000, own)).build();
+            Trace mixed = TraceSimulator.simulate("m", spec, new ElectromigrationDispersion(30, 0.004,
+                    ElectromigrationDispersion.Shape.MIXED));
+            ElectromigrationDispersion.Shape expected = own >= 3 * 0.004 ? ElectromigrationDispersion.Shape.TRIANGLE
+                    : ElectromigrationDispersion.Shape.EXPONENTIAL;
+            Trace alone = TraceSimulator.simulate("a", spec, new ElectromigrationDispersion(30, 0.004, expected));
+            for (int i = 0; i < alone.size(); i++) {
+                assertEquals(alone.signal(i), mixed.signal(i), 0.0, "strength " + own);
+            }
+        }
+    }
+
+    @Test
     void withoutSkewEveryZoneIsGaussian() {
         SimulationSpec spec = normal(Detection.DIRECT).zone("fast", 60, 2, 100_000).build();
         Trace none = TraceSimulator.simulate("none", spec, new ElectromigrationDispersion(30, 0.02,
