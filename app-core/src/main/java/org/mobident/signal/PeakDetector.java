@@ -675,11 +675,14 @@ public final class PeakDetector {
                     chosen = more;
                     chosenStart = start;
                 }
-                if (chosen != null && region.size() == 1) {
+                if (region.size() == 1) {
                     SkewedZoneFit one = SkewedZoneFit.closest(t, raw, first, last, minSigma, maxSigma);
-                    if (oneSkewedZone(one, more)) {
-                        // the shoulder may be the diffuse flank of one skewed zone, or a second
-                        // skewed zone: the split must beat one skewed zone on its own
+                    // the shoulder may be the diffuse flank of one skewed zone, or a second skewed
+                    // zone: where one skewed zone explains the peak as well as the Gaussians do, or
+                    // the Gaussians found no plausible pair (two skewed zones a width apart, whose
+                    // sum Gaussians cannot follow), the split into skewed zones must beat one skewed
+                    // zone on its own
+                    if (chosen == null ? one != null : oneSkewedZone(one, more)) {
                         SkewedClusterFit.Result split = SkewedClusterFit.fit(t, raw, first, last, start,
                                 typicalSigmaS, minSigma, maxSigma, noiseSd);
                         if (split != null && plausible(split) && GaussianClusterFit.extraParametersPValue(
@@ -688,7 +691,9 @@ public final class PeakDetector {
                                 <= SignalLimits.SKEWED_SPLIT_F_TEST_ALPHA) {
                             return skewedZones(split, first, last);
                         }
-                        return null;
+                        if (chosen != null) {
+                            return null;
+                        }
                     }
                 }
             }
