@@ -51,7 +51,9 @@ import org.mobident.trace.Trace;
  *     and no two zones are closer than {@link SignalLimits#SHOULDER_MIN_SEPARATION_SIGMAS} σ; a
  *     shoulder inside a single segment must moreover beat one skewed zone, of whichever form
  *     ({@link SkewedZoneFit}: exponentially modified Gaussian or smoothed triangle) fits it
- *     closer, by the same test. A deeply overlapped region without extra zones keeps the one-per-segment
+ *     closer, by the same test; where the Gaussians find no plausible pair there (two skewed zones
+ *     a width apart), two skewed zones must beat the one at
+ *     {@link SignalLimits#SKEWED_SPLIT_F_TEST_ALPHA}. A deeply overlapped region without extra zones keeps the one-per-segment
  *     fit on the same checks. Every zone of an accepted fit is one peak: apex time, its standard
  *     error (s²(JᵀJ)⁻¹) and height from the fit, area H σ √(2π) and width at half height
  *     2.3548 σ from the fitted Gaussian, start and end at the time where the neighbouring zone

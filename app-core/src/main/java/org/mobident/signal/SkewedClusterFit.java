@@ -25,8 +25,10 @@ import org.apache.commons.math3.util.Pair;
  *
  * <p><b>Model.</b> {@code f(t) = Σ_k A_k g(s(t − μ_k); σ, a_k)} with g the unit-area form of {@link
  * ZoneForm} and s = ±1 the common direction (tailing +1, fronting −1; both directions and both
- * forms are fitted, and the fit that places every zone with the smallest residual is kept: a sum of
- * EMGs follows a triangle's straight flank with a zone too many): zones one or two per cent apart
+ * forms are fitted; of each form the fit that places every zone with the smallest residual, and the
+ * EMGs unless the triangles are clearly better, as {@link #fit(double[], double[], int, int,
+ * double[], double, double, double, double)} says: a sum of EMGs follows a triangle's straight
+ * flank with its zones misplaced, a sum of triangles an EMG's convex one): zones one or two per cent apart
  * sit on the same side of the background co-ion's mobility, so their dispersion has the same
  * direction. The zones are close in time, so diffusion gives them the same σ (a modelling choice
  * that takes a parameter per extra zone away). Parameters by Levenberg–Marquardt (Apache Commons
@@ -211,10 +213,12 @@ final class SkewedClusterFit {
 
     /**
      * As {@link #fit(double[], double[], int, int, double[], double, double, double)}, knowing the
-     * noise SD of the samples: zones are then taken as smoothed triangles only when the triangles
-     * explain the cluster down to the noise (residual variance at most
-     * {@link SignalLimits#SKEWED_CLUSTER_MISFIT_RATIO} times the noise variance). Where neither form
-     * reaches the noise, the zones have some third form, and the EMG, the form the detector was
+     * noise SD of the samples. The zones are taken as smoothed triangles only when the triangles
+     * lower n·ln(RSS) by {@link SignalLimits#TRIANGLE_FORM_MIN_GAIN}, place every zone if the EMGs
+     * do, and either explain the cluster down to the noise (residual variance at most
+     * {@link SignalLimits#SKEWED_CLUSTER_MISFIT_RATIO} times the noise variance) or leave at most
+     * 1/{@link SignalLimits#TRIANGLE_FORM_MIN_RSS_RATIO} of the EMGs' residual. Where neither form
+     * comes near the noise, the zones have some third form, and the EMG, the form the detector was
      * first built and checked with, stays: a sum of triangles, more flexible on a straight flank,
      * was seen to fit such a pair better with its zones in the wrong places.
      *
@@ -262,10 +266,13 @@ final class SkewedClusterFit {
         }
         // the EMG stays the form unless triangles fit clearly better (SkewedZoneFit.clearlyBetter),
         // place every zone as well, and fit down to the noise
-        boolean adequate = Double.isNaN(noiseSd) || triangle.residualSumOfSquares()
-                / (n - triangle.parameters()) <= SignalLimits.SKEWED_CLUSTER_MISFIT_RATIO * noiseSd * noiseSd
-                || emg.residualSumOfSquares() >= SignalLimits.TRIANGLE_FORM_MIN_RSS_RATIO * triangle.residualSumOfSquares();
-        return adequate && SkewedZoneFit.clearlyBetter(triangle.residualSumOfSquares(), emg.residualSumOfSquares(), n)
+        double rssTriangle = triangle.residualSumOfSquares();
+        double rssEmg = emg.residualSumOfSquares();
+        double noiseVariance = noiseSd * noiseSd;
+        boolean adequate = Double.isNaN(noiseSd)
+                || rssTriangle / (n - triangle.parameters()) <= SignalLimits.SKEWED_CLUSTER_MISFIT_RATIO * noiseVariance
+                || rssEmg >= SignalLimits.TRIANGLE_FORM_MIN_RSS_RATIO * rssTriangle;
+        return adequate && SkewedZoneFit.clearlyBetter(rssTriangle, rssEmg, n)
                 && (triangle.allPlaced() || !emg.allPlaced()) ? triangle : emg;
     }
 
@@ -280,7 +287,8 @@ final class SkewedClusterFit {
         return a.residualSumOfSquares() <= b.residualSumOfSquares() ? a : b;
     }
 
-    /** One fit with the skew direction {@code sign} (+1 tailing, −1 fronting) and one form; offsets u from {@code ref}. */
+    /** One fit with the skew direction {@code sign} (+1 tailing, −1 fronting) and one form; offsets u from
+     *  {@code ref}. */
     private static Result fit(double[] u, double[] target, double[] w, double area, double ref, double span,
                               double sign, ZoneForm form, double[] startApexS, double startSigmaS, double minSigmaS,
                               double maxSigmaS) {

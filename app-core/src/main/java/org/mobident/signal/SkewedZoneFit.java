@@ -145,7 +145,8 @@ record SkewedZoneFit(double areaTimesS, double centreS, double sigmaS, double ta
         return new double[] {area, m1, m2, m3};
     }
 
-    /** Fits one EMG to {@code v[first..last]}; see {@link #fit(ZoneForm, double[], double[], int, int, double, double)}. */
+    /** Fits one EMG to {@code v[first..last]}; see
+     *  {@link #fit(ZoneForm, double[], double[], int, int, double, double)}. */
     static SkewedZoneFit fit(double[] t, double[] v, int first, int last, double minSigmaS, double maxSigmaS) {
         return fit(ZoneForm.EXPONENTIAL, t, v, first, last, minSigmaS, maxSigmaS);
     }
