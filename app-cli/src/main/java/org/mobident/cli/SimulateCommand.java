@@ -66,11 +66,11 @@ public final class SimulateCommand implements Callable<Integer> {
     Path out;
 
     @Option(names = "--skew-shape", paramLabel = "FORM", description = "lab-day: the form of zones skewed by "
-            + "electromigration dispersion: exponential (default; exponentially modified Gaussians) or triangle "
-            + "(sharp front, straight diffuse flank, smoothed by diffusion), mixed (triangles where a zone is at least "
-            + "three times as dispersed as the standards, exponential below) or none (every zone Gaussian). Zones, times "
-            + "and noise stay the same, "
-            + "so a detector can be tried on a zone form it was not built around.")
+            + "electromigration dispersion: exponential (default; exponentially modified Gaussians), triangle "
+            + "(sharp front, straight diffuse flank, smoothed by diffusion), mixed (triangles where a zone is at "
+            + "least three times as dispersed as the standards, exponential below) or none (every zone Gaussian). "
+            + "Zones, times and noise stay the same, so a detector can be tried on a zone form it was not built "
+            + "around.")
     String skewShape = "exponential";
 
     @Option(names = "--overwrite", description = "Replace files that already exist.")
