@@ -78,12 +78,7 @@ record SkewedZoneFit(double areaTimesS, double centreS, double sigmaS, double ta
      * otherwise. For the zone's first moment.
      */
     static SkewedZoneFit better(double[] t, double[] v, int first, int last, double minSigmaS, double maxSigmaS) {
-        SkewedZoneFit emg = fit(ZoneForm.EXPONENTIAL, t, v, first, last, minSigmaS, maxSigmaS);
-        SkewedZoneFit triangle = fit(ZoneForm.TRIANGLE, t, v, first, last, minSigmaS, maxSigmaS);
-        if (emg == null || triangle == null) {
-            return emg == null ? triangle : emg;
-        }
-        return clearlyBetter(triangle.residualSumOfSquares, emg.residualSumOfSquares, emg.points) ? triangle : emg;
+        return choose(t, v, first, last, minSigmaS, maxSigmaS, true);
     }
 
     /**
@@ -93,12 +88,21 @@ record SkewedZoneFit(double areaTimesS, double centreS, double sigmaS, double ta
      * exponential flank, and two EMGs a straight one).
      */
     static SkewedZoneFit closest(double[] t, double[] v, int first, int last, double minSigmaS, double maxSigmaS) {
+        return choose(t, v, first, last, minSigmaS, maxSigmaS, false);
+    }
+
+    /** Both forms fitted; the triangle when it is clearly better ({@code preferExponential}) or merely closer. */
+    private static SkewedZoneFit choose(double[] t, double[] v, int first, int last, double minSigmaS,
+                                        double maxSigmaS, boolean preferExponential) {
         SkewedZoneFit emg = fit(ZoneForm.EXPONENTIAL, t, v, first, last, minSigmaS, maxSigmaS);
         SkewedZoneFit triangle = fit(ZoneForm.TRIANGLE, t, v, first, last, minSigmaS, maxSigmaS);
         if (emg == null || triangle == null) {
             return emg == null ? triangle : emg;
         }
-        return triangle.residualSumOfSquares < emg.residualSumOfSquares ? triangle : emg;
+        boolean takeTriangle = preferExponential
+                ? clearlyBetter(triangle.residualSumOfSquares, emg.residualSumOfSquares, emg.points)
+                : triangle.residualSumOfSquares < emg.residualSumOfSquares;
+        return takeTriangle ? triangle : emg;
     }
 
     /**

@@ -218,7 +218,9 @@ public final class TraceSimulator {
      * distribution and density,
      * f(y) = h·[(1 − y/L)(Φ(b) − Φ(a)) + (σ/L)(φ(a) − φ(b))]
      * (the two integrals of the linear flank against the Gaussian, worked out by substituting
-     * u = y − σz).
+     * u = y − σz). Written here apart from the detector's fitted form, as {@link #emgShape} is, so
+     * that the bench and the detector cannot share one mistake; each is checked against a
+     * numerical convolution.
      */
     static double triangleShape(double y, double sigma, double baseS) {
         double h = 2 * sigma * Math.sqrt(2 * Math.PI) / baseS;
