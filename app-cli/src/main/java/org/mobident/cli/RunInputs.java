@@ -22,6 +22,11 @@ public final class RunInputs {
     @Parameters(paramLabel = "TRACE", arity = "0..*", description = "Trace files to process without a run sheet.")
     List<Path> traces = new ArrayList<>();
 
+    @Option(names = "--no-second-look",
+            description = "Do not look again, where the library expects a zone that no peak explains, for a "
+                    + "zone hidden in a larger peak or on its flank.")
+    boolean noSecondLook;
+
     @Mixin
     ConditionOptions conditions;
 
@@ -46,7 +51,8 @@ public final class RunInputs {
             IdentifySettings s = IdentifySettings.defaults()
                     .withMatchSettings(matchSettings)
                     .withPeakSettings(common.peakSettings())
-                    .withReadOptions(common.readOptions());
+                    .withReadOptions(common.readOptions())
+                    .withLookWhereExpected(!noSecondLook);
             return common.threads != null ? s.withThreads(common.threads) : s;
         } catch (IllegalArgumentException e) {
             String option = common.threads != null && common.threads < 1 ? "--threads" : "--min-sn";

@@ -17,6 +17,7 @@ import org.mobident.library.Library;
 import org.mobident.library.LibraryEntry;
 import org.mobident.matching.LibraryMatcher;
 import org.mobident.matching.MatchSettings;
+import org.mobident.matching.MatchWindow;
 import org.mobident.matching.MobilityAdjuster;
 import org.mobident.matching.PeakMatch;
 import org.mobident.matching.RunMatch;
@@ -26,6 +27,7 @@ import org.mobident.mobility.MobilityMath;
 import org.mobident.mobility.MobilityScale;
 import org.mobident.mobility.NeutralMarkerScale;
 import org.mobident.mobility.PhysicalBounds;
+import org.mobident.signal.ExpectedZoneProbe;
 import org.mobident.signal.Peak;
 import org.mobident.signal.PeakDetector;
 import org.mobident.signal.PeakSettings;
@@ -68,6 +70,11 @@ public final class Identifier {
 
     /** Temperatures closer than this are treated as equal (no viscosity conversion), K. */
     static final double SAME_TEMPERATURE_K = 0.05;
+    /** Relative time step of the numerical slope dμ/dt of a run's scale at an expected zone. */
+    static final double EXPECTED_SLOPE_STEP = 1e-4;
+    /** The remark on a peak found by the second look where the library expected a zone. */
+    static final String FOUND_WHERE_EXPECTED = "found by a fitted zone where the library expects one "
+            + "(hidden in a larger peak or on its flank)";
 
     private final Library library;
     private final IdentifySettings settings;
@@ -281,14 +288,15 @@ public final class Identifier {
      * @param peaks   its peaks in order of apex time
      * @param noiseSd its baseline noise SD
      */
-    record Detected(RunSpec run, RunResult failure, List<Peak> peaks, double noiseSd, Trace markerWindow) {
+    record Detected(RunSpec run, RunResult failure, List<Peak> peaks, double noiseSd, Trace markerWindow,
+                    ExpectedZoneProbe probe, List<Peak> foundWhereExpected) {
         Detected(RunSpec run, RunResult failure, List<Peak> peaks, double noiseSd) {
-            this(run, failure, peaks, noiseSd, null);
+            this(run, failure, peaks, noiseSd, null, null, List.of());
         }
 
-        /** The same run with the weak-marker search done: these peaks, no window kept. */
+        /** The same run with the weak-marker search done: these peaks, no window and no probe kept. */
         Detected settled(List<Peak> withMarker) {
-            return new Detected(run, failure, withMarker, noiseSd, null);
+            return new Detected(run, failure, withMarker, noiseSd, null, null, foundWhereExpected);
         }
     }
 
@@ -315,7 +323,8 @@ public final class Identifier {
         RunConditions c = run.conditions();
         Trace window = c.hasMarkerWindow() ? markerWindow(c, trace, analysis.peaks())
                 : c.hasGeometry() ? trace : null;
-        return new Detected(run, null, analysis.peaks(), analysis.noiseSd(), window);
+        return new Detected(run, null, analysis.peaks(), analysis.noiseSd(), window,
+                settings.lookWhereExpected() ? analysis.probe() : null, List.of());
     }
 
     /**
@@ -603,6 +612,19 @@ public final class Identifier {
             }
         }
         rows = CoMigration.remarked(rows, pr -> zoneWidthInMobility(scale, pr.peak(), runTempC, libraryTempC));
+        if (d.probe() != null && match != null && settings.lookWhereExpected()) {
+            // a second look where the library expects zones that no peak explains
+            List<ExpectedZoneProbe.ExpectedZone> expected = expectedZones(rows, prepared, scale, runScale, ms,
+                    runTempC);
+            if (!expected.isEmpty()) {
+                ExpectedZoneProbe.Outcome look = d.probe().lookFor(peaks, expected);
+                if (!look.added().isEmpty()) {
+                    return finishing(new Detected(run, null, look.peaks(), d.noiseSd(), null, null, look.added()),
+                            learned);
+                }
+            }
+        }
+        rows = withFoundRemark(rows, d.foundWhereExpected());
         if (beyond > 0) {
             notes.add(String.format(Locale.ROOT, "%d peak(s) with a mobility beyond ±%.0f units cannot be an ion in "
                     + "water and were not matched", beyond, PhysicalBounds.MAX_ION_MOBILITY));
@@ -628,6 +650,76 @@ public final class Identifier {
         }
         return new Finished(new RunResult(run, null, scale.describe(), scale.eofMobility(), scale, rows, notes,
                 d.noiseSd(), runScale, temperatureFactor), settled);
+    }
+
+    /**
+     * Where the run's scale puts the zones of the library entries that no peak was assigned to: for
+     * entry e, the run mobility a·μ_e + b (the run's scale correction) at the run temperature turned
+     * into a time, with the entry's match window (for a peak measured without error, plus the
+     * correction's own variance) turned into a reach in time through the slope of the scale there.
+     * An entry whose window already holds an unassigned analyte peak or a marker is not looked for
+     * (that peak was judged and left); nor one outside the run.
+     */
+    private static List<ExpectedZoneProbe.ExpectedZone> expectedZones(List<PeakResult> rows, Prepared prepared,
+                                                                      MobilityScale scale, RunScale runScale,
+                                                                      MatchSettings ms, double runTempC) {
+        java.util.Set<String> named = new java.util.HashSet<>();
+        for (PeakResult pr : rows) {
+            if (pr.match().assigned() != null) {
+                named.add(pr.match().assigned());
+            }
+        }
+        List<ExpectedZoneProbe.ExpectedZone> out = new ArrayList<>();
+        List<LibraryEntry> entries = prepared.library().entries();
+        for (int j = 0; j < entries.size(); j++) {
+            LibraryEntry e = entries.get(j);
+            if (named.contains(e.name()) || !Double.isFinite(e.mobility())) {
+                continue;
+            }
+            double atEntry = runScale.factor() * e.mobility() + runScale.offset();
+            // (a run without a temperature is taken at the library's, as the matcher takes it)
+            double runMobility = Double.isNaN(runTempC) ? atEntry : convert(atEntry, e.temperatureOrDefaultC(), runTempC);
+            double timeS = scale.timeS(runMobility);
+            if (!(timeS > 0)) {
+                continue;
+            }
+            double window = runScale.factor() * MatchWindow.halfWidth(e, prepared.spread(), j,
+                    runScale.varianceAt(e.mobility()), ms);
+            double step = EXPECTED_SLOPE_STEP * timeS;
+            double slope = Math.abs(scale.mobility(timeS + step) - scale.mobility(timeS - step)) / (2 * step);
+            double reachS = window / slope;
+            if (!(reachS > 0) || !Double.isFinite(reachS)) {
+                continue;
+            }
+            boolean judged = false;
+            for (PeakResult pr : rows) {
+                boolean left = pr.role() != PeakRole.ANALYTE || pr.match().assigned() == null;
+                judged |= left && Math.abs(pr.peak().migrationTimeS() - timeS) <= reachS;
+            }
+            if (!judged) {
+                out.add(new ExpectedZoneProbe.ExpectedZone(timeS, reachS));
+            }
+        }
+        return out;
+    }
+
+    /** The rows with a remark on each peak found by the second look where the library expected a zone. */
+    private static List<PeakResult> withFoundRemark(List<PeakResult> rows, List<Peak> found) {
+        if (found.isEmpty()) {
+            return rows;
+        }
+        List<PeakResult> out = new ArrayList<>(rows.size());
+        for (PeakResult pr : rows) {
+            boolean mine = false;
+            for (Peak p : found) {
+                mine |= p.apexTimeS() == pr.peak().apexTimeS() && p.height() == pr.peak().height();
+            }
+            String remark = FOUND_WHERE_EXPECTED;
+            out.add(!mine ? pr : new PeakResult(pr.peak(), pr.role(), pr.mobility(), pr.mobilitySd(),
+                    pr.mobilityAtLibraryTemp(), pr.match(), pr.mobilityCorrected(),
+                    pr.note() == null ? remark : pr.note() + "; " + remark));
+        }
+        return out;
     }
 
     /**

@@ -252,8 +252,7 @@ public final class PeakDetector {
             double resolution = Double.NaN;
             Measured neighbour = nearest(reported, k);
             if (neighbour != null) {
-                resolution = RESOLUTION_FACTOR * Math.abs(neighbour.apexTimeS - m.apexTimeS)
-                        / (m.widthHalfS + neighbour.widthHalfS);
+                resolution = resolution(m.apexTimeS, m.widthHalfS, neighbour.apexTimeS, neighbour.widthHalfS);
             }
             double apexTime = m.apexTimeS;
             double plates = PLATE_FACTOR * (apexTime / m.widthHalfS) * (apexTime / m.widthHalfS);
@@ -267,7 +266,11 @@ public final class PeakDetector {
                     m.startTimeS, m.endTimeS, m.height, m.area, correctedArea, m.widthHalfS,
                     plates, resolution, m.signalToNoise, dip));
         }
-        return new TraceAnalysis(peaks, sigma, peakToPeak);
+        double[] rule = expectedWidthRule(reported, sampling);
+        ExpectedZoneProbe probe = new ExpectedZoneProbe(t, raw, concavity, concavitySd, localNoise, correlation,
+                sampling, SignalLimits.FIT_MIN_SIGMA_FACTOR * typicalSigma,
+                SignalLimits.FIT_MAX_SIGMA_FACTOR * typicalSigma, rule[0], rule[1], dip);
+        return new TraceAnalysis(peaks, sigma, peakToPeak, probe);
     }
 
     /**
@@ -321,8 +324,7 @@ public final class PeakDetector {
             int apex = nearestIndex(t, m.apexTimeS);
             int support = (int) Math.ceil(0.5 * SignalLimits.NOISE_SUPPORT_WIDTHS * m.widthHalfS / sampling);
             LocalNoise.Estimate local = noise.around(apex, support, false);
-            long points = Math.max(2, Math.round(SignalLimits.PEAK_TO_PEAK_WINDOW_WIDTHS * m.widthHalfS / sampling) + 1);
-            double peakToPeak = NoiseEstimator.expectedNormalRange(points) * local.rawSd();
+            double peakToPeak = peakToPeak(local, m.widthHalfS, sampling);
             double signalToNoise = 2 * m.height / peakToPeak;
             if (!(signalToNoise >= (significant ? minSignalToNoise : segmentMinSignalToNoise))) {
                 return null;
@@ -416,6 +418,26 @@ public final class PeakDetector {
         }
     }
 
+    /**
+     * The peak-to-peak noise h of a peak of width w½ where the noise is {@code local}: d₂(n)·σ over
+     * n samples of {@link SignalLimits#PEAK_TO_PEAK_WINDOW_WIDTHS} widths.
+     */
+    private static double peakToPeak(LocalNoise.Estimate local, double widthHalfS, double sampling) {
+        long points = Math.max(2, Math.round(SignalLimits.PEAK_TO_PEAK_WINDOW_WIDTHS * widthHalfS / sampling) + 1);
+        return NoiseEstimator.expectedNormalRange(points) * local.rawSd();
+    }
+
+    /** The peak-to-peak noise h of a peak of width w½ whose apex is sample {@code apex} ({@link #peakToPeak}). */
+    static double peakToPeakNoise(LocalNoise noise, int apex, double widthHalfS, double sampling) {
+        int support = (int) Math.ceil(0.5 * SignalLimits.NOISE_SUPPORT_WIDTHS * widthHalfS / sampling);
+        return peakToPeak(noise.around(apex, support, false), widthHalfS, sampling);
+    }
+
+    /** Resolution Rs = 1.18 (t₂ − t₁)/(w½,₁ + w½,₂) of two peaks (Ph. Eur. 2.2.46). */
+    static double resolution(double apexAS, double widthAS, double apexBS, double widthBS) {
+        return RESOLUTION_FACTOR * Math.abs(apexBS - apexAS) / (widthAS + widthBS);
+    }
+
     /** The lag-one correlation ρ = 1 − σ_d²/σ² of the noise from the white-noise equivalent σ_d of
      *  its first differences (Var(y_{i+1} − y_i) = 2σ²(1 − ρ)) and its marginal SD σ, in [0, 0.99]. */
     private static double lagOneCorrelation(double whiteSigma, double sigma) {
@@ -502,18 +524,12 @@ public final class PeakDetector {
     private static List<Measured> withFaintZones(List<Measured> reported, double[] t, double[] raw, boolean[] inPeak,
                                                  List<int[]> spikes, double sampling, LocalNoise localNoise,
                                                  Reporting reporting) {
-        double ratio = widthReference(reported, 1);
+        double[] rule = expectedWidthRule(reported, sampling);
+        double ratio = rule[0];
         if (Double.isNaN(ratio)) {
             return reported; // no width to look for: no quantifiable zone gives it
         }
-        double narrowest = Double.POSITIVE_INFINITY;
-        for (Measured m : reported) {
-            if (m.signalToNoise >= Tolerances.DETECTION_LIMIT_SIGNAL_TO_NOISE) {
-                narrowest = Math.min(narrowest, m.widthHalfS);
-            }
-        }
-        double floor = Math.max(FaintZoneSearch.EARLY_WIDTH_FRACTION * narrowest,
-                FaintZoneSearch.MIN_BOX_SAMPLES * sampling);
+        double floor = rule[1];
         IntToDoubleFunction expected = i -> Math.max(ratio * t[i], floor);
         List<double[]> occupied = new ArrayList<>(reported.size());
         for (Measured m : reported) {
@@ -547,6 +563,23 @@ public final class PeakDetector {
         }
         all.sort((a, b) -> Double.compare(a.apexTimeS, b.apexTimeS));
         return withoutDoubtfulFaintPeaks(all, t[0], t[t.length - 1]);
+    }
+
+    /**
+     * The width expected of a zone at time t, as {@link #withFaintZones} describes it: {w½/t of the
+     * narrower quantifiable zones (NaN when there are none), the floor in s}.
+     */
+    private static double[] expectedWidthRule(List<Measured> reported, double sampling) {
+        double ratio = widthReference(reported, 1);
+        double narrowest = Double.POSITIVE_INFINITY;
+        for (Measured m : reported) {
+            if (m.signalToNoise >= Tolerances.DETECTION_LIMIT_SIGNAL_TO_NOISE) {
+                narrowest = Math.min(narrowest, m.widthHalfS);
+            }
+        }
+        double floor = Math.max(FaintZoneSearch.EARLY_WIDTH_FRACTION * narrowest,
+                FaintZoneSearch.MIN_BOX_SAMPLES * sampling);
+        return new double[] {ratio, floor};
     }
 
     /** w½/t of the run's narrower quantifiable zones: the lower quartile over the reported peaks

@@ -226,6 +226,15 @@ final class SkewedClusterFit {
      */
     static Result fit(double[] t, double[] v, int first, int last, double[] startApexS, double startSigmaS,
                       double minSigmaS, double maxSigmaS, double noiseSd) {
+        return fit(t, v, first, last, startApexS, startSigmaS, minSigmaS, maxSigmaS, noiseSd, 0);
+    }
+
+    /**
+     * As {@link #fit(double[], double[], int, int, double[], double, double, double, double)}, in one
+     * skew direction only when {@code direction} is +1 (tailing) or −1 (fronting), in both when 0.
+     */
+    static Result fit(double[] t, double[] v, int first, int last, double[] startApexS, double startSigmaS,
+                      double minSigmaS, double maxSigmaS, double noiseSd, int direction) {
         int k = startApexS.length;
         int n = last - first + 1;
         int parameters = 1 + 3 * k;
@@ -251,16 +260,18 @@ final class SkewedClusterFit {
         if (!(area > 0)) {
             return null;
         }
+        boolean tailing = direction >= 0;
+        boolean fronting = direction <= 0;
         Result emg = better(
-                fit(u, target, w, area, ref, span, +1, ZoneForm.EXPONENTIAL, startApexS, startSigmaS, minSigmaS,
-                        maxSigmaS),
-                fit(u, target, w, area, ref, span, -1, ZoneForm.EXPONENTIAL, startApexS, startSigmaS, minSigmaS,
-                        maxSigmaS));
+                tailing ? fit(u, target, w, area, ref, span, +1, ZoneForm.EXPONENTIAL, startApexS, startSigmaS,
+                        minSigmaS, maxSigmaS) : null,
+                fronting ? fit(u, target, w, area, ref, span, -1, ZoneForm.EXPONENTIAL, startApexS, startSigmaS,
+                        minSigmaS, maxSigmaS) : null);
         Result triangle = better(
-                fit(u, target, w, area, ref, span, +1, ZoneForm.TRIANGLE, startApexS, startSigmaS, minSigmaS,
-                        maxSigmaS),
-                fit(u, target, w, area, ref, span, -1, ZoneForm.TRIANGLE, startApexS, startSigmaS, minSigmaS,
-                        maxSigmaS));
+                tailing ? fit(u, target, w, area, ref, span, +1, ZoneForm.TRIANGLE, startApexS, startSigmaS,
+                        minSigmaS, maxSigmaS) : null,
+                fronting ? fit(u, target, w, area, ref, span, -1, ZoneForm.TRIANGLE, startApexS, startSigmaS,
+                        minSigmaS, maxSigmaS) : null);
         if (emg == null || triangle == null) {
             return emg == null ? triangle : emg;
         }

@@ -11,9 +11,16 @@ import java.util.List;
  * @param noisePeakToPeak peak-to-peak noise h of the run for a peak of the typical width,
  *                 d₂(n)·noiseSd over 5 typical widths, signal units; each peak's own S/N uses the
  *                 noise where it sits and its own width
+ * @param probe    a second look at the trace at times where zones are expected, or null (it
+ *                 holds the corrected trace: drop the analysis once the look is done)
  */
-public record TraceAnalysis(List<Peak> peaks, double noiseSd, double noisePeakToPeak) {
+public record TraceAnalysis(List<Peak> peaks, double noiseSd, double noisePeakToPeak, ExpectedZoneProbe probe) {
     public TraceAnalysis {
         peaks = List.copyOf(peaks);
+    }
+
+    /** An analysis that cannot look again (no probe). */
+    public TraceAnalysis(List<Peak> peaks, double noiseSd, double noisePeakToPeak) {
+        this(peaks, noiseSd, noisePeakToPeak, null);
     }
 }

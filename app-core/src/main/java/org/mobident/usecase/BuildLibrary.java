@@ -86,7 +86,8 @@ public final class BuildLibrary {
      * of each analyte, with the outliers, unexpected peaks and warnings.
      */
     public BuildResult run(IdentifySettings settings, BuildSettings buildSettings) {
-        List<RunResult> results = new ArrayList<>(new Identifier(guideLibrary(), settings)
+        // the guide library only guides: no zone is looked for where it expects one
+        List<RunResult> results = new ArrayList<>(new Identifier(guideLibrary(), settings.withLookWhereExpected(false))
                 .identifyAll(runs.runs(), BatchProgress.NONE, RunListener.NONE));
         results.addAll(runs.rejected());
         return LibraryBuilder.build(results, mixByRun, sheet, buildSettings, reference, pH, ionicStrengthMm);

@@ -1,0 +1,633 @@
+package org.mobident.signal;
+
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.Comparator;
+import java.util.HashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.Optional;
+import java.util.function.DoubleUnaryOperator;
+import org.apache.commons.math3.distribution.FDistribution;
+import org.mobident.Tolerances;
+
+/**
+ * A second look at one analysed trace, at the times where a zone is expected (a library entry
+ * that the run's other peaks place there) but no peak was reported: a zone hidden on the flank of
+ * a much taller one, or merged with a neighbour into one peak.
+ *
+ * <p><b>Why.</b> Without knowing where to look, a small zone on the steep flank of a zone 10–30
+ * times taller, or a zone less than a width from a neighbour, shows no valley and at most a weak
+ * inflection: the detector's own tests for hidden zones (curvature minima, a split of a cluster
+ * that must beat one zone at F-test 10⁻⁶ over every place the split could go) are strict because
+ * they look everywhere. Knowing the time where the zone would be, one looks once, and the same
+ * extra-sum-of-squares test at a level for one look finds it (the known-position advantage of a
+ * targeted search; the position is still fitted, within the match window).
+ *
+ * <p><b>Test.</b> An expected time is looked at only where the library places the zone about as
+ * sharply as the zone is wide (reach at most {@value #MAX_REACH_WIDTHS} expected widths) and at most
+ * {@value #MAX_NEIGHBOURS} peaks reach it. Around it, over the samples of those peaks (every m-th
+ * sample of a finely sampled run, at most {@value #MAX_FIT_SAMPLES}), the cluster is fitted without
+ * and with one more zone started at the expected time, as Gaussians and, for at most
+ * {@value #MAX_SKEWED_ZONES} zones, as skewed zones in the skew direction of the tallest neighbour
+ * ({@link GaussianClusterFit}, {@link SkewedClusterFit}); each fit keeps the form with the smaller
+ * Bayesian information criterion (Gaussians alone when they already reach the noise). The extra
+ * zone is kept when
+ * <ul>
+ *   <li>the fall of the residual sum of squares passes the extra-sum-of-squares F-test (Bates
+ *       &amp; Watts 1988, §3.5) at {@value #MAX_P_VALUE}, with F divided and the residual degrees
+ *       of freedom reduced by (1 + ρ)/(1 − ρ) for noise of lag-one correlation ρ (the variance
+ *       inflation of correlated samples, see {@link LocalNoise});</li>
+ *   <li>the fit with it explains the samples down to the noise (residual variance at most
+ *       {@link SignalLimits#SKEWED_CLUSTER_MISFIT_RATIO} times the local noise variance), or is a
+ *       fit of skewed zones that leaves at most 1/{@value #MISFIT_EXPLAINED_RATIO} of the residual
+ *       without the zone: a zone added to make up for a shape that no form follows would otherwise
+ *       be taken for an analyte (two Gaussians follow one skewed zone far better than one does);</li>
+ *   <li>its centre lies within the expected time's reach, the fit places it to better than its
+ *       width, its width is {@value #MIN_WIDTH_FACTOR}–{@value #MAX_WIDTH_FACTOR} times the width
+ *       expected at its time, and its S/N is at least the detection limit;</li>
+ *   <li>every neighbour keeps its place (its fitted apex within its own width at half height of
+ *       the reported one).</li>
+ * </ul>
+ * Two cheap screens come first. The expected window must overlap a neighbour's extent, or
+ * the concavity of the signal must have a local maximum of at least
+ * {@value #SCREEN_CONCAVITY_SIGMAS} noise SDs within the reach (a hidden zone makes the signal
+ * concave where it sits). Then, on the residual of the neighbours taken as Gaussians of their measured
+ * apex, height and width, and again on that of their fit alone (once per set of neighbours), a
+ * Gaussian of the expected width, placed anywhere within the reach and scaled to their residual by
+ * linear least squares, must lower that residual at {@value #SCREEN_P_VALUE} (a matched filter on
+ * the residual); the full fits run only where it does.
+ *
+ * <p>A neighbour that held the extra zone inside its extent (a merged pair) is replaced by its own
+ * fitted zone; the others keep their measures. Times and uncertainties of fitted zones are those of
+ * the fit (s²(JᵀJ)⁻¹), widened by √((1 + ρ)/(1 − ρ)) as for the detector's other fitted zones.
+ */
+public final class ExpectedZoneProbe {
+
+    /** Most peaks fitted with the extra zone. */
+    static final int MAX_NEIGHBOURS = 2;
+    /** The level of the extra-sum-of-squares test for one expected zone (a modelling choice: a
+     *  one-sided look at a known time, strict enough that noise seldom passes in a run of tens of looks). */
+    static final double MAX_P_VALUE = 1e-3;
+    /** Where the fit with the extra zone stays above the noise, it must be a fit of skewed zones and
+     *  leave at most this fraction's inverse of the residual without it (a modelling choice: two
+     *  Gaussians follow one skewed zone far better than one Gaussian does, so a Gaussian pair
+     *  that does not reach the noise proves nothing). */
+    static final double MISFIT_EXPLAINED_RATIO = 4.0;
+    /** The least concavity maximum within the reach, noise SDs of the concavity (as for a shoulder). */
+    static final double SCREEN_CONCAVITY_SIGMAS = 2.0;
+    /** The level of the cheap matched-filter test on the residual before the full fit (a screen:
+     *  lenient, the full test decides). */
+    static final double SCREEN_P_VALUE = 0.01;
+    /** The reach of an expected zone at most this many expected widths: a zone is looked for only
+     *  where the library places it about as sharply as the zone is wide (a modelling choice; a wider
+     *  window would let the look fit the zone wherever the trace allows one). */
+    static final double MAX_REACH_WIDTHS = 3.0;
+    /** Most samples of one fit: finer traces are fitted on every m-th sample. */
+    static final int MAX_FIT_SAMPLES = 120;
+    /** Most zones fitted in skewed forms (their fits try 2^K starts per form and direction). */
+    static final int MAX_SKEWED_ZONES = 2;
+    /** ... keeping at least this many samples per expected width at half height. */
+    static final double SAMPLES_PER_WIDTH = 8.0;
+    /** Fitted width at half height of the extra zone, as multiples of the width expected there. */
+    static final double MIN_WIDTH_FACTOR = 0.5;
+    static final double MAX_WIDTH_FACTOR = 4.0;
+    /** The fitted stretch reaches this many expected widths beyond the reach and the neighbours. */
+    static final double MARGIN_WIDTHS = 2.0;
+    /** ... and at most this many expected widths beyond the reach on either side. */
+    static final double MAX_STRETCH_WIDTHS = 10.0;
+
+    /**
+     * A time where a zone is expected.
+     *
+     * @param timeS  the expected centre time, s
+     * @param reachS how far from it the zone's centre may lie, s (&gt; 0)
+     */
+    public record ExpectedZone(double timeS, double reachS) {
+    }
+
+    /**
+     * The peaks after the look.
+     *
+     * @param peaks the peaks in order of apex time, with those found and those refitted
+     * @param added the peaks found at expected times (also in {@code peaks})
+     */
+    public record Outcome(List<Peak> peaks, List<Peak> added) {
+        public Outcome {
+            peaks = List.copyOf(peaks);
+            added = List.copyOf(added);
+        }
+    }
+
+    private final double[] t;
+    private final double[] raw;
+    private final double[] concavity;
+    private final double concavitySd;
+    private final LocalNoise noise;
+    private final double correlation;
+    private final double sampling;
+    private final double minSigmaS;
+    private final double maxSigmaS;
+    private final double widthPerTime;
+    private final double widthFloorS;
+    private final boolean dip;
+
+    ExpectedZoneProbe(double[] t, double[] raw, double[] concavity, double concavitySd, LocalNoise noise,
+                      double correlation, double sampling, double minSigmaS, double maxSigmaS, double widthPerTime,
+                      double widthFloorS, boolean dip) {
+        this.t = t;
+        this.raw = raw;
+        this.concavity = concavity;
+        this.concavitySd = concavitySd;
+        this.noise = noise;
+        this.correlation = correlation;
+        this.sampling = sampling;
+        this.minSigmaS = minSigmaS;
+        this.maxSigmaS = maxSigmaS;
+        this.widthPerTime = widthPerTime;
+        this.widthFloorS = widthFloorS;
+        this.dip = dip;
+    }
+
+    /** The width at half height expected of a zone at a time, s (NaN when the run gives none). */
+    double expectedWidthS(double timeS) {
+        return Math.max(widthPerTime * timeS, widthFloorS);
+    }
+
+    /**
+     * Looks for a zone at each expected time, in order; a zone found joins the peaks that the next
+     * looks see.
+     *
+     * @param peaks    the trace's peaks in order of apex time (as reported by {@link PeakDetector})
+     * @param expected where zones are expected
+     */
+    public Outcome lookFor(List<Peak> peaks, List<ExpectedZone> expected) {
+        List<Peak> current = new ArrayList<>(peaks);
+        List<Peak> added = new ArrayList<>();
+        if (!(widthPerTime > 0) || t.length < SignalLimits.MIN_POINTS) {
+            return new Outcome(current, added);
+        }
+        List<ExpectedZone> order = new ArrayList<>(expected);
+        order.sort(Comparator.comparingDouble(ExpectedZone::timeS));
+        Map<List<Peak>, Optional<Fit>> neighbourFits = new HashMap<>();
+        Map<List<Peak>, Optional<Fit>> skewedFits = new HashMap<>();
+        for (ExpectedZone e : order) {
+            if (!(e.timeS() > t[0] && e.timeS() < t[t.length - 1] && e.reachS() > 0)) {
+                continue;
+            }
+            Found f = look(current, e, neighbourFits, skewedFits);
+            if (f != null) {
+                current.removeAll(f.replaced());
+                current.addAll(f.refitted());
+                current.add(f.zone());
+                current.sort(Comparator.comparingDouble(Peak::apexTimeS));
+                added.add(f.zone());
+            }
+        }
+        if (added.isEmpty()) {
+            return new Outcome(peaks, added);
+        }
+        List<Peak> resolved = withResolutions(current);
+        List<Peak> addedNow = new ArrayList<>();
+        for (Peak p : resolved) {
+            for (Peak a : added) {
+                if (p.apexTimeS() == a.apexTimeS() && p.height() == a.height()) {
+                    addedNow.add(p);
+                }
+            }
+        }
+        return new Outcome(resolved, addedNow);
+    }
+
+    /** A zone found: the new peak, the neighbours it replaces and their refitted versions. */
+    private record Found(Peak zone, List<Peak> replaced, List<Peak> refitted) {
+    }
+
+    /** One fitted zone in common terms. */
+    private record Zone(double apexS, double apexSdS, double centreS, double centreSdS, double height, double area,
+                        double widthHalfS, boolean placed) {
+    }
+
+    private Found look(List<Peak> peaks, ExpectedZone e, Map<List<Peak>, Optional<Fit>> neighbourFits,
+                       Map<List<Peak>, Optional<Fit>> skewedFits) {
+        double expectedWidth = expectedWidthS(e.timeS());
+        if (!(expectedWidth > 0)) {
+            return null;
+        }
+        if (e.reachS() > MAX_REACH_WIDTHS * expectedWidth) {
+            return null;
+        }
+        double lo = e.timeS() - e.reachS() - MARGIN_WIDTHS * expectedWidth;
+        double hi = e.timeS() + e.reachS() + MARGIN_WIDTHS * expectedWidth;
+        List<Peak> neighbours = new ArrayList<>();
+        boolean under = false;
+        for (Peak p : peaks) {
+            if (p.endTimeS() >= lo && p.startTimeS() <= hi) {
+                neighbours.add(p);
+                under |= e.timeS() + e.reachS() >= p.startTimeS() && e.timeS() - e.reachS() <= p.endTimeS();
+            }
+        }
+        if (neighbours.size() > MAX_NEIGHBOURS) {
+            return null;
+        }
+        if (!under && !concaveWithin(e.timeS() - e.reachS(), e.timeS() + e.reachS())) {
+            return null;
+        }
+        double from = lo;
+        double to = hi;
+        for (Peak p : neighbours) {
+            from = Math.min(from, p.startTimeS() - MARGIN_WIDTHS * expectedWidth);
+            to = Math.max(to, p.endTimeS() + MARGIN_WIDTHS * expectedWidth);
+        }
+        from = Math.max(from, e.timeS() - e.reachS() - MAX_STRETCH_WIDTHS * expectedWidth);
+        to = Math.min(to, e.timeS() + e.reachS() + MAX_STRETCH_WIDTHS * expectedWidth);
+        double[][] samples = sampled(from, to, expectedWidth);
+        double[] ft = samples[0];
+        double[] fv = samples[1];
+        int n = ft.length;
+        int k = neighbours.size();
+        if (n < 4 * (k + 1) + 2) {
+            return null;
+        }
+        double[] without = new double[k];
+        double[] with = new double[k + 1];
+        for (int j = 0; j < k; j++) {
+            without[j] = Math.min(ft[n - 1], Math.max(ft[0], neighbours.get(j).apexTimeS()));
+            with[j] = without[j];
+        }
+        with[k] = e.timeS();
+        Arrays.sort(with);
+        double startSigma = expectedWidth / GaussianClusterFit.HALF_WIDTH_PER_SIGMA;
+        // no zone of the fits wider than the widest that takes part: a broad zone would follow what
+        // is left of the baseline instead
+        double widest = MAX_WIDTH_FACTOR * expectedWidth;
+        for (Peak p : neighbours) {
+            widest = Math.max(widest, MAX_WIDTH_FACTOR * p.widthHalfS());
+        }
+        double maxSigma = Math.min(maxSigmaS, Math.max(minSigmaS, widest / GaussianClusterFit.HALF_WIDTH_PER_SIGMA));
+        // the skew direction of the tallest neighbour when it shows one (both otherwise); a zone on
+        // the baseline alone is fitted as a Gaussian (too dilute to be dispersed)
+        int direction = 0;
+        Peak tallest = null;
+        for (Peak p : neighbours) {
+            tallest = tallest == null || p.height() > tallest.height() ? p : tallest;
+        }
+        if (tallest != null && Math.abs(tallest.centreTimeS() - tallest.apexTimeS())
+                >= SignalLimits.SKEW_CHECK_MIN_WIDTHS * tallest.widthHalfS()) {
+            direction = tallest.centreTimeS() > tallest.apexTimeS() ? 1 : -1;
+        }
+        // the variance inflation of correlated noise, on F and on the degrees of freedom
+        double inflation = (1 + correlation) / (1 - correlation);
+        // the cheap test first, on the neighbours' own fit (one per set of neighbours and run)
+        boolean skewedToo = k < MAX_SKEWED_ZONES;
+        int skew = direction;
+        // (Gaussians first; the skewed fit, which costs tens of Gaussian ones, only where the
+        // Gaussians leave a zone-like residual at the expected time and do not reach the noise)
+        if (k > 0 && !residualHoldsZone(ft, fv, Fit.measured(neighbours), e, startSigma, inflation)) {
+            return null; // not even the peaks as measured leave room for a zone there
+        }
+        Optional<Fit> alone = k == 0 ? Optional.of(Fit.empty(fv)) : neighbourFits.computeIfAbsent(neighbours,
+                key -> Optional.ofNullable(neighboursFit(key, expectedWidth, startSigma, maxSigma, false, skew)));
+        if (alone.isEmpty() || !residualHoldsZone(ft, fv, alone.get(), e, startSigma, inflation)) {
+            return null;
+        }
+        if (k > 0 && skewedToo && !adequate(alone.get())) {
+            Optional<Fit> skewedAlone = skewedFits.computeIfAbsent(neighbours,
+                    key -> Optional.ofNullable(neighboursFit(key, expectedWidth, startSigma, maxSigma, true, skew)));
+            if (skewedAlone.isEmpty() || !residualHoldsZone(ft, fv, skewedAlone.get(), e, startSigma, inflation)) {
+                return null;
+            }
+        }
+        Fit reduced = k == 0 ? alone.get() : best(ft, fv, without, startSigma, maxSigma, skewedToo, direction);
+        if (reduced == null) {
+            return null;
+        }
+        Fit full = best(ft, fv, with, startSigma, maxSigma, k > 0, direction);
+        if (full == null || full.zones.size() != k + 1) {
+            return null;
+        }
+        int dof = n - full.parameters;
+        double dofEffective = Math.max(1.0, dof / inflation);
+        double fall = reduced.rss - full.rss;
+        if (!(fall > 0) || !(full.rss > 0)) {
+            return null;
+        }
+        int extra = Math.max(1, full.parameters - reduced.parameters);
+        double f = (fall / extra) / (full.rss / dof) / inflation;
+        double p = 1.0 - new FDistribution(null, extra, dofEffective).cumulativeProbability(f);
+        if (!(p < MAX_P_VALUE)) {
+            return null;
+        }
+        int centreIndex = nearestIndex(e.timeS());
+        int support = (int) Math.ceil(0.5 * SignalLimits.NOISE_SUPPORT_WIDTHS * expectedWidth / sampling);
+        double localSd = noise.around(centreIndex, support, false).rawSd();
+        if (!(full.rss / dof <= SignalLimits.SKEWED_CLUSTER_MISFIT_RATIO * localSd * localSd)
+                && !(full.skewed && reduced.rss >= MISFIT_EXPLAINED_RATIO * full.rss)) {
+            return null;
+        }
+        // which fitted zone is each neighbour's: nearest apex, in order (both lists are in time order)
+        int extraIndex = extraZone(full.zones, neighbours, e.timeS());
+        if (extraIndex < 0) {
+            return null;
+        }
+        Zone z = full.zones.get(extraIndex);
+        if (!z.placed || Math.abs(z.centreS - e.timeS()) > e.reachS()
+                || z.widthHalfS < MIN_WIDTH_FACTOR * expectedWidth || z.widthHalfS > MAX_WIDTH_FACTOR * expectedWidth) {
+            return null;
+        }
+        double rootInflation = Math.sqrt(inflation);
+        Peak found = peak(z, rootInflation, z.apexS - 1.5 * z.widthHalfS, z.apexS + 1.5 * z.widthHalfS);
+        if (!(found.signalToNoise() >= Tolerances.DETECTION_LIMIT_SIGNAL_TO_NOISE)) {
+            return null;
+        }
+        List<Peak> replaced = new ArrayList<>();
+        List<Peak> refitted = new ArrayList<>();
+        int j = 0;
+        for (int i = 0; i < full.zones.size(); i++) {
+            if (i == extraIndex) {
+                continue;
+            }
+            Peak old = neighbours.get(j++);
+            Zone own = full.zones.get(i);
+            if (Math.abs(own.apexS - old.apexTimeS()) > old.widthHalfS()) {
+                return null; // the fit moved a neighbour: not the same peaks with one zone more
+            }
+            if (z.centreS > old.startTimeS() && z.centreS < old.endTimeS()) {
+                // the new zone lay inside this peak: the peak is split at the crossing of the two zones
+                double cut = 0.5 * (own.apexS + z.apexS);
+                double start = own.apexS < z.apexS ? old.startTimeS() : cut;
+                double end = own.apexS < z.apexS ? cut : old.endTimeS();
+                replaced.add(old);
+                refitted.add(peak(own, rootInflation, start, end));
+            }
+        }
+        if (found.startTimeS() < t[0] || found.endTimeS() > t[t.length - 1]) {
+            return null;
+        }
+        return new Found(found, replaced, refitted);
+    }
+
+    /** The samples from one time to another, every m-th on a finely sampled run (at most
+     *  {@value #MAX_FIT_SAMPLES}, keeping {@value #SAMPLES_PER_WIDTH} per expected width): {times, values}. */
+    private double[][] sampled(double fromS, double toS, double expectedWidth) {
+        int first = Math.max(0, lowerIndex(fromS));
+        int last = Math.min(t.length - 1, lowerIndex(toS));
+        int stride = (int) Math.max(1, Math.min(Math.ceil((last - first + 1.0) / MAX_FIT_SAMPLES),
+                Math.floor(expectedWidth / (SAMPLES_PER_WIDTH * sampling))));
+        int n = Math.max(0, (last - first) / stride + 1);
+        double[] ft = new double[n];
+        double[] fv = new double[n];
+        for (int i = 0; i < n; i++) {
+            ft[i] = t[first + i * stride];
+            fv[i] = raw[first + i * stride];
+        }
+        return new double[][] {ft, fv};
+    }
+
+    /** The fit of the neighbours alone over their own samples (their extents and a margin), or null. */
+    private Fit neighboursFit(List<Peak> neighbours, double expectedWidth, double startSigma, double maxSigma,
+                              boolean skewedToo, int direction) {
+        double from = Double.POSITIVE_INFINITY;
+        double to = Double.NEGATIVE_INFINITY;
+        for (Peak p : neighbours) {
+            from = Math.min(from, p.startTimeS() - MARGIN_WIDTHS * expectedWidth);
+            to = Math.max(to, p.endTimeS() + MARGIN_WIDTHS * expectedWidth);
+        }
+        double[][] samples = sampled(from, to, expectedWidth);
+        if (samples[0].length < 4 * neighbours.size() + 2) {
+            return null;
+        }
+        double[] apexes = new double[neighbours.size()];
+        for (int j = 0; j < apexes.length; j++) {
+            apexes[j] = neighbours.get(j).apexTimeS();
+        }
+        return best(samples[0], samples[1], apexes, startSigma, maxSigma, skewedToo, direction);
+    }
+
+    /**
+     * The cheap test before the fit with the extra zone: a Gaussian of the expected width placed
+     * anywhere within the reach (steps of half its SD) and scaled by linear least squares to the
+     * residual of the fit without it lowers the residual sum of squares significantly at
+     * {@value #SCREEN_P_VALUE} (F-test with one parameter, the correlation inflation as in the
+     * full test; a matched filter on the residual).
+     */
+    private static boolean residualHoldsZone(double[] ft, double[] fv, Fit reduced, ExpectedZone e, double sigma,
+                                             double inflation) {
+        int n = ft.length;
+        double[] r = new double[n];
+        for (int i = 0; i < n; i++) {
+            r[i] = fv[i] - reduced.model.applyAsDouble(ft[i]);
+        }
+        double bestFall = 0;
+        double step = 0.5 * sigma;
+        for (double at = e.timeS() - e.reachS(); at <= e.timeS() + e.reachS() + 1e-9 * step; at += step) {
+            double rg = 0;
+            double gg = 0;
+            for (int i = 0; i < n; i++) {
+                double z = (ft[i] - at) / sigma;
+                if (Math.abs(z) < 5) {
+                    double g = Math.exp(-0.5 * z * z);
+                    rg += r[i] * g;
+                    gg += g * g;
+                }
+            }
+            if (rg > 0 && gg > 0) {
+                bestFall = Math.max(bestFall, rg * rg / gg);
+            }
+        }
+        double rss = 0;
+        for (double x : r) {
+            rss += x * x;
+        }
+        int dof = n - reduced.parameters - 1;
+        if (!(bestFall > 0) || dof < 1 || !(rss > bestFall)) {
+            return bestFall > 0 && dof >= 1;
+        }
+        double f = bestFall / ((rss - bestFall) / dof) / inflation;
+        double p = 1.0 - new FDistribution(null, 1, Math.max(1.0, dof / inflation)).cumulativeProbability(f);
+        return p < SCREEN_P_VALUE;
+    }
+
+    /** The index of the zone in {@code zones} (k + 1 of them) that no neighbour claims; −1 if unclear. */
+    private static int extraZone(List<Zone> zones, List<Peak> neighbours, double expectedS) {
+        // the zones in time order; leaving out zone i must pair the rest with the neighbours in order.
+        // Of the choices, the one whose pairs lie closest (sum of apex distances), ties to the zone
+        // nearest the expected time
+        int best = -1;
+        double bestCost = Double.POSITIVE_INFINITY;
+        for (int i = 0; i < zones.size(); i++) {
+            double cost = 0;
+            int j = 0;
+            for (int m = 0; m < zones.size(); m++) {
+                if (m == i) {
+                    continue;
+                }
+                cost += Math.abs(zones.get(m).apexS - neighbours.get(j++).apexTimeS());
+            }
+            cost += 1e-9 * Math.abs(zones.get(i).centreS - expectedS);
+            if (cost < bestCost) {
+                bestCost = cost;
+                best = i;
+            }
+        }
+        return best;
+    }
+
+    /** A peak from a fitted zone, with its S/N measured as the detector measures it. */
+    private Peak peak(Zone z, double rootInflation, double startS, double endS) {
+        int apex = nearestIndex(z.apexS);
+        double peakToPeak = PeakDetector.peakToPeakNoise(noise, apex, z.widthHalfS, sampling);
+        double sn = 2 * z.height / peakToPeak;
+        double plates = PeakDetector.PLATE_FACTOR * (z.apexS / z.widthHalfS) * (z.apexS / z.widthHalfS);
+        return new Peak(apex, z.apexS, z.apexSdS * rootInflation, z.centreS, z.centreSdS * rootInflation,
+                Math.max(t[0], startS), Math.min(t[t.length - 1], endS), z.height, z.area,
+                z.apexS > 0 ? z.area / z.apexS : Double.NaN, z.widthHalfS, plates, Double.NaN, sn, dip);
+    }
+
+    /** A fit in common terms, with its residual and parameter count. */
+    private record Fit(List<Zone> zones, double rss, int parameters, int points, DoubleUnaryOperator model,
+                       boolean skewed) {
+
+        static Fit empty(double[] v) {
+            double rss = 0;
+            for (double x : v) {
+                rss += x * x;
+            }
+            return new Fit(List.of(), rss, 0, v.length, x -> 0.0, false);
+        }
+
+        /** The peaks as Gaussians of their measured apex, height and width, not fitted (a cheap
+         *  stand-in for the screen: a fit only lowers the residual it leaves). */
+        static Fit measured(List<Peak> peaks) {
+            double[] apex = new double[peaks.size()];
+            double[] height = new double[peaks.size()];
+            double[] sigma = new double[peaks.size()];
+            for (int j = 0; j < apex.length; j++) {
+                apex[j] = peaks.get(j).apexTimeS();
+                height[j] = peaks.get(j).height();
+                sigma[j] = peaks.get(j).widthHalfS() / GaussianClusterFit.HALF_WIDTH_PER_SIGMA;
+            }
+            return new Fit(List.of(), Double.NaN, 3 * apex.length, 0, x -> {
+                double sum = 0;
+                for (int j = 0; j < apex.length; j++) {
+                    double z = (x - apex[j]) / sigma[j];
+                    sum += height[j] * Math.exp(-0.5 * z * z);
+                }
+                return sum;
+            }, false);
+        }
+
+        double bic() {
+            return points * Math.log(rss / points) + parameters * Math.log(points);
+        }
+    }
+
+    /** The Gaussian or the skewed fit of zones started at {@code apexes}, whichever has the smaller BIC. */
+    private Fit best(double[] ft, double[] fv, double[] apexes, double startSigma, double maxSigma, boolean skewedToo,
+                     int direction) {
+        int first = 0;
+        int last = ft.length - 1;
+        Fit gaussian = null;
+        GaussianClusterFit.Result g = GaussianClusterFit.fit(ft, fv, first, last, apexes, startSigma, minSigmaS,
+                maxSigma);
+        if (g != null) {
+            List<Zone> zones = new ArrayList<>();
+            for (GaussianClusterFit.Component c : g.components()) {
+                zones.add(new Zone(c.apexTimeS(), c.apexTimeSdS(), c.apexTimeS(), c.apexTimeSdS(), c.height(), c.area(),
+                        c.widthHalfS(), c.apexTimeSdS() < c.widthHalfS()));
+            }
+            List<GaussianClusterFit.Component> parts = g.components();
+            gaussian = new Fit(zones, g.residualSumOfSquares(), g.parameters(), g.points(), x -> {
+                double sum = 0;
+                for (GaussianClusterFit.Component c : parts) {
+                    sum += c.value(x);
+                }
+                return sum;
+            }, false);
+        }
+        double noiseSd = noise.global().rawSd();
+        if (gaussian != null && adequate(gaussian)) {
+            return gaussian; // Gaussians follow the samples down to the noise: no skewed form needed
+        }
+        if (apexes.length > MAX_SKEWED_ZONES || !skewedToo) {
+            return gaussian;
+        }
+        Fit skewed = null;
+        SkewedClusterFit.Result s = SkewedClusterFit.fit(ft, fv, first, last, apexes, startSigma, minSigmaS,
+                maxSigma, noiseSd, direction);
+        if (s != null) {
+            List<Zone> zones = new ArrayList<>();
+            for (SkewedClusterFit.Zone c : s.zones()) {
+                double apex = c.apexTimeS();
+                zones.add(new Zone(apex, c.centreSdS(), c.firstMomentS(), c.firstMomentSdS(), c.value(apex),
+                        c.areaTimesS(), c.widthHalfS(), c.placed()));
+            }
+            zones.sort(Comparator.comparingDouble(Zone::apexS));
+            List<SkewedClusterFit.Zone> parts = s.zones();
+            skewed = new Fit(zones, s.residualSumOfSquares(), s.parameters(), s.points(), x -> {
+                double sum = 0;
+                for (SkewedClusterFit.Zone c : parts) {
+                    sum += c.value(x);
+                }
+                return sum;
+            }, true);
+        }
+        if (gaussian == null || skewed == null) {
+            return gaussian == null ? skewed : gaussian;
+        }
+        return skewed.bic() < gaussian.bic() ? skewed : gaussian;
+    }
+
+    /** True when a fit leaves a residual variance of at most
+     *  {@link SignalLimits#SKEWED_CLUSTER_MISFIT_RATIO} times the run's noise variance. */
+    private boolean adequate(Fit f) {
+        double noiseSd = noise.global().rawSd();
+        return f.rss / Math.max(1, f.points - f.parameters) <= SignalLimits.SKEWED_CLUSTER_MISFIT_RATIO * noiseSd * noiseSd;
+    }
+
+    /** True when the concavity has a local maximum of at least the screen level between two times. */
+    private boolean concaveWithin(double fromS, double toS) {
+        int from = Math.max(1, lowerIndex(fromS));
+        int to = Math.min(t.length - 2, lowerIndex(toS) + 1);
+        double level = SCREEN_CONCAVITY_SIGMAS * concavitySd;
+        for (int i = from; i <= to; i++) {
+            double c = concavity[i];
+            if (c >= level && c >= concavity[i - 1] && c >= concavity[i + 1]) {
+                return true;
+            }
+        }
+        return false;
+    }
+
+    /** The peaks with their resolution to the nearest neighbour measured again. */
+    private static List<Peak> withResolutions(List<Peak> peaks) {
+        List<Peak> out = new ArrayList<>(peaks.size());
+        for (int k = 0; k < peaks.size(); k++) {
+            Peak m = peaks.get(k);
+            Peak neighbour = null;
+            for (int j = Math.max(0, k - 1); j <= Math.min(peaks.size() - 1, k + 1); j++) {
+                if (j != k && (neighbour == null
+                        || Math.abs(peaks.get(j).apexTimeS() - m.apexTimeS()) < Math.abs(neighbour.apexTimeS() - m.apexTimeS()))) {
+                    neighbour = peaks.get(j);
+                }
+            }
+            double resolution = neighbour == null ? Double.NaN
+                    : PeakDetector.resolution(m.apexTimeS(), m.widthHalfS(), neighbour.apexTimeS(), neighbour.widthHalfS());
+            out.add(new Peak(m.apexIndex(), m.apexTimeS(), m.apexTimeSdS(), m.centreTimeS(), m.centreTimeSdS(),
+                    m.startTimeS(), m.endTimeS(), m.height(), m.area(), m.correctedArea(), m.widthHalfS(), m.plates(),
+                    resolution, m.signalToNoise(), m.dip()));
+        }
+        return out;
+    }
+
+    /** Index of the last sample at or before a time (0 when before the first). */
+    private int lowerIndex(double timeS) {
+        int i = Arrays.binarySearch(t, timeS);
+        return i >= 0 ? i : Math.max(0, -i - 2);
+    }
+
+    private int nearestIndex(double timeS) {
+        int i = lowerIndex(timeS);
+        return i + 1 < t.length && t[i + 1] - timeS < timeS - t[i] ? i + 1 : i;
+    }
+}

@@ -1,0 +1,111 @@
+package org.mobident.signal;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertNotNull;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.util.List;
+import org.junit.jupiter.api.Test;
+import org.mobident.trace.Detection;
+import org.mobident.trace.Trace;
+
+/**
+ * The second look at the times where the library expects a zone ({@link ExpectedZoneProbe}). The
+ * traces are sums of Gaussian zones placed by construction (a Gaussian of SD σ has its maximum and
+ * its first moment at its centre and a width at half height of 2√(2 ln 2)·σ), with white noise of
+ * SD 1, so every position and height is known exactly.
+ */
+class ExpectedZoneProbeTest {
+
+    /** Zone SD, s: w½ = 2.3548 × 0.5 = 1.18 s. */
+    private static final double SIGMA_S = 0.5;
+    /** The hidden zone's centre, 1.3 s after the tall zone's: Rs = 1.18 × 1.3 / (2 × 1.18) ≈ 0.65. */
+    private static final double HIDDEN_S = 101.3;
+
+    /** A trace with isolated zones that give the run's widths, a zone 300 noise SDs tall at 100 s and,
+     *  when {@code hiddenHeight > 0}, a small zone on its falling flank. */
+    private static Trace trace(double hiddenHeight, long seed) {
+        double[] t = Synthetic.regularTimes(0, 0.2, 1000);
+        double[] y = new double[t.length];
+        Synthetic.addGaussian(t, y, 40, 80, SIGMA_S);
+        Synthetic.addGaussian(t, y, 60, 60, SIGMA_S);
+        Synthetic.addGaussian(t, y, 150, 70, SIGMA_S);
+        Synthetic.addGaussian(t, y, 100, 300, SIGMA_S);
+        if (hiddenHeight > 0) {
+            Synthetic.addGaussian(t, y, HIDDEN_S, hiddenHeight, SIGMA_S);
+        }
+        Synthetic.addNoise(y, 1.0, seed);
+        return Synthetic.trace(t, y);
+    }
+
+    private static boolean reported(List<Peak> peaks, double timeS, double toleranceS) {
+        for (Peak p : peaks) {
+            if (Math.abs(p.migrationTimeS() - timeS) < toleranceS) {
+                return true;
+            }
+        }
+        return false;
+    }
+
+    @Test
+    void findsTheZoneHiddenOnTheFlankWhereItIsExpected() {
+        int found = 0;
+        for (long seed = 1; seed <= 5; seed++) {
+            TraceAnalysis a = PeakDetector.analyse(trace(30, seed), Detection.DIRECT, PeakSettings.DEFAULT);
+            assertNotNull(a.probe());
+            if (reported(a.peaks(), HIDDEN_S, 0.5)) {
+                continue; // the detector saw it without help: nothing for the probe to show
+            }
+            ExpectedZoneProbe.Outcome o = a.probe().lookFor(a.peaks(),
+                    List.of(new ExpectedZoneProbe.ExpectedZone(HIDDEN_S + 0.2, 0.8)));
+            assertEquals(1, o.added().size(), "seed " + seed);
+            Peak z = o.added().get(0);
+            // by construction: centre 101.3 s, height 30, w½ 1.18 s
+            assertEquals(HIDDEN_S, z.migrationTimeS(), 0.25, "seed " + seed);
+            assertEquals(30, z.height(), 10, "seed " + seed);
+            assertEquals(2.3548 * SIGMA_S, z.widthHalfS(), 0.4, "seed " + seed);
+            assertEquals(a.peaks().size() + 1, o.peaks().size());
+            assertTrue(o.peaks().contains(z));
+            found++;
+        }
+        assertTrue(found >= 3, "the hidden zone was left to the probe in only " + found + " of 5 traces");
+    }
+
+    @Test
+    void addsNothingWhereNoZoneIs() {
+        // the same tall zone without the small one: the test at 1e-3 per look keeps noise out
+        for (long seed = 1; seed <= 12; seed++) {
+            TraceAnalysis a = PeakDetector.analyse(trace(0, seed), Detection.DIRECT, PeakSettings.DEFAULT);
+            ExpectedZoneProbe.Outcome o = a.probe().lookFor(a.peaks(), List.of(
+                    new ExpectedZoneProbe.ExpectedZone(HIDDEN_S, 0.8),
+                    new ExpectedZoneProbe.ExpectedZone(99.0, 0.8),
+                    new ExpectedZoneProbe.ExpectedZone(120.0, 0.8)));
+            assertTrue(o.added().isEmpty(), "seed " + seed + ": " + o.added());
+            assertEquals(a.peaks(), o.peaks());
+        }
+    }
+
+    @Test
+    void doesNotPullAZoneFromOutsideTheReach() {
+        // the hidden zone is there, but 2.3 s from where the library puts one (reach 0.8 s)
+        for (long seed = 1; seed <= 5; seed++) {
+            TraceAnalysis a = PeakDetector.analyse(trace(30, seed), Detection.DIRECT, PeakSettings.DEFAULT);
+            ExpectedZoneProbe.Outcome o = a.probe().lookFor(a.peaks(),
+                    List.of(new ExpectedZoneProbe.ExpectedZone(HIDDEN_S + 2.3, 0.8)));
+            for (Peak p : o.added()) {
+                assertTrue(Math.abs(p.migrationTimeS() - (HIDDEN_S + 2.3)) <= 0.8, "seed " + seed + ": " + p);
+            }
+            assertTrue(o.added().isEmpty(), "seed " + seed + ": " + o.added());
+        }
+    }
+
+    @Test
+    void doesNotLookWhereTheLibraryPlacesTheZoneOnlyVaguely() {
+        // a window of 5 zone widths either side: where the trace allows a zone anywhere, none is fitted
+        TraceAnalysis a = PeakDetector.analyse(trace(30, 2), Detection.DIRECT, PeakSettings.DEFAULT);
+        double reach = (ExpectedZoneProbe.MAX_REACH_WIDTHS + 2) * 2.3548 * SIGMA_S;
+        ExpectedZoneProbe.Outcome o = a.probe().lookFor(a.peaks(),
+                List.of(new ExpectedZoneProbe.ExpectedZone(HIDDEN_S, reach)));
+        assertTrue(o.added().isEmpty());
+    }
+}
