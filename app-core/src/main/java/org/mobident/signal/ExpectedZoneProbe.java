@@ -8,6 +8,7 @@ import java.util.List;
 import java.util.Map;
 import java.util.Optional;
 import java.util.function.DoubleUnaryOperator;
+import java.util.function.ToDoubleBiFunction;
 import org.apache.commons.math3.distribution.FDistribution;
 import org.mobident.Tolerances;
 
@@ -73,7 +74,7 @@ public final class ExpectedZoneProbe {
      *  leave at most this fraction's inverse of the residual without it (a modelling choice: two
      *  Gaussians follow one skewed zone far better than one Gaussian does, so a Gaussian pair
      *  that does not reach the noise proves nothing). */
-    static final double MISFIT_EXPLAINED_RATIO = 4.0;
+    static final double MISFIT_EXPLAINED_RATIO = 3.0;
     /** The least concavity maximum within the reach, noise SDs of the concavity (as for a shoulder). */
     static final double SCREEN_CONCAVITY_SIGMAS = 2.0;
     /** The level of the cheap matched-filter test on the residual before the full fit (a screen:
@@ -536,14 +537,8 @@ public final class ExpectedZoneProbe {
                 zones.add(new Zone(c.apexTimeS(), c.apexTimeSdS(), c.apexTimeS(), c.apexTimeSdS(), c.height(), c.area(),
                         c.widthHalfS(), c.apexTimeSdS() < c.widthHalfS()));
             }
-            List<GaussianClusterFit.Component> parts = g.components();
-            gaussian = new Fit(zones, g.residualSumOfSquares(), g.parameters(), g.points(), x -> {
-                double sum = 0;
-                for (GaussianClusterFit.Component c : parts) {
-                    sum += c.value(x);
-                }
-                return sum;
-            }, false);
+            gaussian = new Fit(zones, g.residualSumOfSquares(), g.parameters(), g.points(),
+                    sumOf(g.components(), GaussianClusterFit.Component::value), false);
         }
         double noiseSd = noise.global().rawSd();
         if (gaussian != null && adequate(gaussian)) {
@@ -563,19 +558,24 @@ public final class ExpectedZoneProbe {
                         c.areaTimesS(), c.widthHalfS(), c.placed()));
             }
             zones.sort(Comparator.comparingDouble(Zone::apexS));
-            List<SkewedClusterFit.Zone> parts = s.zones();
-            skewed = new Fit(zones, s.residualSumOfSquares(), s.parameters(), s.points(), x -> {
-                double sum = 0;
-                for (SkewedClusterFit.Zone c : parts) {
-                    sum += c.value(x);
-                }
-                return sum;
-            }, true);
+            skewed = new Fit(zones, s.residualSumOfSquares(), s.parameters(), s.points(),
+                    sumOf(s.zones(), SkewedClusterFit.Zone::value), true);
         }
         if (gaussian == null || skewed == null) {
             return gaussian == null ? skewed : gaussian;
         }
         return skewed.bic() < gaussian.bic() ? skewed : gaussian;
+    }
+
+    /** The sum of fitted zones as a function of time. */
+    private static <T> DoubleUnaryOperator sumOf(List<T> zones, ToDoubleBiFunction<T, Double> value) {
+        return x -> {
+            double sum = 0;
+            for (T z : zones) {
+                sum += value.applyAsDouble(z, x);
+            }
+            return sum;
+        };
     }
 
     /** True when a fit leaves a residual variance of at most
