@@ -84,6 +84,10 @@ public final class ExpectedZoneProbe {
      *  where the library places it about as sharply as the zone is wide (a modelling choice; a wider
      *  window would let the look fit the zone wherever the trace allows one). */
     static final double MAX_REACH_WIDTHS = 3.0;
+    /** The 0.99 quantile of χ²(1), 6.635 (the lower limit of the 0.99 quantile of F(1, ν), reached
+     *  as ν → ∞; Abramowitz &amp; Stegun 1964, table 26.8, from memory): an F below it fails the
+     *  screen's test at 0.01 without computing the F distribution. */
+    static final double SCREEN_F_FLOOR = 6.634;
     /** Most samples of one fit: finer traces are fitted on every m-th sample. */
     static final int MAX_FIT_SAMPLES = 120;
     /** Most zones fitted in skewed forms (their fits try 2^K starts per form and direction). */
@@ -445,6 +449,9 @@ public final class ExpectedZoneProbe {
             return bestFall > 0 && dof >= 1;
         }
         double f = bestFall / ((rss - bestFall) / dof) / inflation;
+        if (f < SCREEN_F_FLOOR) {
+            return false; // below the limit of F(1, ν) for ν → ∞: p > 0.01 for every ν
+        }
         double p = 1.0 - new FDistribution(null, 1, Math.max(1.0, dof / inflation)).cumulativeProbability(f);
         return p < SCREEN_P_VALUE;
     }

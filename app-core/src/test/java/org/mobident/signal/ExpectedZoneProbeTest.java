@@ -108,4 +108,16 @@ class ExpectedZoneProbeTest {
                 List.of(new ExpectedZoneProbe.ExpectedZone(HIDDEN_S, reach)));
         assertTrue(o.added().isEmpty());
     }
+
+    @Test
+    void theScreensShortcutIsTheLimitOfTheFQuantile() {
+        // χ²(1) 0.99 quantile 6.635 (Abramowitz & Stegun 1964, table 26.8; 2.5758² from the normal
+        // table): F(1, ν) at 0.99 approaches it from above as ν grows, so F below it fails at 0.01
+        assertEquals(6.635, ExpectedZoneProbe.SCREEN_F_FLOOR, 0.001);
+        for (double nu : new double[] {5, 20, 100, 1e4, 1e7}) {
+            double q = new org.apache.commons.math3.distribution.FDistribution(null, 1, nu)
+                    .inverseCumulativeProbability(0.99);
+            assertTrue(q >= ExpectedZoneProbe.SCREEN_F_FLOOR, "nu " + nu + ": " + q);
+        }
+    }
 }
