@@ -710,14 +710,9 @@ public final class Identifier {
         }
         List<PeakResult> out = new ArrayList<>(rows.size());
         for (PeakResult pr : rows) {
-            boolean mine = false;
-            for (Peak p : found) {
-                mine |= p.apexTimeS() == pr.peak().apexTimeS() && p.height() == pr.peak().height();
-            }
-            String remark = FOUND_WHERE_EXPECTED;
-            out.add(!mine ? pr : new PeakResult(pr.peak(), pr.role(), pr.mobility(), pr.mobilitySd(),
-                    pr.mobilityAtLibraryTemp(), pr.match(), pr.mobilityCorrected(),
-                    pr.note() == null ? remark : pr.note() + "; " + remark));
+            out.add(!found.contains(pr.peak()) ? pr : new PeakResult(pr.peak(), pr.role(), pr.mobility(),
+                    pr.mobilitySd(), pr.mobilityAtLibraryTemp(), pr.match(), pr.mobilityCorrected(),
+                    pr.note() == null ? FOUND_WHERE_EXPECTED : pr.note() + "; " + FOUND_WHERE_EXPECTED));
         }
         return out;
     }

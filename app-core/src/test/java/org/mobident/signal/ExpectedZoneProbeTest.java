@@ -92,9 +92,6 @@ class ExpectedZoneProbeTest {
             TraceAnalysis a = PeakDetector.analyse(trace(30, seed), Detection.DIRECT, PeakSettings.DEFAULT);
             ExpectedZoneProbe.Outcome o = a.probe().lookFor(a.peaks(),
                     List.of(new ExpectedZoneProbe.ExpectedZone(HIDDEN_S + 2.3, 0.8)));
-            for (Peak p : o.added()) {
-                assertTrue(Math.abs(p.migrationTimeS() - (HIDDEN_S + 2.3)) <= 0.8, "seed " + seed + ": " + p);
-            }
             assertTrue(o.added().isEmpty(), "seed " + seed + ": " + o.added());
         }
     }
