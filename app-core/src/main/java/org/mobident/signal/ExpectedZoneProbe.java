@@ -56,8 +56,13 @@ import org.mobident.Tolerances;
  * concave where it sits). Then, on the residual of the neighbours taken as Gaussians of their measured
  * apex, height and width, and again on that of their fit alone (once per set of neighbours), a
  * Gaussian of the expected width, placed anywhere within the reach and scaled to their residual by
- * linear least squares, must lower that residual at {@value #SCREEN_P_VALUE} (a matched filter on
- * the residual); the full fits run only where it does.
+ * linear least squares, must take from it more than the noise alone would at 0.01: the fall over
+ * the local noise variance (and the correlation inflation) at least the 0.99 quantile of χ²(1),
+ * {@value #SCREEN_CHI_SQUARE} (a matched filter on the residual). The full fits run only where it
+ * does. The noise, not the residual left, is the yardstick: where the neighbours' stand-in misses
+ * their shape somewhere in the stretch, a residual yardstick would swallow the zone's own fall (a
+ * stand-in that misses lets more looks through, which costs time, not calls: the full test
+ * decides).
  *
  * <p>A neighbour that held the extra zone inside its extent (a merged pair) is replaced by its own
  * fitted zone; the others keep their measures. Times and uncertainties of fitted zones are those of
@@ -77,17 +82,14 @@ public final class ExpectedZoneProbe {
     static final double MISFIT_EXPLAINED_RATIO = 3.0;
     /** The least concavity maximum within the reach, noise SDs of the concavity (as for a shoulder). */
     static final double SCREEN_CONCAVITY_SIGMAS = 2.0;
-    /** The level of the cheap matched-filter test on the residual before the full fit (a screen:
-     *  lenient, the full test decides). */
-    static final double SCREEN_P_VALUE = 0.01;
     /** The reach of an expected zone at most this many expected widths: a zone is looked for only
      *  where the library places it about as sharply as the zone is wide (a modelling choice; a wider
      *  window would let the look fit the zone wherever the trace allows one). */
     static final double MAX_REACH_WIDTHS = 3.0;
-    /** The 0.99 quantile of χ²(1), 6.635 (the lower limit of the 0.99 quantile of F(1, ν), reached
-     *  as ν → ∞; Abramowitz &amp; Stegun 1964, table 26.8, from memory): an F below it fails the
-     *  screen's test at 0.01 without computing the F distribution. */
-    static final double SCREEN_F_FLOOR = 6.634;
+    /** The level of the cheap matched-filter test before the full fits: the 0.99 quantile of χ²(1),
+     *  6.635 (2.5758², the normal 0.995 quantile squared; Abramowitz &amp; Stegun 1964, tables
+     *  26.1 and 26.8, from memory). A screen, lenient at 0.01: the full test decides. */
+    static final double SCREEN_CHI_SQUARE = 6.635;
     /** Most samples of one fit: finer traces are fitted on every m-th sample. */
     static final int MAX_FIT_SAMPLES = 120;
     /** Most zones fitted in skewed forms (their fits try 2^K starts per form and direction). */
@@ -187,6 +189,8 @@ public final class ExpectedZoneProbe {
                 current.add(f.zone());
                 current.sort(Comparator.comparingDouble(Peak::apexTimeS));
                 added.add(f.zone());
+                neighbourFits.clear(); // the stretches of cached fits may have changed with the new peak
+                skewedFits.clear();
             }
         }
         if (added.isEmpty()) {
@@ -244,8 +248,9 @@ public final class ExpectedZoneProbe {
             from = Math.min(from, p.startTimeS() - MARGIN_WIDTHS * expectedWidth);
             to = Math.max(to, p.endTimeS() + MARGIN_WIDTHS * expectedWidth);
         }
-        from = Math.max(from, e.timeS() - e.reachS() - MAX_STRETCH_WIDTHS * expectedWidth);
-        to = Math.min(to, e.timeS() + e.reachS() + MAX_STRETCH_WIDTHS * expectedWidth);
+        double[] outside = outsideBounds(peaks, neighbours, e.timeS());
+        from = Math.max(outside[0], Math.max(from, e.timeS() - e.reachS() - MAX_STRETCH_WIDTHS * expectedWidth));
+        to = Math.min(outside[1], Math.min(to, e.timeS() + e.reachS() + MAX_STRETCH_WIDTHS * expectedWidth));
         double[][] samples = sampled(from, to, expectedWidth);
         double[] ft = samples[0];
         double[] fv = samples[1];
@@ -284,22 +289,26 @@ public final class ExpectedZoneProbe {
         // the variance inflation of correlated noise, on F and on the degrees of freedom
         double inflation = (1 + correlation) / (1 - correlation);
         // the cheap test first, on the neighbours' own fit (one per set of neighbours and run)
+        int centreIndex = nearestIndex(e.timeS());
+        int support = (int) Math.ceil(0.5 * SignalLimits.NOISE_SUPPORT_WIDTHS * expectedWidth / sampling);
+        double localSd = noise.around(centreIndex, support, false).rawSd();
+        double screenVariance = localSd * localSd * inflation;
         boolean skewedToo = k < MAX_SKEWED_ZONES;
         int skew = direction;
         // (Gaussians first; the skewed fit, which costs tens of Gaussian ones, only where the
         // Gaussians leave a zone-like residual at the expected time and do not reach the noise)
-        if (k > 0 && !residualHoldsZone(ft, fv, Fit.measured(neighbours), e, startSigma, inflation)) {
+        if (k > 0 && !residualHoldsZone(ft, fv, Fit.measured(neighbours), e, startSigma, screenVariance)) {
             return null; // not even the peaks as measured leave room for a zone there
         }
         Optional<Fit> alone = k == 0 ? Optional.of(Fit.empty(fv)) : neighbourFits.computeIfAbsent(neighbours,
-                key -> Optional.ofNullable(neighboursFit(key, expectedWidth, startSigma, maxSigma, false, skew)));
-        if (alone.isEmpty() || !residualHoldsZone(ft, fv, alone.get(), e, startSigma, inflation)) {
+                key -> Optional.ofNullable(neighboursFit(key, outside, expectedWidth, startSigma, maxSigma, false, skew)));
+        if (alone.isEmpty() || !residualHoldsZone(ft, fv, alone.get(), e, startSigma, screenVariance)) {
             return null;
         }
         if (k > 0 && skewedToo && !adequate(alone.get())) {
             Optional<Fit> skewedAlone = skewedFits.computeIfAbsent(neighbours,
-                    key -> Optional.ofNullable(neighboursFit(key, expectedWidth, startSigma, maxSigma, true, skew)));
-            if (skewedAlone.isEmpty() || !residualHoldsZone(ft, fv, skewedAlone.get(), e, startSigma, inflation)) {
+                    key -> Optional.ofNullable(neighboursFit(key, outside, expectedWidth, startSigma, maxSigma, true, skew)));
+            if (skewedAlone.isEmpty() || !residualHoldsZone(ft, fv, skewedAlone.get(), e, startSigma, screenVariance)) {
                 return null;
             }
         }
@@ -323,9 +332,6 @@ public final class ExpectedZoneProbe {
         if (!(p < MAX_P_VALUE)) {
             return null;
         }
-        int centreIndex = nearestIndex(e.timeS());
-        int support = (int) Math.ceil(0.5 * SignalLimits.NOISE_SUPPORT_WIDTHS * expectedWidth / sampling);
-        double localSd = noise.around(centreIndex, support, false).rawSd();
         if (!(full.rss / dof <= SignalLimits.SKEWED_CLUSTER_MISFIT_RATIO * localSd * localSd)
                 && !(full.skewed && reduced.rss >= MISFIT_EXPLAINED_RATIO * full.rss)) {
             return null;
@@ -389,15 +395,49 @@ public final class ExpectedZoneProbe {
         return new double[][] {ft, fv};
     }
 
-    /** The fit of the neighbours alone over their own samples (their extents and a margin), or null. */
-    private Fit neighboursFit(List<Peak> neighbours, double expectedWidth, double startSigma, double maxSigma,
-                              boolean skewedToo, int direction) {
+    /**
+     * Where the fitted stretch must stop: at the end of the last peak before the neighbours that
+     * takes no part in the fit, and at the start of the first after them ({start, end}; infinite
+     * where there is none). A flank of such a peak inside the stretch is modelled by no fitted zone:
+     * it would spoil the fits without and with the extra zone alike, and the misfit test would then
+     * refuse a zone that is there.
+     *
+     * @param reference the time that tells before from after when there are no neighbours
+     */
+    private static double[] outsideBounds(List<Peak> peaks, List<Peak> neighbours, double reference) {
+        double first = reference;
+        double last = reference;
+        for (Peak p : neighbours) {
+            first = Math.min(first, p.apexTimeS());
+            last = Math.max(last, p.apexTimeS());
+        }
+        double start = Double.NEGATIVE_INFINITY;
+        double end = Double.POSITIVE_INFINITY;
+        for (Peak p : peaks) {
+            if (neighbours.contains(p)) {
+                continue;
+            }
+            if (p.apexTimeS() < first) {
+                start = Math.max(start, p.endTimeS());
+            } else if (p.apexTimeS() > last) {
+                end = Math.min(end, p.startTimeS());
+            }
+        }
+        return new double[] {start, end};
+    }
+
+    /** The fit of the neighbours alone over their own samples (their extents and a margin, within
+     *  {@code outside}), or null. */
+    private Fit neighboursFit(List<Peak> neighbours, double[] outside, double expectedWidth, double startSigma,
+                              double maxSigma, boolean skewedToo, int direction) {
         double from = Double.POSITIVE_INFINITY;
         double to = Double.NEGATIVE_INFINITY;
         for (Peak p : neighbours) {
             from = Math.min(from, p.startTimeS() - MARGIN_WIDTHS * expectedWidth);
             to = Math.max(to, p.endTimeS() + MARGIN_WIDTHS * expectedWidth);
         }
+        from = Math.max(from, outside[0]);
+        to = Math.min(to, outside[1]);
         double[][] samples = sampled(from, to, expectedWidth);
         if (samples[0].length < 4 * neighbours.size() + 2) {
             return null;
@@ -412,12 +452,15 @@ public final class ExpectedZoneProbe {
     /**
      * The cheap test before the fit with the extra zone: a Gaussian of the expected width placed
      * anywhere within the reach (steps of half its SD) and scaled by linear least squares to the
-     * residual of the fit without it lowers the residual sum of squares significantly at
-     * {@value #SCREEN_P_VALUE} (F-test with one parameter, the correlation inflation as in the
-     * full test; a matched filter on the residual).
+     * residual of the fit without it takes from the residual sum of squares at least
+     * {@value #SCREEN_CHI_SQUARE} times the noise variance (a matched filter on the residual: for
+     * noise alone and a stand-in that follows the neighbours, the fall at one place over the noise
+     * variance is χ²(1)).
+     *
+     * @param noiseVariance the local noise variance, times the variance inflation of correlated noise
      */
     private static boolean residualHoldsZone(double[] ft, double[] fv, Fit reduced, ExpectedZone e, double sigma,
-                                             double inflation) {
+                                             double noiseVariance) {
         int n = ft.length;
         double[] r = new double[n];
         for (int i = 0; i < n; i++) {
@@ -440,20 +483,7 @@ public final class ExpectedZoneProbe {
                 bestFall = Math.max(bestFall, rg * rg / gg);
             }
         }
-        double rss = 0;
-        for (double x : r) {
-            rss += x * x;
-        }
-        int dof = n - reduced.parameters - 1;
-        if (!(bestFall > 0) || dof < 1 || !(rss > bestFall)) {
-            return bestFall > 0 && dof >= 1;
-        }
-        double f = bestFall / ((rss - bestFall) / dof) / inflation;
-        if (f < SCREEN_F_FLOOR) {
-            return false; // below the limit of F(1, ν) for ν → ∞: p > 0.01 for every ν
-        }
-        double p = 1.0 - new FDistribution(null, 1, Math.max(1.0, dof / inflation)).cumulativeProbability(f);
-        return p < SCREEN_P_VALUE;
+        return bestFall >= SCREEN_CHI_SQUARE * noiseVariance;
     }
 
     /** The index of the zone in {@code zones} (k + 1 of them) that no neighbour claims; −1 if unclear. */

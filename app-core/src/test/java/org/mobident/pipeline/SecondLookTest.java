@@ -10,6 +10,8 @@ import java.util.Set;
 import org.junit.jupiter.api.Test;
 import org.mobident.library.Library;
 import org.mobident.library.LibraryEntry;
+import org.mobident.matching.MatchStatus;
+import org.mobident.matching.PeakMatch;
 import org.mobident.simulate.SimulationSpec;
 import org.mobident.simulate.TraceSimulator;
 import org.mobident.trace.Detection;
@@ -88,5 +90,30 @@ class SecondLookTest {
             assertTrue(named(looked, "nitrite") != null, "seed " + seed);
         }
         assertTrue(hidden >= 2, "the pair was split without help in " + (4 - hidden) + " of 4 runs");
+    }
+
+    private static PeakResult call(String name, double confidence, MatchStatus status) {
+        return new PeakResult(null, PeakRole.ANALYTE, -70, 0.1, -70,
+                new PeakMatch(name, confidence, status, null, 0.0, List.of()));
+    }
+
+    @Test
+    void dropsZonesThatTakeANameAwayOrMakeItMuchLessSure() {
+        List<PeakResult> before = List.of(call("nitrite", 0.99, MatchStatus.IDENTIFIED),
+                call("chlorate", 0.60, MatchStatus.AMBIGUOUS), call(null, 1.0, MatchStatus.UNASSIGNED));
+        // a merged pair split: the neighbour's name kept, surer, and one more name
+        assertTrue(Identifier.keepsEveryIdentification(before, List.of(call("nitrite", 0.995, MatchStatus.IDENTIFIED),
+                call("nitrate", 0.95, MatchStatus.IDENTIFIED), call(null, 1.0, MatchStatus.UNASSIGNED))));
+        // a little less sure (odds 99 -> 65.7, within a factor of 2) is kept; ambiguous calls may change
+        assertTrue(Identifier.keepsEveryIdentification(before, List.of(call("nitrite", 0.985, MatchStatus.IDENTIFIED),
+                call("nitrate", 0.9, MatchStatus.IDENTIFIED))));
+        // one zone made into two: the identified name lost, or left ambiguous
+        assertFalse(Identifier.keepsEveryIdentification(before, List.of(call("nitrate", 0.95, MatchStatus.IDENTIFIED),
+                call(null, 1.0, MatchStatus.UNASSIGNED))));
+        assertFalse(Identifier.keepsEveryIdentification(before, List.of(call("nitrite", 0.70, MatchStatus.AMBIGUOUS),
+                call("nitrate", 0.6, MatchStatus.AMBIGUOUS))));
+        // still identified but far less sure: odds 99 -> 13.3, more than halved
+        assertFalse(Identifier.keepsEveryIdentification(before, List.of(call("nitrite", 0.93, MatchStatus.IDENTIFIED),
+                call("nitrate", 0.85, MatchStatus.IDENTIFIED))));
     }
 }
