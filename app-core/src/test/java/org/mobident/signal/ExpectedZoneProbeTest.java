@@ -25,11 +25,20 @@ class ExpectedZoneProbeTest {
     /** A trace with isolated zones that give the run's widths, a zone 300 noise SDs tall at 100 s and,
      *  when {@code hiddenHeight > 0}, a small zone on its falling flank. */
     private static Trace trace(double hiddenHeight, long seed) {
+        return trace(hiddenHeight, seed, 0);
+    }
+
+    /** As {@link #trace(double, long)}, with a zone {@code beforeHeight} tall 4.5 s before the tall one
+     *  (none when 0). */
+    private static Trace trace(double hiddenHeight, long seed, double beforeHeight) {
         double[] t = Synthetic.regularTimes(0, 0.2, 1000);
         double[] y = new double[t.length];
         Synthetic.addGaussian(t, y, 40, 80, SIGMA_S);
         Synthetic.addGaussian(t, y, 60, 60, SIGMA_S);
         Synthetic.addGaussian(t, y, 150, 70, SIGMA_S);
+        if (beforeHeight > 0) {
+            Synthetic.addGaussian(t, y, 95.5, beforeHeight, SIGMA_S);
+        }
         Synthetic.addGaussian(t, y, 100, 300, SIGMA_S);
         if (hiddenHeight > 0) {
             Synthetic.addGaussian(t, y, HIDDEN_S, hiddenHeight, SIGMA_S);
@@ -79,16 +88,7 @@ class ExpectedZoneProbeTest {
         int found = 0;
         int left = 0;
         for (long seed = 1; seed <= 6; seed++) {
-            double[] t = Synthetic.regularTimes(0, 0.2, 1000);
-            double[] y = new double[t.length];
-            Synthetic.addGaussian(t, y, 40, 80, SIGMA_S);
-            Synthetic.addGaussian(t, y, 60, 60, SIGMA_S);
-            Synthetic.addGaussian(t, y, 150, 70, SIGMA_S);
-            Synthetic.addGaussian(t, y, 95.5, 600, SIGMA_S);
-            Synthetic.addGaussian(t, y, 100, 300, SIGMA_S);
-            Synthetic.addGaussian(t, y, HIDDEN_S, 30, SIGMA_S);
-            Synthetic.addNoise(y, 1.0, seed);
-            TraceAnalysis a = PeakDetector.analyse(Synthetic.trace(t, y), Detection.DIRECT, PeakSettings.DEFAULT);
+            TraceAnalysis a = PeakDetector.analyse(trace(30, seed, 600), Detection.DIRECT, PeakSettings.DEFAULT);
             if (reported(a.peaks(), HIDDEN_S, 0.5)) {
                 continue;
             }
