@@ -114,7 +114,13 @@ class SkewedClusterTest {
         Synthetic.addGaussian(t, y, 380.0, 0.1, 0.60);
         Synthetic.addNoise(y, 0.002, 17);
         List<Peak> peaks = PeakDetector.analyse(Synthetic.trace(t, y), Detection.DIRECT, PeakSettings.DEFAULT).peaks();
-        assertEquals(289.2, nearest(peaks, 289.2).centreTimeS(), 0.1, "centre of the tailing zone");
+        Peak zone = nearest(peaks, 289.2);
+        // the walk stops where the zone ends (its tail is down to the noise about 12 s after the
+        // apex), far before the wave's trough at 370 s
+        assertTrue(zone.endTimeS() < 310, "end of the tailing zone: " + zone.endTimeS());
+        // the centre within its stated uncertainty (3 SDs) and a few per cent of its width of the
+        // first moment it was built with
+        assertEquals(289.2, zone.centreTimeS(), Math.min(3 * zone.centreTimeSdS(), 0.15), "centre of the tailing zone");
     }
 
     @Test
