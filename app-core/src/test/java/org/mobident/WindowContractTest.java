@@ -11,14 +11,14 @@ import org.mobident.library.Library;
 import org.mobident.library.LibraryEntry;
 import org.mobident.library.standards.LibraryCheck;
 import org.mobident.matching.LibraryMatcher;
-import org.mobident.matching.MatchSettings;
 import org.mobident.matching.MatchWindow;
 import org.mobident.matching.MobilityAdjuster;
-import org.mobident.matching.PeakMatch;
 import org.mobident.matching.SpreadModel;
 import org.mobident.recheck.RecheckSettings;
 import org.mobident.recheck.Rechecker;
 import org.mobident.report.plot.ToleranceBand;
+import org.mobident.result.PeakMatch;
+import org.mobident.settings.MatchSettings;
 
 /**
  * The window contract: what a user sees is what matching applies. For every entry of a varied

@@ -2,10 +2,10 @@ package org.mobident.cli;
 
 import java.util.List;
 import java.util.Locale;
-import org.mobident.matching.MatchStatus;
-import org.mobident.pipeline.PeakResult;
-import org.mobident.pipeline.PeakRole;
-import org.mobident.pipeline.RunResult;
+import org.mobident.result.MatchStatus;
+import org.mobident.result.PeakResult;
+import org.mobident.result.PeakRole;
+import org.mobident.result.RunResult;
 
 /** The closing line of a batch: "1,000 runs: 998 ok, 2 failed, 7,047 peaks identified in 2.9 s". */
 final class BatchTotals {

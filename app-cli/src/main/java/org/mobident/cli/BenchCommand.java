@@ -6,14 +6,14 @@ import java.util.Locale;
 import java.util.concurrent.Callable;
 import org.mobident.library.Library;
 import org.mobident.library.LibraryCsv;
-import org.mobident.pipeline.IdentifySettings;
+import org.mobident.settings.IdentifySettings;
 import org.mobident.trace.RunSpec;
 import org.mobident.usecase.MeasureStage;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
+import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Spec;
-import picocli.CommandLine.Model.CommandSpec;
 
 /**
  * {@code mobident bench} (hidden): times one stage of a batch on the runs of a sheet, with the
@@ -52,7 +52,7 @@ public final class BenchCommand implements Callable<Integer> {
         Library library = LibraryCsv.read(batch.libraryFile);
         List<RunSpec> runs = batch.inputs.load().runs();
         IdentifySettings settings = batch.inputs.settings(batch.matching.toSettings(
-                org.mobident.matching.MatchSettings.DEFAULT));
+                org.mobident.settings.MatchSettings.DEFAULT));
         MeasureStage.Figures f = MeasureStage.run(stage, library, runs, settings);
         String what = stage == MeasureStage.Stage.READ ? String.format(Locale.ROOT, "%,d points", f.counted())
                 : String.format(Locale.ROOT, "%,d peaks", f.counted());

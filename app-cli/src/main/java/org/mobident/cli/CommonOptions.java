@@ -1,6 +1,6 @@
 package org.mobident.cli;
 
-import org.mobident.signal.PeakSettings;
+import org.mobident.settings.PeakSettings;
 import org.mobident.trace.TimeScale;
 import org.mobident.trace.io.TraceReadOptions;
 import picocli.CommandLine.Option;

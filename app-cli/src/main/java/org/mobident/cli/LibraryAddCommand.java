@@ -3,16 +3,16 @@ package org.mobident.cli;
 import java.nio.file.Path;
 import java.util.concurrent.Callable;
 import org.mobident.library.LibraryCsv;
-import org.mobident.report.library.BuildText;
 import org.mobident.library.standards.BuildWarning;
 import org.mobident.library.standards.MergeResult;
-import org.mobident.matching.MatchSettings;
+import org.mobident.report.library.BuildText;
+import org.mobident.settings.MatchSettings;
 import org.mobident.usecase.AddToLibrary;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
+import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Spec;
-import picocli.CommandLine.Model.CommandSpec;
 
 /** {@code mobident library add}: pools new standards runs into an existing library. */
 @Command(name = "add",

@@ -6,13 +6,13 @@ import java.util.concurrent.Callable;
 import org.mobident.library.Library;
 import org.mobident.library.LibraryCsv;
 import org.mobident.library.standards.BuildSettings;
-import org.mobident.report.library.BuildText;
 import org.mobident.library.standards.BuildWarning;
 import org.mobident.library.standards.LibraryCheck;
+import org.mobident.report.library.BuildText;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
-import picocli.CommandLine.Model.CommandSpec;
 
 /** {@code mobident library check}: reads a library, prints it and says what needs attention. */
 @Command(name = "check",
@@ -40,7 +40,7 @@ public final class LibraryCheckCommand implements Callable<Integer> {
     @Override
     public Integer call() throws Exception {
         Library library = LibraryCsv.read(libraryFile);
-        org.mobident.matching.MatchSettings match = matching.toSettings(org.mobident.matching.MatchSettings.DEFAULT);
+        org.mobident.settings.MatchSettings match = matching.toSettings(org.mobident.settings.MatchSettings.DEFAULT);
         List<BuildWarning> findings = LibraryCheck.check(library, BuildSettings.defaults(), match);
         var out = spec.commandLine().getOut();
         BuildText.write(library, findings, match, out);

@@ -1,6 +1,6 @@
 package org.mobident.cli;
 
-import org.mobident.matching.MatchSettings;
+import org.mobident.settings.MatchSettings;
 import picocli.CommandLine.ArgGroup;
 import picocli.CommandLine.Option;
 

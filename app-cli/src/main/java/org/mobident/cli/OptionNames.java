@@ -3,7 +3,7 @@ package org.mobident.cli;
 import java.util.List;
 import java.util.Map;
 import org.mobident.InputException;
-import org.mobident.pipeline.RunResult;
+import org.mobident.result.RunResult;
 
 /**
  * Run-sheet column names and the options that give the same value, so that a message about a run

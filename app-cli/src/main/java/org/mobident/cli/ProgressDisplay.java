@@ -7,7 +7,7 @@ import java.nio.file.Path;
 import java.util.Locale;
 import java.util.concurrent.TimeUnit;
 import java.util.concurrent.atomic.AtomicInteger;
-import org.mobident.pipeline.BatchProgress;
+import org.mobident.result.BatchProgress;
 
 /**
  * A one-line progress bar on the terminal for a long batch: runs done, rate and time left,

@@ -9,7 +9,7 @@ import org.mobident.library.standards.BuildSettings;
 import org.mobident.library.standards.Grubbs;
 import org.mobident.library.standards.StandardsSheet;
 import org.mobident.library.standards.StandardsSheetReader;
-import org.mobident.matching.MatchSettings;
+import org.mobident.settings.MatchSettings;
 import org.mobident.usecase.BuildLibrary;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;

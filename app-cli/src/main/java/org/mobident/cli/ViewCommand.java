@@ -8,10 +8,10 @@ import java.util.concurrent.Callable;
 import java.util.concurrent.CountDownLatch;
 import org.mobident.InputException;
 import org.mobident.library.LibraryCsv;
-import org.mobident.matching.MatchSettings;
-import org.mobident.pipeline.IdentifySettings;
-import org.mobident.pipeline.RunResult;
 import org.mobident.report.plot.Axis;
+import org.mobident.result.RunResult;
+import org.mobident.settings.IdentifySettings;
+import org.mobident.settings.MatchSettings;
 import org.mobident.trace.RunSpec;
 import org.mobident.trace.io.TraceFiles;
 import org.mobident.usecase.IdentifyBatch;
@@ -19,9 +19,9 @@ import org.mobident.usecase.RunBatch;
 import org.mobident.viewer.Viewer;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
+import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Spec;
-import picocli.CommandLine.Model.CommandSpec;
 
 /** {@code mobident view}: the runs in a window, on the time or the mobility axis. */
 @Command(name = "view",

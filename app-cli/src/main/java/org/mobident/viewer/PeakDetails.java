@@ -2,15 +2,15 @@ package org.mobident.viewer;
 
 import java.util.ArrayList;
 import java.util.List;
-import org.mobident.matching.Candidate;
-import org.mobident.matching.PeakMatch;
-import org.mobident.pipeline.PeakResult;
-import org.mobident.pipeline.PeakRole;
-import org.mobident.pipeline.RunResult;
 import org.mobident.report.ScaleCorrectionText;
 import org.mobident.report.plot.Markup;
 import org.mobident.report.plot.PeakStatus;
-import org.mobident.signal.Peak;
+import org.mobident.result.Candidate;
+import org.mobident.result.Peak;
+import org.mobident.result.PeakMatch;
+import org.mobident.result.PeakResult;
+import org.mobident.result.PeakRole;
+import org.mobident.result.RunResult;
 import org.mobident.summary.RecurringUnknowns;
 import org.mobident.text.NumberText;
 

@@ -2,10 +2,10 @@ package org.mobident.viewer;
 
 import java.util.List;
 import javax.swing.table.AbstractTableModel;
-import org.mobident.pipeline.PeakResult;
-import org.mobident.pipeline.PeakRole;
 import org.mobident.report.plot.PeakStatus;
 import org.mobident.report.plot.PlotModel;
+import org.mobident.result.PeakResult;
+import org.mobident.result.PeakRole;
 
 /** The peaks of the ticked runs as table rows; refilled from the data, never edited. */
 final class PeakTableModel extends AbstractTableModel {

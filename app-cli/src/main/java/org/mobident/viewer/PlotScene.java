@@ -5,14 +5,14 @@ import java.util.Comparator;
 import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
-import org.mobident.mobility.MobilityScale;
-import org.mobident.pipeline.PeakResult;
-import org.mobident.pipeline.RunResult;
 import org.mobident.report.plot.Axis;
 import org.mobident.report.plot.BufferGroups;
 import org.mobident.report.plot.PlotLayout;
 import org.mobident.report.plot.PlotModel;
-import org.mobident.signal.Peak;
+import org.mobident.result.MobilityScale;
+import org.mobident.result.Peak;
+import org.mobident.result.PeakResult;
+import org.mobident.result.RunResult;
 
 /**
  * What one {@link ViewState} of one {@link ViewerData} looks like, before any pixel: the plot

@@ -7,9 +7,9 @@ import java.util.Objects;
 import java.util.concurrent.CountDownLatch;
 import javax.swing.SwingUtilities;
 import org.mobident.library.Library;
-import org.mobident.pipeline.IdentifySettings;
-import org.mobident.pipeline.RunResult;
 import org.mobident.report.plot.Axis;
+import org.mobident.result.RunResult;
+import org.mobident.settings.IdentifySettings;
 import org.mobident.trace.RunSpec;
 import org.mobident.usecase.IdentifyBatch;
 

@@ -4,9 +4,9 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Objects;
 import org.mobident.library.Library;
-import org.mobident.pipeline.PeakResult;
-import org.mobident.pipeline.RunResult;
 import org.mobident.report.plot.ToleranceBand;
+import org.mobident.result.PeakResult;
+import org.mobident.result.RunResult;
 import org.mobident.summary.RecurringUnknowns;
 
 /**

@@ -2,7 +2,7 @@ package org.mobident.viewer;
 
 import java.util.Locale;
 import java.util.Objects;
-import org.mobident.pipeline.RunResult;
+import org.mobident.result.RunResult;
 import org.mobident.trace.RunSpec;
 import org.mobident.trace.Trace;
 

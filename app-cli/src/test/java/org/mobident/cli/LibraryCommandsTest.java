@@ -169,7 +169,7 @@ class LibraryCommandsTest {
         assertTrue(r.out().contains("chloride: mobility -7630.000 is beyond"), r.out());
         // 2.5 apart with SD 0.5: windows overlap (a note, not a warning), yet they can be told apart
         double[] w = org.mobident.library.standards.LibraryCheck.windows(org.mobident.library.LibraryCsv.read(lib),
-                org.mobident.matching.MatchSettings.DEFAULT);
+                org.mobident.settings.MatchSettings.DEFAULT);
         assertTrue(r.out().contains(String.format(java.util.Locale.ROOT, "note: The windows of sulfate (-73.800 ± %.3f) "
                 + "and chloride2 (-76.300 ± %.3f) overlap", w[1], w[3])), r.out());
         assertFalse(r.out().contains("sulfate (-73.800) and chloride2 (-76.300) cannot be told apart"), r.out());

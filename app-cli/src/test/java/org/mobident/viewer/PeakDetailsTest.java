@@ -8,11 +8,11 @@ import java.util.List;
 import java.util.Map;
 import java.util.stream.Collectors;
 import org.junit.jupiter.api.Test;
-import org.mobident.matching.Candidate;
-import org.mobident.matching.MatchStatus;
-import org.mobident.matching.PeakMatch;
-import org.mobident.pipeline.PeakResult;
-import org.mobident.pipeline.PeakRole;
+import org.mobident.result.Candidate;
+import org.mobident.result.MatchStatus;
+import org.mobident.result.PeakMatch;
+import org.mobident.result.PeakResult;
+import org.mobident.result.PeakRole;
 
 class PeakDetailsTest {
 

@@ -9,8 +9,8 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import java.util.List;
 import org.junit.jupiter.api.Test;
 import org.mobident.report.plot.Axis;
-import org.mobident.report.plot.ToleranceBand;
 import org.mobident.report.plot.PlotLayout;
+import org.mobident.report.plot.ToleranceBand;
 
 class PlotSceneTest {
     private static final int W = 900;
@@ -122,17 +122,17 @@ class PlotSceneTest {
     @Test
     void aWarmRunsPeaksSitWhereTheyAreDrawnAtTheLibraryTemperature() {
         ViewerRun early = ViewerFixtures.run("early", 200, true);
-        java.util.List<org.mobident.pipeline.PeakResult> peaks = new java.util.ArrayList<>();
-        for (org.mobident.pipeline.PeakResult p : early.result().peaks()) {
-            peaks.add(new org.mobident.pipeline.PeakResult(p.peak(), p.role(), p.mobility(), p.mobilitySd(),
+        java.util.List<org.mobident.result.PeakResult> peaks = new java.util.ArrayList<>();
+        for (org.mobident.result.PeakResult p : early.result().peaks()) {
+            peaks.add(new org.mobident.result.PeakResult(p.peak(), p.role(), p.mobility(), p.mobilitySd(),
                     0.9 * p.mobility(), p.match()));
         }
-        org.mobident.pipeline.RunResult r = early.result();
-        ViewerRun warm = new ViewerRun(early.spec(), early.trace(), new org.mobident.pipeline.RunResult(r.spec(), null,
+        org.mobident.result.RunResult r = early.result();
+        ViewerRun warm = new ViewerRun(early.spec(), early.trace(), new org.mobident.result.RunResult(r.spec(), null,
                 r.scaleNote(), r.eofMobility(), r.scale(), peaks, r.notes(), r.noiseSd(),
-                org.mobident.matching.RunScale.OFF, 0.9));
+                org.mobident.result.RunScale.OFF, 0.9));
         ViewerData data = new ViewerData(ViewerFixtures.library(), ToleranceBand.matching(ViewerFixtures.library(),
-                org.mobident.matching.MatchSettings.DEFAULT), List.of(warm));
+                org.mobident.settings.MatchSettings.DEFAULT), List.of(warm));
         PlotScene mob = PlotScene.of(data, ViewState.initial(Axis.MOBILITY, List.of(0)));
         // nitrate: −30 at the run temperature, compared with the library as 0.9 × −30 = −27
         assertEquals(-27, mob.spotOf(new PeakRef(0, ViewerFixtures.NITRATE)).x(), 1e-6);

@@ -6,8 +6,8 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.List;
 import org.junit.jupiter.api.Test;
-import org.mobident.matching.MatchSettings;
 import org.mobident.report.plot.ToleranceBand;
+import org.mobident.settings.MatchSettings;
 import org.mobident.summary.RecurringUnknowns;
 
 /** The viewer names the unknowns that recur in its runs, as the batch reports do. */

@@ -5,15 +5,15 @@ import java.util.ArrayList;
 import java.util.List;
 import org.mobident.library.Library;
 import org.mobident.library.LibraryEntry;
-import org.mobident.matching.Candidate;
-import org.mobident.matching.MatchStatus;
-import org.mobident.matching.PeakMatch;
-import org.mobident.mobility.MobilityScale;
-import org.mobident.pipeline.PeakResult;
-import org.mobident.pipeline.PeakRole;
-import org.mobident.pipeline.RunResult;
 import org.mobident.report.plot.ToleranceBand;
-import org.mobident.signal.Peak;
+import org.mobident.result.Candidate;
+import org.mobident.result.MatchStatus;
+import org.mobident.result.MobilityScale;
+import org.mobident.result.Peak;
+import org.mobident.result.PeakMatch;
+import org.mobident.result.PeakResult;
+import org.mobident.result.PeakRole;
+import org.mobident.result.RunResult;
 import org.mobident.trace.Detection;
 import org.mobident.trace.RunConditions;
 import org.mobident.trace.RunSpec;
@@ -142,7 +142,7 @@ final class ViewerFixtures {
      * the height) and one without a scale.
      */
     static ViewerData data() {
-        return new ViewerData(library(), ToleranceBand.matching(library(), org.mobident.matching.MatchSettings.DEFAULT),
+        return new ViewerData(library(), ToleranceBand.matching(library(), org.mobident.settings.MatchSettings.DEFAULT),
                 List.of(run("early", 200, true), run("late", 250, true, 0.5), run("unscaled", 220, false)));
     }
 }

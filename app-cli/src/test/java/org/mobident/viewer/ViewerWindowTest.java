@@ -16,16 +16,16 @@ import javax.swing.KeyStroke;
 import javax.swing.text.View;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
-import org.mobident.matching.Candidate;
-import org.mobident.matching.MatchSettings;
-import org.mobident.matching.MatchStatus;
-import org.mobident.matching.PeakMatch;
-import org.mobident.matching.RunScale;
-import org.mobident.pipeline.PeakResult;
-import org.mobident.pipeline.RunResult;
 import org.mobident.report.plot.Axis;
 import org.mobident.report.plot.PlotModel;
 import org.mobident.report.plot.ToleranceBand;
+import org.mobident.result.Candidate;
+import org.mobident.result.MatchStatus;
+import org.mobident.result.PeakMatch;
+import org.mobident.result.PeakResult;
+import org.mobident.result.RunResult;
+import org.mobident.result.RunScale;
+import org.mobident.settings.MatchSettings;
 
 /** The window's content laid out without a window (headless), as the frame lays it out. */
 class ViewerWindowTest {

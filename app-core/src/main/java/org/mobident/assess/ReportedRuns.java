@@ -10,11 +10,11 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 import org.mobident.InputException;
-import org.mobident.pipeline.RunResult;
 import org.mobident.recheck.PeakTableReader;
 import org.mobident.recheck.PeakTableRow;
 import org.mobident.report.PeakTableCsv;
 import org.mobident.report.PeakTableStatus;
+import org.mobident.result.RunResult;
 
 /** The runs to be scored, from a peak table or from the results of an identification. */
 public final class ReportedRuns {

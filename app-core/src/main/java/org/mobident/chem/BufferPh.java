@@ -1,5 +1,7 @@
 package org.mobident.chem;
 
+import org.mobident.buffer.SpeciesModel;
+
 /**
  * The pH of a buffer of fixed composition at another temperature.
  *

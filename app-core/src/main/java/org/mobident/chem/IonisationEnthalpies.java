@@ -8,6 +8,7 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 import org.mobident.InputException;
+import org.mobident.buffer.SpeciesModel;
 import org.mobident.io.TableReader;
 import org.mobident.io.TableRow;
 import org.mobident.io.TableSpec;

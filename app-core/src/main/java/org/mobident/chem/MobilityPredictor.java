@@ -3,6 +3,10 @@ package org.mobident.chem;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.function.DoubleUnaryOperator;
+import org.mobident.buffer.BufferConditions;
+import org.mobident.buffer.PhInterval;
+import org.mobident.buffer.PredictionUncertainty;
+import org.mobident.buffer.SpeciesModel;
 import org.mobident.mobility.MobilityMath;
 
 /**

@@ -2,6 +2,8 @@ package org.mobident.chem;
 
 import java.util.ArrayList;
 import java.util.List;
+import org.mobident.buffer.BufferConditions;
+import org.mobident.buffer.SpeciesModel;
 
 /**
  * The temperature dependence of acidity constants: the integrated van 't Hoff equation with a

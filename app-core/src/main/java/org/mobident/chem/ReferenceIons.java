@@ -6,6 +6,8 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import org.mobident.InputException;
+import org.mobident.buffer.BufferConditions;
+import org.mobident.buffer.SpeciesModel;
 import org.mobident.library.Library;
 import org.mobident.library.LibraryCsv;
 import org.mobident.library.LibraryEntry;

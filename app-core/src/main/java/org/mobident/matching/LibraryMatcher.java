@@ -16,6 +16,12 @@ import org.jgrapht.graph.DefaultWeightedEdge;
 import org.jgrapht.graph.SimpleWeightedGraph;
 import org.mobident.library.Library;
 import org.mobident.library.LibraryEntry;
+import org.mobident.result.Candidate;
+import org.mobident.result.MatchStatus;
+import org.mobident.result.PeakMatch;
+import org.mobident.result.RunScale;
+import org.mobident.settings.MatchSettings;
+import org.mobident.settings.ScalePrior;
 
 /**
  * Matches the peaks of one run to library analytes by effective mobility, one analyte to at most

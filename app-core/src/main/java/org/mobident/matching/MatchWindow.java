@@ -3,6 +3,7 @@ package org.mobident.matching;
 import org.apache.commons.math3.distribution.TDistribution;
 import org.apache.commons.math3.special.Erf;
 import org.mobident.library.LibraryEntry;
+import org.mobident.settings.MatchSettings;
 
 /**
  * The one definition of a library entry's match window: a peak is a candidate for an entry only

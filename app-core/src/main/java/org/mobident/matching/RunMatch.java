@@ -1,6 +1,9 @@
 package org.mobident.matching;
 
 import java.util.List;
+import org.mobident.result.Candidate;
+import org.mobident.result.PeakMatch;
+import org.mobident.result.RunScale;
 
 /**
  * The matching outcome for one run.

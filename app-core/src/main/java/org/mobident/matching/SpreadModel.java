@@ -7,6 +7,7 @@ import org.apache.commons.math3.analysis.solvers.BrentSolver;
 import org.apache.commons.math3.special.Gamma;
 import org.mobident.library.Library;
 import org.mobident.library.LibraryEntry;
+import org.mobident.settings.MatchSettings;
 
 /**
  * How far a new run's mobility of each library analyte may lie from the library value: the

@@ -5,7 +5,7 @@
  * anions −). Probabilities in [0, 1].
  *
  * <p>Invariants of every result of {@link org.mobident.matching.LibraryMatcher#matchRun}: one
- * {@link org.mobident.matching.PeakMatch} per input peak, in input order; no analyte is assigned to
+ * {@link org.mobident.result.PeakMatch} per input peak, in input order; no analyte is assigned to
  * two peaks; the candidate probabilities of a peak and its probability of being none of them sum
  * to 1; candidates are listed most probable first.
  */

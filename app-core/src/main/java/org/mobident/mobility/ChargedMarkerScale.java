@@ -1,5 +1,7 @@
 package org.mobident.mobility;
 
+import org.mobident.result.MobilityScale;
+
 /**
  * Scale set by one marker of known effective mobility μ_m and the capillary geometry.
  *

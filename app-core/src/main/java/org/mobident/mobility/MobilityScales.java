@@ -1,6 +1,7 @@
 package org.mobident.mobility;
 
 import java.util.Optional;
+import org.mobident.result.MobilityScale;
 import org.mobident.trace.RunConditions;
 
 /** Chooses the marker scheme for a run from what is known about it. */

@@ -1,5 +1,7 @@
 package org.mobident.mobility;
 
+import org.mobident.result.MobilityScale;
+
 /**
  * A marker scheme that is a special case of a more general one (a neutral marker is a charged
  * marker of mobility 0): every conversion is delegated to the general form, so each formula

@@ -1,5 +1,7 @@
 package org.mobident.mobility;
 
+import org.mobident.result.MobilityScale;
+
 /**
  * Scale set by two markers of known, different effective mobilities; needs neither lengths nor
  * voltage.

@@ -7,7 +7,7 @@
  *
  * <p>Every marker scheme gives μ = a / t' + b with t' the ramp-corrected time
  * ({@link org.mobident.mobility.MobilityMath#rampCorrectedTimeS}). Times passed to a
- * {@link org.mobident.mobility.MobilityScale} are raw apex times; the ramp correction happens
+ * {@link org.mobident.result.MobilityScale} are raw apex times; the ramp correction happens
  * inside. All types are immutable and reject invalid arguments with
  * {@link java.lang.IllegalArgumentException}.
  */

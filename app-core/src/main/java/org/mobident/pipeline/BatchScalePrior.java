@@ -4,8 +4,9 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 import java.util.Optional;
-import org.mobident.matching.RunScale;
-import org.mobident.matching.ScalePrior;
+import org.mobident.result.RunResult;
+import org.mobident.result.RunScale;
+import org.mobident.settings.ScalePrior;
 
 /**
  * Learns from a batch of runs in one buffer how far their mobility scales scatter, so that a run

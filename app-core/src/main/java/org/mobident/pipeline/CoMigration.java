@@ -6,8 +6,10 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Set;
 import java.util.function.ToDoubleFunction;
-import org.mobident.matching.Candidate;
-import org.mobident.matching.PeakMatch;
+import org.mobident.result.Candidate;
+import org.mobident.result.PeakMatch;
+import org.mobident.result.PeakResult;
+import org.mobident.result.PeakRole;
 
 /**
  * The remark for a peak whose two likeliest library analytes cannot be told apart in this run:

@@ -16,22 +16,28 @@ import org.mobident.InputException;
 import org.mobident.library.Library;
 import org.mobident.library.LibraryEntry;
 import org.mobident.matching.LibraryMatcher;
-import org.mobident.matching.MatchSettings;
-import org.mobident.matching.MatchStatus;
 import org.mobident.matching.MatchWindow;
 import org.mobident.matching.MobilityAdjuster;
-import org.mobident.matching.PeakMatch;
 import org.mobident.matching.RunMatch;
-import org.mobident.matching.RunScale;
 import org.mobident.matching.SpreadModel;
 import org.mobident.mobility.MobilityMath;
-import org.mobident.mobility.MobilityScale;
 import org.mobident.mobility.NeutralMarkerScale;
 import org.mobident.mobility.PhysicalBounds;
+import org.mobident.result.BatchProgress;
+import org.mobident.result.MatchStatus;
+import org.mobident.result.MobilityScale;
+import org.mobident.result.Peak;
+import org.mobident.result.PeakMatch;
+import org.mobident.result.PeakResult;
+import org.mobident.result.PeakRole;
+import org.mobident.result.RunListener;
+import org.mobident.result.RunResult;
+import org.mobident.result.RunScale;
+import org.mobident.settings.IdentifySettings;
+import org.mobident.settings.MatchSettings;
+import org.mobident.settings.PeakSettings;
 import org.mobident.signal.ExpectedZoneProbe;
-import org.mobident.signal.Peak;
 import org.mobident.signal.PeakDetector;
-import org.mobident.signal.PeakSettings;
 import org.mobident.signal.TraceAnalysis;
 import org.mobident.trace.RunConditions;
 import org.mobident.trace.RunSpec;
@@ -204,7 +210,7 @@ public final class Identifier {
         for (PeakResult p : r.peaks()) {
             PeakMatch m = p.match();
             if (p.role() == PeakRole.ANALYTE && !m.candidates().isEmpty()
-                    && (m.status() != org.mobident.matching.MatchStatus.IDENTIFIED || m.confidence() < SETTLED_CONFIDENCE)) {
+                    && (m.status() != org.mobident.result.MatchStatus.IDENTIFIED || m.confidence() < SETTLED_CONFIDENCE)) {
                 return true;
             }
         }

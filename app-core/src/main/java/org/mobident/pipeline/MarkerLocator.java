@@ -6,11 +6,11 @@ import java.util.List;
 import java.util.Locale;
 import org.mobident.matching.RunMatch;
 import org.mobident.mobility.ChargedMarkerScale;
-import org.mobident.mobility.MobilityScale;
 import org.mobident.mobility.NeutralMarkerScale;
 import org.mobident.mobility.PhysicalBounds;
 import org.mobident.mobility.TwoMarkerScale;
-import org.mobident.signal.Peak;
+import org.mobident.result.MobilityScale;
+import org.mobident.result.Peak;
 import org.mobident.trace.RunConditions;
 
 /**

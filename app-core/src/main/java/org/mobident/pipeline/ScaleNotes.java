@@ -1,10 +1,10 @@
 package org.mobident.pipeline;
 
 import java.util.Locale;
-import org.mobident.matching.MatchSettings;
 import org.mobident.matching.RunMatch;
-import org.mobident.matching.RunScale;
 import org.mobident.mobility.MobilityMath;
+import org.mobident.result.RunScale;
+import org.mobident.settings.MatchSettings;
 
 /** The sentences a run's notes carry about its scale correction and about a likely wrong voltage sign. */
 final class ScaleNotes {

@@ -6,7 +6,7 @@ import java.util.Locale;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
 import org.mobident.InputException;
-import org.mobident.chem.BufferConditions;
+import org.mobident.buffer.BufferConditions;
 import org.mobident.library.Library;
 import org.mobident.library.LibraryEntry;
 

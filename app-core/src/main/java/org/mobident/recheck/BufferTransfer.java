@@ -6,19 +6,19 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 import org.mobident.InputException;
+import org.mobident.buffer.BufferConditions;
+import org.mobident.buffer.PredictionUncertainty;
+import org.mobident.buffer.SpeciesModel;
 import org.mobident.chem.InputPropagation;
-import org.mobident.chem.BufferConditions;
 import org.mobident.chem.IonicStrengthCorrection;
 import org.mobident.chem.IonisationEnthalpies;
-import org.mobident.chem.PkaTemperature;
 import org.mobident.chem.MobilityPredictor;
-import org.mobident.chem.PredictionUncertainty;
+import org.mobident.chem.PkaTemperature;
 import org.mobident.chem.ReferenceIons;
-import org.mobident.chem.SpeciesModel;
 import org.mobident.library.Library;
 import org.mobident.library.LibraryEntry;
-import org.mobident.matching.MatchSettings;
 import org.mobident.mobility.MobilityMath;
+import org.mobident.settings.MatchSettings;
 
 /**
  * Predicts each library analyte's effective mobility in a new buffer B from its value measured in
@@ -138,16 +138,21 @@ public final class BufferTransfer {
      * The same predictor with a table of enthalpies of ionisation for the temperature dependence of
      * pKa (by analyte name; steps the table lacks get the class values of {@link PkaTemperature}).
      */
-    public BufferTransfer withEnthalpies(IonisationEnthalpies table) {
+    BufferTransfer withEnthalpies(IonisationEnthalpies table) {
         if (table == null) {
             throw new IllegalArgumentException("table must not be null");
         }
         return new BufferTransfer(reference, inputs, assumedSpread, table);
     }
 
-    /** The enthalpies of ionisation in use. */
-    public IonisationEnthalpies enthalpies() {
-        return enthalpies;
+    /**
+     * The same predictor with the enthalpies of ionisation read from a table file (columns as
+     * {@code reference-libraries/ionisation-enthalpies.csv}); see {@link #withEnthalpies}.
+     *
+     * @throws InputException when the file cannot be read or a row is malformed (file, line and field named)
+     */
+    public BufferTransfer withEnthalpyTable(java.nio.file.Path tableFile) throws InputException {
+        return withEnthalpies(IonisationEnthalpies.read(tableFile));
     }
 
     /** A predictor that knows only the model data inside the libraries it is given. */

@@ -5,8 +5,8 @@ import java.util.List;
 import java.util.function.DoubleFunction;
 import java.util.function.DoubleUnaryOperator;
 import org.mobident.InputException;
-import org.mobident.chem.BufferConditions;
-import org.mobident.chem.PhInterval;
+import org.mobident.buffer.BufferConditions;
+import org.mobident.buffer.PhInterval;
 import org.mobident.library.Library;
 import org.mobident.library.LibraryEntry;
 

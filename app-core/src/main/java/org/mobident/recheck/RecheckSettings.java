@@ -1,6 +1,6 @@
 package org.mobident.recheck;
 
-import org.mobident.matching.MatchSettings;
+import org.mobident.settings.MatchSettings;
 
 /**
  * Settings of a recheck. Immutable; start from {@link #DEFAULT} and change with the

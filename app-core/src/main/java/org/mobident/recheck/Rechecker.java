@@ -9,13 +9,13 @@ import java.util.Map;
 import org.mobident.InputException;
 import org.mobident.library.Library;
 import org.mobident.library.LibraryEntry;
-import org.mobident.matching.Candidate;
-import org.mobident.matching.MatchStatus;
 import org.mobident.matching.LibraryMatcher;
 import org.mobident.matching.MatchWindow;
-import org.mobident.matching.SpreadModel;
 import org.mobident.matching.MobilityAdjuster;
-import org.mobident.matching.PeakMatch;
+import org.mobident.matching.SpreadModel;
+import org.mobident.result.Candidate;
+import org.mobident.result.MatchStatus;
+import org.mobident.result.PeakMatch;
 
 /**
  * Rechecks earlier assignments for a new buffer B, against a library measured in B or one
@@ -48,7 +48,7 @@ import org.mobident.matching.PeakMatch;
  *       {@link Verdict#MOVED_BUT_STILL_UNIQUE} (the window must move). Both reasons state this
  *       comparison with the moved mobility and X's old library value.</li>
  * </ol>
- * The candidate windows are those of the {@link org.mobident.matching.MatchSettings} in the
+ * The candidate windows are those of the {@link org.mobident.settings.MatchSettings} in the
  * settings; a predicted library B carries each analyte's prediction uncertainty as its spread, so
  * the windows widen where the model is unsure.
  *

@@ -2,13 +2,13 @@ package org.mobident.report;
 
 import java.util.ArrayList;
 import java.util.List;
-import org.mobident.matching.Candidate;
-import org.mobident.matching.PeakMatch;
-import org.mobident.matching.RunScale;
-import org.mobident.pipeline.PeakResult;
-import org.mobident.pipeline.PeakRole;
-import org.mobident.pipeline.RunResult;
-import org.mobident.signal.Peak;
+import org.mobident.result.Candidate;
+import org.mobident.result.Peak;
+import org.mobident.result.PeakMatch;
+import org.mobident.result.PeakResult;
+import org.mobident.result.PeakRole;
+import org.mobident.result.RunResult;
+import org.mobident.result.RunScale;
 
 /**
  * The peak table as rows of typed cells, shared by the CSV and JSON writers (and the workbook) so

@@ -7,7 +7,7 @@ import java.util.List;
 import org.apache.commons.csv.CSVFormat;
 import org.apache.commons.csv.CSVPrinter;
 import org.apache.commons.csv.QuoteMode;
-import org.mobident.pipeline.RunResult;
+import org.mobident.result.RunResult;
 
 /**
  * The machine-readable peak table as CSV: one row per peak, a single row for a run that failed

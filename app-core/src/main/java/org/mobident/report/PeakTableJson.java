@@ -3,10 +3,10 @@ package org.mobident.report;
 import java.io.IOException;
 import java.io.Writer;
 import java.util.List;
-import org.mobident.matching.Candidate;
-import org.mobident.pipeline.PeakResult;
-import org.mobident.pipeline.PeakRole;
-import org.mobident.pipeline.RunResult;
+import org.mobident.result.Candidate;
+import org.mobident.result.PeakResult;
+import org.mobident.result.PeakRole;
+import org.mobident.result.RunResult;
 
 /**
  * The machine-readable peak table as JSON (RFC 8259), deterministic for a given input:

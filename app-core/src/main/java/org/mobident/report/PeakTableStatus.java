@@ -4,7 +4,7 @@ import java.util.Arrays;
 import java.util.Locale;
 import java.util.Optional;
 import java.util.stream.Collectors;
-import org.mobident.matching.MatchStatus;
+import org.mobident.result.MatchStatus;
 
 /**
  * The words of the peak table's {@code status} column, in one place for the writers and the

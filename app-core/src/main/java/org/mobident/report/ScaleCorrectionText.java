@@ -1,7 +1,7 @@
 package org.mobident.report;
 
-import org.mobident.matching.RunScale;
-import org.mobident.pipeline.RunResult;
+import org.mobident.result.RunResult;
+import org.mobident.result.RunScale;
 import org.mobident.text.NumberText;
 
 /**

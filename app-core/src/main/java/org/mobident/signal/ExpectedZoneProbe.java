@@ -11,6 +11,7 @@ import java.util.function.DoubleUnaryOperator;
 import java.util.function.ToDoubleBiFunction;
 import org.apache.commons.math3.distribution.FDistribution;
 import org.mobident.Tolerances;
+import org.mobident.result.Peak;
 
 /**
  * A second look at one analysed trace, at the times where a zone is expected (a library entry

@@ -8,6 +8,8 @@ import java.util.function.DoubleUnaryOperator;
 import java.util.function.IntToDoubleFunction;
 import org.apache.commons.math3.special.Erf;
 import org.mobident.Tolerances;
+import org.mobident.result.Peak;
+import org.mobident.settings.PeakSettings;
 import org.mobident.trace.Detection;
 import org.mobident.trace.Trace;
 

@@ -1,6 +1,7 @@
 package org.mobident.signal;
 
 import java.util.List;
+import org.mobident.result.Peak;
 
 /**
  * The result of peak detection on one trace.

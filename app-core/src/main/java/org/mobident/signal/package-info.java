@@ -13,8 +13,8 @@
  * (not on its first differences, which understate correlated noise), where the peak sits
  * ({@code LocalNoise}); S/N = 2H/h with h the pharmacopoeial peak-to-peak noise over 5 widths at
  * half height, reported from the lower end of the ICH Q2 detection limit (2) up and marked at the
- * detection limit (below 3) and below the quantitation limit (10) ({@link org.mobident.signal.SignalToNoiseClass}). Spikes are removed before anything is
- * measured. Each peak carries two migration times: the apex (pharmacopoeial) and the zone centre
+ * detection limit (below 3) and below the quantitation limit (10)
+ * ({@link org.mobident.result.SignalToNoiseClass}). Spikes are removed before anything is measured. Each peak carries two migration times: the apex (pharmacopoeial) and the zone centre
  * (first moment), which stays put when electromigration dispersion skews a zone.
  *
  * <p>Invariants: every step is linear in the number of points (selection instead of sorting,

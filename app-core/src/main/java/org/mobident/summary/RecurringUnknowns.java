@@ -9,10 +9,10 @@ import java.util.Map;
 import java.util.Set;
 import org.mobident.library.Library;
 import org.mobident.library.LibraryEntry;
-import org.mobident.matching.MatchStatus;
-import org.mobident.pipeline.PeakResult;
-import org.mobident.pipeline.PeakRole;
-import org.mobident.pipeline.RunResult;
+import org.mobident.result.MatchStatus;
+import org.mobident.result.PeakResult;
+import org.mobident.result.PeakRole;
+import org.mobident.result.RunResult;
 
 /**
  * Unassigned peaks that come back at one mobility in several runs of one buffer: a contaminant, a

@@ -6,10 +6,10 @@ import java.util.List;
 import java.util.Set;
 import org.mobident.library.Library;
 import org.mobident.library.LibraryEntry;
-import org.mobident.matching.MatchStatus;
-import org.mobident.pipeline.PeakResult;
-import org.mobident.pipeline.PeakRole;
-import org.mobident.pipeline.RunResult;
+import org.mobident.result.MatchStatus;
+import org.mobident.result.PeakResult;
+import org.mobident.result.PeakRole;
+import org.mobident.result.RunResult;
 
 /**
  * The sample × analyte table of a batch: for every run and every analyte of the library (by name,

@@ -8,7 +8,7 @@ import org.mobident.library.standards.BuildSettings;
 import org.mobident.library.standards.BuildWarning;
 import org.mobident.library.standards.LibraryMerger;
 import org.mobident.library.standards.MergeResult;
-import org.mobident.pipeline.IdentifySettings;
+import org.mobident.settings.IdentifySettings;
 
 /**
  * New standards runs pooled into an existing library: the runs are processed as

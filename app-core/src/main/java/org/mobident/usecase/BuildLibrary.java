@@ -5,7 +5,7 @@ import java.util.List;
 import java.util.Map;
 import java.util.Objects;
 import org.mobident.InputException;
-import org.mobident.chem.BufferConditions;
+import org.mobident.buffer.BufferConditions;
 import org.mobident.chem.ReferenceIons;
 import org.mobident.library.Library;
 import org.mobident.library.LibraryEntry;
@@ -13,11 +13,11 @@ import org.mobident.library.standards.BuildResult;
 import org.mobident.library.standards.BuildSettings;
 import org.mobident.library.standards.LibraryBuilder;
 import org.mobident.library.standards.StandardsSheet;
-import org.mobident.pipeline.BatchProgress;
 import org.mobident.pipeline.Identifier;
-import org.mobident.pipeline.IdentifySettings;
-import org.mobident.pipeline.RunListener;
-import org.mobident.pipeline.RunResult;
+import org.mobident.result.BatchProgress;
+import org.mobident.result.RunListener;
+import org.mobident.result.RunResult;
+import org.mobident.settings.IdentifySettings;
 
 /**
  * A library from standards runs: each run is identified against a guide library made from the

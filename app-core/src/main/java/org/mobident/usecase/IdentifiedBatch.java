@@ -9,8 +9,8 @@ import java.util.function.UnaryOperator;
 import org.mobident.InputException;
 import org.mobident.library.Library;
 import org.mobident.matching.MatchWindow;
-import org.mobident.pipeline.IdentifySettings;
-import org.mobident.pipeline.RunResult;
+import org.mobident.result.RunResult;
+import org.mobident.settings.IdentifySettings;
 import org.mobident.trace.Trace;
 
 /**

@@ -7,11 +7,11 @@ import java.util.concurrent.atomic.AtomicReferenceArray;
 import org.mobident.InputException;
 import org.mobident.library.Library;
 import org.mobident.library.standards.LibraryCheck;
-import org.mobident.pipeline.BatchProgress;
 import org.mobident.pipeline.Identifier;
-import org.mobident.pipeline.IdentifySettings;
-import org.mobident.pipeline.RunListener;
-import org.mobident.pipeline.RunResult;
+import org.mobident.result.BatchProgress;
+import org.mobident.result.RunListener;
+import org.mobident.result.RunResult;
+import org.mobident.settings.IdentifySettings;
 
 /**
  * The main job: the peaks of every run of a batch, their mobilities and their library matches

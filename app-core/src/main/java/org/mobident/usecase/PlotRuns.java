@@ -6,12 +6,12 @@ import java.util.List;
 import java.util.Map;
 import java.util.Objects;
 import org.mobident.InputException;
-import org.mobident.pipeline.RunResult;
 import org.mobident.report.plot.Axis;
 import org.mobident.report.plot.BufferGroups;
 import org.mobident.report.plot.PlotFigure;
 import org.mobident.report.plot.PlotModel;
 import org.mobident.report.plot.ToleranceBand;
+import org.mobident.result.RunResult;
 import org.mobident.trace.Trace;
 
 /**

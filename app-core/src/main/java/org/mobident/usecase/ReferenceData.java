@@ -5,10 +5,10 @@ import java.nio.file.Path;
 import java.util.Locale;
 import java.util.Map;
 import org.mobident.InputException;
+import org.mobident.buffer.SpeciesModel;
 import org.mobident.chem.BufferPh;
 import org.mobident.chem.IonisationEnthalpies;
 import org.mobident.chem.ReferenceIons;
-import org.mobident.chem.SpeciesModel;
 import org.mobident.library.LibraryCsv;
 import org.mobident.recheck.BufferSpec;
 import org.mobident.recheck.BufferTransfer;
@@ -25,21 +25,27 @@ public final class ReferenceData {
     }
 
     /** The enthalpy table beside the reference library, or none (class values). */
-    public static IonisationEnthalpies enthalpies(Path referenceFile) throws InputException {
+    private static IonisationEnthalpies enthalpies(Path referenceFile) throws InputException {
+        Path table = enthalpyTable(referenceFile);
+        return table == null ? IonisationEnthalpies.none() : IonisationEnthalpies.read(table);
+    }
+
+    /** The enthalpy table file beside the reference library, or null when there is none. */
+    private static Path enthalpyTable(Path referenceFile) {
         if (referenceFile == null) {
-            return IonisationEnthalpies.none();
+            return null;
         }
         Path parent = referenceFile.toAbsolutePath().getParent();
         Path table = parent == null ? null : parent.resolve(IonisationEnthalpies.FILE_NAME);
-        return table != null && Files.isRegularFile(table) ? IonisationEnthalpies.read(table)
-                : IonisationEnthalpies.none();
+        return table != null && Files.isRegularFile(table) ? table : null;
     }
 
     /** The predictor: reference models by name (when given) and the enthalpy table beside them. */
     public static BufferTransfer transfer(Path referenceFile) throws InputException {
         BufferTransfer t = referenceFile == null ? BufferTransfer.withoutReference()
                 : BufferTransfer.withReference(LibraryCsv.read(referenceFile));
-        return t.withEnthalpies(enthalpies(referenceFile));
+        Path table = enthalpyTable(referenceFile);
+        return table == null ? t : t.withEnthalpyTable(table);
     }
 
     /**

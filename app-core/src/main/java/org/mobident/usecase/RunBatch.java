@@ -7,7 +7,7 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import org.mobident.InputException;
-import org.mobident.pipeline.RunResult;
+import org.mobident.result.RunResult;
 import org.mobident.trace.RunConditions;
 import org.mobident.trace.RunSpec;
 import org.mobident.trace.io.RunSheet;

@@ -8,12 +8,12 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 
+import org.mobident.settings.PeakSettings;
+import org.mobident.signal.PeakDetector;
+import org.mobident.signal.TraceAnalysis;
 import org.mobident.trace.Detection;
 import org.mobident.trace.Trace;
 import org.mobident.trace.io.DelimitedTraceReader;
-import org.mobident.signal.PeakDetector;
-import org.mobident.signal.PeakSettings;
-import org.mobident.signal.TraceAnalysis;
 
 /**
  * Micro-benchmark of the two per-run steps of a batch: parsing a delimited trace and analysing

@@ -6,6 +6,10 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.List;
 import org.junit.jupiter.api.Test;
+import org.mobident.buffer.BufferConditions;
+import org.mobident.buffer.PhInterval;
+import org.mobident.buffer.PredictionUncertainty;
+import org.mobident.buffer.SpeciesModel;
 import org.mobident.mobility.MobilityMath;
 
 class MobilityPredictorTest {

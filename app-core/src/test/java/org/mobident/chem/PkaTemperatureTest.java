@@ -9,6 +9,7 @@ import java.nio.file.Path;
 import java.util.List;
 import org.junit.jupiter.api.Test;
 import org.mobident.InputException;
+import org.mobident.buffer.SpeciesModel;
 
 class PkaTemperatureTest {
 

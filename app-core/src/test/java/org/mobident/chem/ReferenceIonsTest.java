@@ -13,6 +13,8 @@ import java.util.Map;
 import org.junit.jupiter.api.Test;
 import org.mobident.InputException;
 import org.mobident.Units;
+import org.mobident.buffer.BufferConditions;
+import org.mobident.buffer.SpeciesModel;
 import org.mobident.library.Library;
 import org.mobident.library.LibraryCsv;
 import org.mobident.library.LibraryEntry;

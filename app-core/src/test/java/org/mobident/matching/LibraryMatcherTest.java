@@ -12,6 +12,10 @@ import java.util.Random;
 import org.junit.jupiter.api.Test;
 import org.mobident.library.Library;
 import org.mobident.library.LibraryEntry;
+import org.mobident.result.Candidate;
+import org.mobident.result.MatchStatus;
+import org.mobident.result.PeakMatch;
+import org.mobident.settings.MatchSettings;
 
 /**
  * Unit tests of {@link LibraryMatcher} with the run's scale as stated (no scale correction) and no

@@ -11,6 +11,8 @@ import java.util.Random;
 import org.junit.jupiter.api.Test;
 import org.mobident.library.Library;
 import org.mobident.library.LibraryEntry;
+import org.mobident.result.PeakMatch;
+import org.mobident.settings.MatchSettings;
 import org.opentest4j.AssertionFailedError;
 
 /**

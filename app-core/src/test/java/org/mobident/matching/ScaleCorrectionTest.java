@@ -10,6 +10,10 @@ import org.junit.jupiter.api.Test;
 import org.mobident.library.Library;
 import org.mobident.library.LibraryEntry;
 import org.mobident.mobility.MobilityMath;
+import org.mobident.result.MatchStatus;
+import org.mobident.result.RunScale;
+import org.mobident.settings.MatchSettings;
+import org.mobident.settings.ScalePrior;
 
 /**
  * The per-run scale correction: a run whose every mobility is off by a common factor and offset

@@ -7,6 +7,7 @@ import java.util.ArrayList;
 import java.util.List;
 import org.junit.jupiter.api.Test;
 import org.mobident.library.LibraryEntry;
+import org.mobident.settings.MatchSettings;
 
 /** The library's spread model: moderation of few-run spreads, the prediction variance, the window quantile. */
 class SpreadModelTest {

@@ -4,6 +4,7 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 
 import org.junit.jupiter.api.Test;
+import org.mobident.result.MobilityScale;
 
 class ChargedMarkerScaleTest extends MobilityScaleContractTest {
 

@@ -7,6 +7,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.Random;
 import org.junit.jupiter.api.Test;
+import org.mobident.result.MobilityScale;
 
 /**
  * Properties every {@link MobilityScale} must have. Each implementation's test subclasses this and

@@ -5,6 +5,7 @@ import static org.junit.jupiter.api.Assertions.assertInstanceOf;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import org.junit.jupiter.api.Test;
+import org.mobident.result.MobilityScale;
 import org.mobident.trace.RunConditions;
 
 class MobilityScalesTest {

@@ -5,6 +5,7 @@ import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import org.junit.jupiter.api.Test;
+import org.mobident.result.MobilityScale;
 
 class TwoMarkerScaleTest extends MobilityScaleContractTest {
 

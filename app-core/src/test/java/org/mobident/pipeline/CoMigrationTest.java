@@ -7,9 +7,9 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import java.util.List;
 import java.util.Set;
 import org.junit.jupiter.api.Test;
-import org.mobident.matching.Candidate;
-import org.mobident.matching.MatchStatus;
-import org.mobident.matching.PeakMatch;
+import org.mobident.result.Candidate;
+import org.mobident.result.MatchStatus;
+import org.mobident.result.PeakMatch;
 
 /**
  * The co-migration remark: two candidates closer in library mobility than the zone is wide at

@@ -15,8 +15,12 @@ import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.ValueSource;
 import org.mobident.library.Library;
 import org.mobident.library.LibraryEntry;
-import org.mobident.matching.MatchStatus;
-import org.mobident.signal.PeakSettings;
+import org.mobident.result.MatchStatus;
+import org.mobident.result.PeakResult;
+import org.mobident.result.PeakRole;
+import org.mobident.result.RunResult;
+import org.mobident.settings.IdentifySettings;
+import org.mobident.settings.PeakSettings;
 import org.mobident.simulate.SimulationSpec;
 import org.mobident.simulate.TraceSimulator;
 import org.mobident.trace.Detection;
@@ -389,7 +393,7 @@ class IdentifierEndToEndTest {
         RunResult r = new Identifier(lib, IdentifySettings.defaults().withThreads(1))
                 .identify(new RunSpec("mine", Path.of("mine.csv"), c, "test", 0), t);
         for (PeakResult p : r.peaks()) {
-            for (org.mobident.matching.Candidate cand : p.match().candidates()) {
+            for (org.mobident.result.Candidate cand : p.match().candidates()) {
                 assertTrue(ANIONS.find(cand.name()).isPresent(), cand.name() + " is of another buffer");
             }
         }

@@ -8,7 +8,7 @@ import java.util.List;
 import org.junit.jupiter.api.Test;
 import org.mobident.library.Library;
 import org.mobident.library.LibraryEntry;
-import org.mobident.signal.Peak;
+import org.mobident.result.Peak;
 import org.mobident.trace.Detection;
 import org.mobident.trace.RunConditions;
 

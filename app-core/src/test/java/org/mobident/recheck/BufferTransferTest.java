@@ -9,10 +9,10 @@ import java.nio.file.Path;
 import java.util.List;
 import org.junit.jupiter.api.Test;
 import org.mobident.InputException;
-import org.mobident.chem.BufferConditions;
+import org.mobident.buffer.BufferConditions;
+import org.mobident.buffer.SpeciesModel;
 import org.mobident.chem.MobilityPredictor;
 import org.mobident.chem.ReferenceIons;
-import org.mobident.chem.SpeciesModel;
 import org.mobident.library.Library;
 import org.mobident.library.LibraryEntry;
 

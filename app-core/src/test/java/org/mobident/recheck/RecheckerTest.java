@@ -18,9 +18,9 @@ import java.util.function.Function;
 import java.util.stream.Collectors;
 import org.junit.jupiter.api.Test;
 import org.mobident.InputException;
-import org.mobident.chem.BufferConditions;
+import org.mobident.buffer.BufferConditions;
+import org.mobident.buffer.SpeciesModel;
 import org.mobident.chem.MobilityPredictor;
-import org.mobident.chem.SpeciesModel;
 import org.mobident.library.Library;
 import org.mobident.library.LibraryEntry;
 
@@ -279,7 +279,7 @@ class RecheckerTest {
         List<PeakTableRow> rows = List.of(
                 new PeakTableRow(2, "spring", 1, "analyte", -69.35, 0.001, -69.35, "nitrate", 0.96, "identified"),
                 new PeakTableRow(3, "well", 1, "analyte", -69.87, 0.001, -69.87, "nitrate", 0.97, "identified"));
-        RecheckSettings settings = RecheckSettings.DEFAULT.withMatch(org.mobident.matching.MatchSettings.ABSOLUTE);
+        RecheckSettings settings = RecheckSettings.DEFAULT.withMatch(org.mobident.settings.MatchSettings.ABSOLUTE);
         RecheckResult r = Rechecker.withMeasuredLibrary(rows, "peaks.csv", a, null, b, null,
                 BufferTransfer.withoutReference(), settings);
         AssignmentCheck spring = r.assignments().get(0);
@@ -304,7 +304,7 @@ class RecheckerTest {
                 new PeakTableRow(2, "r1", 1, "analyte", -30.9, 0.05, -30.9, "x1", 0.9, "identified"));
         RecheckResult r = Rechecker.withMeasuredLibrary(rows, "peaks.csv", a, null, b, null,
                 BufferTransfer.withoutReference(),
-                RecheckSettings.DEFAULT.withMatch(org.mobident.matching.MatchSettings.ABSOLUTE));
+                RecheckSettings.DEFAULT.withMatch(org.mobident.settings.MatchSettings.ABSOLUTE));
         AssignmentCheck x = r.assignments().get(0);
         assertEquals(-35.9, x.newMobility(), 1e-9);
         assertEquals(Verdict.REASSIGNED, x.verdict(), x.reason());
@@ -325,7 +325,7 @@ class RecheckerTest {
                 new PeakTableRow(2, "r1", 1, "analyte", -30.4, 0.05, -30.4, "x1", 0.9, "identified"));
         AssignmentCheck amb = Rechecker.withMeasuredLibrary(near, "peaks.csv", a, null, b, null,
                 BufferTransfer.withoutReference(),
-                RecheckSettings.DEFAULT.withMatch(org.mobident.matching.MatchSettings.ABSOLUTE)).assignments().get(0);
+                RecheckSettings.DEFAULT.withMatch(org.mobident.settings.MatchSettings.ABSOLUTE)).assignments().get(0);
         assertEquals(Verdict.NOW_AMBIGUOUS, amb.verdict(), amb.reason());
         assertEquals(List.of("y"), amb.collidesWith());
 
@@ -334,7 +334,7 @@ class RecheckerTest {
                 new PeakTableRow(2, "r1", 1, "analyte", -30.4, 0.05, -30.4, "x1", 0.6, "ambiguous"));
         RecheckResult same = Rechecker.withMeasuredLibrary(before, "peaks.csv", a, null, b, null,
                 BufferTransfer.withoutReference(),
-                RecheckSettings.DEFAULT.withMatch(org.mobident.matching.MatchSettings.ABSOLUTE));
+                RecheckSettings.DEFAULT.withMatch(org.mobident.settings.MatchSettings.ABSOLUTE));
         assertEquals(Verdict.STILL_AMBIGUOUS, same.assignments().get(0).verdict(), same.assignments().get(0).reason());
         assertEquals(List.of("y"), same.assignments().get(0).collidesWith());
         assertFalse(same.needsAttention());

@@ -13,7 +13,7 @@ import java.nio.file.Path;
 import java.util.List;
 import java.util.Map;
 import org.junit.jupiter.api.Test;
-import org.mobident.pipeline.RunResult;
+import org.mobident.result.RunResult;
 import org.mobident.trace.RunSpec;
 
 class PeakTableJsonTest {

@@ -33,7 +33,7 @@ import org.junit.jupiter.api.io.TempDir;
 import org.mobident.io.SafeFiles;
 import org.mobident.library.Library;
 import org.mobident.library.LibraryEntry;
-import org.mobident.pipeline.RunResult;
+import org.mobident.result.RunResult;
 import org.mobident.summary.RecurringUnknowns;
 
 /** The workbook read back with an independent reader (fastexcel-reader) and as its sheet XML. */

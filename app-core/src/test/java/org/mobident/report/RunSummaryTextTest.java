@@ -9,9 +9,8 @@ import java.io.StringWriter;
 import java.util.Arrays;
 import java.util.List;
 import org.junit.jupiter.api.Test;
-import org.mobident.pipeline.PeakResult;
-import org.mobident.pipeline.RunResult;
-import org.mobident.pipeline.RunResult;
+import org.mobident.result.PeakResult;
+import org.mobident.result.RunResult;
 
 class RunSummaryTextTest {
 
@@ -53,7 +52,7 @@ class RunSummaryTextTest {
                     p.match()));
         }
         RunResult converted = new RunResult(warm.spec(), null, warm.scaleNote(), warm.eofMobility(), warm.scale(),
-                peaks, warm.notes(), warm.noiseSd(), org.mobident.matching.RunScale.OFF, 0.8957);
+                peaks, warm.notes(), warm.noiseSd(), org.mobident.result.RunScale.OFF, 0.8957);
         String text = summary(List.of(converted));
         // -71.52 × 0.8957 = -64.06; the times' SD scales with it: 0.21 × 0.8957 = 0.188; the table shows
         // the named peak's deciding uncertainty, 0.08 / 0.2 = 0.4

@@ -6,6 +6,8 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import java.util.List;
 import java.util.SplittableRandom;
 import org.junit.jupiter.api.Test;
+import org.mobident.result.Peak;
+import org.mobident.settings.PeakSettings;
 import org.mobident.trace.Detection;
 import org.mobident.trace.Trace;
 

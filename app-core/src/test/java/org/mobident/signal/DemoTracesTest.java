@@ -8,6 +8,8 @@ import java.nio.file.Path;
 import java.util.List;
 import org.junit.jupiter.api.Test;
 import org.mobident.InputException;
+import org.mobident.result.Peak;
+import org.mobident.settings.PeakSettings;
 import org.mobident.trace.Detection;
 import org.mobident.trace.Trace;
 import org.mobident.trace.io.DelimitedTraceReader;

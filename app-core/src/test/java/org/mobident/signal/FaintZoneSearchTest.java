@@ -6,6 +6,9 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import java.util.ArrayList;
 import java.util.List;
 import org.junit.jupiter.api.Test;
+import org.mobident.result.Peak;
+import org.mobident.result.SignalToNoiseClass;
+import org.mobident.settings.PeakSettings;
 import org.mobident.trace.Detection;
 
 /**

@@ -4,6 +4,9 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 
 import java.util.List;
 import org.junit.jupiter.api.Test;
+import org.mobident.result.Peak;
+import org.mobident.result.SignalToNoiseClass;
+import org.mobident.settings.PeakSettings;
 import org.mobident.trace.Detection;
 
 /**

@@ -5,6 +5,9 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.List;
 import org.junit.jupiter.api.Test;
+import org.mobident.result.Peak;
+import org.mobident.result.SignalToNoiseClass;
+import org.mobident.settings.PeakSettings;
 import org.mobident.trace.Detection;
 
 /**
@@ -102,7 +105,7 @@ class SignalToNoiseTest {
         // (H = 7.8 σ, the 3:1 detection limit): found in at least 90 % of 40 runs; expected S/N 1
         // (H = 2.6 σ): in at most 10 %
         double noise = 0.01;
-        double d2 = NoiseEstimator.expectedNormalRange((long) Math.round(5 * WIDTH_S / STEP_S) + 1);
+        double d2 = NoiseEstimator.expectedNormalRange(Math.round(5 * WIDTH_S / STEP_S) + 1);
         int runs = 40;
         int[] found = new int[2];
         double[] expected = {3.0, 1.0};

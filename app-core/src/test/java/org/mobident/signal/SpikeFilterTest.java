@@ -8,6 +8,8 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.SplittableRandom;
 import org.junit.jupiter.api.Test;
+import org.mobident.result.Peak;
+import org.mobident.settings.PeakSettings;
 import org.mobident.trace.Detection;
 
 /**

@@ -5,6 +5,8 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.List;
 import org.junit.jupiter.api.Test;
+import org.mobident.result.Peak;
+import org.mobident.settings.PeakSettings;
 import org.mobident.trace.Detection;
 
 /**

@@ -10,7 +10,7 @@ import org.junit.jupiter.api.Test;
 import org.mobident.library.Library;
 import org.mobident.library.LibraryCsv;
 import org.mobident.library.LibraryEntry;
-import org.mobident.pipeline.RunResult;
+import org.mobident.result.RunResult;
 import org.mobident.summary.SummaryFixtures.P;
 
 /** Recurring unknowns written as provisional entries of a library file, and read back. */

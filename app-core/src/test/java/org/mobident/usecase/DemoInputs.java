@@ -4,7 +4,7 @@ import java.nio.file.Path;
 import org.mobident.InputException;
 import org.mobident.library.Library;
 import org.mobident.library.LibraryCsv;
-import org.mobident.pipeline.IdentifySettings;
+import org.mobident.settings.IdentifySettings;
 import org.mobident.trace.RunConditions;
 
 /** The demo scenario's files (invented data, demo-data/README.md), shared by the use-case tests. */

@@ -14,15 +14,15 @@ import java.util.Map;
 import java.util.Set;
 import java.util.function.Function;
 import org.apache.commons.math3.stat.descriptive.rank.Median;
-import org.mobident.chem.BufferConditions;
+import org.mobident.buffer.BufferConditions;
 import org.mobident.chem.ReferenceIons;
 import org.mobident.library.Library;
 import org.mobident.library.LibraryCsv;
 import org.mobident.library.LibraryEntry;
-import org.mobident.matching.MatchSettings;
-import org.mobident.pipeline.PeakResult;
-import org.mobident.pipeline.PeakRole;
-import org.mobident.pipeline.RunResult;
+import org.mobident.result.PeakResult;
+import org.mobident.result.PeakRole;
+import org.mobident.result.RunResult;
+import org.mobident.settings.MatchSettings;
 import org.mobident.text.NumberText;
 import org.mobident.trace.RunConditions;
 
@@ -652,12 +652,12 @@ public final class LibraryBuilder {
             List<Double> pKa = model == null ? List.of() : model.pKa;
             List<Double> limiting = model == null ? List.of() : model.limitingMobilities;
             if (!limiting.isEmpty() && Double.isFinite(temperature)
-                    && temperature != org.mobident.chem.BufferConditions.REFERENCE_TEMPERATURE_C) {
+                    && temperature != org.mobident.buffer.BufferConditions.REFERENCE_TEMPERATURE_C) {
                 // the sheet states them at 25 °C; the library column holds them at the entry's temperature
                 List<Double> atT = new ArrayList<>(limiting.size());
                 for (double mu : limiting) {
                     atT.add(org.mobident.mobility.MobilityMath.atTemperature(mu,
-                            org.mobident.chem.BufferConditions.REFERENCE_TEMPERATURE_C, temperature));
+                            org.mobident.buffer.BufferConditions.REFERENCE_TEMPERATURE_C, temperature));
                 }
                 limiting = atT;
             }

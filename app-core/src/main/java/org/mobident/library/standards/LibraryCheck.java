@@ -6,9 +6,9 @@ import java.util.Locale;
 import org.mobident.InputException;
 import org.mobident.library.Library;
 import org.mobident.library.LibraryEntry;
-import org.mobident.matching.MatchSettings;
 import org.mobident.matching.MatchWindow;
 import org.mobident.mobility.PhysicalBounds;
+import org.mobident.settings.MatchSettings;
 import org.mobident.text.NumberText;
 
 /**

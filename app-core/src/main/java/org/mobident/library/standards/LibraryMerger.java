@@ -155,7 +155,7 @@ public final class LibraryMerger {
         }
         List<LibraryEntry> entries = new ArrayList<>(merged.values());
         warnings.addAll(WindowOverlaps.check(entries, LibraryCheck.windows(new Library(entries, "merged", List.of()),
-                org.mobident.matching.MatchSettings.DEFAULT)));
+                org.mobident.settings.MatchSettings.DEFAULT)));
         List<String> notes = new ArrayList<>(existing.notes());
         notes.add("Merged with a fresh build from standards on " + fresh.stamp().builtAt() + " ("
                 + fresh.stamp().toolVersion() + "): added " + added.size() + ", pooled " + pooled.size()

@@ -6,7 +6,7 @@
  * lengths in cm; voltage in signed kV; temperature in °C.
  *
  * <p>The flow: {@link org.mobident.library.standards.StandardsSheetReader} reads which analytes each
- * mix holds; the pipeline turns each standards run into a {@link org.mobident.pipeline.RunResult};
+ * mix holds; the pipeline turns each standards run into a {@link org.mobident.result.RunResult};
  * {@link org.mobident.library.standards.LibraryBuilder} groups the analyte peaks of each mix's
  * replicate runs into one group per analyte, names the groups, computes replicate statistics
  * with a Grubbs outlier test and writes conditions and provenance into the library notes;

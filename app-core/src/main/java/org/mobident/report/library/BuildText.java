@@ -57,14 +57,14 @@ public final class BuildText {
 
     /** A library, one entry per line, then the findings of a check, windows under the default match settings. */
     public static void write(Library library, List<BuildWarning> findings, BuildSettings settings, PrintWriter out) {
-        write(library, findings, org.mobident.matching.MatchSettings.DEFAULT, out);
+        write(library, findings, org.mobident.settings.MatchSettings.DEFAULT, out);
     }
 
     /**
      * A library, one entry per line, then the findings of a check. The window column is the one
      * identification applies ({@link LibraryCheck#windows}); an entry's own fixed window is marked '='.
      */
-    public static void write(Library library, List<BuildWarning> findings, org.mobident.matching.MatchSettings match,
+    public static void write(Library library, List<BuildWarning> findings, org.mobident.settings.MatchSettings match,
                              PrintWriter out) {
         out.println("Library " + library.sourceFile() + ": " + library.size() + " analytes. Mobilities in 1e-9 m^2/(V s).");
         for (String note : library.notes()) {

@@ -1,9 +1,9 @@
 package org.mobident.report.plot;
 
 import java.util.Locale;
-import org.mobident.matching.MatchStatus;
-import org.mobident.pipeline.PeakResult;
-import org.mobident.pipeline.PeakRole;
+import org.mobident.result.MatchStatus;
+import org.mobident.result.PeakResult;
+import org.mobident.result.PeakRole;
 
 /** How a peak is drawn: what the matching said about it, or that it is a marker. */
 public enum PeakStatus {

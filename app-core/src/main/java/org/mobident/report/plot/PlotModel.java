@@ -5,13 +5,13 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Objects;
 import org.mobident.library.Library;
-import org.mobident.matching.MatchSettings;
 import org.mobident.library.LibraryEntry;
-import org.mobident.mobility.MobilityScale;
-import org.mobident.pipeline.PeakResult;
-import org.mobident.pipeline.PeakRole;
-import org.mobident.pipeline.RunResult;
-import org.mobident.signal.Peak;
+import org.mobident.result.MobilityScale;
+import org.mobident.result.Peak;
+import org.mobident.result.PeakResult;
+import org.mobident.result.PeakRole;
+import org.mobident.result.RunResult;
+import org.mobident.settings.MatchSettings;
 import org.mobident.trace.Trace;
 
 /**

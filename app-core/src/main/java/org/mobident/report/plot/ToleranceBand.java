@@ -1,9 +1,9 @@
 package org.mobident.report.plot;
 
 import org.mobident.library.Library;
-import org.mobident.matching.MatchSettings;
-import org.mobident.matching.MatchWindow;
 import org.mobident.library.LibraryEntry;
+import org.mobident.matching.MatchWindow;
+import org.mobident.settings.MatchSettings;
 
 /**
  * The half-width, in mobility units (1e-9 m²/(V s)), of the band drawn around a library

@@ -25,9 +25,9 @@ import org.junit.jupiter.api.io.TempDir;
 import org.mobident.library.Library;
 import org.mobident.library.LibraryCsv;
 import org.mobident.library.LibraryEntry;
-import org.mobident.pipeline.PeakResult;
-import org.mobident.pipeline.PeakRole;
-import org.mobident.pipeline.RunResult;
+import org.mobident.result.PeakResult;
+import org.mobident.result.PeakRole;
+import org.mobident.result.RunResult;
 import org.mobident.trace.RunConditions;
 
 class LibraryBuilderTest {
@@ -127,7 +127,7 @@ class LibraryBuilderTest {
         // No fixed window is written unless asked for; the window shown is the one identification applies.
         assertTrue(Double.isNaN(s.tolerance()));
         int idx = b.library().entries().indexOf(b.library().find("sodium").orElseThrow());
-        assertEquals(LibraryCheck.windows(b.library(), org.mobident.matching.MatchSettings.DEFAULT)[idx], s.window(),
+        assertEquals(LibraryCheck.windows(b.library(), org.mobident.settings.MatchSettings.DEFAULT)[idx], s.window(),
                 1e-12);
         assertTrue(Double.isNaN(b.library().find("sodium").orElseThrow().tolerance()));
         LibraryEntry e = b.library().find("sodium").orElseThrow();
@@ -176,7 +176,7 @@ class LibraryBuilderTest {
         java.io.StringWriter w = new java.io.StringWriter();
         LibraryCsv.write(b.library(), w);
         Library read = LibraryCsv.read(new StringReader(w.toString()), "built.csv");
-        org.mobident.chem.SpeciesModel m = org.mobident.chem.ReferenceIons.model(read.find("sodium").orElseThrow(),
+        org.mobident.buffer.SpeciesModel m = org.mobident.chem.ReferenceIons.model(read.find("sodium").orElseThrow(),
                 "built.csv");
         assertEquals(1, m.highestCharge());
         assertEquals(List.of(9.3), m.pKa());
@@ -362,7 +362,7 @@ class LibraryBuilderTest {
         for (RunResult r : cationRuns()) {
             Path f = dir.resolve(r.spec().name() + ".csv");
             Files.writeString(f, "abc", StandardCharsets.US_ASCII);
-            double[] mu = r.peaks().stream().filter(p -> p.role() == org.mobident.pipeline.PeakRole.ANALYTE)
+            double[] mu = r.peaks().stream().filter(p -> p.role() == org.mobident.result.PeakRole.ANALYTE)
                     .mapToDouble(p -> p.mobility()).toArray();
             double[] h = new double[mu.length];
             java.util.Arrays.fill(h, 1.0);
@@ -533,7 +533,7 @@ class LibraryBuilderTest {
 
     /** Apex time of the analyte peak nearest to a mobility. */
     private static double timeOf(RunResult r, double mobility) {
-        return r.peaks().stream().filter(p -> p.role() == org.mobident.pipeline.PeakRole.ANALYTE)
+        return r.peaks().stream().filter(p -> p.role() == org.mobident.result.PeakRole.ANALYTE)
                 .min((a, b) -> Double.compare(Math.abs(a.mobility() - mobility), Math.abs(b.mobility() - mobility)))
                 .orElseThrow().peak().apexTimeS();
     }

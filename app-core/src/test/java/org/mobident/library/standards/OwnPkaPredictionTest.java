@@ -12,16 +12,16 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 import org.junit.jupiter.api.Test;
+import org.mobident.buffer.SpeciesModel;
 import org.mobident.chem.IonicForms;
 import org.mobident.chem.ReferenceIons;
-import org.mobident.chem.SpeciesModel;
 import org.mobident.library.Library;
 import org.mobident.library.LibraryCsv;
 import org.mobident.library.LibraryEntry;
-import org.mobident.pipeline.RunResult;
 import org.mobident.recheck.BufferSpec;
 import org.mobident.recheck.BufferTransfer;
 import org.mobident.recheck.PredictedMobility;
+import org.mobident.result.RunResult;
 
 /**
  * End to end: a library built from standards in one buffer, with the lab's pKa values and limiting

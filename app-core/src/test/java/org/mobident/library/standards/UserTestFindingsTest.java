@@ -17,13 +17,13 @@ import java.util.List;
 import java.util.Map;
 import org.junit.jupiter.api.Test;
 import org.mobident.InputException;
-import org.mobident.chem.BufferConditions;
+import org.mobident.buffer.BufferConditions;
 import org.mobident.chem.MobilityPredictor;
 import org.mobident.chem.ReferenceIons;
 import org.mobident.library.Library;
 import org.mobident.library.LibraryCsv;
 import org.mobident.library.LibraryEntry;
-import org.mobident.pipeline.RunResult;
+import org.mobident.result.RunResult;
 
 /** Findings of a user test of building, adding to and checking libraries. */
 class UserTestFindingsTest {
@@ -264,7 +264,7 @@ class UserTestFindingsTest {
                 Double.NaN, 25.0, null);
         Library lib = new Library(List.of(own, entry("spread", -40.0, 0.3, -1),
                 LibraryEntry.of("handbook", -20.0, Double.NaN)), "lib.csv", List.of());
-        org.mobident.matching.MatchSettings match = org.mobident.matching.MatchSettings.DEFAULT;
+        org.mobident.settings.MatchSettings match = org.mobident.settings.MatchSettings.DEFAULT;
         double[] w = LibraryCheck.windows(lib, match);
         assertEquals(0.8, w[0], 0.0, "an entry's own fixed window replaces the rule");
         org.mobident.matching.SpreadModel spread = org.mobident.matching.SpreadModel.of(lib, match);

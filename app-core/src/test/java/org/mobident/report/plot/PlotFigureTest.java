@@ -7,8 +7,8 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import java.awt.image.BufferedImage;
 import java.util.List;
 import org.junit.jupiter.api.Test;
-import org.mobident.pipeline.PeakResult;
-import org.mobident.pipeline.RunResult;
+import org.mobident.result.PeakResult;
+import org.mobident.result.RunResult;
 
 class PlotFigureTest {
 

@@ -7,11 +7,11 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.List;
 import org.junit.jupiter.api.Test;
-import org.mobident.matching.MatchStatus;
-import org.mobident.matching.PeakMatch;
-import org.mobident.pipeline.PeakResult;
-import org.mobident.pipeline.PeakRole;
-import org.mobident.pipeline.RunResult;
+import org.mobident.result.MatchStatus;
+import org.mobident.result.PeakMatch;
+import org.mobident.result.PeakResult;
+import org.mobident.result.PeakRole;
+import org.mobident.result.RunResult;
 import org.mobident.trace.Trace;
 
 class PlotLayoutTest {
@@ -140,9 +140,9 @@ class PlotLayoutTest {
         }
         List<PeakResult> peaks = new java.util.ArrayList<>();
         for (int k = 0; k < n; k++) {
-            org.mobident.signal.Peak p = PlotFixtures.peak(apex[k], height[k]);
+            org.mobident.result.Peak p = PlotFixtures.peak(apex[k], height[k]);
             if (dips) {
-                p = new org.mobident.signal.Peak(p.apexIndex(), p.apexTimeS(), p.apexTimeSdS(), p.startTimeS(),
+                p = new org.mobident.result.Peak(p.apexIndex(), p.apexTimeS(), p.apexTimeSdS(), p.startTimeS(),
                         p.endTimeS(), p.height(), p.area(), p.correctedArea(), p.widthHalfS(), p.plates(),
                         p.resolution(), p.signalToNoise(), true);
             }
@@ -228,7 +228,7 @@ class PlotLayoutTest {
             t[i] = i * 0.1;
             y[i] = -4 * Math.exp(-0.5 * Math.pow((t[i] - 100) / 1.0, 2));
         }
-        org.mobident.signal.Peak p = new org.mobident.signal.Peak(1000, 100, 0.01, 96, 104, 4, 10, 0.1, 2.35,
+        org.mobident.result.Peak p = new org.mobident.result.Peak(1000, 100, 0.01, 96, 104, 4, 10, 0.1, 2.35,
                 10000, Double.NaN, 100, true);
         RunResult r = new RunResult(PlotFixtures.spec("d", null), null, "x", Double.NaN, null,
                 List.of(new PeakResult(p, PeakRole.ANALYTE, 1, 0.1, 1, PeakMatch.none())), List.of(), 0);

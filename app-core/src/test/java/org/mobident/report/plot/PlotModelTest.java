@@ -8,8 +8,8 @@ import java.util.List;
 import org.junit.jupiter.api.Test;
 import org.mobident.library.Library;
 import org.mobident.library.LibraryEntry;
-import org.mobident.mobility.MobilityScale;
-import org.mobident.pipeline.RunResult;
+import org.mobident.result.MobilityScale;
+import org.mobident.result.RunResult;
 import org.mobident.trace.Trace;
 
 class PlotModelTest {
@@ -136,7 +136,7 @@ class PlotModelTest {
                 .orElseThrow();
         // by default the band is the window matching applies (see WindowContractTest)
         LibraryEntry entry = lib.find("nitrate").orElseThrow();
-        double hw = ToleranceBand.matching(lib, org.mobident.matching.MatchSettings.DEFAULT).halfWidth(entry);
+        double hw = ToleranceBand.matching(lib, org.mobident.settings.MatchSettings.DEFAULT).halfWidth(entry);
         assertEquals(-30.0 - hw, nitrate.from(), 1e-9);
         assertEquals(-30.0 + hw, nitrate.to(), 1e-9);
         PlotModel fixed = PlotModel.builder(Axis.MOBILITY).run(run.trace(), run.result())
@@ -153,7 +153,7 @@ class PlotModelTest {
         PlotModel m = PlotModel.of(run.trace(), run.result(), PlotFixtures.library(), Axis.TIME);
         PlotModel.Band nitrate = m.bands().get(2);
         Library lib = PlotFixtures.library();
-        double hw = ToleranceBand.matching(lib, org.mobident.matching.MatchSettings.DEFAULT)
+        double hw = ToleranceBand.matching(lib, org.mobident.settings.MatchSettings.DEFAULT)
                 .halfWidth(lib.find("nitrate").orElseThrow());
         // μ = 12000/t − 60 → t = 12000/(μ + 60); nitrate −30 ± hw
         assertEquals(12000 / (30 + hw), nitrate.from(), 1e-6);
@@ -172,19 +172,19 @@ class PlotModelTest {
     void aRunAtAnotherTemperatureIsDrawnAtTheMobilitiesComparedWithTheLibrary() {
         // the run's mobilities were compared with the library after a viscosity factor of 0.9
         PlotFixtures.SyntheticRun warm = PlotFixtures.run("warm", 200, 1.0);
-        java.util.List<org.mobident.pipeline.PeakResult> peaks = new java.util.ArrayList<>();
-        for (org.mobident.pipeline.PeakResult p : warm.result().peaks()) {
-            peaks.add(new org.mobident.pipeline.PeakResult(p.peak(), p.role(), p.mobility(), p.mobilitySd(),
+        java.util.List<org.mobident.result.PeakResult> peaks = new java.util.ArrayList<>();
+        for (org.mobident.result.PeakResult p : warm.result().peaks()) {
+            peaks.add(new org.mobident.result.PeakResult(p.peak(), p.role(), p.mobility(), p.mobilitySd(),
                     0.9 * p.mobility(), p.match()));
         }
-        org.mobident.pipeline.RunResult r = warm.result();
-        org.mobident.pipeline.RunResult converted = new org.mobident.pipeline.RunResult(r.spec(), null, r.scaleNote(),
-                r.eofMobility(), r.scale(), peaks, r.notes(), r.noiseSd(), org.mobident.matching.RunScale.OFF, 0.9);
+        org.mobident.result.RunResult r = warm.result();
+        org.mobident.result.RunResult converted = new org.mobident.result.RunResult(r.spec(), null, r.scaleNote(),
+                r.eofMobility(), r.scale(), peaks, r.notes(), r.noiseSd(), org.mobident.result.RunScale.OFF, 0.9);
         PlotModel model = PlotModel.of(warm.trace(), converted, null, Axis.MOBILITY);
         for (PlotModel.PeakMark m : model.peaks()) {
             if (m.status() != PeakStatus.MARKER) {
                 boolean found = false;
-                for (org.mobident.pipeline.PeakResult p : peaks) {
+                for (org.mobident.result.PeakResult p : peaks) {
                     found |= Math.abs(m.x() - p.mobilityAtLibraryTemp()) < 1e-9;
                 }
                 assertTrue(found, "mark at " + m.x() + " is a compared mobility");

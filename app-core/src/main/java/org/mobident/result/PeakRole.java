@@ -1,4 +1,4 @@
-package org.mobident.pipeline;
+package org.mobident.result;
 
 import java.util.Locale;
 

@@ -1,7 +1,7 @@
-package org.mobident.pipeline;
+package org.mobident.result;
 
 /**
- * Told how a batch of {@link Identifier#identifyAll(java.util.List, BatchProgress)} advances, for a
+ * Told how a batch of {@link org.mobident.pipeline.Identifier#identifyAll(java.util.List, BatchProgress)} advances, for a
  * progress display. Calls come from the worker threads, so an implementation must be thread-safe
  * and quick (count, do not print); it must not throw.
  */

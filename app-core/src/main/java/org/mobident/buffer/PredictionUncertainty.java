@@ -1,4 +1,4 @@
-package org.mobident.chem;
+package org.mobident.buffer;
 
 /**
  * The input uncertainties propagated into a predicted mobility.

@@ -1,4 +1,4 @@
-package org.mobident.pipeline;
+package org.mobident.result;
 
 /**
  * Told of each run's result as soon as it is known, for a display that fills in run by run (the
@@ -16,7 +16,7 @@ public interface RunListener {
      * A run's result. A run matched again in the second pass is told a second time; the later
      * result replaces the earlier one.
      *
-     * @param index  the run's place in the list given to {@link Identifier#identifyAll}
+     * @param index  the run's place in the list given to {@link org.mobident.pipeline.Identifier#identifyAll}
      * @param result its result so far
      */
     void runDone(int index, RunResult result);

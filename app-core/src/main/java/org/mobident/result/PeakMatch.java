@@ -1,4 +1,4 @@
-package org.mobident.matching;
+package org.mobident.result;
 
 import java.util.List;
 

@@ -1,4 +1,4 @@
-package org.mobident.matching;
+package org.mobident.settings;
 
 /**
  * How peaks are matched to library analytes. Immutable; start from {@link #DEFAULT} (or one of the
@@ -15,20 +15,20 @@ package org.mobident.matching;
  *   <li>{@link WindowRule#SPREAD}: half-width = {@code windowValue} (k) × the combined standard
  *       uncertainty of the residual, at least {@code minimumWindow}. When the entry's spread is
  *       the sample SD of only a few runs, k is replaced by the Student-t quantile of the same
- *       coverage (see {@link Matcher}).</li>
+ *       coverage (see {@link org.mobident.matching.LibraryMatcher}).</li>
  * </ul>
  *
  * <h2>Probability model</h2>
- * See {@link Matcher}. {@code notInLibraryPrior} is the prior fraction of a run's peaks that are
+ * See {@link org.mobident.matching.LibraryMatcher}. {@code notInLibraryPrior} is the prior fraction of a run's peaks that are
  * none of the library analytes; such peaks are taken as spread evenly over
  * {@code notInLibraryRangeUnits} mobility units. {@code assumedEntrySd} stands in for an entry's spread when
  * the library gives none, and {@code sdFloor} is added in quadrature to every combined
  * uncertainty (rounding of tabulated values, numerical safety).
  *
  * <h2>Status</h2>
- * An assigned peak is {@link MatchStatus#AMBIGUOUS} when the runner-up analyte's probability is at
+ * An assigned peak is {@link org.mobident.result.MatchStatus#AMBIGUOUS} when the runner-up analyte's probability is at
  * least {@code ambiguityRatio} × the assigned analyte's, or when the confidence is below
- * {@code minIdentifiedConfidence}; otherwise {@link MatchStatus#IDENTIFIED}.
+ * {@code minIdentifiedConfidence}; otherwise {@link org.mobident.result.MatchStatus#IDENTIFIED}.
  *
  * @param windowRule              how the candidate window is set when an entry states no tolerance
  * @param windowValue             units (absolute), fraction of |μ| (relative) or k (spread)
@@ -42,7 +42,7 @@ package org.mobident.matching;
  * @param ambiguityRatio          runner-up / assigned probability ratio at which a match is ambiguous
  * @param minIdentifiedConfidence confidence below which a match is ambiguous
  * @param sessionRsd              between-session spread of the mobilities, as a fraction of |μ|,
- *                                for libraries that have not learned their own (see {@link SpreadModel})
+ *                                for libraries that have not learned their own (see {@link org.mobident.matching.SpreadModel})
  * @param scalePrior              what a run's scale correction may be (see {@link ScalePrior});
  *                                null switches the per-run scale correction off
  */

@@ -1,9 +1,9 @@
-package org.mobident.pipeline;
+package org.mobident.result;
 
 import java.util.List;
 import org.mobident.InputException;
-import org.mobident.matching.RunScale;
-import org.mobident.mobility.MobilityScale;
+import org.mobident.result.MobilityScale;
+import org.mobident.result.RunScale;
 import org.mobident.trace.RunSpec;
 import org.mobident.trace.Trace;
 import org.mobident.trace.io.TraceFiles;
@@ -72,13 +72,13 @@ public record RunResult(RunSpec spec, InputException error, String scaleNote, do
 
     /**
      * The uncertainty shown beside a peak's compared mobility: for a peak with a name, the combined
-     * uncertainty that decided its match ({@link org.mobident.matching.Candidate#combinedSd}:
+     * uncertainty that decided its match ({@link org.mobident.result.Candidate#combinedSd}:
      * measurement, scale correction and library spread); otherwise {@link #comparedSd}.
      */
     public double decidingSd(PeakResult pr) {
         String name = pr.match().assigned();
         if (name != null) {
-            for (org.mobident.matching.Candidate c : pr.match().candidates()) {
+            for (org.mobident.result.Candidate c : pr.match().candidates()) {
                 if (c.name().equals(name) && Double.isFinite(c.combinedSd())) {
                     return c.combinedSd();
                 }

@@ -1,4 +1,4 @@
-package org.mobident.signal;
+package org.mobident.result;
 
 import org.mobident.Tolerances;
 

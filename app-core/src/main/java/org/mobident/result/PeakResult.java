@@ -1,7 +1,7 @@
-package org.mobident.pipeline;
+package org.mobident.result;
 
-import org.mobident.matching.PeakMatch;
-import org.mobident.signal.Peak;
+import org.mobident.result.Peak;
+import org.mobident.result.PeakMatch;
 
 /**
  * A peak with its mobility and its match.
@@ -14,7 +14,7 @@ import org.mobident.signal.Peak;
  *                              when the temperatures agree; NaN if unknown)
  * @param match                 the matching outcome ({@link PeakMatch#none()} for markers)
  * @param mobilityCorrected     the mobility compared with the library: at the library temperature and
- *                              corrected for the run's scale ({@link org.mobident.matching.RunScale#corrected});
+ *                              corrected for the run's scale ({@link org.mobident.result.RunScale#corrected});
  *                              equals mobilityAtLibraryTemp when the scale was not fitted (NaN if unknown)
  * @param note                  a remark on this peak for the reader (e.g. two candidates that co-migrate
  *                              at this zone's width), or null

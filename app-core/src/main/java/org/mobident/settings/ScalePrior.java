@@ -1,11 +1,11 @@
-package org.mobident.matching;
+package org.mobident.settings;
 
 /**
  * What a run's mobility scale may be off by, before its peaks are seen. All mobilities of one run
  * share systematic errors: the capillary runs warmer or cooler than stated (about 2.3 % of every
  * mobility per kelvin near 25 °C, through the viscosity of water; IAPWS 2008), the effective field
  * differs from V/L<sub>t</sub>, and the marker apex is biased by its shape. The matcher models the
- * run's mobilities as μ_obs = a·μ_lib + b (see {@link RunScale}) with a normal prior on a and b
+ * run's mobilities as μ_obs = a·μ_lib + b (see {@link org.mobident.result.RunScale}) with a normal prior on a and b
  * centred on (1, 0) — or on what a batch of runs showed (see {@link #centredOn}) — cut at the
  * plausible bounds given here (always around a = 1, b = 0: they are physical).
  *
@@ -52,14 +52,14 @@ public record ScalePrior(double factorCentre, double offsetCentre, double factor
     }
 
     /** ln of the (unnormalised-at-the-bounds) normal prior density at (a, b). */
-    double logDensity(double factor, double offset) {
+    public double logDensity(double factor, double offset) {
         double za = (factor - factorCentre) / factorSd;
         double zb = (offset - offsetCentre) / offsetSd;
         return -0.5 * (za * za + zb * zb) - Math.log(2 * Math.PI * factorSd * offsetSd);
     }
 
     /** True when (a, b) lies within the plausible bounds. */
-    boolean plausible(double factor, double offset) {
+    public boolean plausible(double factor, double offset) {
         return Math.abs(factor - 1.0) <= maxFactorDeviation && Math.abs(offset) <= maxOffset;
     }
 }

@@ -1,4 +1,4 @@
-package org.mobident.chem;
+package org.mobident.buffer;
 
 /**
  * A closed pH interval.

@@ -1,10 +1,12 @@
-package org.mobident.matching;
+package org.mobident.result;
+
+import org.mobident.settings.ScalePrior;
 
 /**
  * The run-wide correction of a run's mobilities: μ_obs = a·μ_lib + b, so a peak's mobility
  * compared with the library is (μ_obs − b)/a. a absorbs what scales every mobility alike
  * (capillary temperature, effective field), b what shifts them alike (the EOF marker's error).
- * Fitted per run from the peaks the library explains (see {@link LibraryMatcher}).
+ * Fitted per run from the peaks the library explains (see {@code matching.LibraryMatcher}).
  *
  * @param status     whether the correction was fitted
  * @param factor     a (1 when not fitted)
@@ -51,7 +53,7 @@ public record RunScale(Status status, double factor, double factorSd, double off
     }
 
     /** Not fitted: the prior's centre (a = 1, b = 0 unless a batch showed otherwise), with the prior's uncertainty. */
-    static RunScale prior(ScalePrior p, double anchors) {
+    public static RunScale prior(ScalePrior p, double anchors) {
         return new RunScale(Status.TOO_FEW_ANCHORS, p.factorCentre(), p.factorSd(), p.offsetCentre(), p.offsetSd(),
                 0.0, anchors);
     }

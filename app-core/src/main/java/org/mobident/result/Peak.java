@@ -1,4 +1,4 @@
-package org.mobident.signal;
+package org.mobident.result;
 
 /**
  * One detected peak, measured on the baseline-corrected signal. Heights and areas are
@@ -8,7 +8,7 @@ package org.mobident.signal;
  * maximum of the peak. The centre time is the zone's first moment (centre of mass); for a zone
  * skewed by electromigration dispersion the apex moves towards the sharp flank as the
  * concentration grows while the centre of mass stays put, so the centre time is the one to turn
- * into a mobility that does not depend on concentration (see {@link ZoneCentre}).
+ * into a mobility that does not depend on concentration (see {@link org.mobident.signal.ZoneCentre}).
  *
  * @param apexIndex      index of the sample nearest the apex
  * @param apexTimeS      apex time in s, refined between samples
@@ -17,7 +17,7 @@ package org.mobident.signal;
  *                       and end, or the centre of the fitted Gaussian for a zone resolved by the
  *                       cluster fit
  * @param centreTimeSdS  standard uncertainty of the centre time in s: the noise propagated through
- *                       the moment combined with a shape term (see {@link ZoneCentre})
+ *                       the moment combined with a shape term (see {@link org.mobident.signal.ZoneCentre})
  * @param startTimeS     start of the peak (where it leaves the baseline), s
  * @param endTimeS       end of the peak (where it returns to the baseline), s
  * @param height         apex height above (or depth below) the baseline, signal units
@@ -28,7 +28,7 @@ package org.mobident.signal;
  * @param resolution     resolution to the nearest neighbour, 1.18 (t₂ − t₁)/(w½,₁ + w½,₂)
  *                       (Ph. Eur. 2.2.46); NaN when the peak has no neighbour
  * @param signalToNoise  S/N = 2H/h with h the peak-to-peak noise of the background around the peak
- *                       (Ph. Eur. 2.2.46; see {@link PeakDetector})
+ *                       (Ph. Eur. 2.2.46; see {@link org.mobident.signal.PeakDetector})
  * @param dip            true when the peak points below the baseline
  */
 public record Peak(

@@ -1,4 +1,4 @@
-package org.mobident.matching;
+package org.mobident.result;
 
 /**
  * One library analyte considered for a peak.

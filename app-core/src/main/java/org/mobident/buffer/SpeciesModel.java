@@ -1,4 +1,4 @@
-package org.mobident.chem;
+package org.mobident.buffer;
 
 import java.util.ArrayList;
 import java.util.List;

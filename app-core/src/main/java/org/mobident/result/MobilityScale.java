@@ -1,4 +1,4 @@
-package org.mobident.mobility;
+package org.mobident.result;
 
 /**
  * Converts migration times of one run into effective mobilities (1e-9 m²/(V·s), signed), once

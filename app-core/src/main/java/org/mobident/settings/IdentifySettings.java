@@ -1,8 +1,8 @@
-package org.mobident.pipeline;
+package org.mobident.settings;
 
 import java.util.Objects;
-import org.mobident.matching.MatchSettings;
-import org.mobident.signal.PeakSettings;
+import org.mobident.settings.MatchSettings;
+import org.mobident.settings.PeakSettings;
 import org.mobident.trace.io.TraceReadOptions;
 
 /**

@@ -1,11 +1,11 @@
-package org.mobident.signal;
+package org.mobident.settings;
 
 import org.mobident.Tolerances;
 
 /**
  * Settings of peak detection.
  *
- * @param minSignalToNoise  peaks with a lower S/N (Ph. Eur. 2.2.46, see {@link PeakDetector}) are not
+ * @param minSignalToNoise  peaks with a lower S/N (Ph. Eur. 2.2.46, see {@link org.mobident.signal.PeakDetector}) are not
  *                          reported; by default 0 (none). Whatever its value, a peak must stand
  *                          significantly above the noise around it
  * @param smoothingWindowS  width of the smoothing window in s; NaN chooses it from the data

@@ -1,4 +1,4 @@
-package org.mobident.chem;
+package org.mobident.buffer;
 
 /**
  * The buffer an analyte migrates in, as far as the mobility model needs it.
