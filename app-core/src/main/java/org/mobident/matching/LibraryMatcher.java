@@ -14,6 +14,7 @@ import org.jgrapht.alg.interfaces.MatchingAlgorithm;
 import org.jgrapht.alg.matching.MaximumWeightBipartiteMatching;
 import org.jgrapht.graph.DefaultWeightedEdge;
 import org.jgrapht.graph.SimpleWeightedGraph;
+import org.mobident.Tolerances;
 import org.mobident.library.Library;
 import org.mobident.library.LibraryEntry;
 import org.mobident.result.Candidate;
@@ -40,6 +41,12 @@ import org.mobident.settings.ScalePrior;
  *       themselves uncertain, and the t tails keep a peak a few "σ" away from being declared
  *       foreign with false certainty (Student, Biometrika 6 (1908) 1). It is the normal density
  *       when nothing is estimated from few runs;</li>
+ *   <li>where the peak's centre uncertainty has a shape term, f is the two-scale mixture
+ *       w·f_u + (1 − w)·f, f_u the same density with σ_i replaced by the peak's usual-case SD
+ *       ({@link org.mobident.result.Peak#migrationTimeUsualSdS()}, w =
+ *       {@link Tolerances#CENTRE_SHAPE_USUAL_WEIGHT}): the centres of skewed zones are usually
+ *       much closer than their shape term allows and sometimes as far (McLachlan &amp; Peel, Finite
+ *       Mixture Models, 2000, ch. 1);</li>
  *   <li>entry j is a candidate only inside its {@link MatchWindow};</li>
  *   <li>the run is modelled as in multi-target data association (Bar-Shalom &amp; Fortmann,
  *       Tracking and Data Association, 1988, ch. 9): each library analyte is present with prior
@@ -137,7 +144,23 @@ public final class LibraryMatcher {
      */
     public static RunMatch matchRun(double[] mobility, double[] mobilitySd, Library library, SpreadModel spread,
                                     MatchSettings settings, MobilityAdjuster adjuster) {
-        return new Problem(mobility, mobilitySd, library, spread, settings, adjuster, MAX_STATES).solve();
+        return new Problem(mobility, mobilitySd, null, library, spread, settings, adjuster, MAX_STATES).solve();
+    }
+
+    /**
+     * As {@link #matchRun(double[], double[], Library, SpreadModel, MatchSettings, MobilityAdjuster)},
+     * with each peak's error a two-scale mixture: with probability
+     * {@link Tolerances#CENTRE_SHAPE_USUAL_WEIGHT} its SD is {@code mobilityUsualSd}, otherwise
+     * {@code mobilitySd} (see {@link org.mobident.result.Peak#migrationTimeUsualSdS()}). The windows
+     * stay those of {@code mobilitySd}.
+     *
+     * @param mobilityUsualSd the peaks' SDs in the usual case, never above {@code mobilitySd}; may be null
+     */
+    public static RunMatch matchRun(double[] mobility, double[] mobilitySd, double[] mobilityUsualSd,
+                                    Library library, SpreadModel spread, MatchSettings settings,
+                                    MobilityAdjuster adjuster) {
+        return new Problem(mobility, mobilitySd, mobilityUsualSd, library, spread, settings, adjuster, MAX_STATES)
+                .solve();
     }
 
     /**
@@ -147,7 +170,7 @@ public final class LibraryMatcher {
     public static List<PeakMatch> match(double[] mobility, double[] mobilitySd, Library library,
                                         MatchSettings settings, MobilityAdjuster adjuster) {
         MatchSettings fixed = settings.withScalePrior(null);
-        return new Problem(mobility, mobilitySd, library, SpreadModel.of(library, fixed), fixed, adjuster,
+        return new Problem(mobility, mobilitySd, null, library, SpreadModel.of(library, fixed), fixed, adjuster,
                 MAX_STATES).solve().matches();
     }
 
@@ -155,7 +178,7 @@ public final class LibraryMatcher {
     static List<PeakMatch> match(double[] mobility, double[] mobilitySd, Library library, MatchSettings settings,
                                  MobilityAdjuster adjuster, int maxStates) {
         MatchSettings fixed = settings.withScalePrior(null);
-        return new Problem(mobility, mobilitySd, library, SpreadModel.of(library, fixed), fixed, adjuster,
+        return new Problem(mobility, mobilitySd, null, library, SpreadModel.of(library, fixed), fixed, adjuster,
                 maxStates).solve().matches();
     }
 
@@ -197,6 +220,16 @@ public final class LibraryMatcher {
             }
         }
         return s.notInLibraryRange(lo, hi);
+    }
+
+    /**
+     * ln(w·e^usual + (1 − w)·e^broad), w = {@link Tolerances#CENTRE_SHAPE_USUAL_WEIGHT}: the density
+     * of a peak whose error is usually small and sometimes as large as stated.
+     */
+    static double logMixture(double usual, double broad) {
+        double w = Tolerances.CENTRE_SHAPE_USUAL_WEIGHT;
+        double max = Math.max(usual, broad);
+        return max + Math.log(w * Math.exp(usual - max) + (1 - w) * Math.exp(broad - max));
     }
 
     /**
@@ -296,6 +329,8 @@ public final class LibraryMatcher {
         private final MatchSettings s;
         private final int maxStates;
         private final double[] peakVariance;
+        /** Per peak: the variance in the usual case (equal to peakVariance when the peak's error is not mixed). */
+        private final double[] usualVariance;
         private final double[] entryMobility;
         private final double[] logOdds;
         /** Per peak: the entries that can be candidates at some plausible scale, and the converted mobility. */
@@ -306,9 +341,13 @@ public final class LibraryMatcher {
         private final double[][] baseDf;
         private final double[][] baseWindow;
         private final double[][] baseLog;
+        /** As baseVar, baseDf and baseLog for the usual case of a mixed peak (null for the others). */
+        private final double[][] usualVar;
+        private final double[][] usualDf;
+        private final double[][] usualLog;
 
-        Problem(double[] mobility, double[] mobilitySd, Library library, SpreadModel spread, MatchSettings s,
-                MobilityAdjuster adjuster, int maxStates) {
+        Problem(double[] mobility, double[] mobilitySd, double[] mobilityUsualSd, Library library,
+                SpreadModel spread, MatchSettings s, MobilityAdjuster adjuster, int maxStates) {
             if (mobilitySd != null && mobilitySd.length != mobility.length) {
                 throw new IllegalArgumentException("mobility and mobilitySd differ in length: "
                         + mobility.length + " vs " + mobilitySd.length);
@@ -337,6 +376,10 @@ public final class LibraryMatcher {
                         : ordinary;
             }
             peakVariance = new double[peaks];
+            usualVariance = new double[peaks];
+            usualVar = new double[peaks][];
+            usualDf = new double[peaks][];
+            usualLog = new double[peaks][];
             pairEntry = new int[peaks][];
             pairX = new double[peaks][];
             baseVar = new double[peaks][];
@@ -350,6 +393,8 @@ public final class LibraryMatcher {
                     throw new IllegalArgumentException("peak " + i + ": negative mobility uncertainty " + sd);
                 }
                 peakVariance[i] = Double.isNaN(sd) ? 0.0 : sd * sd;
+                double usual = mobilityUsualSd == null ? Double.NaN : mobilityUsualSd[i];
+                usualVariance[i] = usual >= 0 && usual * usual < peakVariance[i] ? usual * usual : peakVariance[i];
                 fillPairs(i, adjuster, prior);
             }
         }
@@ -390,6 +435,12 @@ public final class LibraryMatcher {
             baseDf[i] = new double[c];
             baseWindow[i] = new double[c];
             baseLog[i] = new double[c];
+            boolean mixed = usualVariance[i] < peakVariance[i];
+            if (mixed) {
+                usualVar[i] = new double[c];
+                usualDf[i] = new double[c];
+                usualLog[i] = new double[c];
+            }
             for (int k = 0; k < c; k++) {
                 int j = (int) kept.get(k)[0];
                 pairEntry[i][k] = j;
@@ -401,6 +452,14 @@ public final class LibraryMatcher {
                 baseWindow[i][k] = window(j, peakVariance[i]);
                 baseLog[i][k] = logOdds[j] - 0.5 * Math.log(v)
                         + (df < MatchWindow.NORMAL_DF ? logDensityConstant(df) : -LOG_SQRT_2PI);
+                if (mixed) {
+                    double vu = spread.predictiveVariance(j) + usualVariance[i];
+                    double dfu = MatchWindow.combinedDf(vu, spread.estimatedVariance(j), spread.degreesOfFreedom(j));
+                    usualVar[i][k] = vu;
+                    usualDf[i][k] = dfu;
+                    usualLog[i][k] = logOdds[j] - 0.5 * Math.log(vu)
+                            + (dfu < MatchWindow.NORMAL_DF ? logDensityConstant(dfu) : -LOG_SQRT_2PI);
+                }
             }
         }
 
@@ -550,10 +609,15 @@ public final class LibraryMatcher {
         }
 
         private double baseLogRatio(int i, int k, double r) {
-            double z2 = r * r / baseVar[i][k];
-            double df = baseDf[i][k];
-            return df < MatchWindow.NORMAL_DF ? baseLog[i][k] - 0.5 * (df + 1) * Math.log1p(z2 / df)
-                    : baseLog[i][k] - 0.5 * z2;
+            double broad = logRatio(baseLog[i][k], r * r / baseVar[i][k], baseDf[i][k]);
+            if (usualVar[i] == null) {
+                return broad;
+            }
+            return logMixture(logRatio(usualLog[i][k], r * r / usualVar[i][k], usualDf[i][k]), broad);
+        }
+
+        private static double logRatio(double base, double z2, double df) {
+            return df < MatchWindow.NORMAL_DF ? base - 0.5 * (df + 1) * Math.log1p(z2 / df) : base - 0.5 * z2;
         }
 
         /** Expectation–maximisation from (a, b) to the nearby mode. */
@@ -677,7 +741,13 @@ public final class LibraryMatcher {
                     double v = spread.predictiveVariance(j) + extra;
                     double df = MatchWindow.combinedDf(v, spread.estimatedVariance(j), spread.degreesOfFreedom(j));
                     double z = r / Math.sqrt(v);
-                    list.add(new Pair(j, r, z, logOdds[j] + logDensity(z, df) - 0.5 * Math.log(v)));
+                    double log = logDensity(z, df) - 0.5 * Math.log(v);
+                    if (usualVariance[i] < peakVariance[i]) {
+                        double vu = v - (peakVariance[i] - usualVariance[i]) / (a * a);
+                        double dfu = MatchWindow.combinedDf(vu, spread.estimatedVariance(j), spread.degreesOfFreedom(j));
+                        log = logMixture(logDensity(r / Math.sqrt(vu), dfu) - 0.5 * Math.log(vu), log);
+                    }
+                    list.add(new Pair(j, r, z, logOdds[j] + log));
                 }
                 out.add(list);
             }

@@ -568,7 +568,8 @@ public final class Identifier {
         MatchSettings ms = learned == null ? settings.matchSettings()
                 : settings.matchSettings().withScalePrior(learned.prior());
         MarkerLocator.Evaluator evaluator = prepared.library().size() == 0 ? null
-                : (mob, sd) -> LibraryMatcher.matchRun(mob, sd, prepared.library(), prepared.spread(), ms, adjuster);
+                : (mob, sd, usual) -> LibraryMatcher.matchRun(mob, sd, usual, prepared.library(), prepared.spread(), ms,
+                        adjuster);
         MarkerLocator locator = new MarkerLocator(prepared.library().size() == 0);
         MarkerLocator.Choice choice = locator.locate(c, peaks, evaluator);
         Trace searchWindow = d.markerWindow();

@@ -54,7 +54,8 @@ final class MarkerLocator {
 
     /** Evaluates the run's analyte peaks under a scale. */
     interface Evaluator {
-        RunMatch match(double[] mobility, double[] mobilitySd);
+        /** The match of the analyte peaks; {@code mobilityUsualSd} as {@link Peak#migrationTimeUsualSdS()}. */
+        RunMatch match(double[] mobility, double[] mobilitySd, double[] mobilityUsualSd);
     }
 
     /**
@@ -66,11 +67,12 @@ final class MarkerLocator {
      * @param analytes     indices of the other peaks, in order
      * @param mobility     their mobilities under the scale
      * @param mobilitySd   their standard uncertainties
+     * @param mobilityUsualSd their uncertainties in the usual case ({@link Peak#migrationTimeUsualSdS()})
      * @param match        their match (null when the library is empty)
      * @param logScore     ln prior + ln evidence
      */
     record Hypothesis(MobilityScale scale, int neutralIndex, int refIndex, int[] analytes, double[] mobility,
-                      double[] mobilitySd, RunMatch match, double logScore) {
+                      double[] mobilitySd, double[] mobilityUsualSd, RunMatch match, double logScore) {
     }
 
     /**
@@ -208,6 +210,7 @@ final class MarkerLocator {
         int[] analytes = new int[count];
         double[] mob = new double[count];
         double[] sd = new double[count];
+        double[] usual = new double[count];
         int k = 0;
         for (int i = 0; i < peaks.size(); i++) {
             if (i == neutral || i == ref) {
@@ -217,11 +220,12 @@ final class MarkerLocator {
             analytes[k] = i;
             mob[k] = scale.mobility(p.migrationTimeS());
             sd[k] = scale.mobilitySd(p.migrationTimeS(), p.migrationTimeSdS());
+            usual[k] = scale.mobilitySd(p.migrationTimeS(), p.migrationTimeUsualSdS());
             k++;
         }
-        RunMatch match = evaluator == null ? null : evaluator.match(mob, sd);
+        RunMatch match = evaluator == null ? null : evaluator.match(mob, sd, usual);
         double evidence = match == null || !Double.isFinite(match.logEvidence()) ? 0.0 : match.logEvidence();
-        return new Hypothesis(scale, neutral, ref, analytes, mob, sd, match, logPrior + evidence);
+        return new Hypothesis(scale, neutral, ref, analytes, mob, sd, usual, match, logPrior + evidence);
     }
 
     private static Hypothesis best(List<Hypothesis> tried) {

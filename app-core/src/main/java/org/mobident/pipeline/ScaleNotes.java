@@ -86,7 +86,7 @@ final class ScaleNotes {
         for (int k = 0; k < n; k++) {
             mirrored[k] = -best.mobility()[k];
         }
-        RunMatch other = evaluator.match(mirrored, best.mobilitySd());
+        RunMatch other = evaluator.match(mirrored, best.mobilitySd(), best.mobilityUsualSd());
         if (other.explainedPeaks() >= match.explainedPeaks() + SIGN_HINT_GAIN && other.explainedPeaks() >= MarkerLocator.WELL_EXPLAINED_SHARE * n) {
             return String.format(Locale.ROOT, "the library explains %.1f of %d peaks as measured but %.1f with the "
                     + "opposite voltage sign: check the sign of voltage_kv (negative when the inlet is at the "

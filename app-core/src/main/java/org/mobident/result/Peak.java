@@ -30,6 +30,9 @@ package org.mobident.result;
  * @param signalToNoise  S/N = 2H/h with h the peak-to-peak noise of the background around the peak
  *                       (Ph. Eur. 2.2.46; see {@link org.mobident.signal.PeakDetector})
  * @param dip            true when the peak points below the baseline
+ * @param centreShapeSdS the shape term inside {@code centreTimeSdS}, s (0 when it has none): the
+ *                       part that allows for the zone departing from the model its centre was
+ *                       measured with (see {@link #migrationTimeUsualSdS()})
  */
 public record Peak(
         int apexIndex,
@@ -46,7 +49,16 @@ public record Peak(
         double plates,
         double resolution,
         double signalToNoise,
-        boolean dip) {
+        boolean dip,
+        double centreShapeSdS) {
+
+    /** A peak whose centre uncertainty has no shape term. */
+    public Peak(int apexIndex, double apexTimeS, double apexTimeSdS, double centreTimeS, double centreTimeSdS,
+                double startTimeS, double endTimeS, double height, double area, double correctedArea,
+                double widthHalfS, double plates, double resolution, double signalToNoise, boolean dip) {
+        this(apexIndex, apexTimeS, apexTimeSdS, centreTimeS, centreTimeSdS, startTimeS, endTimeS, height, area,
+                correctedArea, widthHalfS, plates, resolution, signalToNoise, dip, 0.0);
+    }
 
     /**
      * A peak without a separate centre measurement (hand-made peaks, callers written before the
@@ -68,6 +80,22 @@ public record Peak(
     /** Standard uncertainty of {@link #migrationTimeS()}, s. */
     public double migrationTimeSdS() {
         return Double.isFinite(centreTimeS) ? centreTimeSdS : apexTimeSdS;
+    }
+
+    /**
+     * Standard uncertainty of {@link #migrationTimeS()} in the usual case, s: that of
+     * {@link #migrationTimeSdS()} with the shape term cut to
+     * {@link org.mobident.Tolerances#CENTRE_SHAPE_USUAL_SHARE} of itself. The errors of skewed zones'
+     * centres are heavy-tailed (see that constant); the matcher weighs both readings.
+     */
+    public double migrationTimeUsualSdS() {
+        double sd = migrationTimeSdS();
+        if (!Double.isFinite(centreTimeS) || !(centreShapeSdS > 0)) {
+            return sd;
+        }
+        double shape = Math.min(centreShapeSdS, sd);
+        double k = org.mobident.Tolerances.CENTRE_SHAPE_USUAL_SHARE;
+        return Math.sqrt(Math.max(0.0, sd * sd - (1 - k * k) * shape * shape));
     }
 
     /** Where the S/N stands against the ICH Q2 detection and quantitation limits. */

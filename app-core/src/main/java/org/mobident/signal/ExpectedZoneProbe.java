@@ -656,7 +656,7 @@ public final class ExpectedZoneProbe {
                     : PeakDetector.resolution(m.apexTimeS(), m.widthHalfS(), neighbour.apexTimeS(), neighbour.widthHalfS());
             out.add(new Peak(m.apexIndex(), m.apexTimeS(), m.apexTimeSdS(), m.centreTimeS(), m.centreTimeSdS(),
                     m.startTimeS(), m.endTimeS(), m.height(), m.area(), m.correctedArea(), m.widthHalfS(), m.plates(),
-                    resolution, m.signalToNoise(), m.dip()));
+                    resolution, m.signalToNoise(), m.dip(), m.centreShapeSdS()));
         }
         return out;
     }

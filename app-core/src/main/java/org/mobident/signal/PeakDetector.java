@@ -266,7 +266,7 @@ public final class PeakDetector {
             }
             peaks.add(new Peak(nearestIndex(t, apexTime), apexTime, apexSd, m.centreTimeS, m.centreTimeSdS,
                     m.startTimeS, m.endTimeS, m.height, m.area, correctedArea, m.widthHalfS,
-                    plates, resolution, m.signalToNoise, dip));
+                    plates, resolution, m.signalToNoise, dip, m.centreShapeSdS));
         }
         double[] rule = expectedWidthRule(reported, sampling);
         ExpectedZoneProbe probe = new ExpectedZoneProbe(t, raw, concavity, concavitySd, localNoise, correlation,
@@ -342,14 +342,14 @@ public final class PeakDetector {
                 return null;
             }
             if (m.centre == null) {
-                return m.reported(signalToNoise, m.centreTimeS, m.centreTimeSdS);
+                return m.reported(signalToNoise, m.centreTimeS, m.centreTimeSdS, m.centreShapeSdS);
             }
             CentreEstimate c = centre(m, signalToNoise);
             double centreSd = m.centre.uncertaintyWithShapeS(local.rawSd(), correlation, c.shapeTermS(),
                     new ZoneCentre.Boundaries(m.startTimeS, aboveBaseline(m.startTimeS), m.endTimeS,
                             aboveBaseline(m.endTimeS)),
                     m.widthHalfS, m.area);
-            return m.reported(signalToNoise, c.centreTimeS(), centreSd);
+            return m.reported(signalToNoise, c.centreTimeS(), centreSd, Math.min(c.shapeTermS(), centreSd));
         }
 
         /** A peak's reported centre time and the shape term of its uncertainty, s. */
@@ -483,11 +483,11 @@ public final class PeakDetector {
     private record Measured(double apexTimeS, double apexTimeSdS, double height, double startTimeS,
                             double endTimeS, double area, double widthHalfS, boolean fitted,
                             double smoothedHeight, ZoneCentre centre, double centreTimeS, double centreTimeSdS,
-                            double signalToNoise) {
+                            double signalToNoise, double centreShapeSdS) {
 
-        Measured reported(double sn, double centre, double centreSd) {
+        Measured reported(double sn, double centre, double centreSd, double shapeSd) {
             return new Measured(apexTimeS, apexTimeSdS, height, startTimeS, endTimeS, area, widthHalfS, fitted,
-                    smoothedHeight, this.centre, centre, centreSd, sn);
+                    smoothedHeight, this.centre, centre, centreSd, sn, shapeSd);
         }
     }
 
@@ -570,7 +570,7 @@ public final class PeakDetector {
             double half = z.widthHalfS();
             Measured m = new Measured(z.apexTimeS(), sd, z.height(), Math.max(t[zone.first()], z.apexTimeS() - half),
                     Math.min(t[zone.last()], z.apexTimeS() + half), z.area(), z.widthHalfS(), true, z.height(), null,
-                    z.apexTimeS(), sd, Double.NaN);
+                    z.apexTimeS(), sd, Double.NaN, 0.0);
             Measured judged = reporting.judge(m, true);
             if (judged != null) {
                 all.add(judged);
@@ -773,7 +773,7 @@ public final class PeakDetector {
                 ZoneCentre centre = shareCentre(c, k, first, last);
                 out.add(new Measured(z.apexTimeS(), z.apexTimeSdS(), z.height(), start, end, z.area(),
                         z.widthHalfS(), true, z.height(), centre,
-                        centre == null ? z.apexTimeS() : centre.centreTimeS(), z.apexTimeSdS(), Double.NaN));
+                        centre == null ? z.apexTimeS() : centre.centreTimeS(), z.apexTimeSdS(), Double.NaN, 0.0));
                 start = end;
             }
             return out;
@@ -894,7 +894,7 @@ public final class PeakDetector {
                 }
                 double centreSd = Math.hypot(z.firstMomentSdS(), shape);
                 out.add(new Measured(apex, z.centreSdS(), height, start, end, z.areaTimesS(), z.widthHalfS(), true,
-                        height, null, z.firstMomentS(), centreSd, Double.NaN));
+                        height, null, z.firstMomentS(), centreSd, Double.NaN, shape));
                 start = end;
             }
             return out;
@@ -1019,7 +1019,7 @@ public final class PeakDetector {
         }
         return new Measured(fit.apexTimeS(), fit.apexTimeSdS(), fit.height(), t[first], t[last],
                 trapezoid(t, raw, first, last), width, false, smooth[apex], centre,
-                centre == null ? fit.apexTimeS() : centre.centreTimeS(), fit.apexTimeSdS(), Double.NaN);
+                centre == null ? fit.apexTimeS() : centre.centreTimeS(), fit.apexTimeSdS(), Double.NaN, 0.0);
     }
 
     /**

@@ -9,7 +9,9 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Random;
+import org.apache.commons.math3.distribution.NormalDistribution;
 import org.junit.jupiter.api.Test;
+import org.mobident.Tolerances;
 import org.mobident.library.Library;
 import org.mobident.library.LibraryEntry;
 import org.mobident.result.Candidate;
@@ -134,6 +136,53 @@ class LibraryMatcherTest {
         assertEquals(m.confidence(), m.runnerUpProbability(), 1e-9, "symmetric: equally likely");
         assertTrue(m.confidence() < 0.5);
         assertNotEquals(m.assigned(), m.runnerUp());
+    }
+
+    @Test
+    void aPeakWhoseErrorIsUsuallySmallIsWeighedAsATwoScaleMixture() {
+        // a skewed zone's centre 0.1 units from one entry and 1.1 from its neighbour, stated SD 1.0,
+        // SD 0.2 in the usual case; the scale is taken as stated
+        Library lib = lib(LibraryEntry.of("Near", -71.1, 0.05), LibraryEntry.of("Far", -72.3, 0.05),
+                LibraryEntry.of("Chloride", -79.1, 0.05));
+        MatchSettings fixed = S.withScalePrior(null);
+        SpreadModel spread = SpreadModel.of(lib, fixed);
+        double[] mu = {-71.2};
+        PeakMatch plain = LibraryMatcher.matchRun(mu, new double[] {1.0}, lib, spread, fixed,
+                MobilityAdjuster.IDENTITY).matches().get(0);
+        PeakMatch mixed = LibraryMatcher.matchRun(mu, new double[] {1.0}, new double[] {0.2}, lib, spread, fixed,
+                MobilityAdjuster.IDENTITY).matches().get(0);
+        // one peak, two candidates of equal prior: their probabilities stand as their densities. The
+        // density of a two-component normal mixture, w·N(r; 0, v_u) + (1 − w)·N(r; 0, v) (McLachlan &
+        // Peel, Finite Mixture Models, 2000, eq. 1.1), from Commons Math's normal distribution
+        double w = Tolerances.CENTRE_SHAPE_USUAL_WEIGHT;
+        double entry = 0.05 * 0.05 + fixed.sdFloor() * fixed.sdFloor();
+        NormalDistribution broad = new NormalDistribution(null, 0.0, Math.sqrt(entry + 1.0));
+        NormalDistribution usual = new NormalDistribution(null, 0.0, Math.sqrt(entry + 0.04));
+        double near = w * usual.density(-0.1) + (1 - w) * broad.density(-0.1);
+        double far = w * usual.density(1.1) + (1 - w) * broad.density(1.1);
+        assertEquals(near / far, probability(mixed, "Near") / probability(mixed, "Far"), 1e-9 * near / far);
+        assertEquals(broad.density(-0.1) / broad.density(1.1),
+                probability(plain, "Near") / probability(plain, "Far"), 1e-9, "without the usual SD: one normal");
+        assertEquals("Near", mixed.assigned());
+        assertTrue(mixed.confidence() > plain.confidence() + 0.2,
+                plain.confidence() + " -> " + mixed.confidence());
+        assertEquals(plain.candidates().get(0).z(), mixed.candidates().get(0).z(), EXACT,
+                "residuals and z stay those of the stated SD");
+    }
+
+    @Test
+    void aUsualSdEqualToTheStatedOneChangesNothing() {
+        Library lib = lib(LibraryEntry.of("Near", -71.1, 0.05), LibraryEntry.of("Far", -72.3, 0.05));
+        SpreadModel spread = SpreadModel.of(lib, S);
+        double[] mu = {-71.2, -72.0};
+        double[] sd = {0.6, 0.3};
+        RunMatch plain = LibraryMatcher.matchRun(mu, sd, lib, spread, S, MobilityAdjuster.IDENTITY);
+        RunMatch same = LibraryMatcher.matchRun(mu, sd, sd.clone(), lib, spread, S, MobilityAdjuster.IDENTITY);
+        assertEquals(plain, same);
+    }
+
+    private static double probability(PeakMatch m, String name) {
+        return m.candidates().stream().filter(c -> c.name().equals(name)).findFirst().orElseThrow().probability();
     }
 
     @Test

@@ -123,6 +123,10 @@ class SkewedClusterTest {
         // the centre within its stated uncertainty (3 SDs) and a few per cent of its width of the
         // first moment it was built with
         assertEquals(289.2, zone.centreTimeS(), Math.min(3 * zone.centreTimeSdS(), 0.15), "centre of the tailing zone");
+        // the shape term inside the stated SD is carried apart, for the matcher's usual case
+        assertTrue(zone.centreShapeSdS() > 0 && zone.centreShapeSdS() <= zone.centreTimeSdS(),
+                "shape term " + zone.centreShapeSdS() + " of SD " + zone.centreTimeSdS());
+        assertTrue(zone.migrationTimeUsualSdS() < zone.centreTimeSdS());
     }
 
     @Test
@@ -168,6 +172,10 @@ class SkewedClusterTest {
             }
             assertTrue(big.centreTimeSdS() < Math.abs(big.apexTimeS() - big.centreTimeS()) / 3,
                     "seed " + seed + ": SD " + big.centreTimeSdS());
+            for (Peak p : List.of(big, small)) {
+                assertTrue(p.centreShapeSdS() > 0 && p.centreShapeSdS() <= p.centreTimeSdS(),
+                        "seed " + seed + ": shape term " + p.centreShapeSdS() + " of SD " + p.centreTimeSdS());
+            }
         }
     }
 
