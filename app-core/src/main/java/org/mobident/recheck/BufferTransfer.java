@@ -1,5 +1,6 @@
 package org.mobident.recheck;
 
+import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.HashMap;
 import java.util.List;
@@ -151,7 +152,7 @@ public final class BufferTransfer {
      *
      * @throws InputException when the file cannot be read or a row is malformed (file, line and field named)
      */
-    public BufferTransfer withEnthalpyTable(java.nio.file.Path tableFile) throws InputException {
+    public BufferTransfer withEnthalpyTable(Path tableFile) throws InputException {
         return withEnthalpies(IonisationEnthalpies.read(tableFile));
     }
 

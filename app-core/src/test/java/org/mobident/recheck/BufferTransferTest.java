@@ -2,12 +2,14 @@ package org.mobident.recheck;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
 import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
 import org.mobident.InputException;
 import org.mobident.buffer.BufferConditions;
 import org.mobident.buffer.SpeciesModel;
@@ -191,12 +193,14 @@ class BufferTransferTest {
     @Test
     void warmerMethodMovesThePkaOfAnAmineBuffer() throws InputException {
         Path table = Path.of("..").resolve(org.mobident.chem.IonisationEnthalpies.SHIPPED_TABLE);
-        org.mobident.chem.IonisationEnthalpies h = org.mobident.chem.IonisationEnthalpies.read(Files.exists(table)
-                ? table : Path.of(org.mobident.chem.IonisationEnthalpies.SHIPPED_TABLE));
+        Path shipped = Files.exists(table) ? table : Path.of(org.mobident.chem.IonisationEnthalpies.SHIPPED_TABLE);
         LibraryEntry tris = entry("Tris", 14.75, 0.2, 6, 1, List.of(8.072), List.of(29.5, 0.0), 8.072, 0, 25);
         BufferSpec a = BufferSpec.of("A", 8.072, 0, 25);
         BufferSpec b = BufferSpec.of("B", 8.072, 0, 37);
-        PredictedMobility p = BufferTransfer.withoutReference().withEnthalpies(h).predict(tris, a, b, "lib");
+        PredictedMobility p = BufferTransfer.withoutReference().withEnthalpyTable(shipped).predict(tris, a, b, "lib");
+        PredictedMobility read = BufferTransfer.withoutReference()
+                .withEnthalpies(org.mobident.chem.IonisationEnthalpies.read(shipped)).predict(tris, a, b, "lib");
+        assertEquals(read, p, "the table read by file is the table read beforehand");
         double pKa37 = org.mobident.chem.PkaTemperature.pKaAt(8.072, 47.45, -59, 37.0);
         double alpha37 = 1.0 / (1.0 + Math.pow(10, 8.072 - pKa37));
         double viscosity = org.mobident.mobility.MobilityMath.atTemperature(1.0, 25, 37);
@@ -208,5 +212,14 @@ class BufferTransferTest {
         assertTrue(q.modelUncertainty() > p.modelUncertainty(), q.modelUncertainty() + " vs " + p.modelUncertainty());
         assertTrue(q.note().contains("assumed enthalpy"), q.note());
         assertFalse(p.note().contains("assumed enthalpy"), p.note());
+    }
+
+    @Test
+    void aMalformedEnthalpyTableIsRefusedNamingTheFile(@TempDir Path dir) throws Exception {
+        Path bad = dir.resolve("ionisation-enthalpies.csv");
+        Files.writeString(bad, "name,step,enthalpy_kj_per_mol\nTris,1,not-a-number\n");
+        InputException e = assertThrows(InputException.class,
+                () -> BufferTransfer.withoutReference().withEnthalpyTable(bad));
+        assertTrue(e.getMessage().contains("ionisation-enthalpies.csv"), e.getMessage());
     }
 }
