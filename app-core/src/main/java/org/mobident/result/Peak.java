@@ -1,5 +1,7 @@
 package org.mobident.result;
 
+import org.mobident.Tolerances;
+
 /**
  * One detected peak, measured on the baseline-corrected signal. Heights and areas are
  * magnitudes (positive) whether the peak rises (direct detection) or dips (indirect).
@@ -85,7 +87,7 @@ public record Peak(
     /**
      * Standard uncertainty of {@link #migrationTimeS()} in the usual case, s: that of
      * {@link #migrationTimeSdS()} with the shape term cut to
-     * {@link org.mobident.Tolerances#CENTRE_SHAPE_USUAL_SHARE} of itself. The errors of skewed zones'
+     * {@link Tolerances#CENTRE_SHAPE_USUAL_SHARE} of itself. The errors of skewed zones'
      * centres are heavy-tailed (see that constant); the matcher weighs both readings.
      */
     public double migrationTimeUsualSdS() {
@@ -94,7 +96,7 @@ public record Peak(
             return sd;
         }
         double shape = Math.min(centreShapeSdS, sd);
-        double k = org.mobident.Tolerances.CENTRE_SHAPE_USUAL_SHARE;
+        double k = Tolerances.CENTRE_SHAPE_USUAL_SHARE;
         return Math.sqrt(Math.max(0.0, sd * sd - (1 - k * k) * shape * shape));
     }
 
