@@ -1,8 +1,5 @@
 package org.mobident.result;
 
-import org.mobident.result.Peak;
-import org.mobident.result.PeakMatch;
-
 /**
  * A peak with its mobility and its match.
  *

@@ -2,8 +2,6 @@ package org.mobident.result;
 
 import java.util.List;
 import org.mobident.InputException;
-import org.mobident.result.MobilityScale;
-import org.mobident.result.RunScale;
 import org.mobident.trace.RunSpec;
 import org.mobident.trace.Trace;
 import org.mobident.trace.io.TraceFiles;

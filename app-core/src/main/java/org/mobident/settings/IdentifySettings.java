@@ -1,8 +1,6 @@
 package org.mobident.settings;
 
 import java.util.Objects;
-import org.mobident.settings.MatchSettings;
-import org.mobident.settings.PeakSettings;
 import org.mobident.trace.io.TraceReadOptions;
 
 /**
