@@ -304,19 +304,21 @@ public final class Identifier {
      * @param noiseSd its baseline noise SD
      */
     record Detected(RunSpec run, RunResult failure, List<Peak> peaks, double noiseSd, Trace markerWindow,
-                    ExpectedZoneProbe probe, List<Peak> foundWhereExpected, List<Peak> beforeLook) {
+                    ExpectedZoneProbe probe, List<Peak> foundWhereExpected, List<Peak> beforeLook,
+                    SamplingCheck.Span sampling) {
         Detected(RunSpec run, RunResult failure, List<Peak> peaks, double noiseSd) {
-            this(run, failure, peaks, noiseSd, null, null, List.of(), null);
+            this(run, failure, peaks, noiseSd, null, null, List.of(), null, SamplingCheck.Span.UNKNOWN);
         }
 
         /** The same run with the weak-marker search done: these peaks, no window and no probe kept. */
         Detected settled(List<Peak> withMarker) {
-            return new Detected(run, failure, withMarker, noiseSd, null, null, foundWhereExpected, beforeLook);
+            return new Detected(run, failure, withMarker, noiseSd, null, null, foundWhereExpected, beforeLook,
+                    sampling);
         }
 
         /** The run with the peaks it had before the second look added its zones. */
         Detected withoutLook() {
-            return new Detected(run, failure, beforeLook, noiseSd, null, null, List.of(), null);
+            return new Detected(run, failure, beforeLook, noiseSd, null, null, List.of(), null, sampling);
         }
     }
 
@@ -344,7 +346,7 @@ public final class Identifier {
         Trace window = c.hasMarkerWindow() ? markerWindow(c, trace, analysis.peaks())
                 : c.hasGeometry() ? trace : null;
         return new Detected(run, null, analysis.peaks(), analysis.noiseSd(), window,
-                settings.lookWhereExpected() ? analysis.probe() : null, List.of(), null);
+                settings.lookWhereExpected() ? analysis.probe() : null, List.of(), null, SamplingCheck.Span.of(trace));
     }
 
     /**
@@ -651,7 +653,7 @@ public final class Identifier {
                 ExpectedZoneProbe.Outcome look = d.probe().lookFor(peaks, expected);
                 if (!look.added().isEmpty()) {
                     Finished withFound = finishingOnce(new Detected(run, null, look.peaks(), d.noiseSd(), null, null,
-                            look.added(), peaks), learned);
+                            look.added(), peaks, d.sampling()), learned);
                     if (keepsEveryIdentification(rows, withFound.result().peaks())) {
                         return withFound;
                     }
@@ -672,6 +674,10 @@ public final class Identifier {
                     runTempC, libraryTempC, temperatureFactor));
         } else if (Double.isNaN(runTempC)) {
             notes.add("run temperature not given: assumed equal to the library temperature");
+        }
+        String sampling = samplingNote(d.sampling(), peaks, prepared, scale, runScale, runTempC);
+        if (!sampling.isEmpty()) {
+            notes.add(sampling);
         }
         if (match != null) {
             notes.add(ScaleNotes.describe(runScale, match.modes(), libraryTempC, ms)
@@ -712,10 +718,7 @@ public final class Identifier {
             if (named.contains(e.name()) || !Double.isFinite(e.mobility())) {
                 continue;
             }
-            double atEntry = runScale.factor() * e.mobility() + runScale.offset();
-            // (a run without a temperature is taken at the library's, as the matcher takes it)
-            double runMobility = Double.isNaN(runTempC) ? atEntry : convert(atEntry, e.temperatureOrDefaultC(), runTempC);
-            double timeS = scale.timeS(runMobility);
+            double timeS = expectedTimeS(e, scale, runScale, runTempC);
             if (!(timeS > 0)) {
                 continue;
             }
@@ -737,6 +740,31 @@ public final class Identifier {
             }
         }
         return out;
+    }
+
+    /** Where the run's scale puts the zone of a library entry: the run mobility a·μ_e + b at the run
+     *  temperature turned into a time, s (not positive when the zone would never arrive). */
+    private static double expectedTimeS(LibraryEntry e, MobilityScale scale, RunScale runScale, double runTempC) {
+        double atEntry = runScale.factor() * e.mobility() + runScale.offset();
+        // (a run without a temperature is taken at the library's, as the matcher takes it)
+        double runMobility = Double.isNaN(runTempC) ? atEntry : convert(atEntry, e.temperatureOrDefaultC(), runTempC);
+        return scale.timeS(runMobility);
+    }
+
+    /** The run's note on its sampling ({@link SamplingCheck}) for the earliest zone the library puts
+     *  in the run, with the widths of the run's own narrower zones; "" when it is fine or unknown. */
+    private static String samplingNote(SamplingCheck.Span span, List<Peak> peaks, Prepared prepared,
+                                       MobilityScale scale, RunScale runScale, double runTempC) {
+        LibraryEntry earliest = null;
+        double earliestS = Double.POSITIVE_INFINITY;
+        for (LibraryEntry e : prepared.library().entries()) {
+            double timeS = Double.isFinite(e.mobility()) ? expectedTimeS(e, scale, runScale, runTempC) : Double.NaN;
+            if (timeS > 0 && span.covers(timeS) && timeS < earliestS) {
+                earliestS = timeS;
+                earliest = e;
+            }
+        }
+        return earliest == null ? "" : SamplingCheck.note(span, typicalWidthPerTime(peaks), earliest.name(), earliestS);
     }
 
     /**
