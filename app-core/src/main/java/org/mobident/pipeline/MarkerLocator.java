@@ -4,6 +4,7 @@ import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.List;
 import java.util.Locale;
+import org.mobident.Tolerances;
 import org.mobident.matching.RunMatch;
 import org.mobident.mobility.ChargedMarkerScale;
 import org.mobident.mobility.NeutralMarkerScale;
@@ -23,8 +24,10 @@ import org.mobident.trace.RunConditions;
  *   <li>The neutral marker is chosen as the peak under which the library explains the run best:
  *       each candidate peak is weighed by its prior (the peaks inside the marker window share
  *       {@value #IN_WINDOW_PRIOR} of it, the tallest peaks outside the rest; without a window the
- *       tallest peaks share it evenly) times the run's evidence under the library with that marker
- *       ({@link RunMatch#logEvidence()}: every analyte peak matched, the run's scale fitted).
+ *       tallest peaks share it; within a share a peak below the lowest detection limit weighs
+ *       {@value #FAINT_CANDIDATE_WEIGHT} of a detected one) times the run's evidence under the
+ *       library with that marker ({@link RunMatch#logEvidence()}: every analyte peak matched, the
+ *       run's scale fitted).
  *       The peaks inside the window are always tried; the others only when the window holds no
  *       peak or the best peak inside it leaves most of the run unexplained. A taller foreign peak
  *       in the window therefore does not win when the library disagrees, and a weak marker is
@@ -49,6 +52,14 @@ final class MarkerLocator {
     static final double WELL_EXPLAINED_SHARE = 0.5;
     /** Hypotheses with less weight than this are left out of the mixture. */
     static final double NEGLIGIBLE_WEIGHT = 1e-6;
+    /**
+     * Prior weight of a marker candidate below the lowest detection limit against one of a detected
+     * peak (a modelling choice): the search for a weak marker reports zones down to S/N 1.5, and
+     * there noise bumps pass as well; without this, one of them could win when a run's scale can
+     * be bent to fit it (on the lab-day bench recorded at 3–5 Hz, a bump of S/N 1.5 was taken over a
+     * marker of S/N 47 in a run 1.4 K warm). A weak marker that the library agrees with still wins.
+     */
+    static final double FAINT_CANDIDATE_WEIGHT = 0.2;
     /** A marker choice less certain than this is mentioned in the run's notes. */
     static final double MENTION_BELOW = 0.99;
 
@@ -150,14 +161,18 @@ final class MarkerLocator {
         List<Hypothesis> tried = new ArrayList<>();
         double inShare = c.hasMarkerWindow() ? (outside.isEmpty() ? 1.0 : IN_WINDOW_PRIOR) : 0.0;
         double outShare = 1.0 - inShare;
+        double inWeight = candidateWeight(peaks, inWindow);
         for (int n : inWindow) {
-            addIfPlausible(tried, c, peaks, n, ref, Math.log(inShare / inWindow.size()), evaluator);
+            addIfPlausible(tried, c, peaks, n, ref, Math.log(inShare * candidateWeight(peaks.get(n)) / inWeight),
+                    evaluator);
         }
         boolean tryOutside = inWindow.isEmpty() || !explainsWell(best(tried));
         if (tryOutside) {
             double share = inWindow.isEmpty() ? 1.0 : outShare;
+            double outWeight = candidateWeight(peaks, outside);
             for (int n : outside) {
-                addIfPlausible(tried, c, peaks, n, ref, Math.log(share / outside.size()), evaluator);
+                addIfPlausible(tried, c, peaks, n, ref, Math.log(share * candidateWeight(peaks.get(n)) / outWeight),
+                        evaluator);
             }
         }
         if (tried.isEmpty()) {
@@ -177,6 +192,25 @@ final class MarkerLocator {
         double[] weights = weights(tried);
         int bestIndex = tried.indexOf(best);
         return new Choice(best, tried, weights, note(c, peaks, inWindow, best, weights[bestIndex], tried.size()));
+    }
+
+    /**
+     * A candidate's weight within its share of the prior: {@value #FAINT_CANDIDATE_WEIGHT} for a peak
+     * below the lowest detection limit (S/N 2: found only by the search for a weak marker, where noise
+     * passes too), 1 for any other.
+     */
+    static double candidateWeight(Peak p) {
+        double sn = p.signalToNoise();
+        return Double.isFinite(sn) && sn < Tolerances.LOWEST_DETECTION_LIMIT_SIGNAL_TO_NOISE
+                ? FAINT_CANDIDATE_WEIGHT : 1.0;
+    }
+
+    private static double candidateWeight(List<Peak> peaks, List<Integer> group) {
+        double sum = 0;
+        for (int i : group) {
+            sum += candidateWeight(peaks.get(i));
+        }
+        return sum;
     }
 
     private static Choice failed(String note) {
