@@ -19,9 +19,11 @@ import org.mobident.settings.ScalePrior;
  * τ² = max(0, (Q − (k − 1)) / (Σw − Σw²/Σw)). The prior for every run of the buffer is then
  * centred on the random-effects mean (weights 1/(s_r² + τ²)), with a standard deviation of
  * √(τ² + SE²) (SE the standard error of that mean), but never below {@link #MIN_FACTOR_SD} and
- * {@link #MIN_OFFSET_SD} — nor above the settings' own prior: a batch can only make the prior
- * more certain when its runs agree, or move its centre when they agree on a shift. At least
- * {@value #MIN_RUNS} such runs are needed.
+ * {@link #MIN_OFFSET_SD}. The spread of b never exceeds the settings' own prior; that of a may,
+ * up to {@value #MAX_FACTOR_SD_SHARE_OF_BOUND} of the plausible bound on |a − 1| (so the bound
+ * stays two SDs out): runs whose capillaries scatter by ±2.5 K (±6 % on every mobility) must not
+ * be read against a prior that allows ±0.9 K, or a run far off reads its pattern shifted by one
+ * library entry with high confidence. At least {@value #MIN_RUNS} such runs are needed.
  */
 final class BatchScalePrior {
 
@@ -33,6 +35,9 @@ final class BatchScalePrior {
     static final double MIN_FACTOR_SD = 0.002;
     /** Smallest learned SD of b, mobility units (a modelling choice: the marker's own timing error). */
     static final double MIN_OFFSET_SD = 0.15;
+    /** The learned SD of a is at most this share of the prior's bound on |a − 1| (or the settings'
+     *  own SD when that is larger; a modelling choice: the bound then lies two SDs out). */
+    static final double MAX_FACTOR_SD_SHARE_OF_BOUND = 0.5;
 
     /**
      * A prior learned from a batch.
@@ -68,9 +73,16 @@ final class BatchScalePrior {
         }
         double[] fa = randomEffects(a);
         double[] fb = randomEffects(b);
-        double sdA = Math.min(base.factorSd(), Math.max(MIN_FACTOR_SD, fa[1]));
+        double sdA = learnedFactorSd(fa[1], base);
         double sdB = Math.min(base.offsetSd(), Math.max(MIN_OFFSET_SD, fb[1]));
         return Optional.of(new Learned(base.centredOn(fa[0], sdA, fb[0], sdB), a.size()));
+    }
+
+    /** The prior's SD of a from the batch's spread: at least {@link #MIN_FACTOR_SD}, at most the larger
+     *  of the settings' own SD and {@value #MAX_FACTOR_SD_SHARE_OF_BOUND} of the bound on |a − 1|. */
+    static double learnedFactorSd(double spread, ScalePrior base) {
+        double most = Math.max(base.factorSd(), MAX_FACTOR_SD_SHARE_OF_BOUND * base.maxFactorDeviation());
+        return Math.min(most, Math.max(MIN_FACTOR_SD, spread));
     }
 
     /**

@@ -4,6 +4,7 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 
 import java.util.List;
 import org.junit.jupiter.api.Test;
+import org.mobident.settings.ScalePrior;
 
 /** The batch-learned scale prior: the DerSimonian–Laird random-effects estimate, worked by hand. */
 class BatchScalePriorTest {
@@ -28,5 +29,22 @@ class BatchScalePriorTest {
                 new double[] {1.000, 0.01}));
         assertEquals(1.0, r[0], 1e-12);
         assertEquals(Math.sqrt(1e-4 / 3), r[1], 1e-12);
+    }
+
+    @Test
+    void runsThatScatterWidelyWidenThePriorUpToHalfItsBound() {
+        // a = 1.00, 1.06, 0.94, 1.03, 0.97, each ± 0.01 (capillaries up to 2.6 K off):
+        // Q = 10000·(0 + 36 + 36 + 9 + 9)·1e-4 = 90; τ² = (90 − 4) / 40000 = 0.00215;
+        // SE² = (1e-4 + 0.00215) / 5 = 0.00045; √(τ² + SE²) = √0.0026 = 0.05099
+        double[] r = BatchScalePrior.randomEffects(List.of(new double[] {1.00, 0.01}, new double[] {1.06, 0.01},
+                new double[] {0.94, 0.01}, new double[] {1.03, 0.01}, new double[] {0.97, 0.01}));
+        assertEquals(Math.sqrt(0.0026), r[1], 1e-12);
+        // the default prior: SD 0.02, bound ±0.06 → at most 0.03
+        assertEquals(0.03, BatchScalePrior.learnedFactorSd(r[1], ScalePrior.DEFAULT), 1e-15);
+        assertEquals(0.025, BatchScalePrior.learnedFactorSd(0.025, ScalePrior.DEFAULT), 1e-15);
+        assertEquals(BatchScalePrior.MIN_FACTOR_SD, BatchScalePrior.learnedFactorSd(1e-4, ScalePrior.DEFAULT), 0.0);
+        // a settings prior wider than half its bound is never narrowed from above
+        ScalePrior wide = new ScalePrior(1.0, 0.0, 0.04, 0.5, 0.06, 3.0);
+        assertEquals(0.04, BatchScalePrior.learnedFactorSd(0.05, wide), 1e-15);
     }
 }
