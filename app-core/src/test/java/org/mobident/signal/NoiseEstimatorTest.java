@@ -102,4 +102,19 @@ class NoiseEstimatorTest {
     void tooShortGivesZero() {
         assertEquals(0.0, NoiseEstimator.robustSd(new double[] {1, 2}));
     }
+
+    /** The written-out table of d₂ is what the integral gives, bit for bit, at every tabulated count. */
+    @Test
+    void theWrittenTableIsTheIntegral() {
+        for (int n = 2; n <= NoiseEstimator.RangeTable.EXACT_UP_TO; n++) {
+            assertEquals(NoiseEstimator.integratedNormalRange(n), NoiseEstimator.RangeTable.EXACT[n], 0.0, "n = " + n);
+        }
+        int steps = (int) Math.ceil(Math.log(NoiseEstimator.RangeTable.LARGEST / NoiseEstimator.RangeTable.EXACT_UP_TO)
+                / Math.log(NoiseEstimator.RangeTable.RATIO));
+        assertEquals(steps + 1, NoiseEstimator.RangeTable.GRID.length);
+        for (int k = 0; k <= steps; k++) {
+            double n = NoiseEstimator.RangeTable.EXACT_UP_TO * Math.pow(NoiseEstimator.RangeTable.RATIO, k);
+            assertEquals(NoiseEstimator.integratedNormalRange(n), NoiseEstimator.RangeTable.GRID[k], 0.0, "k = " + k);
+        }
+    }
 }
