@@ -196,8 +196,8 @@ final class MarkerLocator {
 
     /**
      * A candidate's weight within its share of the prior: {@value #FAINT_CANDIDATE_WEIGHT} for a peak
-     * below the lowest detection limit (S/N 2: found only by the search for a weak marker, where noise
-     * passes too), 1 for any other.
+     * below the lowest detection limit (S/N 2: found by the search for a weak marker or for faint
+     * zones, where noise passes more often than above it), 1 for any other.
      */
     static double candidateWeight(Peak p) {
         double sn = p.signalToNoise();
