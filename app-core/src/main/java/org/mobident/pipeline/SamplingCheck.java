@@ -13,7 +13,10 @@ import org.mobident.trace.Trace;
  * a quarter of the zones of at least 10 noise SD went missing this way, against a few per cent at
  * 4 Hz and faster.
  */
-final class SamplingCheck {
+public final class SamplingCheck {
+
+    /** How the note begins, so that other reports can pick it out of a run's notes. */
+    public static final String NOTE_START = "sampled too slowly for its earliest zones";
 
     /** Below this many sampling intervals across its width at half height a zone can pass for a
      *  spike (a Gaussian zone two intervals wide keeps shoulders of about a quarter of its top). */
@@ -46,6 +49,11 @@ final class SamplingCheck {
     private SamplingCheck() {
     }
 
+    /** True for the note {@link #note} writes. */
+    public static boolean isNote(String runNote) {
+        return runNote != null && runNote.startsWith(NOTE_START);
+    }
+
     /**
      * The run's note when the zone of {@code name}, expected at {@code timeS}, would be narrower than
      * {@value #MIN_SAMPLES_ACROSS_WIDTH} sampling intervals; "" otherwise or when unknown.
@@ -59,7 +67,7 @@ final class SamplingCheck {
             return "";
         }
         double advisedHz = ADVISED_SAMPLES_ACROSS_WIDTH / widthS;
-        return String.format(Locale.ROOT, "sampled too slowly for its earliest zones: a zone of %s, expected at "
+        return String.format(Locale.ROOT, NOTE_START + ": a zone of %s, expected at "
                 + "%.1f s, would be about %.2f s wide at half height, %.1f sampling intervals of %.3f s; a zone "
                 + "under %.0f intervals wide cannot be told from an electrical spike and may be missed (about "
                 + "%.0f Hz would put %.0f samples across it)", name, timeS, widthS, widthS / span.intervalS(),

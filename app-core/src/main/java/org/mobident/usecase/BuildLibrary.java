@@ -11,9 +11,11 @@ import org.mobident.library.Library;
 import org.mobident.library.LibraryEntry;
 import org.mobident.library.standards.BuildResult;
 import org.mobident.library.standards.BuildSettings;
+import org.mobident.library.standards.BuildWarning;
 import org.mobident.library.standards.LibraryBuilder;
 import org.mobident.library.standards.StandardsSheet;
 import org.mobident.pipeline.Identifier;
+import org.mobident.pipeline.SamplingCheck;
 import org.mobident.result.BatchProgress;
 import org.mobident.result.RunListener;
 import org.mobident.result.RunResult;
@@ -90,6 +92,27 @@ public final class BuildLibrary {
         List<RunResult> results = new ArrayList<>(new Identifier(guideLibrary(), settings.withLookWhereExpected(false))
                 .identifyAll(runs.runs(), BatchProgress.NONE, RunListener.NONE));
         results.addAll(runs.rejected());
-        return LibraryBuilder.build(results, mixByRun, sheet, buildSettings, reference, pH, ionicStrengthMm);
+        BuildResult built = LibraryBuilder.build(results, mixByRun, sheet, buildSettings, reference, pH,
+                ionicStrengthMm);
+        return built.withWarnings(samplingWarnings(results, mixByRun));
+    }
+
+    /**
+     * A warning for each standards run whose earliest zones are narrower than two samples (the run's
+     * note, {@link SamplingCheck}): its analytes there may have been taken for spikes, which is why an
+     * analyte can be missing from every replicate.
+     */
+    static List<BuildWarning> samplingWarnings(List<RunResult> results, Map<String, String> mixByRun) {
+        List<BuildWarning> out = new ArrayList<>();
+        for (RunResult r : results) {
+            for (String note : r.notes()) {
+                if (SamplingCheck.isNote(note)) {
+                    String run = r.spec().name();
+                    out.add(new BuildWarning(BuildWarning.Kind.SAMPLED_TOO_SLOWLY, mixByRun.get(run), null, run,
+                            "Run " + run + " is " + note + "."));
+                }
+            }
+        }
+        return out;
     }
 }

@@ -14,8 +14,11 @@ import org.mobident.library.Library;
 import org.mobident.library.LibraryEntry;
 import org.mobident.library.standards.BuildResult;
 import org.mobident.library.standards.BuildSettings;
+import org.mobident.library.standards.BuildWarning;
 import org.mobident.library.standards.StandardsSheet;
 import org.mobident.library.standards.StandardsSheetReader;
+import org.mobident.pipeline.SamplingCheck;
+import org.mobident.result.RunResult;
 import org.mobident.trace.RunSpec;
 
 /**
@@ -115,5 +118,28 @@ class BuildLibraryTest {
         } catch (InputException e) {
             throw new AssertionError(e);
         }
+    }
+
+    /** The demo standards are recorded fast enough: no run gets the sampling note. */
+    @Test
+    void theDemoStandardsAreSampledFastEnough() {
+        assertTrue(full.warnings(BuildWarning.Kind.SAMPLED_TOO_SLOWLY).isEmpty(), full.warnings().toString());
+    }
+
+    /** A standards run noted as sampled too slowly (see SamplingCheck) becomes a build warning naming it. */
+    @Test
+    void aRunSampledTooSlowlyIsWarnedOf() {
+        RunSpec first = all.runs().get(0);
+        String note = SamplingCheck.NOTE_START + ": a zone of chloride, expected at 200.0 s, would be about 0.60 s "
+                + "wide at half height, 1.2 sampling intervals of 0.500 s";
+        RunResult slow = new RunResult(first, null, "", -50, null, List.of(), List.of("other note", note), 0.01);
+        RunResult fine = new RunResult(all.runs().get(1), null, "", -50, null, List.of(), List.of("other note"), 0.01);
+        List<BuildWarning> w = BuildLibrary.samplingWarnings(List.of(slow, fine), Map.of(first.name(), "A"));
+        assertEquals(1, w.size());
+        assertEquals(BuildWarning.Kind.SAMPLED_TOO_SLOWLY, w.get(0).kind());
+        assertEquals(first.name(), w.get(0).run());
+        assertEquals("A", w.get(0).mix());
+        assertEquals("Run " + first.name() + " is " + note + ".", w.get(0).message());
+        assertFalse(w.get(0).kind().informational(), "a warning, not information");
     }
 }

@@ -32,7 +32,14 @@ public record BuildResult(Library library, List<AnalyteStats> analytes, List<Out
         return analytes.stream().filter(a -> a.name().equals(name)).findFirst();
     }
 
-    /** The warnings of one kind. */
+    /** The same result with {@code more} warnings after its own. */
+    public BuildResult withWarnings(List<BuildWarning> more) {
+        List<BuildWarning> all = new java.util.ArrayList<>(warnings);
+        all.addAll(more);
+        return new BuildResult(library, analytes, outliers, unexpectedPeaks, all, usedRuns, settings, stamp);
+    }
+
+        /** The warnings of one kind. */
     public List<BuildWarning> warnings(BuildWarning.Kind kind) {
         return warnings.stream().filter(w -> w.kind() == kind).toList();
     }

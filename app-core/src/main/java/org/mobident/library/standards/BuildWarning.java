@@ -41,6 +41,11 @@ public record BuildWarning(Kind kind, String mix, String analyte, String run, St
         INDISTINGUISHABLE,
         /** An analyte of a mix was found in none of its runs (or could not be named). */
         ANALYTE_NOT_FOUND,
+        /**
+         * A run is sampled too slowly for its earliest zones: a zone under two samples wide at half
+         * height cannot be told from a spike, so an analyte there may be missing from its runs.
+         */
+        SAMPLED_TOO_SLOWLY,
         /** A peak, or a group of peaks, that fits no expected analyte (or is too small to be one). */
         UNEXPECTED_PEAK,
         /** A group that is probably one of the mix's analytes, but nothing tells which. */
