@@ -102,7 +102,7 @@ public final class BuildLibrary {
      * note, {@link SamplingCheck}): its analytes there may have been taken for spikes, which is why an
      * analyte can be missing from every replicate.
      */
-    static List<BuildWarning> samplingWarnings(List<RunResult> results, Map<String, String> mixByRun) {
+    public static List<BuildWarning> samplingWarnings(List<RunResult> results, Map<String, String> mixByRun) {
         List<BuildWarning> out = new ArrayList<>();
         for (RunResult r : results) {
             for (String note : r.notes()) {

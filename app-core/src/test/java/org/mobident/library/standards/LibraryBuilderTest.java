@@ -501,6 +501,13 @@ class LibraryBuilderTest {
                         Double.NaN, 25.0, null)), "bad.csv", List.of());
         LibraryCheck.check(bad, DEFAULTS).forEach(w -> seen.add(w.kind()));
 
+        // A standards run whose earliest zones are narrower than two samples (its run note).
+        RunResult slow = new RunResult(five.get(0).spec(), null, "", 50, null, List.of(),
+                List.of(org.mobident.pipeline.SamplingCheck.NOTE_START + ": a zone of sodium, expected at 100.0 s, "
+                        + "would be about 0.60 s wide at half height, 1.2 sampling intervals of 0.500 s"), 0.01);
+        org.mobident.usecase.BuildLibrary.samplingWarnings(List.of(slow), java.util.Map.of())
+                .forEach(w -> seen.add(w.kind()));
+
         assertEquals(EnumSet.allOf(BuildWarning.Kind.class), seen);
     }
 
