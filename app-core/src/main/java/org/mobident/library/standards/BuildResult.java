@@ -39,7 +39,7 @@ public record BuildResult(Library library, List<AnalyteStats> analytes, List<Out
         return new BuildResult(library, analytes, outliers, unexpectedPeaks, all, usedRuns, settings, stamp);
     }
 
-        /** The warnings of one kind. */
+    /** The warnings of one kind. */
     public List<BuildWarning> warnings(BuildWarning.Kind kind) {
         return warnings.stream().filter(w -> w.kind() == kind).toList();
     }
