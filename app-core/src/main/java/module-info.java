@@ -13,6 +13,7 @@
 @SuppressWarnings("requires-automatic") // Commons Math 3.6.1 names no module: the name comes from its file
 module org.mobident.core {
     requires commons.math3;
+    requires org.apache.commons.numbers.gamma;
     requires transitive java.desktop;
     requires java.management;
     requires jdk.management;

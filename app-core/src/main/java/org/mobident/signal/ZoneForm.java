@@ -1,6 +1,7 @@
 package org.mobident.signal;
 
-import org.apache.commons.math3.special.Erf;
+import org.apache.commons.numbers.gamma.Erfc;
+import org.apache.commons.numbers.gamma.Erfcx;
 
 /**
  * The two forms a skewed zone is fitted with, as unit-area functions of x, the distance behind the
@@ -26,9 +27,9 @@ enum ZoneForm {
         double value(double x, double sigma, double a) {
             double z = (sigma / a - x / sigma) / SQRT_2;
             if (z >= 0) {
-                return Math.exp(-0.5 * (x / sigma) * (x / sigma)) * erfcx(z) / (2 * a);
+                return Math.exp(-0.5 * (x / sigma) * (x / sigma)) * Erfcx.value(z) / (2 * a);
             }
-            return Math.exp(0.5 * (sigma / a) * (sigma / a) - x / a) * Erf.erfc(z) / (2 * a);
+            return Math.exp(0.5 * (sigma / a) * (sigma / a) - x / a) * Erfc.value(z) / (2 * a);
         }
 
         @Override
@@ -101,10 +102,7 @@ enum ZoneForm {
 
     /** The triangle's base per unit of size: its centroid lies a third of the base behind the front. */
     static final double TRIANGLE_BASE_PER_SIZE = 3.0;
-    /** Above this argument erfcx uses its asymptotic series (erfc itself would underflow). */
-    private static final double ERFCX_ASYMPTOTIC_FROM = 25.0;
     private static final double SQRT_2 = Math.sqrt(2.0);
-    private static final double SQRT_PI = Math.sqrt(Math.PI);
     private static final double SQRT_2PI = Math.sqrt(2 * Math.PI);
 
     /**
@@ -119,21 +117,9 @@ enum ZoneForm {
     /** The value and its derivatives in x, σ and a, into {@code out[0..3]}. */
     abstract void evaluate(double x, double sigma, double a, double[] out);
 
-    /**
-     * Scaled complementary error function exp(z²)·erfc(z) for z ≥ 0; beyond
-     * {@link #ERFCX_ASYMPTOTIC_FROM} its asymptotic series (Abramowitz &amp; Stegun 7.1.23).
-     */
-    static double erfcx(double z) {
-        if (z < ERFCX_ASYMPTOTIC_FROM) {
-            return Math.exp(z * z) * Erf.erfc(z);
-        }
-        double inv2 = 1.0 / (2 * z * z);
-        return (1 - inv2 + 3 * inv2 * inv2 - 15 * inv2 * inv2 * inv2) / (z * SQRT_PI);
-    }
-
     /** Φ(z) = erfc(−z/√2)/2. */
     private static double normalCdf(double z) {
-        return 0.5 * Erf.erfc(-z / SQRT_2);
+        return 0.5 * Erfc.value(-z / SQRT_2);
     }
 
     /** φ(z). */

@@ -6,7 +6,8 @@ import java.math.BigDecimal;
 import java.math.RoundingMode;
 import java.nio.file.Path;
 import java.util.SplittableRandom;
-import org.apache.commons.math3.special.Erf;
+import org.apache.commons.numbers.gamma.Erfc;
+import org.apache.commons.numbers.gamma.Erfcx;
 import org.mobident.Units;
 import org.mobident.io.SafeFiles;
 import org.mobident.trace.Detection;
@@ -54,11 +55,7 @@ public final class TraceSimulator {
     /** Below this ratio τ/σ the exponential modification is negligible and the zone stays Gaussian. */
     static final double NEGLIGIBLE_TAU_RATIO = 1e-6;
 
-    /** Above this argument erfcx uses its asymptotic series (erfc itself would underflow). */
-    private static final double ERFCX_ASYMPTOTIC_FROM = 25.0;
-
     private static final double SQRT_2 = Math.sqrt(2.0);
-    private static final double SQRT_PI = Math.sqrt(Math.PI);
 
     private TraceSimulator() {
     }
@@ -203,9 +200,9 @@ public final class TraceSimulator {
         double z = (sigma / tau - x / sigma) / SQRT_2;
         double scale = sigma * Math.sqrt(2 * Math.PI) / (2 * tau);
         if (z < 0) {
-            return scale * Math.exp(sigma * sigma / (2 * tau * tau) - x / tau) * Erf.erfc(z);
+            return scale * Math.exp(sigma * sigma / (2 * tau * tau) - x / tau) * Erfc.value(z);
         }
-        return scale * Math.exp(-0.5 * (x / sigma) * (x / sigma)) * erfcx(z);
+        return scale * Math.exp(-0.5 * (x / sigma) * (x / sigma)) * Erfcx.value(z);
     }
 
     /** Base of a triangular zone in units of τ: its first moment then lies τ from its front, as an EMG's. */
@@ -233,19 +230,7 @@ public final class TraceSimulator {
 
     /** Standard normal distribution function, Φ(z) = erfc(−z/√2)/2. */
     private static double normalCdf(double z) {
-        return 0.5 * Erf.erfc(-z / SQRT_2);
-    }
-
-    /**
-     * Scaled complementary error function exp(z²)·erfc(z) for z ≥ 0; beyond
-     * {@link #ERFCX_ASYMPTOTIC_FROM} its asymptotic series (Abramowitz &amp; Stegun 7.1.23).
-     */
-    static double erfcx(double z) {
-        if (z < ERFCX_ASYMPTOTIC_FROM) {
-            return Math.exp(z * z) * Erf.erfc(z);
-        }
-        double inv2 = 1.0 / (2 * z * z);
-        return (1 - inv2 + 3 * inv2 * inv2 - 15 * inv2 * inv2 * inv2) / (z * SQRT_PI);
+        return 0.5 * Erfc.value(-z / SQRT_2);
     }
 
     private static void addNoise(double[] signal, double sd, long seed) {

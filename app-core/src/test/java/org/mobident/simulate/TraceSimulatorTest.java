@@ -340,10 +340,16 @@ class TraceSimulatorTest {
         }
         assertTrue(Double.isFinite(TraceSimulator.emgShape(-50, sigma, 1e-3)));
         assertTrue(Double.isFinite(TraceSimulator.emgShape(500, sigma, 2.0)));
-        // erfcx(0) = 1; erfcx continuity across the switch to the asymptotic series.
-        assertEquals(1.0, TraceSimulator.erfcx(0), 1e-12);
-        double direct = Math.exp(625.0) * org.apache.commons.math3.special.Erf.erfc(25.0);
-        assertEquals(direct, TraceSimulator.erfcx(25.0), direct * 1e-9);
+        // the two ways of writing the EMG (erfc behind the switch, erfcx before it) meet at the
+        // switch z = 0, x = σ²/τ
+        double tau = 0.6;
+        double atSwitch = sigma * sigma / tau;
+        double before = TraceSimulator.emgShape(atSwitch - 1e-9, sigma, tau);
+        double after = TraceSimulator.emgShape(atSwitch + 1e-9, sigma, tau);
+        assertEquals(before, after, 1e-8 * before);
+        // at the switch erfc(0) = 1: the EMG is σ√(2π)/(2τ)·exp(−σ²/(2τ²)) there (Grushka 1972's form)
+        assertEquals(sigma * Math.sqrt(2 * Math.PI) / (2 * tau) * Math.exp(-0.5 * sigma * sigma / (tau * tau)),
+                TraceSimulator.emgShape(atSwitch, sigma, tau), 1e-12);
     }
 
     @Test
