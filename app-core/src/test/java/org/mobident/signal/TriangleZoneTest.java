@@ -36,8 +36,8 @@ class TriangleZoneTest {
     }
 
     /** Adds a triangular zone of {@code area} whose centroid is at {@code centroidS}; fronting when base < 0. */
-    private static void addTriangle(double[] t, double[] y, double area, double centroidS, double sigmaS,
-                                    double baseS) {
+    static void addTriangle(double[] t, double[] y, double area, double centroidS, double sigmaS,
+                            double baseS) {
         double s = Math.signum(baseS);
         double l = Math.abs(baseS);
         double front = centroidS - s * l / 3; // the centroid lies L/3 behind the sharp front
