@@ -85,8 +85,9 @@ class ExpectedZoneProbeTest {
     @Test
     void fitsOnlyThePeaksItModels() {
         // a tall zone 4.5 s before the neighbour ends before the look's stretch would begin, so it
-        // is no neighbour; the stretch around the neighbour must stop at its end, or its flank,
-        // which no fitted zone models, spoils both fits and the hidden zone fails the misfit test
+        // is no neighbour; the stretch around the neighbour must stop short of it (an expected
+        // width past its end), or its flank, which no fitted zone models, spoils both fits and the
+        // hidden zone fails the misfit test
         int found = 0;
         int left = 0;
         for (long seed = 1; seed <= 6; seed++) {
