@@ -70,11 +70,12 @@ import org.mobident.result.Peak;
  * filter on the residual). The full fits run only where it does. The noise, not the residual left,
  * is the yardstick: where the neighbours' stand-in misses their shape somewhere in the stretch, a
  * residual yardstick would swallow the zone's own fall (a stand-in that misses lets more looks
- * through, which costs time, not calls: the full test decides). Skewed stand-ins screen nothing: a
- * skewed zone's measured apex and width say little of its shape, and one skewed zone fitted to a
- * merged pair of skewed zones (two concentrated analytes 1–2 % apart) follows the sum so closely
- * that no zone-like residual is left, while two skewed zones fit it far better (on the lab-day
- * bench such pairs were the largest share of library zones at ≥ 10 noise SDs never found).
+ * through, which costs time, not calls: the full test decides). A skewed neighbour's measured apex
+ * and width say little of its shape, so it skips the first screen, and no skewed fit screens: one
+ * skewed zone fitted to a merged pair of skewed zones (two concentrated analytes 1–2 % apart)
+ * follows the sum so closely that no zone-like residual is left, while two skewed zones fit it far
+ * better (on the lab-day bench such pairs were the largest share of library zones at ≥ 10 noise
+ * SDs never found).
  *
  * <p><b>Starts.</b> The fit with the extra zone starts it at the expected time and, where the
  * tallest neighbour is skewed (apex and first moment more than {@value #SHIFTED_START_MIN_WIDTHS}
