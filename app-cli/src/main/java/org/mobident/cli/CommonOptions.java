@@ -11,6 +11,17 @@ public final class CommonOptions {
             description = "Unit of the trace time column when its header does not say: s or min.")
     String timeUnit;
 
+    @Option(names = "--time-column", paramLabel = "NAME|N",
+            description = "Time column of the trace files, by its header name or its position (1 = first). Default:"
+                    + " the column whose header names a time, or the first column of a file without a header line.")
+    String timeColumn;
+
+    @Option(names = "--signal-column", paramLabel = "NAME|N",
+            description = "Signal column of the trace files, by its header name or its position (1 = first)."
+                    + " Default: the column whose header names a detector signal, else the first other column;"
+                    + " a file without a header line and with more than two columns needs it.")
+    String signalColumn;
+
     @Option(names = "--min-sn", paramLabel = "S/N",
             description = "Smallest signal-to-noise ratio of a reported peak, S/N = 2H/h with h the peak-to-peak"
                     + " noise over 5 peak widths around it (Ph. Eur. 2.2.46). Default ${DEFAULT-VALUE}: every peak"
@@ -27,8 +38,10 @@ public final class CommonOptions {
     boolean debug;
 
     TraceReadOptions readOptions() {
+        String time = blankToNull(timeColumn, "--time-column");
+        String signal = blankToNull(signalColumn, "--signal-column");
         if (timeUnit == null) {
-            return TraceReadOptions.DEFAULT;
+            return new TraceReadOptions(null, time, signal);
         }
         TimeScale scale;
         switch (timeUnit.trim().toLowerCase(java.util.Locale.ROOT)) {
@@ -45,7 +58,19 @@ public final class CommonOptions {
                 throw new picocli.CommandLine.ParameterException(new picocli.CommandLine(this),
                         "--time-unit: expected s or min, got '" + timeUnit + "'");
         }
-        return new TraceReadOptions(scale, null, null);
+        return new TraceReadOptions(scale, time, signal);
+    }
+
+    /** The column option as given, or null when not given; a blank one is refused. */
+    private String blankToNull(String value, String option) {
+        if (value == null) {
+            return null;
+        }
+        if (value.isBlank()) {
+            throw new picocli.CommandLine.ParameterException(new picocli.CommandLine(this),
+                    option + ": expected a column name or position (1 = first), got an empty value");
+        }
+        return value.trim();
     }
 
     PeakSettings peakSettings() {

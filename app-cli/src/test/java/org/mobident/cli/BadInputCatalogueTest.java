@@ -424,7 +424,7 @@ class BadInputCatalogueTest {
         String[] base = {"identify", "--library", demo("library.csv"), "--total-length-cm", "80",
             "--detector-length-cm", "72", "--voltage-kv", "-20", "--quiet", dir.resolve("good.csv").toString()};
         for (String[] option : List.of(new String[] {"--threads", "0"}, new String[] {"--min-sn", "-1"},
-                new String[] {"--time-unit", "hours"})) {
+                new String[] {"--time-unit", "hours"}, new String[] {"--signal-column", " "})) {
             Run r = run(concat(base, option));
             assertEquals(ExitCodes.USAGE, r.code(), r.err());
             assertMessage(r, option[0]);

@@ -15,19 +15,26 @@ import org.mobident.trace.Trace;
 
 /**
  * Reads a detector trace from delimited text: a header line naming the columns, then one row
- * per point.
+ * per point; or, in a file without a header line, rows of numbers from the first line on.
  *
  * <ul>
  *   <li>Delimiter comma, semicolon or tab, taken from the header (the most frequent of the three;
  *       ties go to tab, then semicolon). With semicolon or tab, numbers may use a decimal comma.</li>
+ *   <li>No header line: when the first line (after comments) is a row of two or more numbers, the
+ *       columns are known by position only ("column 1", …). The delimiter is then tab, else
+ *       semicolon, else comma (beside a tab or a semicolon a comma is a decimal comma); the time
+ *       is the first column and the signal the second, unless the options give their positions;
+ *       with more than two columns the signal column must be given.</li>
  *   <li>UTF-8 (a byte order mark is skipped); a header that is not valid UTF-8 is read as
  *       ISO-8859-1. UTF-16 and binary files are refused. Lines end in LF, CRLF or CR.</li>
  *   <li>Blank lines and lines starting with {@code #} are skipped anywhere. Fields may be quoted.
  *       Trailing empty fields beyond the header are ignored.</li>
- *   <li>Time column: the option, else a name such as {@code time}, {@code t}, {@code Time (min)},
- *       {@code time_s}, {@code minutes}. Unit: the option, else the header, else seconds.</li>
- *   <li>Signal column: the option, else a name with a word such as signal, absorbance, mAU,
- *       intensity, detector, response or value, else the first other named column.</li>
+ *   <li>Time column: the option (a header name, or a position with 1 for the first column), else a
+ *       name such as {@code time}, {@code t}, {@code Time (min)}, {@code time_s}, {@code minutes}.
+ *       Unit: the option, else the header, else seconds (a short time column without a unit is
+ *       refused as probably minutes, see {@link #UNITLESS_MINUTES_LIMIT}).</li>
+ *   <li>Signal column: the option (name or position), else a name with a word such as signal,
+ *       absorbance, mAU, intensity, detector, response or value, else the first other named column.</li>
  *   <li>Times must strictly increase (sampling may be irregular); values must be finite.</li>
  * </ul>
  * Every problem is an {@link InputException} naming the file, the 1-based line and the column.
@@ -129,6 +136,8 @@ public final class DelimitedTraceReader {
         /** True when neither the header nor the options said the time unit (seconds assumed). */
 
         private boolean unitAssumed;
+        /** True when the file has no header line: its first line is already a row of numbers. */
+        private boolean headerless;
         private List<String> names;
         private int namedCount;
         private int[] fieldStart;
@@ -364,6 +373,10 @@ public final class DelimitedTraceReader {
             long headerLine = line;
             String header = TextFiles.decodeLenient(b, lineStart, lineEnd);
             readHeader(header, headerLine);
+            if (headerless) {
+                pos = lineStart; // the first line is data: read it again as a row
+                line = headerLine - 1;
+            }
 
             int timeIndex = timeColumn(headerLine);
             int signalIndex = signalColumn(headerLine, timeIndex);
@@ -455,6 +468,21 @@ public final class DelimitedTraceReader {
         // ---- header ----
 
         private void readHeader(String header, long headerLine) throws InputException {
+            char numeric = numericRowDelimiter(header);
+            if (numeric != 0) {
+                // no header line: the columns are known by position only
+                headerless = true;
+                delimiter = (byte) numeric;
+                int count = splitText(header, numeric).size();
+                names = new ArrayList<>(count);
+                for (int k = 1; k <= count; k++) {
+                    names.add("column " + k);
+                }
+                namedCount = count;
+                fieldStart = new int[count];
+                fieldEnd = new int[count];
+                return;
+            }
             char d = TextFiles.mostFrequentDelimiter(header);
             if (d == 0) {
                 String only = unquote(header.trim());
@@ -468,14 +496,6 @@ public final class DelimitedTraceReader {
             }
             delimiter = (byte) d;
             names = splitText(header, d);
-            boolean allNumbers = true;
-            for (String s : names) {
-                allNumbers &= !s.isEmpty() && !Double.isNaN(parseText(s));
-            }
-            if (allNumbers) {
-                throw new InputException(file, headerLine, null, "the first line holds numbers, not column names;"
-                        + " add a header line such as time_s" + d + "signal");
-            }
             namedCount = names.size();
             while (namedCount > 0 && names.get(namedCount - 1).isEmpty()) {
                 namedCount--;
@@ -484,10 +504,35 @@ public final class DelimitedTraceReader {
             fieldEnd = new int[names.size()];
         }
 
+        /**
+         * The delimiter of a first line that is a row of two or more numbers, or 0 when it is not one
+         * (a header, or a single number). Tab first, then semicolon, then comma: beside a tab or a
+         * semicolon, a comma is a decimal comma.
+         */
+        private char numericRowDelimiter(String first) {
+            char d = first.indexOf('\t') >= 0 ? '\t' : first.indexOf(';') >= 0 ? ';' : first.indexOf(',') >= 0 ? ',' : 0;
+            if (d == 0) {
+                return 0;
+            }
+            List<String> parts = splitText(first, d);
+            if (parts.size() < 2) {
+                return 0;
+            }
+            for (String part : parts) {
+                if (part.isEmpty() || Double.isNaN(parseText(part))) {
+                    return 0;
+                }
+            }
+            return d;
+        }
+
         private int timeColumn(long headerLine) throws InputException {
             String wanted = options.timeColumn();
             if (wanted != null) {
                 return find(wanted, headerLine);
+            }
+            if (headerless) {
+                return 0;
             }
             for (int i = 0; i < namedCount; i++) {
                 if (ColumnNames.isTime(ColumnNames.parse(names.get(i)))) {
@@ -496,7 +541,7 @@ public final class DelimitedTraceReader {
             }
             throw new InputException(file, headerLine, "time", "no time column found (expected a name such as"
                     + " time, time_s, Time (min)); columns present: " + present()
-                    + "; name the time column in the options");
+                    + "; name the time column, or give its position (1 = first), in the options (--time-column)");
         }
 
         private int signalColumn(long headerLine, int timeIndex) throws InputException {
@@ -508,6 +553,14 @@ public final class DelimitedTraceReader {
                             "the signal column is the same as the time column");
                 }
                 return i;
+            }
+            if (headerless) {
+                if (namedCount == 2) {
+                    return 1 - timeIndex;
+                }
+                throw new InputException(file, headerLine, "signal", "the file has no header line and " + namedCount
+                        + " columns; say which column holds the signal, by its position (1 = first), in the options"
+                        + " (--signal-column)");
             }
             for (int i = 0; i < namedCount; i++) {
                 if (i != timeIndex && ColumnNames.isSignal(ColumnNames.parse(names.get(i)))) {
@@ -552,8 +605,25 @@ public final class DelimitedTraceReader {
                     return i;
                 }
             }
+            int position = position(w);
+            if (position >= 1 && position <= namedCount) {
+                return position - 1;
+            }
             throw new InputException(file, headerLine, wanted, "column '" + wanted + "' not found; columns present: "
-                    + present());
+                    + present() + (position > namedCount ? " (" + namedCount + " in all)" : ""));
+        }
+
+        /** A column position as written (1 = first), or -1 when the text is not a whole number. */
+        private static int position(String text) {
+            if (text.isEmpty() || text.length() > 6) {
+                return -1;
+            }
+            for (int i = 0; i < text.length(); i++) {
+                if (text.charAt(i) < '0' || text.charAt(i) > '9') {
+                    return -1;
+                }
+            }
+            return Integer.parseInt(text);
         }
 
         private String present() {

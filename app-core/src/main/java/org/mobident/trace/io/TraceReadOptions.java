@@ -6,9 +6,12 @@ import org.mobident.trace.TimeScale;
  * How to read a delimited trace file. Each {@code null} means "decide from the file".
  *
  * @param timeScale    unit of the time column; {@code null}: from the header, seconds when it says none
- * @param timeColumn   name of the time column (case-insensitive); {@code null}: recognised from the header
- * @param signalColumn name of the signal column (case-insensitive); {@code null}: recognised from the
- *                     header, else the first column that is not the time column
+ * @param timeColumn   name of the time column (case-insensitive), or its position as a whole number
+ *                     (1 = first) where no column has that name; {@code null}: recognised from the header
+ *                     (the first column of a file without a header line)
+ * @param signalColumn name or position of the signal column, as for the time; {@code null}: recognised
+ *                     from the header, else the first column that is not the time column (the other of
+ *                     two columns in a file without a header line)
  */
 public record TraceReadOptions(TimeScale timeScale, String timeColumn, String signalColumn) {
 

@@ -235,8 +235,60 @@ class DelimitedTraceReaderTest {
     }
 
     @Test
-    void firstLineOfNumbersIsNotAHeader() throws Exception {
-        InputException e = fails("0.0,1.0\n0.1,2.0\n");
+    void fileWithoutHeaderIsReadByPosition() throws Exception {
+        // no header line: time first, signal second, seconds assumed as for a header without a unit
+        Trace t = read(write("nh.csv", "0,1.5\n120,2.5\n240,-3\n"));
+        assertArrayEquals(new double[] {0, 120, 240}, t.timesS(), EXACT);
+        assertArrayEquals(new double[] {1.5, 2.5, -3}, t.signals(), EXACT);
+    }
+
+    @Test
+    void fileWithoutHeaderTakesSemicolonOverDecimalComma() throws Exception {
+        // "0,5;1,25" has more commas than semicolons: beside a semicolon the comma is a decimal comma
+        Trace t = read(write("nh2.csv", "# exported without a header\n0,5;1,25\n61,5;2,5\n"));
+        assertArrayEquals(new double[] {0.5, 61.5}, t.timesS(), EXACT);
+        assertArrayEquals(new double[] {1.25, 2.5}, t.signals(), EXACT);
+        // rows keep their line numbers: the first data line is line 2 here
+        InputException e = fails("# exported without a header\n0,5;1,25\n61,5;x\n");
+        assertWhere(e, 3, "column 2");
+    }
+
+    @Test
+    void fileWithoutHeaderAndThreeColumnsNeedsTheSignalColumn() throws Exception {
+        Path p = write("nh3.txt", "0\t7\t10\n100\t7\t20\n");
+        InputException e = assertThrows(InputException.class, () -> read(p));
+        assertWhere(e, 1, "signal");
+        assertTrue(e.problem().contains("3 columns"), e.getMessage());
+        Trace t = DelimitedTraceReader.read(p, TraceReadOptions.DEFAULT.withColumns(null, "3"));
+        assertArrayEquals(new double[] {10, 20}, t.signals(), EXACT);
+        Trace swapped = DelimitedTraceReader.read(p, TraceReadOptions.DEFAULT.withColumns("3", "1")
+                .withTimeScale(TimeScale.MINUTES));
+        assertArrayEquals(new double[] {600, 1200}, swapped.timesS(), EXACT);
+        assertArrayEquals(new double[] {0, 100}, swapped.signals(), EXACT);
+    }
+
+    @Test
+    void fileWithoutHeaderAndShortTimesIsRefusedAsProbablyMinutes() throws Exception {
+        InputException e = fails("0,1\n0.5,2\n12,3\n");
+        assertWhere(e, 1, "column 1");
+        assertTrue(e.problem().contains("minutes"), e.getMessage());
+    }
+
+    @Test
+    void columnsByPositionInAFileWithAHeader() throws Exception {
+        Path p = write("pos.csv", "X,Y1,Y2\n0,1,10\n100,2,20\n");
+        Trace t = DelimitedTraceReader.read(p, TraceReadOptions.DEFAULT.withColumns("1", "3"));
+        assertArrayEquals(new double[] {0, 100}, t.timesS(), EXACT);
+        assertArrayEquals(new double[] {10, 20}, t.signals(), EXACT);
+        InputException e = assertThrows(InputException.class,
+                () -> DelimitedTraceReader.read(p, TraceReadOptions.DEFAULT.withColumns("1", "9")));
+        assertWhere(e, 1, "9");
+        assertTrue(e.problem().contains("3 in all"), e.getMessage());
+    }
+
+    @Test
+    void firstLineOfOneNumberIsNotAHeader() throws Exception {
+        InputException e = fails("5\n6\n");
         assertWhere(e, 1, null);
         assertTrue(e.problem().contains("not column names"), e.getMessage());
     }
