@@ -19,7 +19,10 @@ import org.mobident.trace.Trace;
  *
  * <ul>
  *   <li>Delimiter comma, semicolon or tab, taken from the header (the most frequent of the three;
- *       ties go to tab, then semicolon). With semicolon or tab, numbers may use a decimal comma.</li>
+ *       ties go to tab, then semicolon). With semicolon or tab, numbers may use a decimal comma.
+ *       Columns aligned with spaces (no comma, semicolon or tab on the first line, two or more
+ *       fields separated by spaces) are read as tab-delimited, each run of spaces one delimiter;
+ *       header names with spaces must then be quoted.</li>
  *   <li>No header line: when the first line (after comments) is a row of two or more numbers, the
  *       columns are known by position only ("column 1", …). The delimiter is then tab, else
  *       semicolon, else comma (beside a tab or a semicolon a comma is a decimal comma); the time
@@ -115,7 +118,96 @@ public final class DelimitedTraceReader {
      */
     public static Trace parse(byte[] bytes, String name, String displayName, TraceReadOptions options)
             throws InputException {
-        return new Parse(bytes, displayName, options == null ? TraceReadOptions.DEFAULT : options).run(name);
+        byte[] text = spaceAligned(bytes) ? withTabsForSpaces(bytes) : bytes;
+        return new Parse(text, displayName, options == null ? TraceReadOptions.DEFAULT : options).run(name);
+    }
+
+    /**
+     * True when the first line that is neither blank nor a comment holds no comma, semicolon or tab
+     * but two or more fields separated by spaces (outside quotes): columns aligned with spaces, as
+     * plain text exports write them.
+     */
+    static boolean spaceAligned(byte[] b) {
+        int n = b.length;
+        int i = TextFiles.bomLength(b);
+        while (i < n) {
+            int start = i;
+            while (i < n && b[i] != '\n' && b[i] != '\r') {
+                i++;
+            }
+            int end = i;
+            while (i < n && (b[i] == '\n' || b[i] == '\r')) {
+                i++;
+            }
+            int s = start;
+            while (s < end && b[s] == ' ') {
+                s++;
+            }
+            if (s == end || b[s] == '#') {
+                continue;
+            }
+            boolean quoted = false;
+            boolean gap = false;
+            boolean afterGap = false;
+            for (int k = s; k < end; k++) {
+                byte c = b[k];
+                if (c == '"') {
+                    quoted = !quoted;
+                } else if (!quoted && (c == ',' || c == ';' || c == '\t')) {
+                    return false;
+                }
+                if (!quoted && c == ' ') {
+                    gap = true;
+                } else if (gap) {
+                    afterGap = true;
+                }
+            }
+            return afterGap;
+        }
+        return false;
+    }
+
+    /**
+     * The text with every line's leading and trailing spaces dropped and each run of spaces between
+     * fields (outside quotes) turned into one tab; line ends, comment lines and everything else
+     * kept, so line numbers stay the same.
+     */
+    static byte[] withTabsForSpaces(byte[] b) {
+        byte[] out = new byte[b.length];
+        int m = 0;
+        int n = b.length;
+        int i = 0;
+        int bom = TextFiles.bomLength(b);
+        System.arraycopy(b, 0, out, 0, bom);
+        m = bom;
+        i = bom;
+        while (i < n) {
+            while (i < n && b[i] == ' ') {
+                i++;
+            }
+            boolean comment = i < n && b[i] == '#';
+            boolean quoted = false;
+            boolean pendingGap = false;
+            while (i < n && b[i] != '\n' && b[i] != '\r') {
+                byte c = b[i++];
+                if (!comment && !quoted && c == ' ') {
+                    pendingGap = true;
+                    continue;
+                }
+                if (pendingGap) {
+                    out[m++] = '\t';
+                    pendingGap = false;
+                }
+                if (c == '"') {
+                    quoted = !quoted;
+                }
+                out[m++] = c;
+            }
+            while (i < n && (b[i] == '\n' || b[i] == '\r')) {
+                out[m++] = b[i++];
+            }
+        }
+        return Arrays.copyOf(out, m);
     }
 
     /** State of one parse; not shared. */

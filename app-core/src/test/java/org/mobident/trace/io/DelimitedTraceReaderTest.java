@@ -287,6 +287,26 @@ class DelimitedTraceReaderTest {
     }
 
     @Test
+    void columnsAlignedWithSpaces() throws Exception {
+        Trace t = read(write("sp.txt", "time_s      signal\n   0     1.5  \n  120    2.5\n"));
+        assertArrayEquals(new double[] {0, 120}, t.timesS(), EXACT);
+        assertArrayEquals(new double[] {1.5, 2.5}, t.signals(), EXACT);
+        // quoted names keep their spaces (and so their unit); with spaces between columns a comma is a decimal comma
+        Trace q = read(write("sp2.txt", "\"Time (min)\"   \"Absorbance (mAU)\"\n1,5  0,25\n2  0,5\n"));
+        assertArrayEquals(new double[] {90, 120}, q.timesS(), EXACT);
+        assertArrayEquals(new double[] {0.25, 0.5}, q.signals(), EXACT);
+    }
+
+    @Test
+    void columnsAlignedWithSpacesWithoutHeaderKeepLineNumbers() throws Exception {
+        Trace t = read(write("sp3.txt", "# plain export\n    0   -1\n  100   -2\n"));
+        assertArrayEquals(new double[] {0, 100}, t.timesS(), EXACT);
+        assertArrayEquals(new double[] {-1, -2}, t.signals(), EXACT);
+        InputException e = fails("# plain export\n    0   -1\n  100   x\n");
+        assertWhere(e, 3, "column 2");
+    }
+
+    @Test
     void firstLineOfOneNumberIsNotAHeader() throws Exception {
         InputException e = fails("5\n6\n");
         assertWhere(e, 1, null);
