@@ -173,14 +173,12 @@ public final class DelimitedTraceReader {
      * kept, so line numbers stay the same.
      */
     static byte[] withTabsForSpaces(byte[] b) {
-        byte[] out = new byte[b.length];
-        int m = 0;
         int n = b.length;
-        int i = 0;
+        byte[] out = new byte[n];
         int bom = TextFiles.bomLength(b);
         System.arraycopy(b, 0, out, 0, bom);
-        m = bom;
-        i = bom;
+        int m = bom;
+        int i = bom;
         while (i < n) {
             while (i < n && b[i] == ' ') {
                 i++;
