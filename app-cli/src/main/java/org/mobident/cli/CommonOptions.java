@@ -37,6 +37,16 @@ public final class CommonOptions {
     @Option(names = "--debug", description = "Show the full error trace when something goes wrong.")
     boolean debug;
 
+    /** Takes the time unit and the columns the command line leaves unset from a method file, if any. */
+    void takeFrom(MethodFile method) {
+        if (method == null) {
+            return;
+        }
+        timeUnit = timeUnit != null ? timeUnit : method.text("time-unit");
+        timeColumn = timeColumn != null ? timeColumn : method.text("time-column");
+        signalColumn = signalColumn != null ? signalColumn : method.text("signal-column");
+    }
+
     TraceReadOptions readOptions() {
         String time = blankToNull(timeColumn, "--time-column");
         String signal = blankToNull(signalColumn, "--signal-column");

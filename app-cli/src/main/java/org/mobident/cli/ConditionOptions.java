@@ -8,9 +8,13 @@ import picocli.CommandLine.Option;
 /** Run conditions given on the command line; they fill what the run sheet leaves empty. */
 public final class ConditionOptions {
     @Option(names = "--method", paramLabel = "FILE",
-            description = "Method file: the conditions below as 'name = value' lines (e.g. 'voltage-kv = -20', "
-                    + "'marker-window = 450:700'; '#' starts a comment). An option given as well wins.")
+            description = "Method file: the conditions below, and time-unit, time-column and signal-column, as"
+                    + " 'name = value' lines (e.g. 'voltage-kv = -20', 'marker-window = 450:700'; '#' starts a"
+                    + " comment). An option given as well wins.")
     java.nio.file.Path methodFile;
+
+    /** The method file once read (read at most once). */
+    private MethodFile method;
 
     @Option(names = "--total-length-cm", paramLabel = "CM", description = "Capillary total length Lt in cm.")
     Double totalLengthCm;
@@ -50,10 +54,18 @@ public final class ConditionOptions {
     @Option(names = "--ref-window", paramLabel = "FROM:TO", description = "Time window (s) holding that charged marker.")
     String refWindow;
 
+    /** The method file, read on first use; null without one. */
+    MethodFile method() throws InputException {
+        if (method == null && methodFile != null) {
+            method = MethodFile.read(methodFile);
+        }
+        return method;
+    }
+
     /** The conditions given here; unset values stay unset. */
     RunConditions toConditions() throws InputException {
-        if (methodFile != null) {
-            MethodFile method = MethodFile.read(methodFile);
+        MethodFile method = method();
+        if (method != null) {
             totalLengthCm = totalLengthCm != null ? totalLengthCm : method.number("total-length-cm");
             detectorLengthCm = detectorLengthCm != null ? detectorLengthCm : method.number("detector-length-cm");
             voltageKv = voltageKv != null ? voltageKv : method.number("voltage-kv");
@@ -64,7 +76,6 @@ public final class ConditionOptions {
             detection = detection != null ? detection : method.text("detection");
             refMobility = refMobility != null ? refMobility : method.number("ref-mobility");
             refWindow = refWindow != null ? refWindow : method.text("ref-window");
-            methodFile = null; // read once: the values now stand as if given as options
         }
         double[] marker = window(markerWindow, "--marker-window");
         double[] ref = window(refWindow, "--ref-window");

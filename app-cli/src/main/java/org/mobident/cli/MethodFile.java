@@ -12,15 +12,17 @@ import org.mobident.InputException;
 import org.mobident.io.TextFiles;
 
 /**
- * A method file: the run conditions of a method as {@code name = value} lines, the names being the
- * condition options without their dashes ({@code voltage-kv = -20}), so one trace can be identified
- * without typing every condition. Blank lines and text after {@code #} are ignored.
+ * A method file: the run conditions of a method, and how its instrument writes its traces, as
+ * {@code name = value} lines, the names being the options without their dashes ({@code voltage-kv =
+ * -20}, {@code time-unit = min}), so one trace can be identified without typing every condition.
+ * Blank lines and text after {@code #} are ignored.
  */
 final class MethodFile {
 
     /** The names a method file may set, as the options spell them without "--". */
     static final List<String> NAMES = List.of("total-length-cm", "detector-length-cm", "voltage-kv", "ramp-s",
-            "temperature-c", "buffer", "marker-window", "detection", "ref-mobility", "ref-window");
+            "temperature-c", "buffer", "marker-window", "detection", "ref-mobility", "ref-window", "time-unit",
+            "time-column", "signal-column");
 
     private final Path file;
     private final Map<String, String> values;
@@ -63,7 +65,7 @@ final class MethodFile {
                 name = name.substring(2);
             }
             if (!NAMES.contains(name)) {
-                throw new InputException(file.toString(), i + 1, name, "not a condition a method sets; the names are: "
+                throw new InputException(file.toString(), i + 1, name, "not a setting a method file holds; the names are: "
                         + String.join(", ", NAMES));
             }
             if (values.containsKey(name)) {

@@ -46,7 +46,8 @@ public final class RunInputs {
     }
 
     /** The settings from the options; an option value the engine refuses is a usage error, not an internal one. */
-    IdentifySettings settings(MatchSettings matchSettings) {
+    IdentifySettings settings(MatchSettings matchSettings) throws InputException {
+        common.takeFrom(conditions.method());
         try {
             IdentifySettings s = IdentifySettings.defaults()
                     .withMatchSettings(matchSettings)

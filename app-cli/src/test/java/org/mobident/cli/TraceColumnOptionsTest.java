@@ -69,6 +69,21 @@ class TraceColumnOptionsTest {
         assertTrue(expected.size() > 4, "the demo run has its marker and analyte peaks");
         assertEquals(expected, peakRows(dir.resolve("read.csv")));
 
+        // the same from a method file that says how the method's traces are written (an option would win)
+        Path method = Files.writeString(dir.resolve("export.method"),
+                Files.readString(DEMO.resolve("chr8.method"), StandardCharsets.UTF_8) + "signal-column = 3\n");
+        BadInputCatalogueTest.Run fromMethod = BadInputCatalogueTest.run("identify", headerless.toString(),
+                "--library", DEMO.resolve("library.csv").toString(), "--method", method.toString(),
+                "--csv", dir.resolve("method-peaks.csv").toString(), "--quiet");
+        assertEquals(ExitCodes.OK, fromMethod.code(), fromMethod.err());
+        assertEquals(expected, peakRows(dir.resolve("method-peaks.csv")));
+        BadInputCatalogueTest.Run overridden = BadInputCatalogueTest.run("identify", headerless.toString(),
+                "--library", DEMO.resolve("library.csv").toString(), "--method", method.toString(),
+                "--signal-column", "2", "--csv", dir.resolve("overridden.csv").toString(), "--quiet");
+        // the option wins: column 2 is the constant current, which holds no peaks
+        assertEquals(ExitCodes.SOME_RUNS_FAILED, overridden.code(), overridden.err());
+        BadInputCatalogueTest.assertMessage(overridden, "spring-01", "no peaks found");
+
         // the same by name in a file with a header the tool does not recognise
         Path named = Files.writeString(dir.resolve("named.csv"), "X\tI\tY\n" + text);
         BadInputCatalogueTest.Run byName = identify(named, dir.resolve("named-peaks.csv"),
