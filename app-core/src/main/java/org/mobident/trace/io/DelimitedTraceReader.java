@@ -20,9 +20,13 @@ import org.mobident.trace.Trace;
  * <ul>
  *   <li>Delimiter comma, semicolon or tab, taken from the header (the most frequent of the three;
  *       ties go to tab, then semicolon). With semicolon or tab, numbers may use a decimal comma.
- *       Columns aligned with spaces (no comma, semicolon or tab on the first line, two or more
- *       fields separated by spaces) are read as tab-delimited, each run of spaces one delimiter;
- *       header names with spaces must then be quoted.</li>
+ *       Columns aligned with spaces (rows of numbers separated by spaces alone) are read as
+ *       tab-delimited, each run of spaces one delimiter; header names with spaces must then be
+ *       quoted.</li>
+ *   <li>Lines of the export's own before the header ({@code Sample: …}, {@code Operator;…}) are
+ *       skipped when the first line is no usable header: the data block is then the first
+ *       {@value #DATA_BLOCK_ROWS} rows of numbers of one shape, its header the line just before
+ *       them if that line holds names only (see {@code Parse.run}).</li>
  *   <li>No header line: when the first line (after comments) is a row of two or more numbers, the
  *       columns are known by position only ("column 1", …). The delimiter is then tab, else
  *       semicolon, else comma (beside a tab or a semicolon a comma is a decimal comma); the time
@@ -78,6 +82,11 @@ public final class DelimitedTraceReader {
         }
     }
 
+    /** Consecutive rows of numbers that make a data block after an export's own opening lines. */
+    private static final int DATA_BLOCK_ROWS = 3;
+    /** The data block is looked for among the first this many lines that are neither blank nor comments. */
+    private static final int MAX_PREAMBLE_LINES = 200;
+
     /** Largest array length the JVM allows, with a margin (the bytes of one file bound the rows anyway). */
     private static final int MAX_ROWS = Integer.MAX_VALUE - 8;
     /** Headroom of that estimate: later rows are usually a little longer (times gain digits). */
@@ -118,19 +127,35 @@ public final class DelimitedTraceReader {
      */
     public static Trace parse(byte[] bytes, String name, String displayName, TraceReadOptions options)
             throws InputException {
-        byte[] text = spaceAligned(bytes) ? withTabsForSpaces(bytes) : bytes;
-        return new Parse(text, displayName, options == null ? TraceReadOptions.DEFAULT : options).run(name);
+        TraceReadOptions o = options == null ? TraceReadOptions.DEFAULT : options;
+        Parse plain = new Parse(bytes, displayName, o);
+        try {
+            return plain.run(name);
+        } catch (InputException first) {
+            // columns aligned with spaces: read again with each run of spaces as one delimiter
+            if (plain.rowsTaken > 0 || !spaceAligned(bytes)) {
+                throw first;
+            }
+            Parse aligned = new Parse(withTabsForSpaces(bytes), displayName, o);
+            try {
+                return aligned.run(name);
+            } catch (InputException second) {
+                throw aligned.rowsTaken > 0 ? second : first;
+            }
+        }
     }
 
     /**
-     * True when the first line that is neither blank nor a comment holds no comma, semicolon or tab
-     * but two or more fields separated by spaces (outside quotes): columns aligned with spaces, as
-     * plain text exports write them.
+     * True when, among the first lines that are neither blank nor comments, {@value #DATA_BLOCK_ROWS}
+     * consecutive ones (or the last two or more of a shorter file) are numbers separated by spaces
+     * alone (no semicolon or tab): columns aligned with spaces, as plain text exports write them.
      */
     static boolean spaceAligned(byte[] b) {
         int n = b.length;
         int i = TextFiles.bomLength(b);
-        while (i < n) {
+        int seen = 0;
+        int run = 0;
+        while (i < n && seen < MAX_PREAMBLE_LINES) {
             int start = i;
             while (i < n && b[i] != '\n' && b[i] != '\r') {
                 i++;
@@ -146,25 +171,33 @@ public final class DelimitedTraceReader {
             if (s == end || b[s] == '#') {
                 continue;
             }
-            boolean quoted = false;
-            boolean gap = false;
-            boolean afterGap = false;
-            for (int k = s; k < end; k++) {
-                byte c = b[k];
-                if (c == '"') {
-                    quoted = !quoted;
-                } else if (!quoted && (c == ',' || c == ';' || c == '\t')) {
-                    return false;
-                }
-                if (!quoted && c == ' ') {
-                    gap = true;
-                } else if (gap) {
-                    afterGap = true;
-                }
+            seen++;
+            run = spacedNumbers(b, s, end) ? run + 1 : 0;
+            if (run == DATA_BLOCK_ROWS) {
+                return true;
             }
-            return afterGap;
         }
-        return false;
+        return i >= n && run >= 2; // a short file: its last rows are such numbers
+    }
+
+    /** True for two or more fields of digits, signs, points, commas (decimal) and exponents, separated by spaces. */
+    private static boolean spacedNumbers(byte[] b, int from, int to) {
+        int fields = 0;
+        boolean inField = false;
+        for (int k = from; k < to; k++) {
+            byte c = b[k];
+            if (c == ' ') {
+                inField = false;
+            } else if ((c >= '0' && c <= '9') || c == '.' || c == ',' || c == '-' || c == '+' || c == 'e' || c == 'E') {
+                if (!inField) {
+                    fields++;
+                    inField = true;
+                }
+            } else {
+                return false;
+            }
+        }
+        return fields >= 2;
     }
 
     /**
@@ -446,9 +479,115 @@ public final class DelimitedTraceReader {
             return i == lineEnd || b[i] == '#';
         }
 
+        /** Data rows taken so far by {@link #runFrom}. */
+        private int rowsTaken;
+        /** Where the line {@link #runFrom} took for its header (or first row) starts. */
+        private int headerStart;
+
+        /**
+         * Reads the trace. Where the first line that is neither blank nor a comment is no usable
+         * header and no row has been taken (an export that opens with lines of its own, such as
+         * {@code Sample: …} or {@code Operator;…}), the data block is looked for further down: the
+         * first {@value #DATA_BLOCK_ROWS} consecutive rows of numbers of the same shape, with the line
+         * just before them as header when it has their number of fields and is not itself numbers.
+         * The lines before are skipped; without such a block the first problem stands.
+         */
         Trace run(String traceName) throws InputException {
             TextSniffer.requireText(b, file);
-            pos = TextFiles.bomLength(b);
+            int start = TextFiles.bomLength(b);
+            try {
+                return runFrom(start, 0, traceName);
+            } catch (InputException first) {
+                if (rowsTaken > 0) {
+                    throw first;
+                }
+                long[] block = dataBlock(start);
+                if (block == null || block[0] <= headerStart) {
+                    throw first;
+                }
+                headerless = false;
+                unitAssumed = false;
+                return runFrom((int) block[0], block[1], traceName);
+            }
+        }
+
+        /**
+         * Where the data block starts: {position of its header line (or first row), the line number
+         * before it}, or null when the first {@value #MAX_PREAMBLE_LINES} lines hold none.
+         */
+        private long[] dataBlock(int from) {
+            List<int[]> bounds = new ArrayList<>(); // {start, end, line number}
+            int i = from;
+            int lineNumber = 0;
+            while (i < n && bounds.size() < MAX_PREAMBLE_LINES) {
+                int s0 = i;
+                while (i < n && b[i] != '\n' && b[i] != '\r') {
+                    i++;
+                }
+                int e0 = i;
+                lineNumber++;
+                if (i < n && b[i] == '\r' && i + 1 < n && b[i + 1] == '\n') {
+                    i++;
+                }
+                i = Math.min(n, i + 1);
+                int k = s0;
+                while (k < e0 && (b[k] == ' ' || b[k] == '\t')) {
+                    k++;
+                }
+                if (k < e0 && b[k] != '#') {
+                    bounds.add(new int[] {s0, e0, lineNumber});
+                }
+            }
+            for (int k = 0; k + DATA_BLOCK_ROWS <= bounds.size(); k++) {
+                String row = text(bounds.get(k));
+                char d = numericRowDelimiter(row);
+                if (d == 0) {
+                    continue;
+                }
+                int fields = splitText(row, d).size();
+                boolean block = true;
+                for (int j = 1; j < DATA_BLOCK_ROWS && block; j++) {
+                    String next = text(bounds.get(k + j));
+                    block = numericRowDelimiter(next) == d && splitText(next, d).size() == fields;
+                }
+                if (!block) {
+                    continue;
+                }
+                int[] first = bounds.get(k);
+                if (k > 0) {
+                    int[] before = bounds.get(k - 1);
+                    String header = text(before);
+                    if (namesOnly(header, d, fields)) {
+                        return new long[] {before[0], before[2] - 1};
+                    }
+                }
+                return new long[] {first[0], first[2] - 1};
+            }
+            return null;
+        }
+
+        /** True when {@code header} splits at {@code d} into {@code fields} fields, none blank or a number. */
+        private boolean namesOnly(String header, char d, int fields) {
+            List<String> parts = splitText(header, d);
+            if (parts.size() != fields) {
+                return false;
+            }
+            for (String part : parts) {
+                if (part.isEmpty() || !Double.isNaN(parseText(part))) {
+                    return false;
+                }
+            }
+            return true;
+        }
+
+        private String text(int[] bounds) {
+            return TextFiles.decodeLenient(b, bounds[0], bounds[1]);
+        }
+
+        private Trace runFrom(int start, long lineBefore, String traceName) throws InputException {
+            pos = start;
+            line = lineBefore;
+            rowsTaken = 0;
             boolean found = false;
             while (nextLine()) {
                 if (!skippable()) {
@@ -461,6 +600,7 @@ public final class DelimitedTraceReader {
                         : "the file has no header line (only blank or comment lines)");
             }
             long headerLine = line;
+            headerStart = lineStart;
             String header = TextFiles.decodeLenient(b, lineStart, lineEnd);
             readHeader(header, headerLine);
             if (headerless) {
@@ -531,6 +671,7 @@ public final class DelimitedTraceReader {
                 times[count] = tS;
                 signal[count] = y;
                 count++;
+                rowsTaken = count;
                 previousRaw = t;
                 previousLine = line;
             }

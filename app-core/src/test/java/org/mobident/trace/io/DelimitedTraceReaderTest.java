@@ -302,8 +302,34 @@ class DelimitedTraceReaderTest {
         Trace t = read(write("sp3.txt", "# plain export\n    0   -1\n  100   -2\n"));
         assertArrayEquals(new double[] {0, 100}, t.timesS(), EXACT);
         assertArrayEquals(new double[] {-1, -2}, t.signals(), EXACT);
-        InputException e = fails("# plain export\n    0   -1\n  100   x\n");
-        assertWhere(e, 3, "column 2");
+        InputException e = fails("# plain export\n    0   -1\n  100   -2\n  200   -3\n  300   x\n");
+        assertWhere(e, 5, "column 2");
+    }
+
+    @Test
+    void exportLinesBeforeTheHeaderAreSkipped() throws Exception {
+        Trace t = read(write("pre.csv", "Sample Name;river-3\nOperator;A. Tester\n\nTime (min);Absorbance (mAU)\n"
+                + "0,5;1\n1;2\n1,5;3\n2;4\n"));
+        assertArrayEquals(new double[] {30, 60, 90, 120}, t.timesS(), EXACT);
+        assertArrayEquals(new double[] {1, 2, 3, 4}, t.signals(), EXACT);
+        // opening lines with spaces before a comma header whose names hold spaces
+        Trace u = read(write("pre2.csv", "Sample: river 3\nTime (min),Absorbance (mAU)\n0.5,1\n1,2\n1.5,3\n"));
+        assertArrayEquals(new double[] {30, 60, 90}, u.timesS(), EXACT);
+        // a line holding a number is no header: the rows after it are read by position, lines kept
+        Trace v = read(write("pre3.txt", "Sample: river 3\nPoints: 3\n0\t1\n100\t2\n200\t3\n"));
+        assertArrayEquals(new double[] {0, 100, 200}, v.timesS(), EXACT);
+        InputException e = fails("Sample: river 3\nPoints: 4\n0\t1\n100\t2\n200\t3\n300\tx\n");
+        assertWhere(e, 6, "column 2");
+    }
+
+    @Test
+    void withoutADataBlockTheFirstProblemStands() throws Exception {
+        // the header is the line before the block already: its problem is the one reported
+        InputException e = fails("wavelength,signal\n0,1\n1,2\n2,3\n");
+        assertWhere(e, 1, "time");
+        // fewer than three rows of numbers after the opening lines: no block
+        InputException f = fails("Sample;x\ntime_s;signal\n0;1\n1;2\n");
+        assertWhere(f, 1, "time");
     }
 
     @Test
