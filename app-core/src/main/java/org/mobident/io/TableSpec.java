@@ -16,7 +16,10 @@ import java.util.Locale;
  * @param required           the columns that must be present
  * @param unknownIsError     an unknown column is an error (otherwise it is ignored)
  * @param extraCellIsError   a value in a column without a name, or beyond the header, is an error
- * @param spacesAsUnderscore header names compare with spaces and hyphens read as {@code _}
+ * @param spacesAsUnderscore header names compare with spaces, hyphens, slashes and brackets read as
+ *                           {@code _} (one for a run of them, none at either end) and a degree sign
+ *                           dropped, so that {@code Total length (cm)} and {@code Temperature [°C]}
+ *                           name {@code total_length_cm} and {@code temperature_c}
  * @param missingHint        appended to the message of a missing required column ("" for none)
  * @param listPresentColumns a missing required column's message lists the columns present
  * @param comments           lines starting with {@code #} are comments (otherwise they are rows)
@@ -87,7 +90,22 @@ public record TableSpec(String what, boolean sniffDelimiter, List<String> known,
     /** A header cell in the form the known names are written in: trimmed, lower case (and {@code _}). */
     public String normalise(String headerCell) {
         String c = headerCell.strip().toLowerCase(Locale.ROOT);
-        return spacesAsUnderscore ? c.replace(' ', '_').replace('-', '_') : c;
+        if (!spacesAsUnderscore) {
+            return c;
+        }
+        String joined = SEPARATORS.matcher(c.replace("°", "")).replaceAll("_");
+        int from = 0;
+        int to = joined.length();
+        while (from < to && joined.charAt(from) == '_') {
+            from++;
+        }
+        while (to > from && joined.charAt(to - 1) == '_') {
+            to--;
+        }
+        return joined.substring(from, to);
     }
+
+    /** Runs of what separates the words of a header name: blanks, hyphens, underscores, slashes, brackets. */
+    private static final java.util.regex.Pattern SEPARATORS = java.util.regex.Pattern.compile("[\\s\\-_/()\\[\\]]+");
 
 }

@@ -103,6 +103,28 @@ class RunSheetReaderTest {
     }
 
     @Test
+    void headerNamesWithUnitsInBrackets() throws Exception {
+        // how a spreadsheet user writes the columns: words, units in brackets, a degree sign
+        Path p = sheet("File,Total length (cm),Detector length [cm],Voltage (kV),Temperature (°C),"
+                + "Marker from (s),Marker to (s),Detection\n"
+                + "traces/a.csv,64.5,56,-30,22.5,120,180,indirect\n");
+        RunSheet s = RunSheetReader.read(p, RunConditions.EMPTY);
+        assertTrue(s.clean(), () -> s.rowProblems().toString());
+        RunConditions c = s.runs().get(0).conditions();
+        assertEquals(64.5, c.totalLengthCm(), EXACT);
+        assertEquals(56, c.detectorLengthCm(), EXACT);
+        assertEquals(-30, c.voltageKv(), EXACT);
+        assertEquals(22.5, c.temperatureC(), EXACT);
+        assertEquals(120, c.markerFromS(), EXACT);
+        assertEquals(180, c.markerToS(), EXACT);
+        assertEquals(Detection.INDIRECT, c.detection());
+        // a name that still matches nothing is refused with the known names
+        InputException e = assertThrows(InputException.class,
+                () -> RunSheetReader.read(sheet("file,Length (mm)\ntraces/a.csv,640\n"), RunConditions.EMPTY));
+        assertEquals("Length (mm)", e.field());
+    }
+
+    @Test
     void defaultsFillEmptyCellsAndRowValuesOverride() throws Exception {
         Path p = sheet("file,voltage_kv,buffer,detection\ntraces/a.csv,,,\ntraces/b.csv,-20,acetate,indirect\n");
         RunSheet s = RunSheetReader.read(p, defaults());
