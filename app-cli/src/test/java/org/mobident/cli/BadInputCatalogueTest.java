@@ -269,10 +269,13 @@ class BadInputCatalogueTest {
     @Test
     void utf16AndLatin1Encodings() throws IOException {
         String text = new String(demoTrace(), StandardCharsets.UTF_8);
-        Batch withBom = badTrace("utf16.csv", text.getBytes(StandardCharsets.UTF_16));
-        assertMessage(withBom.run(), "utf16.csv", "looks like UTF-16 text; save it as UTF-8");
-        Batch noBom = badTrace("utf16le.csv", text.getBytes(StandardCharsets.UTF_16LE));
-        assertMessage(noBom.run(), "utf16le.csv", "looks like UTF-16");
+        // UTF-16 ("Unicode" text), with a byte order mark or without: the same peaks as the UTF-8 original
+        write("utf16.csv", text.getBytes(StandardCharsets.UTF_16));
+        write("utf16le.csv", text.getBytes(StandardCharsets.UTF_16LE));
+        Batch wide = batch("utf16.csv" + SPRING_CONDITIONS, "utf16le.csv" + SPRING_CONDITIONS);
+        assertEquals(ExitCodes.OK, wide.run().code(), wide.run().err());
+        assertEquals(wide.statusByRun().get("good"), wide.statusByRun().get("utf16"));
+        assertEquals(wide.statusByRun().get("good"), wide.statusByRun().get("utf16le"));
 
         // Latin-1: only the header and comments hold text, so the trace reads correctly
         String latin = "# Kapillare 80 cm, 25 \u00b0C\ntime (s),signal (\u00b5AU)\n" + text.substring(text.indexOf('\n') + 1);

@@ -33,7 +33,8 @@ import org.mobident.trace.Trace;
  *       is the first column and the signal the second, unless the options give their positions;
  *       with more than two columns the signal column must be given.</li>
  *   <li>UTF-8 (a byte order mark is skipped); a header that is not valid UTF-8 is read as
- *       ISO-8859-1. UTF-16 and binary files are refused. Lines end in LF, CRLF or CR.</li>
+ *       ISO-8859-1; UTF-16 text (with a byte order mark, or ASCII with NULs at every other byte) is
+ *       read as its UTF-8 equivalent. Binary files are refused. Lines end in LF, CRLF or CR.</li>
  *   <li>Blank lines and lines starting with {@code #} are skipped anywhere. Fields may be quoted.
  *       Trailing empty fields beyond the header are ignored.</li>
  *   <li>Time column: the option (a header name, or a position with 1 for the first column), else a
@@ -128,6 +129,7 @@ public final class DelimitedTraceReader {
     public static Trace parse(byte[] bytes, String name, String displayName, TraceReadOptions options)
             throws InputException {
         TraceReadOptions o = options == null ? TraceReadOptions.DEFAULT : options;
+        bytes = TextSniffer.asUtf8(bytes);
         Parse plain = new Parse(bytes, displayName, o);
         try {
             return plain.run(name);

@@ -89,7 +89,7 @@ public final class RunSheetReader {
      */
     public static RunSheet read(Path sheet, RunConditions defaults) throws InputException {
         String name = sheet.toString();
-        byte[] bytes = TextSniffer.readAllBytes(sheet, name);
+        byte[] bytes = TextSniffer.asUtf8(TextSniffer.readAllBytes(sheet, name));
         TextSniffer.requireText(bytes, name);
         String text = TextFiles.decodeLenient(bytes, TextFiles.bomLength(bytes), bytes.length);
         return new SheetParse(sheet, name, defaults == null ? RunConditions.EMPTY : defaults).run(text);

@@ -1,6 +1,7 @@
 package org.mobident.trace.io;
 
 import java.io.IOException;
+import java.nio.charset.StandardCharsets;
 import java.nio.file.AccessDeniedException;
 import java.nio.file.Files;
 import java.nio.file.NoSuchFileException;
@@ -46,8 +47,46 @@ final class TextSniffer {
     }
 
     /**
+     * The text as UTF-8 bytes: UTF-16 text (a byte order mark, or NULs at every other byte of the
+     * first {@value #SAMPLE_BYTES} bytes, as Windows programs write "Unicode" text) re-encoded,
+     * anything else returned as it is. Line ends and line numbers are kept.
+     */
+    static byte[] asUtf8(byte[] b) {
+        boolean bigEndianMark = b.length >= 2 && (b[0] & 0xFF) == 0xFE && (b[1] & 0xFF) == 0xFF;
+        boolean littleEndianMark = b.length >= 2 && (b[0] & 0xFF) == 0xFF && (b[1] & 0xFF) == 0xFE;
+        java.nio.charset.Charset charset;
+        int skip = 0;
+        if (bigEndianMark || littleEndianMark) {
+            charset = bigEndianMark ? StandardCharsets.UTF_16BE : StandardCharsets.UTF_16LE;
+            skip = 2;
+        } else {
+            int n = Math.min(b.length, SAMPLE_BYTES);
+            int nulEven = 0;
+            int nulOdd = 0;
+            for (int i = 0; i < n; i++) {
+                if (b[i] == 0) {
+                    if ((i & 1) == 0) {
+                        nulEven++;
+                    } else {
+                        nulOdd++;
+                    }
+                }
+            }
+            int nul = nulEven + nulOdd;
+            if (nul == 0 || nul < UTF16_NUL_SHARE * n || Math.max(nulEven, nulOdd) < UTF16_PARITY_SHARE * nul) {
+                return b;
+            }
+            // ASCII text as UTF-16: the high byte is the NUL, first in big-endian order
+            charset = nulEven > nulOdd ? StandardCharsets.UTF_16BE : StandardCharsets.UTF_16LE;
+        }
+        String text = new String(b, skip, (b.length - skip) & ~1, charset);
+        return text.getBytes(StandardCharsets.UTF_8);
+    }
+
+    /**
      * Throws when the bytes are UTF-16 (byte order mark, or NULs in every other byte) or binary
-     * (NULs or many control bytes in the first {@value #SAMPLE_BYTES} bytes).
+     * (NULs or many control bytes in the first {@value #SAMPLE_BYTES} bytes). Callers that read
+     * UTF-16 pass the bytes through {@link #asUtf8} first.
      */
     static void requireText(byte[] b, String file) throws InputException {
         if (b.length >= 2 && (((b[0] & 0xFF) == 0xFE && (b[1] & 0xFF) == 0xFF)

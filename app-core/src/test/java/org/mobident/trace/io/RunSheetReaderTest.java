@@ -169,10 +169,13 @@ class RunSheetReaderTest {
         // the field is the column's own name, as in every other message about it
         assertWhere(assertThrows(InputException.class, () -> read("file,buffer,Buffer\na,b,c\n")), 1, "buffer");
         assertThrows(InputException.class, () -> RunSheetReader.read(dir.resolve("none.csv"), RunConditions.EMPTY));
+        // a sheet saved as "Unicode" text is read as its UTF-8 equivalent
         Path u16 = dir.resolve("u16.csv");
-        Files.write(u16, "file\ntraces/a.csv\n".getBytes(StandardCharsets.UTF_16));
-        assertTrue(assertThrows(InputException.class, () -> RunSheetReader.read(u16, RunConditions.EMPTY))
-                .problem().contains("UTF-16"));
+        Files.write(u16, "file,voltage_kv\ntraces/a.csv,-20\n".getBytes(StandardCharsets.UTF_16));
+        RunSheet u = RunSheetReader.read(u16, RunConditions.EMPTY);
+        assertTrue(u.clean(), () -> u.rowProblems().toString());
+        assertEquals(dir.resolve("traces/a.csv"), u.runs().get(0).traceFile());
+        assertEquals(-20, u.runs().get(0).conditions().voltageKv(), EXACT);
     }
 
     @Test
