@@ -43,6 +43,9 @@ import org.mobident.trace.Trace;
  *       refused as probably minutes, see {@link #UNITLESS_MINUTES_LIMIT}).</li>
  *   <li>Signal column: the option (name or position), else a name with a word such as signal,
  *       absorbance, mAU, intensity, detector, response or value, else the first other named column.</li>
+ *   <li>Lines of text after the data ({@code End of data}, {@code Points: …}) end it, when at least
+ *       {@value #DATA_BLOCK_ROWS} rows came before and no row follows; a damaged or truncated row
+ *       is still an error.</li>
  *   <li>Times must strictly increase (sampling may be irregular); values must be finite.</li>
  * </ul>
  * Every problem is an {@link InputException} naming the file, the 1-based line and the column.
@@ -64,6 +67,10 @@ public final class DelimitedTraceReader {
     private static final int SIMPLE_ROW = 1;
     private static final int GENERAL_ROW = 0;
     private static final int END_OF_BYTES = -1;
+    /** Outcomes of {@code Parse.generalRow}. */
+    private static final int ROW_READ = 3;
+    private static final int LINE_SKIPPED = 4;
+    private static final int FOOTER_REACHED = 5;
     /**
      * Most digits a number of {@code Parse.plainRow} may have: up to 18 digits a long holds them
      * exactly, so the row's significand is the one {@link FastDoubleParser} keeps (it drops digits
@@ -472,6 +479,72 @@ public final class DelimitedTraceReader {
             return PLAIN_ROW;
         }
 
+        /**
+         * Reads the next line the general way (any quoting, spacing and number form), its time and
+         * signal into {@link #plainTime} and {@link #plainSignal}.
+         *
+         * @return {@link #ROW_READ}; {@link #LINE_SKIPPED} for a blank or comment line; or
+         *         {@link #FOOTER_REACHED} when the line fails as a row after at least
+         *         {@value #DATA_BLOCK_ROWS} rows and it and every line after it are text, not rows
+         *         (an export's closing lines, such as {@code End of data}): the data end before it
+         */
+        private int generalRow(int timeIndex, int signalIndex, String timeName, String signalName,
+                               boolean decimalComma) throws InputException {
+            try {
+                if (simpleRow() == GENERAL_ROW) {
+                    nextLine(); // there are bytes left, so there is a line
+                    if (skippable()) {
+                        return LINE_SKIPPED;
+                    }
+                    splitRow();
+                }
+                plainTime = value(timeIndex, timeName, decimalComma);
+                plainSignal = value(signalIndex, signalName, decimalComma);
+                return ROW_READ;
+            } catch (InputException rowProblem) {
+                if (rowsTaken >= DATA_BLOCK_ROWS && footerFrom(lineStart)) {
+                    return FOOTER_REACHED;
+                }
+                throw rowProblem;
+            }
+        }
+
+        /**
+         * True when every line from {@code start} on that is neither blank nor a comment opens with a
+         * word (two or more letters, not {@code NaN} or {@code Inf…}): text after the data, which holds
+         * no row that could be lost. A line opening with a digit, a sign, a point or a quote (a
+         * truncated or damaged row) is not.
+         */
+        private boolean footerFrom(int start) {
+            int i = start;
+            while (i < n) {
+                int s0 = i;
+                while (i < n && b[i] != '\n' && b[i] != '\r') {
+                    i++;
+                }
+                int e0 = i;
+                while (i < n && (b[i] == '\n' || b[i] == '\r')) {
+                    i++;
+                }
+                int k = s0;
+                while (k < e0 && (b[k] == ' ' || b[k] == '\t')) {
+                    k++;
+                }
+                if (k == e0 || b[k] == '#') {
+                    continue;
+                }
+                int w = k;
+                while (w < e0 && ((b[w] | 0x20) >= 'a' && (b[w] | 0x20) <= 'z')) {
+                    w++;
+                }
+                String word = new String(b, k, w - k, StandardCharsets.ISO_8859_1).toLowerCase(Locale.ROOT);
+                if (word.length() < 2 || word.equals("nan") || word.startsWith("inf")) {
+                    return false;
+                }
+            }
+            return true;
+        }
+
         /** True for a line of spaces and tabs only, or a comment line. */
         private boolean skippable() {
             int i = lineStart;
@@ -634,15 +707,15 @@ public final class DelimitedTraceReader {
                     t = plainTime;
                     y = plainSignal;
                 } else {
-                    if (simpleRow() == GENERAL_ROW) {
-                        nextLine(); // there are bytes left, so there is a line
-                        if (skippable()) {
-                            continue;
-                        }
-                        splitRow();
+                    int general = generalRow(timeIndex, signalIndex, timeName, signalName, decimalComma);
+                    if (general == LINE_SKIPPED) {
+                        continue;
                     }
-                    t = value(timeIndex, timeName, decimalComma);
-                    y = value(signalIndex, signalName, decimalComma);
+                    if (general == FOOTER_REACHED) {
+                        break;
+                    }
+                    t = plainTime;
+                    y = plainSignal;
                 }
                 double tS = scale.toSeconds(t);
                 if (!Double.isFinite(tS)) {

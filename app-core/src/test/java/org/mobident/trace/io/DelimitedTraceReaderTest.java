@@ -324,6 +324,18 @@ class DelimitedTraceReaderTest {
     }
 
     @Test
+    void exportLinesAfterTheDataEndIt() throws Exception {
+        Trace t = read(write("foot.csv", "time_s,signal\n0,1\n1,2\n2,3\n3,4\n\nEnd of data\nPoints: 4\n"));
+        assertArrayEquals(new double[] {0, 1, 2, 3}, t.timesS(), EXACT);
+        // text with rows after it is a bad row, not the end of the data
+        assertWhere(fails("time_s,signal\n0,1\n1,2\n2,3\nEnd of data\n4,5\n"), 5, "signal");
+        // nor are a non-finite value, a damaged row, or text after fewer than three rows
+        assertWhere(fails("time_s,signal\n0,1\n1,2\n2,3\nNaN,5\n"), 5, "time_s");
+        assertWhere(fails("time_s,signal\n0,1\n1,2\n2,3\n3,4x\n"), 5, "signal");
+        assertWhere(fails("time_s,signal\n0,1\n1,2\nEnd of data\n"), 4, "signal");
+    }
+
+    @Test
     void withoutADataBlockTheFirstProblemStands() throws Exception {
         // the header is the line before the block already: its problem is the one reported
         InputException e = fails("wavelength,signal\n0,1\n1,2\n2,3\n");
