@@ -142,14 +142,14 @@ public final class DelimitedTraceReader {
             return plain.run(name);
         } catch (InputException first) {
             // columns aligned with spaces: read again with each run of spaces as one delimiter
-            if (plain.rowsTaken > 0 || !spaceAligned(bytes)) {
+            if (plain.headerTaken || !spaceAligned(bytes)) {
                 throw first;
             }
             Parse aligned = new Parse(withTabsForSpaces(bytes), displayName, o);
             try {
                 return aligned.run(name);
             } catch (InputException second) {
-                throw aligned.rowsTaken > 0 ? second : first;
+                throw aligned.headerTaken ? second : first;
             }
         }
     }
@@ -556,12 +556,14 @@ public final class DelimitedTraceReader {
 
         /** Data rows taken so far by {@link #runFrom}. */
         private int rowsTaken;
+        /** True once {@link #runFrom} has its columns and time unit from the header (or by position). */
+        private boolean headerTaken;
         /** Where the line {@link #runFrom} took for its header (or first row) starts. */
         private int headerStart;
 
         /**
          * Reads the trace. Where the first line that is neither blank nor a comment is no usable
-         * header and no row has been taken (an export that opens with lines of its own, such as
+         * header (an export that opens with lines of its own, such as
          * {@code Sample: …} or {@code Operator;…}), the data block is looked for further down: the
          * first {@value #DATA_BLOCK_ROWS} consecutive rows of numbers of the same shape, with the line
          * just before them as header when it has their number of fields and is not itself numbers.
@@ -573,8 +575,8 @@ public final class DelimitedTraceReader {
             try {
                 return runFrom(start, 0, traceName);
             } catch (InputException first) {
-                if (rowsTaken > 0) {
-                    throw first;
+                if (headerTaken) {
+                    throw first; // a usable header, and a problem in the rows: that problem is the answer
                 }
                 long[] block = dataBlock(start);
                 if (block == null || block[0] <= headerStart) {
@@ -663,6 +665,7 @@ public final class DelimitedTraceReader {
             pos = start;
             line = lineBefore;
             rowsTaken = 0;
+            headerTaken = false;
             boolean found = false;
             while (nextLine()) {
                 if (!skippable()) {
@@ -686,6 +689,7 @@ public final class DelimitedTraceReader {
             int timeIndex = timeColumn(headerLine);
             int signalIndex = signalColumn(headerLine, timeIndex);
             TimeScale scale = timeScale(timeIndex, headerLine);
+            headerTaken = true;
             String timeName = names.get(timeIndex);
             String signalName = names.get(signalIndex);
             boolean decimalComma = delimiter != ',';

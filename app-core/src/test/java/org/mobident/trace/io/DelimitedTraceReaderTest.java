@@ -340,6 +340,10 @@ class DelimitedTraceReaderTest {
         // the header is the line before the block already: its problem is the one reported
         InputException e = fails("wavelength,signal\n0,1\n1,2\n2,3\n");
         assertWhere(e, 1, "time");
+        // a usable header with a bad first row: that row is the problem, the rows after it are not read
+        // without the header (its unit would be lost)
+        InputException g = fails("Time (min),signal\n0,abc\n100,2\n200,3\n300,4\n");
+        assertWhere(g, 2, "signal");
         // fewer than three rows of numbers after the opening lines: no block
         InputException f = fails("Sample;x\ntime_s;signal\n0;1\n1;2\n");
         assertWhere(f, 1, "time");
