@@ -533,12 +533,7 @@ public final class DelimitedTraceReader {
                 if (k == e0 || b[k] == '#') {
                     continue;
                 }
-                int w = k;
-                while (w < e0 && ((b[w] | 0x20) >= 'a' && (b[w] | 0x20) <= 'z')) {
-                    w++;
-                }
-                String word = new String(b, k, w - k, StandardCharsets.ISO_8859_1).toLowerCase(Locale.ROOT);
-                if (word.length() < 2 || word.equals("nan") || word.startsWith("inf")) {
+                if (!opensWithWord(k, e0)) {
                     return false;
                 }
             }
@@ -578,19 +573,37 @@ public final class DelimitedTraceReader {
                 if (headerTaken) {
                     throw first; // a usable header, and a problem in the rows: that problem is the answer
                 }
+                int firstStart = headerStart;
                 long[] block = dataBlock(start);
-                if (block == null || block[0] <= headerStart) {
+                if (block == null) {
                     throw first;
                 }
-                headerless = false;
-                unitAssumed = false;
-                return runFrom((int) block[0], block[1], traceName);
+                // the line before the rows as header, else (a last opening line that looks like
+                // names, "Operator;A. Tester") the rows alone, by position
+                for (int k = 0; k < block.length; k += 2) {
+                    if (block[k] <= firstStart || !openingLines(start, (int) block[k])) {
+                        continue;
+                    }
+                    try {
+                        headerless = false;
+                        unitAssumed = false;
+                        return runFrom((int) block[k], block[k + 1], traceName);
+                    } catch (InputException again) {
+                        if (headerTaken) {
+                            throw again;
+                        }
+                    }
+                }
+                throw first;
             }
         }
 
         /**
-         * Where the data block starts: {position of its header line (or first row), the line number
-         * before it}, or null when the first {@value #MAX_PREAMBLE_LINES} lines hold none.
+         * Where the data block starts: {position of its header line, the line number before it},
+         * followed, when that line names neither a time nor a signal column (an opening line such
+         * as {@code Operator;A. Tester}), by {position of its first row, the line number before it}
+         * to read by position instead; only the latter when no line before the rows holds names
+         * only; null when the first {@value #MAX_PREAMBLE_LINES} lines hold no block.
          */
         private long[] dataBlock(int from) {
             List<int[]> bounds = new ArrayList<>(); // {start, end, line number}
@@ -635,7 +648,9 @@ public final class DelimitedTraceReader {
                     int[] before = bounds.get(k - 1);
                     String header = text(before);
                     if (namesOnly(header, d, fields)) {
-                        return new long[] {before[0], before[2] - 1};
+                        // a line that names a time or a signal column is a header: its problem stands
+                        return namesAColumn(header, d) ? new long[] {before[0], before[2] - 1}
+                                : new long[] {before[0], before[2] - 1, first[0], first[2] - 1};
                     }
                 }
                 return new long[] {first[0], first[2] - 1};
@@ -655,6 +670,67 @@ public final class DelimitedTraceReader {
                 }
             }
             return true;
+        }
+
+        /**
+         * True when every line from {@code from} up to {@code to} that is neither blank nor a comment
+         * can be an export's opening line: it opens with a word (two or more letters, not {@code NaN}
+         * or {@code Inf…}: no damaged row is skipped) and names no time column (no header is
+         * skipped).
+         */
+        private boolean openingLines(int from, int to) {
+            int i = from;
+            while (i < to) {
+                int s0 = i;
+                while (i < to && b[i] != '\n' && b[i] != '\r') {
+                    i++;
+                }
+                int e0 = i;
+                while (i < to && (b[i] == '\n' || b[i] == '\r')) {
+                    i++;
+                }
+                int k = s0;
+                while (k < e0 && (b[k] == ' ' || b[k] == '\t')) {
+                    k++;
+                }
+                if (k == e0 || b[k] == '#') {
+                    continue;
+                }
+                if (!opensWithWord(k, e0)) {
+                    return false;
+                }
+                String text = TextFiles.decodeLenient(b, s0, e0);
+                char d = TextFiles.mostFrequentDelimiter(text);
+                if (d != 0) {
+                    for (String part : splitText(text, d)) {
+                        if (ColumnNames.isTime(ColumnNames.parse(part))) {
+                            return false;
+                        }
+                    }
+                }
+            }
+            return true;
+        }
+
+        /** True when the text from {@code k} opens with a word of two or more letters, not NaN or Inf…. */
+        private boolean opensWithWord(int k, int end) {
+            int w = k;
+            while (w < end && ((b[w] | 0x20) >= 'a' && (b[w] | 0x20) <= 'z')) {
+                w++;
+            }
+            String word = new String(b, k, w - k, StandardCharsets.ISO_8859_1).toLowerCase(Locale.ROOT);
+            return word.length() >= 2 && !word.equals("nan") && !word.startsWith("inf");
+        }
+
+        /** True when a field of {@code header} names a time or a signal column. */
+        private boolean namesAColumn(String header, char d) {
+            for (String part : splitText(header, d)) {
+                ColumnNames.Name parsed = ColumnNames.parse(part);
+                if (ColumnNames.isTime(parsed) || ColumnNames.isSignal(parsed)) {
+                    return true;
+                }
+            }
+            return false;
         }
 
         private String text(int[] bounds) {

@@ -336,6 +336,21 @@ class DelimitedTraceReaderTest {
     }
 
     @Test
+    void anOpeningLineThatLooksLikeNamesBeforeRowsWithoutHeader() throws Exception {
+        // "Operator;A. Tester" has the rows' two fields and no number, but names no column: the rows
+        // are read by position
+        Trace t = read(write("op.csv", "Operator;A. Tester\n100,0;1,5\n100,5;2\n101;2,5\n"));
+        assertArrayEquals(new double[] {100, 100.5, 101}, t.timesS(), EXACT);
+        // a damaged first row after the opening lines is not skipped to reach clean rows further down
+        // (the first line's problem is reported, as for any file whose data cannot be found)
+        InputException e = fails("Sample: river 3\ntime_s;signal\n10x0;1\n100,5;2\n101;2,5\n101,5;3\n");
+        assertWhere(e, 1, null);
+        // nor is a header: rows under "time_s;signal" after a damaged row are not read by position
+        InputException f = fails("Sample: river 3\ntime_s;signal\n100;1\n100,5x;2\n101;2,5\n101,5;3\n102;4\n");
+        assertWhere(f, 1, null);
+    }
+
+    @Test
     void withoutADataBlockTheFirstProblemStands() throws Exception {
         // the header is the line before the block already: its problem is the one reported
         InputException e = fails("wavelength,signal\n0,1\n1,2\n2,3\n");
