@@ -160,33 +160,64 @@ public final class DelimitedTraceReader {
      * alone (no semicolon or tab): columns aligned with spaces, as plain text exports write them.
      */
     static boolean spaceAligned(byte[] b) {
-        int n = b.length;
-        int i = TextFiles.bomLength(b);
+        TextLines lines = new TextLines(b, TextFiles.bomLength(b), b.length);
         int seen = 0;
         int run = 0;
-        while (i < n && seen < MAX_PREAMBLE_LINES) {
-            int start = i;
-            while (i < n && b[i] != '\n' && b[i] != '\r') {
-                i++;
-            }
-            int end = i;
-            while (i < n && (b[i] == '\n' || b[i] == '\r')) {
-                i++;
-            }
-            int s = start;
-            while (s < end && b[s] == ' ') {
-                s++;
-            }
-            if (s == end || b[s] == '#') {
-                continue;
-            }
+        while (seen < MAX_PREAMBLE_LINES && lines.next()) {
             seen++;
-            run = spacedNumbers(b, s, end) ? run + 1 : 0;
+            run = spacedNumbers(b, lines.first, lines.end) ? run + 1 : 0;
             if (run == DATA_BLOCK_ROWS) {
                 return true;
             }
         }
-        return i >= n && run >= 2; // a short file: its last rows are such numbers
+        return !lines.next() && run >= 2; // a short file: its last rows are such numbers
+    }
+
+    /**
+     * A cursor over the lines of some bytes that are neither blank nor comments; a CR LF pair ends
+     * one line. After {@link #next} returns true: the line's {@link #start}, its first character
+     * that is not a space or tab ({@link #first}), its {@link #end} (before the line break) and its
+     * 1-based {@link #number} counted from where the cursor began.
+     */
+    private static final class TextLines {
+        private final byte[] b;
+        private final int to;
+        private int pos;
+        int start;
+        int first;
+        int end;
+        long number;
+
+        TextLines(byte[] b, int from, int to) {
+            this.b = b;
+            this.pos = from;
+            this.to = to;
+        }
+
+        boolean next() {
+            while (pos < to) {
+                start = pos;
+                int i = pos;
+                while (i < to && b[i] != '\n' && b[i] != '\r') {
+                    i++;
+                }
+                end = i;
+                if (i + 1 < to && b[i] == '\r' && b[i + 1] == '\n') {
+                    i++;
+                }
+                pos = Math.min(to, i + 1);
+                number++;
+                int k = start;
+                while (k < end && (b[k] == ' ' || b[k] == '\t')) {
+                    k++;
+                }
+                if (k < end && b[k] != '#') {
+                    first = k;
+                    return true;
+                }
+            }
+            return false;
+        }
     }
 
     /** True for two or more fields of digits, signs, points, commas (decimal) and exponents, separated by spaces. */
@@ -516,24 +547,9 @@ public final class DelimitedTraceReader {
          * truncated or damaged row) is not.
          */
         private boolean footerFrom(int start) {
-            int i = start;
-            while (i < n) {
-                int s0 = i;
-                while (i < n && b[i] != '\n' && b[i] != '\r') {
-                    i++;
-                }
-                int e0 = i;
-                while (i < n && (b[i] == '\n' || b[i] == '\r')) {
-                    i++;
-                }
-                int k = s0;
-                while (k < e0 && (b[k] == ' ' || b[k] == '\t')) {
-                    k++;
-                }
-                if (k == e0 || b[k] == '#') {
-                    continue;
-                }
-                if (!opensWithWord(k, e0)) {
+            TextLines lines = new TextLines(b, start, n);
+            while (lines.next()) {
+                if (!opensWithWord(lines.first, lines.end)) {
                     return false;
                 }
             }
@@ -607,26 +623,9 @@ public final class DelimitedTraceReader {
          */
         private long[] dataBlock(int from) {
             List<int[]> bounds = new ArrayList<>(); // {start, end, line number}
-            int i = from;
-            int lineNumber = 0;
-            while (i < n && bounds.size() < MAX_PREAMBLE_LINES) {
-                int s0 = i;
-                while (i < n && b[i] != '\n' && b[i] != '\r') {
-                    i++;
-                }
-                int e0 = i;
-                lineNumber++;
-                if (i < n && b[i] == '\r' && i + 1 < n && b[i + 1] == '\n') {
-                    i++;
-                }
-                i = Math.min(n, i + 1);
-                int k = s0;
-                while (k < e0 && (b[k] == ' ' || b[k] == '\t')) {
-                    k++;
-                }
-                if (k < e0 && b[k] != '#') {
-                    bounds.add(new int[] {s0, e0, lineNumber});
-                }
+            TextLines lines = new TextLines(b, from, n);
+            while (bounds.size() < MAX_PREAMBLE_LINES && lines.next()) {
+                bounds.add(new int[] {lines.start, lines.end, (int) lines.number});
             }
             for (int k = 0; k + DATA_BLOCK_ROWS <= bounds.size(); k++) {
                 String row = text(bounds.get(k));
@@ -679,27 +678,12 @@ public final class DelimitedTraceReader {
          * skipped).
          */
         private boolean openingLines(int from, int to) {
-            int i = from;
-            while (i < to) {
-                int s0 = i;
-                while (i < to && b[i] != '\n' && b[i] != '\r') {
-                    i++;
-                }
-                int e0 = i;
-                while (i < to && (b[i] == '\n' || b[i] == '\r')) {
-                    i++;
-                }
-                int k = s0;
-                while (k < e0 && (b[k] == ' ' || b[k] == '\t')) {
-                    k++;
-                }
-                if (k == e0 || b[k] == '#') {
-                    continue;
-                }
-                if (!opensWithWord(k, e0)) {
+            TextLines lines = new TextLines(b, from, to);
+            while (lines.next()) {
+                if (!opensWithWord(lines.first, lines.end)) {
                     return false;
                 }
-                String text = TextFiles.decodeLenient(b, s0, e0);
+                String text = TextFiles.decodeLenient(b, lines.start, lines.end);
                 char d = TextFiles.mostFrequentDelimiter(text);
                 if (d != 0) {
                     for (String part : splitText(text, d)) {
