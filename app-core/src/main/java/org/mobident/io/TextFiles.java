@@ -31,8 +31,10 @@ public final class TextFiles {
     }
 
     /**
-     * A file opened for reading as strict UTF-8, a leading byte-order mark skipped. Bytes that are
-     * not UTF-8 make a later read throw a {@link CharacterCodingException}.
+     * A file opened for reading as strict UTF-8, a leading byte-order mark skipped; a file that
+     * opens with a UTF-16 byte-order mark ("Unicode" text as Windows programs save it) is read as
+     * strict UTF-16 of that byte order instead. Bytes that do not decode make a later read throw a
+     * {@link CharacterCodingException}.
      *
      * @param what what the file is, for messages ("peak table")
      * @throws InputException when the file cannot be opened (naming the file and why)
@@ -45,8 +47,19 @@ public final class TextFiles {
             if (Files.isDirectory(file)) {
                 throw new InputException(label, 0, null, prefix + "is a folder, not a file");
             }
-            in = Files.newInputStream(file);
-            CharsetDecoder strict = StandardCharsets.UTF_8.newDecoder()
+            in = new java.io.BufferedInputStream(Files.newInputStream(file));
+            java.nio.charset.Charset charset = StandardCharsets.UTF_8;
+            in.mark(2);
+            int first = in.read();
+            int second = in.read();
+            if (first == 0xFF && second == 0xFE) {
+                charset = StandardCharsets.UTF_16LE; // the mark is read and gone
+            } else if (first == 0xFE && second == 0xFF) {
+                charset = StandardCharsets.UTF_16BE;
+            } else {
+                in.reset();
+            }
+            CharsetDecoder strict = charset.newDecoder()
                     .onMalformedInput(CodingErrorAction.REPORT)
                     .onUnmappableCharacter(CodingErrorAction.REPORT);
             return withoutBom(new BufferedReader(new InputStreamReader(in, strict)));

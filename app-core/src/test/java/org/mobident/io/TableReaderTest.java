@@ -189,6 +189,23 @@ class TableReaderTest {
     }
 
     @Test
+    void filesWithAUtf16MarkAreReadAsUtf16(@TempDir Path dir) throws IOException, InputException {
+        // "Unicode" text as Windows programs save it: a byte order mark of either order
+        String text = "name,mobility\nchlorure \u00e9,-79\nnitrate,-71.5\n";
+        for (java.nio.charset.Charset cs : List.of(StandardCharsets.UTF_16LE, StandardCharsets.UTF_16BE)) {
+            Path p = dir.resolve("u16-" + cs.name() + ".csv");
+            Files.write(p, ("\uFEFF" + text).getBytes(cs));
+            try (TableReader t = TableReader.open(p, LIBRARY)) {
+                TableRow first = t.next();
+                assertEquals("chlorure \u00e9", first.get("name"), cs.name());
+                assertEquals("-79", first.get("mobility"), cs.name());
+                assertEquals("nitrate", t.next().get("name"), cs.name());
+                assertNull(t.next(), cs.name());
+            }
+        }
+    }
+
+    @Test
     void theMarkIsStrippedInOnePlace() {
         byte[] withMark = "\uFEFFa".getBytes(StandardCharsets.UTF_8);
         assertEquals(3, TextFiles.bomLength(withMark));
