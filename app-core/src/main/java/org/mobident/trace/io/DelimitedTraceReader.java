@@ -787,10 +787,15 @@ public final class DelimitedTraceReader {
                             + " is too large to be converted to seconds");
                 }
                 if (count > 0 && !(tS > times[count - 1])) {
-                    String what = t == previousRaw || tS == times[count - 1] ? "repeats" : "is before";
-                    throw new InputException(file, line, timeName, "time " + quote(timeIndex) + " " + what
-                            + " the previous time " + shortNumber(previousRaw) + " (line " + previousLine
-                            + "); times must strictly increase");
+                    boolean repeats = t == previousRaw || tS == times[count - 1];
+                    // a repeat after rows that rose is most often a time written with too few decimals
+                    // for the sampling rate (minutes to three decimals are 0.06 s)
+                    String hint = repeats && count > 1
+                            ? "; if the time is written with too few decimals for the sampling rate, export more"
+                            : "";
+                    throw new InputException(file, line, timeName, "time " + quote(timeIndex) + " "
+                            + (repeats ? "repeats" : "is before") + " the previous time " + shortNumber(previousRaw)
+                            + " (line " + previousLine + "); times must strictly increase" + hint);
                 }
                 if (count == ROWS_BEFORE_ESTIMATE && pos < n) {
                     double bytesPerRow = (double) (pos - dataStart) / (count + 1); // this row included

@@ -407,6 +407,10 @@ class DelimitedTraceReaderTest {
         InputException e = fails("time,signal\n0,1\n0.5,1\n\n0.5,2\n");
         assertWhere(e, 5, "time");
         assertTrue(e.problem().contains("repeats the previous time 0.5 (line 3)"), e.getMessage());
+        assertTrue(e.problem().contains("too few decimals"), e.getMessage());
+        // a time before the previous one is no rounding matter
+        InputException before = fails("time,signal\n0,1\n0.5,1\n0.4,2\n");
+        assertTrue(!before.problem().contains("decimals"), before.getMessage());
     }
 
     @Test
