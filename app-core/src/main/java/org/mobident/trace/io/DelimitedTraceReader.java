@@ -574,11 +574,14 @@ public final class DelimitedTraceReader {
 
         /**
          * Reads the trace. Where the first line that is neither blank nor a comment is no usable
-         * header (an export that opens with lines of its own, such as
-         * {@code Sample: …} or {@code Operator;…}), the data block is looked for further down: the
-         * first {@value #DATA_BLOCK_ROWS} consecutive rows of numbers of the same shape, with the line
-         * just before them as header when it has their number of fields and is not itself numbers.
-         * The lines before are skipped; without such a block the first problem stands.
+         * header (an export that opens with lines of its own, such as {@code Sample: …} or
+         * {@code Operator;…}), the data block is looked for further down: the first
+         * {@value #DATA_BLOCK_ROWS} consecutive rows of numbers of the same shape, with the line just
+         * before them as header when it holds names only in their number of fields (and, when those
+         * names name no time or signal column, the rows alone by position if that header fails).
+         * The lines skipped must each open with a word and name no time column, so that neither a
+         * damaged row nor a header is passed over; otherwise, or without a block, the first problem
+         * stands.
          */
         Trace run(String traceName) throws InputException {
             TextSniffer.requireText(b, file);
