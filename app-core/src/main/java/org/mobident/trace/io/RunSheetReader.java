@@ -273,6 +273,11 @@ public final class RunSheetReader {
             Path traceFile;
             try {
                 traceFile = sheet.resolveSibling(fileText);
+                if (fileText.indexOf('\\') >= 0 && !Files.exists(traceFile)) {
+                    // a sheet written on Windows read elsewhere: its folders are separated by backslashes
+                    Path forward = sheet.resolveSibling(fileText.replace('\\', '/'));
+                    traceFile = Files.exists(forward) ? forward : traceFile;
+                }
             } catch (InvalidPathException e) {
                 throw new InputException(name, lineNo, FILE, "'" + fileText + "' is not a valid path", e);
             }

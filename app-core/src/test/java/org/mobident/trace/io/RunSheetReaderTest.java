@@ -137,6 +137,19 @@ class RunSheetReaderTest {
     }
 
     @Test
+    void backslashFoldersOfASheetWrittenOnWindows() throws Exception {
+        Path p = sheet("file\ntraces\\a.csv\n");
+        RunSheet s = RunSheetReader.read(p, RunConditions.EMPTY);
+        assertTrue(s.clean(), () -> s.rowProblems().toString());
+        assertEquals(dir.resolve("traces/a.csv"), s.runs().get(0).traceFile());
+        assertEquals("a", s.runs().get(0).name());
+        // a path that exists under neither reading is still reported as written
+        RunSheet missing = RunSheetReader.read(sheet("file\ntraces\\none.csv\n"), RunConditions.EMPTY);
+        assertTrue(missing.rowProblems().get(0).getMessage().contains("traces\\none.csv"),
+                () -> missing.rowProblems().toString());
+    }
+
+    @Test
     void fileIsRelativeToTheSheetFolderOrAbsolute() throws Exception {
         Path sub = Files.createDirectories(dir.resolve("day1"));
         Files.writeString(sub.resolve("x.csv"), "time,signal\n0,1\n1,2\n");
