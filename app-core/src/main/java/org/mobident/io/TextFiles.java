@@ -50,12 +50,9 @@ public final class TextFiles {
             in = new java.io.BufferedInputStream(Files.newInputStream(file));
             java.nio.charset.Charset charset = StandardCharsets.UTF_8;
             in.mark(2);
-            int first = in.read();
-            int second = in.read();
-            if (first == 0xFF && second == 0xFE) {
-                charset = StandardCharsets.UTF_16LE; // the mark is read and gone
-            } else if (first == 0xFE && second == 0xFF) {
-                charset = StandardCharsets.UTF_16BE;
+            java.nio.charset.Charset marked = utf16ByMark(in.read(), in.read());
+            if (marked != null) {
+                charset = marked; // the mark is read and gone
             } else {
                 in.reset();
             }
@@ -74,6 +71,23 @@ public final class TextFiles {
             closeQuietly(in);
             throw new InputException(label, 0, null, prefix + e.getMessage(), e);
         }
+    }
+
+    /**
+     * The UTF-16 byte order that a text's first two bytes mark (FF FE little-endian, FE FF
+     * big-endian), or null when they are no such mark.
+     *
+     * @param first  the first byte, 0–255 (or −1 at the end)
+     * @param second the second byte, likewise
+     */
+    public static java.nio.charset.Charset utf16ByMark(int first, int second) {
+        if (first == 0xFF && second == 0xFE) {
+            return StandardCharsets.UTF_16LE;
+        }
+        if (first == 0xFE && second == 0xFF) {
+            return StandardCharsets.UTF_16BE;
+        }
+        return null;
     }
 
     private static void closeQuietly(InputStream in) {

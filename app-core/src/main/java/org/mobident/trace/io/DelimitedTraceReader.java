@@ -514,13 +514,14 @@ public final class DelimitedTraceReader {
          * Reads the next line the general way (any quoting, spacing and number form), its time and
          * signal into {@link #plainTime} and {@link #plainSignal}.
          *
+         * @param rowsTaken the rows read before this one
          * @return {@link #ROW_READ}; {@link #LINE_SKIPPED} for a blank or comment line; or
          *         {@link #FOOTER_REACHED} when the line fails as a row after at least
          *         {@value #DATA_BLOCK_ROWS} rows and it and every line after it are text, not rows
          *         (an export's closing lines, such as {@code End of data}): the data end before it
          */
         private int generalRow(int timeIndex, int signalIndex, String timeName, String signalName,
-                               boolean decimalComma) throws InputException {
+                               boolean decimalComma, int rowsTaken) throws InputException {
             try {
                 if (simpleRow() == GENERAL_ROW) {
                     nextLine(); // there are bytes left, so there is a line
@@ -565,8 +566,6 @@ public final class DelimitedTraceReader {
             return i == lineEnd || b[i] == '#';
         }
 
-        /** Data rows taken so far by {@link #runFrom}. */
-        private int rowsTaken;
         /** True once {@link #runFrom} has its columns and time unit from the header (or by position). */
         private boolean headerTaken;
         /** Where the line {@link #runFrom} took for its header (or first row) starts. */
@@ -727,7 +726,6 @@ public final class DelimitedTraceReader {
         private Trace runFrom(int start, long lineBefore, String traceName) throws InputException {
             pos = start;
             line = lineBefore;
-            rowsTaken = 0;
             headerTaken = false;
             boolean found = false;
             while (nextLine()) {
@@ -774,7 +772,7 @@ public final class DelimitedTraceReader {
                     t = plainTime;
                     y = plainSignal;
                 } else {
-                    int general = generalRow(timeIndex, signalIndex, timeName, signalName, decimalComma);
+                    int general = generalRow(timeIndex, signalIndex, timeName, signalName, decimalComma, count);
                     if (general == LINE_SKIPPED) {
                         continue;
                     }
@@ -818,7 +816,6 @@ public final class DelimitedTraceReader {
                 times[count] = tS;
                 signal[count] = y;
                 count++;
-                rowsTaken = count;
                 previousRaw = t;
                 previousLine = line;
             }

@@ -8,6 +8,7 @@ import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
 
 import org.mobident.InputException;
+import org.mobident.io.TextFiles;
 
 /** Checks that bytes are plain 8-bit text (decoding them is {@link org.mobident.io.TextFiles}). */
 final class TextSniffer {
@@ -47,73 +48,56 @@ final class TextSniffer {
     }
 
     /**
-     * The text as UTF-8 bytes: UTF-16 text (a byte order mark, or NULs at every other byte of the
-     * first {@value #SAMPLE_BYTES} bytes, as Windows programs write "Unicode" text) re-encoded,
-     * anything else returned as it is. Line ends and line numbers are kept.
+     * The text as UTF-8 bytes: UTF-16 text (a byte order mark, or NULs at one parity of the first
+     * {@value #SAMPLE_BYTES} bytes, as Windows programs write "Unicode" text) re-encoded, anything
+     * else returned as it is. Line ends and line numbers are kept.
      */
     static byte[] asUtf8(byte[] b) {
-        boolean bigEndianMark = b.length >= 2 && (b[0] & 0xFF) == 0xFE && (b[1] & 0xFF) == 0xFF;
-        boolean littleEndianMark = b.length >= 2 && (b[0] & 0xFF) == 0xFF && (b[1] & 0xFF) == 0xFE;
-        java.nio.charset.Charset charset;
-        int skip = 0;
-        if (bigEndianMark || littleEndianMark) {
-            charset = bigEndianMark ? StandardCharsets.UTF_16BE : StandardCharsets.UTF_16LE;
-            skip = 2;
-        } else {
+        java.nio.charset.Charset charset = b.length >= 2 ? TextFiles.utf16ByMark(b[0] & 0xFF, b[1] & 0xFF) : null;
+        int skip = charset != null ? 2 : 0;
+        if (charset == null) {
+            int[] nuls = nulsByParity(b);
+            int nul = nuls[0] + nuls[1];
             int n = Math.min(b.length, SAMPLE_BYTES);
-            int nulEven = 0;
-            int nulOdd = 0;
-            for (int i = 0; i < n; i++) {
-                if (b[i] == 0) {
-                    if ((i & 1) == 0) {
-                        nulEven++;
-                    } else {
-                        nulOdd++;
-                    }
-                }
-            }
-            int nul = nulEven + nulOdd;
-            if (nul == 0 || nul < UTF16_NUL_SHARE * n || Math.max(nulEven, nulOdd) < UTF16_PARITY_SHARE * nul) {
+            if (nul == 0 || nul < UTF16_NUL_SHARE * n || Math.max(nuls[0], nuls[1]) < UTF16_PARITY_SHARE * nul) {
                 return b;
             }
             // ASCII text as UTF-16: the high byte is the NUL, first in big-endian order
-            charset = nulEven > nulOdd ? StandardCharsets.UTF_16BE : StandardCharsets.UTF_16LE;
+            charset = nuls[0] > nuls[1] ? StandardCharsets.UTF_16BE : StandardCharsets.UTF_16LE;
         }
         String text = new String(b, skip, (b.length - skip) & ~1, charset);
         return text.getBytes(StandardCharsets.UTF_8);
     }
 
+    /** NUL bytes at even and at odd offsets among the first {@value #SAMPLE_BYTES} bytes. */
+    private static int[] nulsByParity(byte[] b) {
+        int n = Math.min(b.length, SAMPLE_BYTES);
+        int[] nuls = new int[2];
+        for (int i = 0; i < n; i++) {
+            if (b[i] == 0) {
+                nuls[i & 1]++;
+            }
+        }
+        return nuls;
+    }
+
     /**
-     * Throws when the bytes are UTF-16 (byte order mark, or NULs in every other byte) or binary
-     * (NULs or many control bytes in the first {@value #SAMPLE_BYTES} bytes). Callers that read
-     * UTF-16 pass the bytes through {@link #asUtf8} first.
+     * Throws when the bytes are not plain text: NULs or many control bytes in the first
+     * {@value #SAMPLE_BYTES} bytes. UTF-16 text is turned into UTF-8 by {@link #asUtf8} before.
      */
     static void requireText(byte[] b, String file) throws InputException {
-        if (b.length >= 2 && (((b[0] & 0xFF) == 0xFE && (b[1] & 0xFF) == 0xFF)
-                || ((b[0] & 0xFF) == 0xFF && (b[1] & 0xFF) == 0xFE))) {
-            throw new InputException(file, 0, null, "looks like UTF-16 text; save it as UTF-8");
-        }
         int n = Math.min(b.length, SAMPLE_BYTES);
-        int nulEven = 0;
-        int nulOdd = 0;
+        int nul = 0;
         int control = 0;
         for (int i = 0; i < n; i++) {
             int v = b[i] & 0xFF;
             if (v == 0) {
-                if ((i & 1) == 0) {
-                    nulEven++;
-                } else {
-                    nulOdd++;
-                }
+                nul++;
             } else if (v < 0x20 && v != '\t' && v != '\n' && v != '\r' && v != '\f') {
                 control++;
             }
         }
-        int nul = nulEven + nulOdd;
         if (nul > 0) {
-            if (nul >= UTF16_NUL_SHARE * n && Math.max(nulEven, nulOdd) >= UTF16_PARITY_SHARE * nul) {
-                throw new InputException(file, 0, null, "looks like UTF-16 text; save it as UTF-8");
-            }
             throw new InputException(file, 0, null, "not a text file (it contains NUL bytes)");
         }
         if (control > BINARY_CONTROL_SHARE * n) {
