@@ -59,13 +59,17 @@ def mig_time(mu_eff, mu_eof, Lt, Ld, kv, ramp):
     return (Ld / 100) * (Lt / 100) / (mu_app * kv * 1e3) + ramp / 2.0
 
 
-def zone_profile(tf, t0, sigma, area, skew_dir, K):
-    """Area-normalised zone with centroid t0. skew_dir +1 tail, -1 front, 0 Gaussian."""
+def zone_profile(tf, t0, sigma, area, skew_dir, K, front="bigauss"):
+    """Area-normalised zone with centroid t0. skew_dir +1 tail, -1 front, 0 Gaussian.
+    front: 'bigauss' (left half wider) or 'exponential' (exponnorm mirrored in time)."""
     if skew_dir == 0 or K <= 0:
         return area * np.exp(-0.5 * ((tf - t0) / sigma) ** 2) / (sigma * math.sqrt(2 * math.pi))
     if skew_dir > 0:  # exponnorm tail; mean = loc + K*sigma
         loc = t0 - K * sigma
         return area * exponnorm.pdf(tf, K, loc=loc, scale=sigma)
+    if front == "exponential":  # mirrored exponnorm; mean = loc - K*sigma
+        loc = t0 + K * sigma
+        return area * exponnorm.pdf(2 * loc - tf, K, loc=loc, scale=sigma)
     # fronting: bi-Gaussian, left wider
     sL, sR = sigma * (1 + K), sigma
     mu = t0 - math.sqrt(2 / math.pi) * (sR - sL)  # centroid = mu + sqrt(2/pi)(sR-sL)
@@ -104,7 +108,7 @@ def simulate_run(rng, P, m, zones, mu_eof_act, ramp, fs, tau, tend, sigma_w, wea
         if kind != "marker" and h >= P["skew_from"]:
             K = P["skew"] * min(1.0, math.log10(h / P["skew_from"]) + 0.3) * rng.uniform(0.5, 1.5)
             sd = 1 if abs(mu_act) < abs(m["coion"]) else -1   # faster than co-ion fronts
-        clean += zone_profile(tf, t0, sigma, area, sd, K)
+        clean += zone_profile(tf, t0, sigma, area, sd, K, P.get("front", "bigauss"))
         truth.append((kind, name, t0, mu25 if kind != "marker" else 0.0, h))
     sign = -1 if m["det"] == "indirect" else 1
     clean *= sign
@@ -173,8 +177,10 @@ def main():
     ap.add_argument("--out", required=True)
     ap.add_argument("--profile", choices=list(PROFILES), default="gentle")
     ap.add_argument("--samples", type=int, default=25)
+    ap.add_argument("--front-form", choices=["bigauss", "exponential"], default="bigauss",
+                    help="form of fronting zones: bi-Gaussian (default) or mirrored exponnorm")
     a = ap.parse_args()
-    P = PROFILES[a.profile]
+    P = dict(PROFILES[a.profile], front=a.front_form)
     rng = np.random.default_rng(a.seed)
     out = a.out
     os.makedirs(out + "/samples", exist_ok=True)
