@@ -39,6 +39,7 @@ import org.mobident.settings.PeakSettings;
 import org.mobident.signal.ExpectedZoneProbe;
 import org.mobident.signal.PeakDetector;
 import org.mobident.signal.TraceAnalysis;
+import org.mobident.trace.Detection;
 import org.mobident.trace.RunConditions;
 import org.mobident.trace.RunSpec;
 import org.mobident.trace.Trace;
@@ -58,6 +59,13 @@ public final class Identifier {
      *  zones of one run have about the same plate number, so w½ grows in proportion to t; a
      *  modelling choice). */
     static final double MARKER_SEARCH_WIDTH_FACTOR = 2.5;
+    /** Least S/N of a zone in the marker window pointing the other way from the run's peaks to be
+     *  taken as a marker candidate: the quantitation limit (a neutral marker is added to be seen; a
+     *  modelling choice that keeps noise on the other side out of the choice). */
+    static final double OTHER_WAY_MARKER_MIN_SN = org.mobident.Tolerances.QUANTITATION_LIMIT_SIGNAL_TO_NOISE;
+    /** The other-way screen: noise SDs beyond the window's median (a modelling choice, well below the
+     *  height of a zone at the quantitation limit). */
+    static final double OTHER_WAY_SCREEN_SIGMAS = 10.0;
     /** Pairs of these many of the tallest peaks with every library entry vote for the marker time. */
     static final int MARKER_VOTE_PEAKS = 12;
     /** Votes within this relative distance of a common centre agree (a modelling choice: peak times
@@ -302,23 +310,25 @@ public final class Identifier {
      * @param failure the run's failure, or null
      * @param peaks   its peaks in order of apex time
      * @param noiseSd its baseline noise SD
+     * @param otherWay zones in the marker window that point the other way from the run's peaks
+     *                 (candidates for the neutral marker only)
      */
     record Detected(RunSpec run, RunResult failure, List<Peak> peaks, double noiseSd, Trace markerWindow,
                     ExpectedZoneProbe probe, List<Peak> foundWhereExpected, List<Peak> beforeLook,
-                    SamplingCheck.Span sampling) {
+                    SamplingCheck.Span sampling, List<Peak> otherWay) {
         Detected(RunSpec run, RunResult failure, List<Peak> peaks, double noiseSd) {
-            this(run, failure, peaks, noiseSd, null, null, List.of(), null, SamplingCheck.Span.UNKNOWN);
+            this(run, failure, peaks, noiseSd, null, null, List.of(), null, SamplingCheck.Span.UNKNOWN, List.of());
         }
 
-        /** The same run with the weak-marker search done: these peaks, no window and no probe kept. */
+        /** The same run with the marker searches done: these peaks, no window, probe or candidates kept. */
         Detected settled(List<Peak> withMarker) {
             return new Detected(run, failure, withMarker, noiseSd, null, null, foundWhereExpected, beforeLook,
-                    sampling);
+                    sampling, List.of());
         }
 
         /** The run with the peaks it had before the second look added its zones. */
         Detected withoutLook() {
-            return new Detected(run, failure, beforeLook, noiseSd, null, null, List.of(), null, sampling);
+            return new Detected(run, failure, beforeLook, noiseSd, null, null, List.of(), null, sampling, List.of());
         }
     }
 
@@ -346,7 +356,67 @@ public final class Identifier {
         Trace window = c.hasMarkerWindow() ? markerWindow(c, trace, analysis.peaks())
                 : c.hasGeometry() ? trace : null;
         return new Detected(run, null, analysis.peaks(), analysis.noiseSd(), window,
-                settings.lookWhereExpected() ? analysis.probe() : null, List.of(), null, SamplingCheck.Span.of(trace));
+                settings.lookWhereExpected() ? analysis.probe() : null, List.of(), null, SamplingCheck.Span.of(trace),
+                otherWayInWindow(c, trace, analysis.peaks(), analysis.noiseSd()));
+    }
+
+    /**
+     * The zones in the marker window that point the other way from the run's peaks, at S/N
+     * {@value #OTHER_WAY_MARKER_MIN_SN} or more and as wide as a zone there would be (see {@link
+     * #withWeakMarkers}): a neutral marker that absorbs gives a peak where the ions of an indirect
+     * method give dips, and the vacancy of a sample solvent that absorbs less than the buffer a dip in
+     * a direct one. They are candidates for the marker only; none is reported unless chosen as the
+     * marker. Empty without a window.
+     */
+    private List<Peak> otherWayInWindow(RunConditions c, Trace trace, List<Peak> peaks, double noiseSd) {
+        if (!c.hasMarkerWindow()) {
+            return List.of();
+        }
+        int from = Math.max(0, trace.indexAtOrAfter(c.markerFromS()));
+        int to = Math.min(trace.size(), trace.indexAtOrAfter(c.markerToS()));
+        if (to - from < MARKER_SEARCH_MIN_POINTS) {
+            return List.of();
+        }
+        Trace window = trace.slice(from, to);
+        if (!reachesOtherWay(window.signals(), c.detectionOrDirect() == Detection.INDIRECT, noiseSd)) {
+            return List.of();
+        }
+        double widthPerTime = typicalWidthPerTime(peaks);
+        PeakSettings search = settings.peakSettings().withMinSignalToNoise(OTHER_WAY_MARKER_MIN_SN);
+        List<Peak> out = new ArrayList<>();
+        for (Peak p : PeakDetector.analyse(window, opposite(c.detectionOrDirect()), search).peaks()) {
+            if (p.signalToNoise() >= OTHER_WAY_MARKER_MIN_SN && zoneWide(p, widthPerTime)) {
+                out.add(p);
+            }
+        }
+        return out;
+    }
+
+    /**
+     * A cheap test before the window is analysed the other way: some sample lies at least {@value
+     * #OTHER_WAY_SCREEN_SIGMAS} noise SDs beyond the window's median the other way from the run's
+     * peaks (up when they are dips). A zone at the quantitation limit stands about 25 noise SDs tall
+     * (S/N = 2H/h with h about 5 SDs); a wandering baseline may take some of that, and lets more
+     * windows through, which costs time only. True when the noise is not known.
+     */
+    static boolean reachesOtherWay(double[] signal, boolean dips, double noiseSd) {
+        if (!(noiseSd > 0) || signal.length == 0) {
+            return true;
+        }
+        double median = new org.apache.commons.math3.stat.descriptive.rank.Median().evaluate(signal);
+        double reach = 0;
+        for (double v : signal) {
+            reach = Math.max(reach, dips ? v - median : median - v);
+        }
+        return reach >= OTHER_WAY_SCREEN_SIGMAS * noiseSd;
+    }
+
+    /** True when a peak is as wide as a zone at its time (within {@value #MARKER_SEARCH_WIDTH_FACTOR}
+     *  of w½/t times its time), or when the run gives no width to compare with. */
+    private static boolean zoneWide(Peak p, double widthPerTime) {
+        double expected = widthPerTime * p.apexTimeS();
+        return !(expected > 0) || (p.widthHalfS() >= expected / MARKER_SEARCH_WIDTH_FACTOR
+                && p.widthHalfS() <= expected * MARKER_SEARCH_WIDTH_FACTOR);
     }
 
     /**
@@ -460,19 +530,22 @@ public final class Identifier {
         // the stretch analysed as it is, and as a stretch of this run's zones (its own width estimate
         // comes from its noise when it holds no clear zone; a zone narrower than the run's trend is
         // found by the first)
-        List<Peak> found = new ArrayList<>(PeakDetector.analyse(window, c.detectionOrDirect(), search).peaks());
-        if (Double.isFinite(widthPerTime)) {
-            found.addAll(PeakDetector.analyse(window, c.detectionOrDirect(),
-                    search.forZonesOfWidth(widthPerTime * middleS)).peaks());
+        List<Peak> found = new ArrayList<>();
+        for (Detection direction : List.of(c.detectionOrDirect(), opposite(c.detectionOrDirect()))) {
+            // the marker may also point the other way: a neutral that absorbs gives a peak where the
+            // ions of an indirect method give dips (and a vacancy of the sample solvent a dip in a
+            // direct one)
+            found.addAll(PeakDetector.analyse(window, direction, search).peaks());
+            if (Double.isFinite(widthPerTime)) {
+                found.addAll(PeakDetector.analyse(window, direction,
+                        search.forZonesOfWidth(widthPerTime * middleS)).peaks());
+            }
         }
         List<Peak> out = new ArrayList<>(peaks);
         for (Peak w : found) {
             // a zone this faint must also be as wide as a zone there would be: noise found at S/N 1.5
             // is mostly narrower or wider than that
-            double expected = widthPerTime * w.apexTimeS();
-            boolean zoneLike = !(expected > 0)
-                    || (w.widthHalfS() >= expected / MARKER_SEARCH_WIDTH_FACTOR
-                    && w.widthHalfS() <= expected * MARKER_SEARCH_WIDTH_FACTOR);
+            boolean zoneLike = zoneWide(w, widthPerTime);
             boolean known = false;
             for (Peak p : out) {
                 known |= Math.abs(p.apexTimeS() - w.apexTimeS()) < Math.max(p.widthHalfS(), w.widthHalfS());
@@ -483,6 +556,10 @@ public final class Identifier {
         }
         out.sort(java.util.Comparator.comparingDouble(Peak::apexTimeS));
         return out;
+    }
+
+    private static Detection opposite(Detection d) {
+        return d == Detection.INDIRECT ? Detection.DIRECT : Detection.INDIRECT;
     }
 
     /**
@@ -574,6 +651,18 @@ public final class Identifier {
                         adjuster);
         MarkerLocator locator = new MarkerLocator(prepared.library().size() == 0);
         MarkerLocator.Choice choice = locator.locate(c, peaks, evaluator);
+        if (!d.otherWay().isEmpty()) {
+            // the marker may point the other way: the candidates stay only when chosen as the marker
+            List<Peak> more = new ArrayList<>(peaks);
+            more.addAll(d.otherWay());
+            more.sort(Comparator.comparingDouble(Peak::apexTimeS));
+            MarkerLocator.Choice withMore = locator.locate(c, more, evaluator);
+            List<Peak> kept = chosenSearchPeaks(peaks, more, withMore);
+            if (kept.size() > peaks.size()) {
+                peaks = kept;
+                choice = locator.locate(c, peaks, evaluator);
+            }
+        }
         Trace searchWindow = d.markerWindow();
         if (searchWindow != null && !c.hasMarkerWindow() && !MarkerLocator.settled(choice, c)) {
             // no window given and the peaks at hand leave the run unexplained: search where the
@@ -653,7 +742,7 @@ public final class Identifier {
                 ExpectedZoneProbe.Outcome look = d.probe().lookFor(peaks, expected);
                 if (!look.added().isEmpty()) {
                     Finished withFound = finishingOnce(new Detected(run, null, look.peaks(), d.noiseSd(), null, null,
-                            look.added(), peaks, d.sampling()), learned);
+                            look.added(), peaks, d.sampling(), List.of()), learned);
                     if (keepsEveryIdentification(rows, withFound.result().peaks())) {
                         return withFound;
                     }
@@ -686,6 +775,13 @@ public final class Identifier {
             if (sign != null) {
                 notes.add(sign);
             }
+        }
+        if (best.neutralIndex() >= 0
+                && peaks.get(best.neutralIndex()).dip() != (c.detectionOrDirect() == Detection.INDIRECT)) {
+            notes.add(0, String.format(Locale.ROOT, "neutral marker at %.2f s points the other way from the run's "
+                            + "%s (a neutral that absorbs more, or less, than the buffer)",
+                    peaks.get(best.neutralIndex()).apexTimeS(),
+                    c.detectionOrDirect() == Detection.INDIRECT ? "dips" : "peaks"));
         }
         if (choice.note() != null && !choice.note().isEmpty()) {
             notes.add(0, choice.note());

@@ -283,6 +283,79 @@ class IdentifierEndToEndTest {
         }
     }
 
+    /**
+     * The trace with a Gaussian zone added at a time, pointing up in the raw signal (in an indirect
+     * run, where the ions are dips, the peak of a neutral marker that absorbs). σ = t/√N with the
+     * marker's plate number, as the simulator draws its zones.
+     */
+    private static Trace withRise(Trace t, double timeS, double height) {
+        double sigma = timeS / Math.sqrt(TraceSimulator.MARKER_PLATES);
+        double[] time = t.timesS();
+        double[] signal = t.signals();
+        for (int i = 0; i < time.length; i++) {
+            double z = (time[i] - timeS) / sigma;
+            signal[i] += height * Math.exp(-0.5 * z * z);
+        }
+        return t.withSignal(signal);
+    }
+
+    /** Where a neutral marker arrives in {@link #anionTrace}'s conditions: t = Ld·Lt/(μ_EOF·V) (IUPAC),
+     *  72 cm, 80 cm, −20 kV, no ramp. */
+    private static double anionMarkerTimeS(double eof) {
+        return 0.72 * 0.80 / (eof * 1e-9 * -20_000);
+    }
+
+    @ParameterizedTest(name = "a marker pointing the other way: seed {0}")
+    @ValueSource(longs = {81, 82, 83})
+    void aMarkerPointingTheOtherWayFromTheIonsIsFoundInItsWindow(long seed) {
+        // indirect detection: the ions are dips, the neutral marker (an absorbing neutral) a peak of
+        // half their height; nothing else in the window 380–800 s
+        List<Truth> zones = draw(ANIONS, new SplittableRandom(seed), 0);
+        Trace t = withRise(anionTrace("rise", -48.0, 0.0, zones, new double[0][], seed), anionMarkerTimeS(-48.0),
+                0.4);
+        RunConditions c = conditions(80, 72, -20, 0, Detection.INDIRECT, 380, 800);
+        RunResult r = new Identifier(ANIONS, IdentifySettings.defaults().withThreads(1))
+                .identify(new RunSpec("rise", Path.of("rise.csv"), c, "test", 0), t);
+        assertIdentified(r, zones);
+        assertEquals(-48.0, r.eofMobility(), 0.05, "the EOF mobility used to synthesise; " + r.notes());
+        PeakResult marker = r.peaks().stream().filter(p -> p.role() == PeakRole.NEUTRAL_MARKER).findFirst()
+                .orElseThrow();
+        assertFalse(marker.peak().dip(), "the marker is reported as the peak it is: " + marker.peak());
+        assertTrue(r.notes().toString().contains("points the other way from the run's dips"), r.notes().toString());
+    }
+
+    @Test
+    void aMarkerPointingTheOtherWayWinsOverATallerForeignDipInTheWindow() {
+        // as above, with a weakly charged substance (μ = −2) 2.5 times the ions' height, a dip, in the window
+        List<Truth> zones = draw(ANIONS, new SplittableRandom(84), 0);
+        Trace t = withRise(anionTrace("rise-tall", -48.0, 0.0, zones, new double[][] {{-2.0, 2.5}}, 84),
+                anionMarkerTimeS(-48.0), 0.4);
+        RunConditions c = conditions(80, 72, -20, 0, Detection.INDIRECT, 380, 800);
+        RunResult r = new Identifier(ANIONS, IdentifySettings.defaults().withThreads(1))
+                .identify(new RunSpec("rise-tall", Path.of("rise-tall.csv"), c, "test", 0), t);
+        assertEquals(-48.0, r.eofMobility(), 0.05, "the EOF mobility used to synthesise; " + r.notes());
+        for (Truth z : zones) {
+            assertTrue(r.peaks().stream().anyMatch(p -> z.name().equals(p.match().assigned())), z.name());
+        }
+    }
+
+    @Test
+    void aZonePointingTheOtherWayIsNeitherTheMarkerNorReportedWhenTheMarkerIsThere() {
+        // the marker as usual (a dip like the ions) and, in the window, a peak the other way of half the
+        // ions' height 40 s before it (a system zone): the marker stays the real one and the other
+        // peak is not reported as an analyte
+        List<Truth> zones = draw(ANIONS, new SplittableRandom(85), 0);
+        double markerS = anionMarkerTimeS(-48.0);
+        Trace t = withRise(anionTrace("system", -48.0, 1.0, zones, new double[0][], 85), markerS - 40, 0.4);
+        RunConditions c = conditions(80, 72, -20, 0, Detection.INDIRECT, 380, 800);
+        RunResult r = new Identifier(ANIONS, IdentifySettings.defaults().withThreads(1))
+                .identify(new RunSpec("system", Path.of("system.csv"), c, "test", 0), t);
+        assertIdentified(r, zones);
+        assertEquals(-48.0, r.eofMobility(), 0.05, "the EOF mobility used to synthesise; " + r.notes());
+        assertTrue(r.peaks().stream().allMatch(p -> p.peak().dip()), "only dips reported: " + r.peaks());
+        assertFalse(r.notes().toString().contains("points the other way"), r.notes().toString());
+    }
+
     @Test
     void aFaintMarkerBesideAFaintNearlyNeutralZoneIsFoundByTheWindowSearch() {
         // the marker about 7 noise SDs tall; a foreign zone of mobility +2.9 (nearly neutral, moving
