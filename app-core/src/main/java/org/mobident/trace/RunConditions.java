@@ -66,6 +66,12 @@ public record RunConditions(
         return Double.isNaN(rampS) ? 0.0 : rampS;
     }
 
+    /** The same conditions with another detection mode. */
+    public RunConditions withDetection(Detection other) {
+        return new RunConditions(totalLengthCm, detectorLengthCm, voltageKv, rampS, temperatureC, buffer, markerFromS,
+                markerToS, other, refMarkerMobility, refMarkerFromS, refMarkerToS);
+    }
+
     /** Detection mode, direct when not given. */
     public Detection detectionOrDirect() {
         return detection == null ? Detection.DIRECT : detection;

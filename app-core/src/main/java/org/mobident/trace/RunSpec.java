@@ -20,6 +20,11 @@ public record RunSpec(String name, Path traceFile, RunConditions conditions, Str
         this(name, traceFile, conditions, origin, originLine, null);
     }
 
+    /** The same run with other conditions. */
+    public RunSpec withConditions(RunConditions other) {
+        return new RunSpec(name, traceFile, other, origin, originLine, sample);
+    }
+
     /** The run name for a trace file: its file name without the last extension. */
     public static String runNameOf(Path file) {
         String n = file.getFileName().toString();

@@ -356,6 +356,52 @@ class IdentifierEndToEndTest {
         assertFalse(r.notes().toString().contains("points the other way"), r.notes().toString());
     }
 
+    @ParameterizedTest(name = "an indirect trace exported already inverted: seed {0}")
+    @ValueSource(longs = {91, 92})
+    void anIndirectTraceExportedAsPeaksIsReadAsItShowsAndSaysSo(long seed) {
+        // the software drew the dips of an indirect run as peaks; the run sheet still says indirect
+        List<Truth> zones = draw(ANIONS, new SplittableRandom(seed), 0);
+        Trace dips = anionTrace("inverted", -48.0, 1.0, zones, new double[0][], seed);
+        double[] signal = dips.signals();
+        for (int i = 0; i < signal.length; i++) {
+            signal[i] = -signal[i];
+        }
+        RunConditions c = conditions(80, 72, -20, 0, Detection.INDIRECT, 380, 800);
+        RunResult r = new Identifier(ANIONS, IdentifySettings.defaults().withThreads(1))
+                .identify(new RunSpec("inverted", Path.of("inverted.csv"), c, "test", 0), dips.withSignal(signal));
+        assertIdentified(r, zones);
+        assertEquals(-48.0, r.eofMobility(), 0.05, r.notes().toString());
+        assertEquals(Detection.DIRECT, r.spec().conditions().detection(), "read as the peaks it shows");
+        assertTrue(r.notes().get(0).contains("rise above its baseline, although the run is marked indirect"),
+                r.notes().toString());
+    }
+
+    @Test
+    void dipsWithoutADetectionColumnAreReadAsDips() {
+        // no detection given (taken as direct), but the trace holds the dips of an indirect run
+        List<Truth> zones = draw(ANIONS, new SplittableRandom(93), 0);
+        Trace dips = anionTrace("no-detection", -48.0, 1.0, zones, new double[0][], 93);
+        RunConditions c = conditions(80, 72, -20, 0, null, 380, 800);
+        RunResult r = new Identifier(ANIONS, IdentifySettings.defaults().withThreads(1))
+                .identify(new RunSpec("no-detection", Path.of("no-detection.csv"), c, "test", 0), dips);
+        assertIdentified(r, zones);
+        assertEquals(Detection.INDIRECT, r.spec().conditions().detection());
+        assertTrue(r.notes().get(0).contains("taken as direct (no detection given): read as indirect"),
+                r.notes().toString());
+    }
+
+    @Test
+    void aTraceThatShowsItsStatedDetectionIsReadAsStatedWithoutANote() {
+        List<Truth> zones = draw(ANIONS, new SplittableRandom(94), 0);
+        Trace dips = anionTrace("as-stated", -48.0, 1.0, zones, new double[0][], 94);
+        RunConditions c = conditions(80, 72, -20, 0, Detection.INDIRECT, 380, 800);
+        RunResult r = new Identifier(ANIONS, IdentifySettings.defaults().withThreads(1))
+                .identify(new RunSpec("as-stated", Path.of("as-stated.csv"), c, "test", 0), dips);
+        assertIdentified(r, zones);
+        assertEquals(Detection.INDIRECT, r.spec().conditions().detection());
+        assertFalse(r.notes().toString().contains("although the run is"), r.notes().toString());
+    }
+
     @Test
     void aFaintMarkerBesideAFaintNearlyNeutralZoneIsFoundByTheWindowSearch() {
         // the marker about 7 noise SDs tall; a foreign zone of mobility +2.9 (nearly neutral, moving

@@ -7,8 +7,8 @@ import java.util.SplittableRandom;
 import org.junit.jupiter.api.Test;
 
 /**
- * The cheap screen before a marker window is searched the other way ({@link
- * Identifier#reachesOtherWay}). A zone at the quantitation limit, S/N = 2H/h = 10 with h the
+ * The cheap screens before a trace or its marker window is analysed the other way from the run's
+ * stated detection ({@link Identifier#leansOtherWay}, {@link Identifier#reachesOtherWay}). A zone at the quantitation limit, S/N = 2H/h = 10 with h the
  * peak-to-peak noise, stands H = 5h; for white noise over a window of about 20 widths h is about
  * 5 noise SDs (the expected range of a few hundred normal values, Tippett, Biometrika 17 (1925)
  * 364; from memory), so about 25 SDs. The screen asks for 10 SDs beyond the window's median.
@@ -56,6 +56,38 @@ class OtherWayScreenTest {
         double[] dip = withZone(noise(8, 6000), 3000, 30, -25 * NOISE_SD);
         assertTrue(Identifier.reachesOtherWay(dip, false, NOISE_SD));
         assertFalse(Identifier.reachesOtherWay(dip, true, NOISE_SD));
+    }
+
+    @Test
+    void aTraceOfDipsLeansTheOtherWayFromADirectReadingOnly() {
+        // five dips of 40-200 noise SDs on a baseline drifting by 30 noise SDs over the run
+        double[] v = noise(11, 20_000);
+        for (int i = 0; i < v.length; i++) {
+            v[i] += 30 * NOISE_SD * i / v.length;
+        }
+        for (int k = 0; k < 5; k++) {
+            v = withZone(v, 3000 + 3000 * k, 25, -(40 + 40 * k) * NOISE_SD);
+        }
+        assertTrue(Identifier.leansOtherWay(v, false, NOISE_SD), "stated direct: the zones dip");
+        assertFalse(Identifier.leansOtherWay(v, true, NOISE_SD), "stated indirect: as stated");
+    }
+
+    @Test
+    void spikesAndAWanderingBaselineDoNotOutweighTheRunsZones() {
+        // three dips of 30 noise SDs (an indirect run), a baseline wandering by 10 noise SDs and four
+        // one-sample spikes of 100 SDs up: the spikes weigh a sample each, the zones dozens
+        double[] v = noise(12, 20_000);
+        for (int i = 0; i < v.length; i++) {
+            v[i] += 10 * NOISE_SD * Math.sin(2 * Math.PI * i / 7000.0);
+        }
+        for (int k = 1; k <= 4; k++) {
+            v[4000 * k + 500] += 100 * NOISE_SD;
+        }
+        for (int k = 0; k < 3; k++) {
+            v = withZone(v, 5000 + 5000 * k, 25, -30 * NOISE_SD);
+        }
+        assertFalse(Identifier.leansOtherWay(v, true, NOISE_SD));
+        assertTrue(Identifier.leansOtherWay(v, false, NOISE_SD));
     }
 
     @Test
