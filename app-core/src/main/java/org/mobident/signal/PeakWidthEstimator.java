@@ -80,9 +80,10 @@ final class PeakWidthEstimator {
     /**
      * Opening (minimum then maximum; {@code closing} false) or closing (maximum then minimum) over
      * [i − r, i + r]. On long series the two passes run on block extremes of
-     * {@link SignalLimits#MORPHOLOGY_MAX_BLOCKS} blocks at most and the result is spread back over
-     * each block: the background it describes varies over 5 % of the run, so a block of a few
-     * samples changes it by nothing that matters, and the cost drops by the block length.
+     * {@link SignalLimits#MORPHOLOGY_MAX_BLOCKS} blocks at most and the result is interpolated
+     * linearly between the block centres: the background it describes varies over 5 % of the run,
+     * so a block of a few samples changes it by nothing that matters, and the cost drops by the
+     * block length.
      */
     static double[] morphological(double[] x, int radius, boolean closing) {
         int n = x.length;
@@ -109,9 +110,21 @@ final class PeakWidthEstimator {
         }
         int blockRadius = (radius + k - 1) / k;
         double[] coarse = movingExtreme(movingExtreme(b, blockRadius, closing), blockRadius, !closing);
+        // between block centres the background is interpolated: spread as a step over each block, it
+        // would put a tooth of slope × block on every block of a steep flank (a large disturbance at
+        // the start of a run gave a dozen such teeth, narrower than any zone, and their width became
+        // the run's typical width)
         double[] out = new double[n];
-        for (int j = 0; j < blocks; j++) {
-            java.util.Arrays.fill(out, j * k, Math.min(n, j * k + k), coarse[j]);
+        for (int i = 0; i < n; i++) {
+            double at = (i + 0.5) / k - 0.5;
+            int j = (int) Math.floor(at);
+            if (j < 0) {
+                out[i] = coarse[0];
+            } else if (j >= blocks - 1) {
+                out[i] = coarse[blocks - 1];
+            } else {
+                out[i] = coarse[j] + (at - j) * (coarse[j + 1] - coarse[j]);
+            }
         }
         return out;
     }
