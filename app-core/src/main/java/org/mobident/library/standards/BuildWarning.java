@@ -52,6 +52,8 @@ public record BuildWarning(Kind kind, String mix, String analyte, String run, St
         UNNAMED_GROUP,
         /** The data contradict the standards sheet (migration order, charge sign). */
         NAMING_CONFLICT,
+        /** A mix's approx_mobility values fit its peaks only at a common factor well away from 1. */
+        APPROX_SCALED,
         /** A group's nearest reference value was not clearly nearer than a rival's: left unnamed. */
         DOUBTFUL_REFERENCE_NAME,
         /**

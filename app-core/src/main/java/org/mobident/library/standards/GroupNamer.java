@@ -86,6 +86,15 @@ final class GroupNamer {
     static final double CLEAR_RATIO = 2.0;
     /** Most analytes left for a joint pairing by elimination (k! pairings are compared). */
     static final int MAX_ELIMINATION = 6;
+    /** The common factor tried on a mix's approx_mobility values: from, to and step (a modelling
+     *  choice: effective mobilities lie up to a quarter below limiting ones, common practice) ... */
+    static final double APPROX_SCALE_MIN = 0.75;
+    static final double APPROX_SCALE_MAX = 1.30;
+    static final double APPROX_SCALE_STEP = 0.005;
+    /** ... the SD of its prior around 1 ... */
+    static final double APPROX_SCALE_SD = 0.10;
+    /** ... and how far from 1 it is reported. */
+    static final double APPROX_SCALE_NOTICE = 0.05;
 
     private final StandardsMix mix;
     private final List<GroupInfo> groups;
@@ -176,20 +185,95 @@ final class GroupNamer {
         }
     }
 
+    /**
+     * Names groups after the approx_mobility values, all of a mix scaled by one common factor s: a
+     * mix's values often come from the literature (limiting mobilities, 10–20 % above effective ones
+     * in a buffer of some ionic strength) or from another buffer, and are then off by much the same
+     * share for every analyte, which moves the pattern as a whole beyond the window while keeping
+     * its order and its proportions. Over s from {@value #APPROX_SCALE_MIN} to
+     * {@value #APPROX_SCALE_MAX} (steps of {@value #APPROX_SCALE_STEP}) the assignment that names the
+     * most analytes wins, then the one of least Σ(Δμ/w)² + ((s − 1)/{@value #APPROX_SCALE_SD})²
+     * (the second term a prior that keeps s near 1 where the values fit as given). A factor more than
+     * {@value #APPROX_SCALE_NOTICE} from 1 is reported.
+     */
     private void byApproxMobility() {
         List<StandardAnalyte> as = new ArrayList<>();
-        List<Double> target = new ArrayList<>();
+        List<Double> approx = new ArrayList<>();
         List<Double> window = new ArrayList<>();
         List<Integer> sign = new ArrayList<>();
         for (StandardAnalyte a : mix.analytes()) {
             if (a.hasApproxMobility()) {
                 as.add(a);
-                target.add(a.approxMobility());
+                approx.add(a.approxMobility());
                 window.add(settings.approxWindow());
                 sign.add(a.expectedSign());
             }
         }
-        nearest(as, target, window, sign, NamingBasis.APPROX_MOBILITY);
+        if (as.isEmpty()) {
+            return;
+        }
+        double bestScale = 1.0;
+        int bestNamed = -1;
+        double bestCost = Double.POSITIVE_INFINITY;
+        int steps = (int) Math.round((APPROX_SCALE_MAX - APPROX_SCALE_MIN) / APPROX_SCALE_STEP);
+        for (int k = 0; k <= steps; k++) {
+            double scale = APPROX_SCALE_MIN + k * APPROX_SCALE_STEP;
+            double[] fit = scaledFit(as, scaled(approx, scale), window, sign);
+            double prior = (scale - 1) / APPROX_SCALE_SD;
+            double cost = fit[1] + prior * prior;
+            if (fit[0] > bestNamed || (fit[0] == bestNamed && cost < bestCost)) {
+                bestNamed = (int) fit[0];
+                bestCost = cost;
+                bestScale = scale;
+            }
+        }
+        nearest(as, scaled(approx, bestScale), window, sign, NamingBasis.APPROX_MOBILITY);
+        if (Math.abs(bestScale - 1) > APPROX_SCALE_NOTICE) {
+            warnings.add(new BuildWarning(BuildWarning.Kind.APPROX_SCALED, mix.name(), null, null,
+                    String.format(Locale.ROOT, "Mix %s: the approx_mobility values fit the peaks only at %.3f times "
+                            + "their values (values from the literature or another buffer are often off by one "
+                            + "common share); the groups were named at that factor: check the names and the sheet.",
+                            mix.name(), bestScale)));
+        }
+    }
+
+    private static List<Double> scaled(List<Double> values, double factor) {
+        List<Double> out = new ArrayList<>(values.size());
+        for (double v : values) {
+            out.add(factor * v);
+        }
+        return out;
+    }
+
+    /** {analytes named, Σ(Δμ/w)² of the names} of the one-to-one nearest assignment to free groups. */
+    private double[] scaledFit(List<StandardAnalyte> analytes, List<Double> target, List<Double> window,
+                               List<Integer> sign) {
+        List<Integer> idx = new ArrayList<>();
+        for (int i = 0; i < analytes.size(); i++) {
+            idx.add(i);
+        }
+        idx.sort(Comparator.comparingDouble(target::get));
+        List<Integer> free = freeGroupsByMobility();
+        MonotoneMatcher.Cost cost = (i, j) -> {
+            int a = idx.get(i);
+            double m = groups.get(free.get(j)).mean();
+            double d = Math.abs(m - target.get(a));
+            if (d > window.get(a) || !signAgrees(sign.get(a), m)) {
+                return Double.POSITIVE_INFINITY;
+            }
+            double z = d / window.get(a);
+            return z * z;
+        };
+        int[] partner = MonotoneMatcher.match(idx.size(), free.size(), cost, 1.0);
+        double named = 0;
+        double sum = 0;
+        for (int i = 0; i < partner.length; i++) {
+            if (partner[i] >= 0) {
+                named++;
+                sum += cost.of(i, partner[i]);
+            }
+        }
+        return new double[] {named, sum};
     }
 
     private void byOrder() {

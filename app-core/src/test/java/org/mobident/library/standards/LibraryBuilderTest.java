@@ -452,6 +452,19 @@ class LibraryBuilderTest {
         assertEquals(1, b2.warnings(BuildWarning.Kind.MIXED_CONDITIONS).size());
         seen.addAll(kinds(b2));
 
+        // approx_mobility values all about 12 % above the measured mobilities (from the literature):
+        // named at that common factor, and said so
+        List<RunResult> lit = List.of(run("e1", 50, 76.2, 60.1, 52.6, 40.1), run("e2", 50, 76.1, 60.0, 52.5, 40.2),
+                run("e3", 50, 76.3, 60.2, 52.7, 40.0));
+        StandardsSheet s3 = sheet("lit", analyte("potassium", 85, 0), analyte("calcium", 67, 0),
+                analyte("sodium", 59, 0), analyte("lithium", 45, 0));
+        BuildResult bLit = build(lit, s3, DEFAULTS, null);
+        assertEquals(1, bLit.warnings(BuildWarning.Kind.APPROX_SCALED).size(), bLit.warnings().toString());
+        assertEquals(76.2, bLit.library().find("potassium").orElseThrow().mobility(), 0.2);
+        assertEquals(60.1, bLit.library().find("calcium").orElseThrow().mobility(), 0.2);
+        assertEquals(40.1, bLit.library().find("lithium").orElseThrow().mobility(), 0.2);
+        seen.addAll(kinds(bLit));
+
         // All analytes named: an extra group is unexpected; an outlier among five.
         List<RunResult> five = new ArrayList<>();
         double[] na = {51.90, 51.95, 51.88, 51.93, 53.20};
