@@ -12,6 +12,7 @@ import org.mobident.io.Suggestions;
 import org.mobident.io.TableReader;
 import org.mobident.io.TableRow;
 import org.mobident.io.TableSpec;
+import org.mobident.io.TextFiles;
 
 /**
  * Reads a known-identities table (the shared format of the bench generator and the scoring).
@@ -46,7 +47,6 @@ public final class KnownIdentitiesReader {
     /** The columns of the format, in documentation order. */
     public static final List<String> COLUMNS = List.of(RUN, KIND, ANALYTE, TIME_S, MOBILITY, HEIGHT_SD);
 
-    private static final char UNICODE_MINUS = '\u2212';
     private static final Pattern DECIMAL = Pattern.compile("[+-]?(\\d+\\.?\\d*|\\.\\d+)([eE][+-]?\\d+)?");
     /** The table as the table reader expects it. */
     private static final TableSpec SPEC = TableSpec.of("known-identities table", COLUMNS, List.of(RUN))
@@ -167,7 +167,7 @@ public final class KnownIdentitiesReader {
             if (raw.isEmpty()) {
                 return Double.NaN;
             }
-            String s = raw.replace(UNICODE_MINUS, '-');
+            String s = raw.replace(TextFiles.UNICODE_MINUS, '-');
             if (!DECIMAL.matcher(s).matches()) {
                 throw new InputException(file, lineNo, column, "expected a number with a decimal point, got '"
                         + raw + "'");

@@ -24,6 +24,10 @@ import org.mobident.InputException;
  */
 public final class TextFiles {
 
+    /** The minus sign of typeset text (U+2212), as tables copied from documents hold it; read as '-'. */
+    public static final char UNICODE_MINUS = '\u2212';
+
+
     /** The byte-order mark as a character (U+FEFF), as it stands first in text decoded with it. */
     public static final char BYTE_ORDER_MARK = '\uFEFF';
 

@@ -23,6 +23,7 @@ import org.mobident.InputException;
 import org.mobident.io.TableReader;
 import org.mobident.io.TableRow;
 import org.mobident.io.TableSpec;
+import org.mobident.io.TextFiles;
 import org.mobident.text.NumberText;
 
 /**
@@ -63,7 +64,6 @@ import org.mobident.text.NumberText;
 public final class LibraryCsv {
 
     private static final char COMMENT = '#';
-    private static final char UNICODE_MINUS = '\u2212';
     /** A plain decimal number with optional sign, fraction and exponent (no NaN, hex or suffix). */
     private static final Pattern DECIMAL = Pattern.compile("[+-]?(\\d+\\.?\\d*|\\.\\d+)([eE][+-]?\\d+)?");
     private static final String RECORD_SEPARATOR = "\n";
@@ -371,7 +371,7 @@ public final class LibraryCsv {
         }
 
         private double number(LibraryColumn c, String raw) throws InputException {
-            String s = raw.trim().replace(UNICODE_MINUS, '-');
+            String s = raw.trim().replace(TextFiles.UNICODE_MINUS, '-');
             if (!DECIMAL.matcher(s).matches()) {
                 String hint = c == LibraryColumn.PKA || c == LibraryColumn.LIMITING_MOBILITY
                         ? " (separate several values with spaces)" : "";

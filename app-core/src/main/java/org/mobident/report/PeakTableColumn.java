@@ -7,6 +7,7 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Optional;
 import java.util.regex.Pattern;
+import org.mobident.io.TextFiles;
 
 /**
  * The peak table's columns, in output order: the one definition of the format that the CSV and
@@ -102,7 +103,6 @@ public enum PeakTableColumn {
         FACTOR(5, -1);
 
         private static final Pattern DECIMAL = Pattern.compile("[+-]?(\\d+\\.?\\d*|\\.\\d+)([eE][+-]?\\d+)?");
-        private static final char UNICODE_MINUS = '\u2212';
 
         private final int decimals;
         private final int significantDigits;
@@ -137,7 +137,7 @@ public enum PeakTableColumn {
             if (s.isEmpty()) {
                 return Double.NaN;
             }
-            String plain = s.replace(UNICODE_MINUS, '-');
+            String plain = s.replace(TextFiles.UNICODE_MINUS, '-');
             if (!DECIMAL.matcher(plain).matches()) {
                 throw new NumberFormatException("expected a number, got '" + s + "'");
             }

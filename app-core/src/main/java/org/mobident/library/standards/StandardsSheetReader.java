@@ -14,6 +14,7 @@ import org.mobident.InputException;
 import org.mobident.io.TableReader;
 import org.mobident.io.TableRow;
 import org.mobident.io.TableSpec;
+import org.mobident.io.TextFiles;
 
 /**
  * Reads a standards sheet: one row per analyte of a standard mix.
@@ -65,7 +66,6 @@ public final class StandardsSheetReader {
     /** The standards sheet as the table reader expects it. */
     private static final TableSpec SPEC = TableSpec.of("standards sheet", COLUMNS, List.of(MIX, ANALYTE))
             .withSniffedDelimiter().withSpacesAsUnderscore();
-    private static final char UNICODE_MINUS = '\u2212';
     private static final Pattern DECIMAL = Pattern.compile("[+-]?(\\d+\\.?\\d*|\\.\\d+)([eE][+-]?\\d+)?");
     /** {@code -2}, {@code +1}, {@code 3}: sign before the number. */
     private static final Pattern CHARGE_SIGN_FIRST = Pattern.compile("([+-]?)(\\d+)");
@@ -225,7 +225,7 @@ public final class StandardsSheetReader {
                 return out;
             }
             for (String part : raw.strip().split("\\s+")) {
-                String s = part.replace(UNICODE_MINUS, '-');
+                String s = part.replace(TextFiles.UNICODE_MINUS, '-');
                 if (delimiter != ',') {
                     s = s.replace(',', '.');
                 }
@@ -244,7 +244,7 @@ public final class StandardsSheetReader {
 
         /** {charge number (0 when only the sign is given), sign}. */
         private int[] charge(String raw, long lineNo) throws InputException {
-            String s = raw.replace(UNICODE_MINUS, '-').replace(" ", "");
+            String s = raw.replace(TextFiles.UNICODE_MINUS, '-').replace(" ", "");
             if (s.isEmpty()) {
                 return new int[] {0, 0};
             }
@@ -280,7 +280,7 @@ public final class StandardsSheetReader {
             if (raw.isEmpty()) {
                 return Double.NaN;
             }
-            String s = raw.replace(UNICODE_MINUS, '-');
+            String s = raw.replace(TextFiles.UNICODE_MINUS, '-');
             if (delimiter != ',') {
                 s = s.replace(',', '.');
             }

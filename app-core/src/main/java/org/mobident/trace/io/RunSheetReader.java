@@ -10,13 +10,12 @@ import java.util.HashMap;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
-
 import org.mobident.InputException;
+import org.mobident.Units;
 import org.mobident.io.TableReader;
 import org.mobident.io.TableRow;
 import org.mobident.io.TableSpec;
 import org.mobident.io.TextFiles;
-import org.mobident.Units;
 import org.mobident.trace.Detection;
 import org.mobident.trace.RunConditions;
 import org.mobident.trace.RunSpec;
@@ -61,6 +60,13 @@ public final class RunSheetReader {
     static final String SAMPLE = "sample";
     static final String NOTE = "note";
     static final String MIX = "mix";
+    /** Units a number cell may carry when they are its column's own ('|' between; case aside). */
+    private static final Map<String, String> OWN_UNITS = Map.of(TOTAL_LENGTH, "cm", DETECTOR_LENGTH, "cm",
+            VOLTAGE, "kV", RAMP, "s", TEMPERATURE, "°C|C|degC", MARKER_FROM, "s", MARKER_TO, "s", REF_FROM, "s",
+            REF_TO, "s");
+    /** Units of the same kinds that are not a column's own: refused, not read as if they were. */
+    private static final java.util.Set<String> OTHER_UNITS = java.util.Set.of("mm", "m", "v", "min", "k", "ms",
+            "h", "°f", "f");
 
     private static final String COLUMN_LIST = "file, total_length_cm, detector_length_cm, voltage_kv, ramp_s, "
             + "temperature_c, buffer, marker_from_s, marker_to_s, detection, ref_marker_mobility, "
@@ -326,12 +332,14 @@ public final class RunSheetReader {
             return new RunSpec(runName, traceFile, conditions, name, lineNo, sample.isEmpty() ? null : sample);
         }
 
-        /** An empty cell is NaN (unset); anything else must be a finite number. */
+        /** An empty cell is NaN (unset); anything else must be a finite number, optionally followed by
+         *  the column's own unit ({@code -20 kV}, {@code 25 °C}). */
         private double number(String text, String column, long lineNo) throws InputException {
             if (text == null || text.isEmpty()) {
                 return Double.NaN;
             }
-            byte[] b = text.getBytes(StandardCharsets.UTF_8);
+            text = withoutOwnUnit(text.strip(), column, lineNo);
+            byte[] b = text.replace(TextFiles.UNICODE_MINUS, '-').getBytes(StandardCharsets.UTF_8);
             double v = FastDoubleParser.parse(b, 0, b.length, delimiter != ',');
             if (Double.isNaN(v)) {
                 String hint = delimiter == ',' && text.indexOf(',') >= 0
@@ -342,6 +350,39 @@ public final class RunSheetReader {
                 throw new InputException(name, lineNo, column, "'" + text + "' is too large a number");
             }
             return v;
+        }
+
+        /**
+         * The cell without a trailing unit when that unit is the column's own (case aside: cm, kV, s,
+         * °C or C); a cell that ends in another unit of the same kind (mm, m, V, min, K) is refused
+         * with both named, rather than read as a number in the wrong unit.
+         */
+        private String withoutOwnUnit(String text, String column, long lineNo) throws InputException {
+            int end = text.length();
+            int start = end;
+            while (start > 0 && (Character.isLetter(text.charAt(start - 1)) || text.charAt(start - 1) == '°')) {
+                start--;
+            }
+            if (start == end || start == 0) {
+                return text;
+            }
+            String unit = text.substring(start).toLowerCase(Locale.ROOT);
+            String number = text.substring(0, start).strip();
+            String own = OWN_UNITS.get(column);
+            if (own == null) {
+                return text;
+            }
+            String[] accepted = own.split("\\|");
+            for (String a : accepted) {
+                if (a.toLowerCase(Locale.ROOT).equals(unit)) {
+                    return number;
+                }
+            }
+            if (OTHER_UNITS.contains(unit)) {
+                throw new InputException(name, lineNo, column, "'" + text + "' is in " + text.substring(start)
+                        + ", but this column is in " + accepted[0] + ": convert the value or leave the unit out");
+            }
+            return text;
         }
     }
 }

@@ -103,6 +103,35 @@ class RunSheetReaderTest {
     }
 
     @Test
+    void aTypesetMinusSignReadsAsMinus() throws Exception {
+        // a voltage copied from a document: U+2212, not the hyphen-minus
+        Path p = sheet("file,total_length_cm,detector_length_cm,voltage_kv\ntraces/a.csv,64.5,56,\u221230\n");
+        RunSheet s = RunSheetReader.read(p, RunConditions.EMPTY);
+        assertTrue(s.clean(), () -> s.rowProblems().toString());
+        assertEquals(-30, s.runs().get(0).conditions().voltageKv(), EXACT);
+    }
+
+    @Test
+    void aCellMayCarryItsColumnsOwnUnitButNoOther() throws Exception {
+        Path p = sheet("file,total_length_cm,detector_length_cm,voltage_kv,temperature_c,marker_from_s,marker_to_s\n"
+                + "traces/a.csv,64.5 cm,56cm,-30 kV,22.5 °C,120 s,180 S\n"
+                + "traces/b.csv,645 mm,56,-30,25,120,180\n"
+                + "traces/c.csv,64.5,56,-30000 V,25,120,180\n");
+        RunSheet s = RunSheetReader.read(p, RunConditions.EMPTY);
+        assertEquals(1, s.runs().size(), () -> s.rowProblems().toString());
+        RunConditions c = s.runs().get(0).conditions();
+        assertEquals(64.5, c.totalLengthCm(), EXACT);
+        assertEquals(56, c.detectorLengthCm(), EXACT);
+        assertEquals(-30, c.voltageKv(), EXACT);
+        assertEquals(22.5, c.temperatureC(), EXACT);
+        assertEquals(120, c.markerFromS(), EXACT);
+        assertEquals(180, c.markerToS(), EXACT);
+        String problems = s.rowProblems().toString();
+        assertTrue(problems.contains("'645 mm' is in mm, but this column is in cm"), problems);
+        assertTrue(problems.contains("'-30000 V' is in V, but this column is in kV"), problems);
+    }
+
+    @Test
     void headerNamesWithUnitsInBrackets() throws Exception {
         // how a spreadsheet user writes the columns: words, units in brackets, a degree sign
         Path p = sheet("File,Total length (cm),Detector length [cm],Voltage (kV),Temperature (°C),"
