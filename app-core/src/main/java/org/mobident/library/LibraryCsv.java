@@ -32,7 +32,8 @@ import org.mobident.text.NumberText;
  * <h2>Format</h2>
  * <ul>
  *   <li>UTF-8 (a leading byte-order mark is tolerated), comma-delimited, double quotes around
- *       fields that contain commas, quotes or line breaks (RFC 4180), read with {@link TableReader}.</li>
+ *       fields that contain commas, quotes or line breaks (RFC 4180), read with {@link TableReader}.
+ *       A library a spreadsheet wrote with semicolons or tabs is read too, with decimal commas.</li>
  *   <li>Lines whose first character is {@code #} are comments; their text (without the {@code #}
  *       and surrounding spaces) becomes {@link Library#notes()}, in file order, and is written back
  *       at the top of the file. Blank lines, and lines of nothing but commas, are ignored.</li>
@@ -71,7 +72,7 @@ public final class LibraryCsv {
     /** The library as the table reader expects it. */
     private static final TableSpec SPEC = TableSpec.of("library file",
             Arrays.stream(LibraryColumn.values()).map(LibraryColumn::header).toList(),
-            List.of(LibraryColumn.NAME.header(), LibraryColumn.MOBILITY.header()));
+            List.of(LibraryColumn.NAME.header(), LibraryColumn.MOBILITY.header())).withSniffedDelimiter();
     private static final CSVFormat WRITE_FORMAT = CSVFormat.DEFAULT.builder()
             .setCommentMarker(COMMENT)
             .setRecordSeparator(RECORD_SEPARATOR)
@@ -247,6 +248,8 @@ public final class LibraryCsv {
         private final List<Long> lines = new ArrayList<>();
         private final Map<String, Long> lineOfName = new HashMap<>();
         private long line;
+        /** A semicolon- or tab-delimited library (as spreadsheets write it) may use decimal commas. */
+        private boolean decimalComma;
 
         Parse(String file) {
             this.file = file;
@@ -254,6 +257,7 @@ public final class LibraryCsv {
 
         Library run(TableReader opened) throws InputException {
             try (TableReader table = opened) {
+                decimalComma = table.delimiter() != ',';
                 for (TableRow row = table.next(); row != null; row = table.next()) {
                     line = row.line();
                     entries.add(entry(row));
@@ -372,6 +376,9 @@ public final class LibraryCsv {
 
         private double number(LibraryColumn c, String raw) throws InputException {
             String s = raw.trim().replace(TextFiles.UNICODE_MINUS, '-');
+            if (decimalComma) {
+                s = s.replace(',', '.');
+            }
             if (!DECIMAL.matcher(s).matches()) {
                 String hint = c == LibraryColumn.PKA || c == LibraryColumn.LIMITING_MOBILITY
                         ? " (separate several values with spaces)" : "";

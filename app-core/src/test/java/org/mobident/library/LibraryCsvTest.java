@@ -238,9 +238,16 @@ class LibraryCsvTest {
     }
 
     @Test
-    void semicolonFileGetsAHint() {
-        InputException e = failure("name;mobility\nA;1\n");
-        assertTrue(e.problem().contains("comma-delimited"), e.getMessage());
+    void aSpreadsheetsSemicolonsAndDecimalCommasAreReadAsTheCommaFile() throws InputException {
+        Library semicolons = parse("name;mobility;mobility_sd;pka\nA;\u221276,30;0,40;2,15 7,20\n");
+        Library commas = parse("name,mobility,mobility_sd,pka\nA,-76.30,0.40,2.15 7.20\n");
+        LibraryEntry a = semicolons.entries().get(0);
+        LibraryEntry b = commas.entries().get(0);
+        assertEquals(b.mobility(), a.mobility(), 0.0);
+        assertEquals(b.mobilitySd(), a.mobilitySd(), 0.0);
+        assertEquals(b.pKa(), a.pKa());
+        InputException e = failure("name;mobility\nA;1.2.3\n");
+        assertEquals("mobility", e.field(), e.getMessage());
     }
 
     @Test
