@@ -50,7 +50,7 @@ public final class KnownIdentitiesReader {
     private static final Pattern DECIMAL = Pattern.compile("[+-]?(\\d+\\.?\\d*|\\.\\d+)([eE][+-]?\\d+)?");
     /** The table as the table reader expects it. */
     private static final TableSpec SPEC = TableSpec.of("known-identities table", COLUMNS, List.of(RUN))
-            .listingPresentColumns();
+            .listingPresentColumns().withSniffedDelimiter();
 
     private KnownIdentitiesReader() {
     }
@@ -82,12 +82,16 @@ public final class KnownIdentitiesReader {
         /** "run / analyte key" or "run / marker" → line of first appearance. */
         private final Map<String, Long> firstLine = new HashMap<>();
 
+        /** A semicolon- or tab-delimited table (as spreadsheets write it) may use decimal commas. */
+        private boolean decimalComma;
+
         Parse(String file) {
             this.file = file;
         }
 
         KnownIdentities run(TableReader opened) throws InputException {
             try (TableReader table = opened) {
+                decimalComma = table.delimiter() != ',';
                 List<String> header = table.headerCells();
                 for (int k = 0; k < header.size(); k++) {
                     if (header.get(k).isEmpty()) {
@@ -168,6 +172,9 @@ public final class KnownIdentitiesReader {
                 return Double.NaN;
             }
             String s = raw.replace(TextFiles.UNICODE_MINUS, '-');
+            if (decimalComma) {
+                s = s.replace(',', '.');
+            }
             if (!DECIMAL.matcher(s).matches()) {
                 throw new InputException(file, lineNo, column, "expected a number with a decimal point, got '"
                         + raw + "'");

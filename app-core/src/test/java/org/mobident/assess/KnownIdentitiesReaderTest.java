@@ -69,6 +69,22 @@ class KnownIdentitiesReaderTest {
     }
 
     @Test
+    void aSpreadsheetsSemicolonsAndDecimalCommasReadAsTheCommaTable() throws InputException {
+        KnownIdentities commas = KnownIdentitiesReader.read(SPEC_EXAMPLE, "known.csv");
+        String semicolons = SPEC_EXAMPLE.replace(',', ';').replace('.', ',');
+        KnownIdentities read = KnownIdentitiesReader.read(semicolons, "known.csv");
+        assertEquals(commas.rows().size(), read.rows().size());
+        for (int i = 0; i < commas.rows().size(); i++) {
+            KnownIdentity a = commas.rows().get(i);
+            KnownIdentity b = read.rows().get(i);
+            assertEquals(a.name(), b.name());
+            assertEquals(a.timeS(), b.timeS(), 0.0);
+            assertEquals(a.mobility(), b.mobility(), 0.0);
+            assertEquals(a.heightSd(), b.heightSd(), 0.0);
+        }
+    }
+
+    @Test
     void missingRunColumnIsNamed() {
         InputException e = refused("kind,analyte\nanalyte,chloride\n");
         assertEquals("known.csv", e.file());
