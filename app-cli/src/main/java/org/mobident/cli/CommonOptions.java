@@ -8,7 +8,7 @@ import picocli.CommandLine.Option;
 /** Options shared by the commands that read traces. */
 public final class CommonOptions {
     @Option(names = "--time-unit", paramLabel = "UNIT",
-            description = "Unit of the trace time column when its header does not say: s or min.")
+            description = "Unit of the trace time column when its header does not say: s, min or ms.")
     String timeUnit;
 
     @Option(names = "--time-column", paramLabel = "NAME|N",
@@ -64,9 +64,13 @@ public final class CommonOptions {
             case "minutes":
                 scale = TimeScale.MINUTES;
                 break;
+            case "ms":
+            case "milliseconds":
+                scale = TimeScale.MILLISECONDS;
+                break;
             default:
                 throw new picocli.CommandLine.ParameterException(new picocli.CommandLine(this),
-                        "--time-unit: expected s or min, got '" + timeUnit + "'");
+                        "--time-unit: expected s, min or ms, got '" + timeUnit + "'");
         }
         return new TraceReadOptions(scale, time, signal);
     }

@@ -14,6 +14,7 @@ final class ColumnNames {
 
     private static final Set<String> SECOND_WORDS = Set.of("s", "sec", "secs", "second", "seconds");
     private static final Set<String> MINUTE_WORDS = Set.of("min", "mins", "minute", "minutes");
+    private static final Set<String> MILLISECOND_WORDS = Set.of("ms", "msec", "millisecond", "milliseconds");
     private static final Set<String> TIME_BASES = Set.of("time", "times", "t", "zeit", "elapsed",
             "elapsed time", "time elapsed", "migration time", "retention time", "rt", "acquisition time");
     private static final List<String> SIGNAL_WORDS = List.of("signal", "absorbance", "abs", "mau", "au",
@@ -66,9 +67,9 @@ final class ColumnNames {
         return new Name(name.trim(), base, unit);
     }
 
-    /** True for s, sec, seconds, min, minutes and the like. */
+    /** True for s, sec, seconds, min, minutes, ms and the like. */
     static boolean isTimeUnitWord(String w) {
-        return SECOND_WORDS.contains(w) || MINUTE_WORDS.contains(w);
+        return SECOND_WORDS.contains(w) || MINUTE_WORDS.contains(w) || MILLISECOND_WORDS.contains(w);
     }
 
     /** The time scale a unit names, or {@code null} when it names none we know. */
@@ -78,6 +79,9 @@ final class ColumnNames {
         }
         if (MINUTE_WORDS.contains(unit)) {
             return TimeScale.MINUTES;
+        }
+        if (MILLISECOND_WORDS.contains(unit)) {
+            return TimeScale.MILLISECONDS;
         }
         return null;
     }

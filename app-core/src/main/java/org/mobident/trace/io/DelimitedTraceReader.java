@@ -963,7 +963,7 @@ public final class DelimitedTraceReader {
             TimeScale s = ColumnNames.scaleOf(unit);
             if (s == null) {
                 throw new InputException(file, headerLine, names.get(timeIndex), "time unit '" + unit
-                        + "' is not supported; use s or min in the header, or give the time unit in the options");
+                        + "' is not supported; use s, min or ms in the header, or give the time unit in the options");
             }
             return s;
         }

@@ -73,6 +73,13 @@ class DelimitedTraceReaderTest {
     }
 
     @Test
+    void millisecondsFromHeader() throws Exception {
+        // 1 ms = 0.001 s (SI)
+        Path p = write("ms.csv", "Time (ms),Signal\n500,1\n750,2\n1000,3\n");
+        assertArrayEquals(new double[] {0.5, 0.75, 1.0}, read(p).timesS(), 1e-12);
+    }
+
+    @Test
     void tabDecimalCommaBracketUnit() throws Exception {
         Path p = write("b.tsv", "time [min]\tUV\n0,1\t5\n0,2\t6\n");
         assertArrayEquals(new double[] {6.0, 12.0}, read(p).timesS(), 1e-12);
