@@ -239,7 +239,7 @@ class DelimitedTraceReaderTest {
 
     @Test
     void unsupportedTimeUnit() throws Exception {
-        assertWhere(fails("time (ms),signal\n0,1\n1,2\n"), 1, "time (ms)");
+        assertWhere(fails("time (h),signal\n0,1\n1,2\n"), 1, "time (h)");
     }
 
     @Test
