@@ -179,8 +179,10 @@ def main():
     ap.add_argument("--samples", type=int, default=25)
     ap.add_argument("--front-form", choices=["bigauss", "exponential"], default="bigauss",
                     help="form of fronting zones: bi-Gaussian (default) or mirrored exponnorm")
+    ap.add_argument("--one-mix", action="store_true",
+                    help="one standards mix per method holding the whole panel (near pairs together)")
     a = ap.parse_args()
-    P = dict(PROFILES[a.profile], front=a.front_form)
+    P = dict(PROFILES[a.profile], front=a.front_form, one_mix=a.one_mix)
     rng = np.random.default_rng(a.seed)
     out = a.out
     os.makedirs(out + "/samples", exist_ok=True)
@@ -192,7 +194,8 @@ def main():
     for mname, m in METHODS.items():
         panel = m["panel"]
         # mixes: alternate so near pairs land in different mixes
-        mix = {mname + "-mix1": panel[0::2], mname + "-mix2": panel[1::2]}
+        mix = ({mname + "-all": panel} if P.get("one_mix") else
+               {mname + "-mix1": panel[0::2], mname + "-mix2": panel[1::2]})
         for mx, members in mix.items():
             for an, mu in members:
                 mixes.append("%s,%s,%d" % (mx, an, round(mu)))
