@@ -377,12 +377,14 @@ public final class Identifier {
                 settings.peakSettings());
         Detected asStated = detected(run, trace, analysis, null);
         Detection stated = run.conditions().detectionOrDirect();
-        if (leansOtherWay(trace.signals(), stated == Detection.INDIRECT, analysis.noiseSd())) {
+        boolean notGiven = run.conditions().detection() == null;
+        if (notGiven || leansOtherWay(trace.signals(), stated == Detection.INDIRECT, analysis.noiseSd())) {
             // a trace exported already inverted (indirect runs drawn as peaks), or a detection column
             // left out, shows its zones the other way from the stated detection: read both ways, and
             // the library decides (see finishing)
             TraceAnalysis otherWay = PeakDetector.analyse(trace, opposite(stated), settings.peakSettings());
-            if (strongZones(otherWay.peaks()) >= MIN_STRONG_ZONES_TO_TRUST_DETECTION) {
+            if (notGiven ? strongZones(otherWay.peaks()) > 0
+                    : strongZones(otherWay.peaks()) >= MIN_STRONG_ZONES_TO_TRUST_DETECTION) {
                 String note = String.format(Locale.ROOT, "the trace's zones %s its baseline, although the run is "
                                 + "%s: read as %s; check the detection column, or whether the trace was exported "
                                 + "already inverted",
@@ -404,6 +406,15 @@ public final class Identifier {
         return new Detected(run, null, analysis.peaks(), analysis.noiseSd(), window,
                 settings.lookWhereExpected() ? analysis.probe() : null, List.of(), null, SamplingCheck.Span.of(trace),
                 otherWayInWindow(c, trace, analysis.peaks(), analysis.noiseSd()), detectionNote, null);
+    }
+
+    /** A run result's peaks. */
+    private static List<Peak> peaksOf(RunResult r) {
+        List<Peak> out = new ArrayList<>(r.peaks().size());
+        for (PeakResult pr : r.peaks()) {
+            out.add(pr.peak());
+        }
+        return out;
     }
 
     /** The analyte peaks a run's result identifies. */
@@ -732,7 +743,15 @@ public final class Identifier {
             // artefacts beside its zones that the library may half explain, never as well)
             Finished asStated = finishing(d.orReadAs(null), learned);
             Finished otherWay = finishing(d.otherReading(), learned);
-            return identifiedPeaks(otherWay.result()) >= identifiedPeaks(asStated.result()) ? otherWay : asStated;
+            int other = identifiedPeaks(otherWay.result());
+            int stated = identifiedPeaks(asStated.result());
+            if (d.run().conditions().detection() == null) {
+                // no detection given: the reading the library identifies more under, then the one
+                // with more clear zones, then direct
+                return other > stated || (other == stated && strongZones(peaksOf(otherWay.result()))
+                        > strongZones(peaksOf(asStated.result()))) ? otherWay : asStated;
+            }
+            return other >= stated ? otherWay : asStated;
         }
         if (d.beforeLook() == null || d.failure() != null) {
             return finishingOnce(d, learned);
