@@ -348,6 +348,13 @@ public final class Identifier {
                     detectionNote, null);
         }
 
+        /** This run taken as one of another buffer. */
+        Detected inBuffer(String label) {
+            return new Detected(run.withConditions(run.conditions().withBuffer(label)), failure, peaks, noiseSd,
+                    markerWindow, probe, foundWhereExpected, beforeLook, sampling, otherWay, detectionNote,
+                    otherReading);
+        }
+
         /** This reading, with the other one to weigh against it. */
         Detected orReadAs(Detected other) {
             return new Detected(run, failure, peaks, noiseSd, markerWindow, probe, foundWhereExpected, beforeLook,
@@ -737,6 +744,28 @@ public final class Identifier {
     }
 
     private Finished finishing(Detected d, BatchScalePrior.Learned learned) {
+        String label = d.run().conditions().buffer();
+        if (d.failure() == null && (label == null || label.isBlank()) && library.bufferLabels().size() > 1) {
+            // no buffer given and a library of several: the run is matched with each buffer's entries
+            // and taken as the one under which the library identifies most of its peaks (the first
+            // such on a tie), and says so
+            Finished best = null;
+            int bestCount = -1;
+            StringBuilder others = new StringBuilder();
+            for (String b : library.bufferLabels()) {
+                Finished f = finishing(d.inBuffer(b), learned);
+                int n = identifiedPeaks(f.result());
+                others.append(others.length() == 0 ? "" : ", ").append(b).append(": ").append(n);
+                if (n > bestCount) {
+                    best = f;
+                    bestCount = n;
+                }
+            }
+            String note = String.format(Locale.ROOT, "no buffer given: matched with the entries of %s, under which "
+                            + "the library identifies most of the run's peaks (identified per buffer: %s); give "
+                            + "the run's buffer to fix it", best.result().spec().conditions().buffer(), others);
+            return new Finished(best.result().withFirstNote(note), best.settled());
+        }
         if (d.otherReading() != null) {
             // the trace leans the other way from its stated detection: read that way unless the stated
             // reading lets the library identify more peaks (reading a trace the wrong way leaves

@@ -34,6 +34,15 @@ public record RunResult(RunSpec spec, InputException error, String scaleNote, do
         }
     }
 
+    /** The same result with a note put first. */
+    public RunResult withFirstNote(String note) {
+        List<String> more = new java.util.ArrayList<>(notes.size() + 1);
+        more.add(note);
+        more.addAll(notes);
+        return new RunResult(spec, error, scaleNote, eofMobility, scale, peaks, more, noiseSd, runScale,
+                temperatureFactor);
+    }
+
     /** A run without scale correction or temperature conversion. */
     public RunResult(RunSpec spec, InputException error, String scaleNote, double eofMobility, MobilityScale scale,
                      List<PeakResult> peaks, List<String> notes, double noiseSd) {

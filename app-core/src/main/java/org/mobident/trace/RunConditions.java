@@ -66,6 +66,12 @@ public record RunConditions(
         return Double.isNaN(rampS) ? 0.0 : rampS;
     }
 
+    /** The same conditions with another buffer label. */
+    public RunConditions withBuffer(String other) {
+        return new RunConditions(totalLengthCm, detectorLengthCm, voltageKv, rampS, temperatureC, other, markerFromS,
+                markerToS, detection, refMarkerMobility, refMarkerFromS, refMarkerToS);
+    }
+
     /** The same conditions with another detection mode. */
     public RunConditions withDetection(Detection other) {
         return new RunConditions(totalLengthCm, detectorLengthCm, voltageKv, rampS, temperatureC, buffer, markerFromS,

@@ -153,6 +153,40 @@ class IdentifierEndToEndTest {
         assertIdentified(run(CATIONS, c, eof, zones, seed, 0.004), zones);
     }
 
+    /** The anion and cation libraries in one, each entry labelled with its own buffer. */
+    private static Library twoBuffers() {
+        List<LibraryEntry> all = new ArrayList<>();
+        for (LibraryEntry e : ANIONS.entries()) {
+            all.add(new LibraryEntry(e.name(), e.mobility(), e.mobilitySd(), 6, -1, Double.NaN, List.of(), List.of(),
+                    "ANION-7", Double.NaN, Double.NaN, 25.0, "test"));
+        }
+        for (LibraryEntry e : CATIONS.entries()) {
+            all.add(new LibraryEntry(e.name(), e.mobility(), e.mobilitySd(), 6, 1, Double.NaN, List.of(), List.of(),
+                    "CATION-4", Double.NaN, Double.NaN, 25.0, "test"));
+        }
+        return new Library(all, "test", List.of());
+    }
+
+    @Test
+    void aRunWithoutABufferIsMatchedWithTheBufferThatExplainsItAndSaysSo() {
+        SplittableRandom rnd = new SplittableRandom(31);
+        List<Truth> zones = draw(CATIONS, rnd, 0);
+        RunConditions c = new RunConditions(60, 52, 25, 0, 25.0, null, 200, 500, Detection.DIRECT, Double.NaN,
+                Double.NaN, Double.NaN);
+        SimulationSpec.Builder b = SimulationSpec.builder(c).eofMobility(45.0).neutralMarker(1.0)
+                .samplingHz(20).durationS(900).noiseSd(0.004).baseline(0.3).seed(31);
+        for (Truth z : zones) {
+            b.zone(z.name(), z.mobility(), 0.8, 120_000);
+        }
+        Trace t = TraceSimulator.simulate("no-buffer", b.build());
+        RunResult r = new Identifier(twoBuffers(), IdentifySettings.defaults().withThreads(1))
+                .identify(new RunSpec("no-buffer", Path.of("no-buffer.csv"), c, "test", 0), t);
+        assertIdentified(r, zones);
+        assertEquals("CATION-4", r.spec().conditions().buffer());
+        assertTrue(r.notes().get(0).startsWith("no buffer given: matched with the entries of CATION-4"),
+                r.notes().toString());
+    }
+
     @Test
     void markerFoundWithoutWindowByLibraryFit() {
         SplittableRandom rnd = new SplittableRandom(21);
