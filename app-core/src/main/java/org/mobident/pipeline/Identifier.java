@@ -38,6 +38,7 @@ import org.mobident.settings.MatchSettings;
 import org.mobident.settings.PeakSettings;
 import org.mobident.signal.ExpectedZoneProbe;
 import org.mobident.signal.PeakDetector;
+import org.mobident.signal.Selection;
 import org.mobident.signal.TraceAnalysis;
 import org.mobident.trace.Detection;
 import org.mobident.trace.RunConditions;
@@ -78,6 +79,8 @@ public final class Identifier {
     /** Blocks per trace for the medians of {@link #leansOtherWay}, and their least size. */
     static final int LEAN_BLOCKS = 40;
     static final int LEAN_MIN_BLOCK_SAMPLES = 50;
+    /** Samples per block from which its median is taken (a level, not a statistic to report). */
+    static final int LEAN_MEDIAN_SAMPLES = 101;
     /** Pairs of these many of the tallest peaks with every library entry vote for the marker time. */
     static final int MARKER_VOTE_PEAKS = 12;
     /** Votes within this relative distance of a common centre agree (a modelling choice: peak times
@@ -476,7 +479,8 @@ public final class Identifier {
 
     /**
      * A cheap test before the window is analysed the other way: some sample lies at least {@value
-     * #OTHER_WAY_SCREEN_SIGMAS} noise SDs beyond the window's median the other way from the run's
+     * #OTHER_WAY_SCREEN_SIGMAS} noise SDs beyond the window's median (of about a thousand evenly
+     * strided samples) the other way from the run's
      * peaks (up when they are dips). A zone at the quantitation limit stands about 25 noise SDs tall
      * (S/N = 2H/h with h about 5 SDs); a wandering baseline may take some of that, and lets more
      * windows through, which costs time only. True when the noise is not known.
@@ -485,7 +489,13 @@ public final class Identifier {
         if (!(noiseSd > 0) || signal.length == 0) {
             return true;
         }
-        double median = new org.apache.commons.math3.stat.descriptive.rank.Median().evaluate(signal);
+        int stride = Math.max(1, signal.length / (10 * LEAN_MEDIAN_SAMPLES));
+        double[] work = new double[signal.length / stride + 1];
+        int m = 0;
+        for (int i = 0; i < signal.length; i += stride) {
+            work[m++] = signal[i];
+        }
+        double median = Selection.medianInPlace(work, m);
         double reach = 0;
         for (double v : signal) {
             reach = Math.max(reach, dips ? v - median : median - v);
@@ -507,15 +517,20 @@ public final class Identifier {
         if (!(noiseSd > 0) || signal.length == 0) {
             return false;
         }
-        org.apache.commons.math3.stat.descriptive.rank.Median median =
-                new org.apache.commons.math3.stat.descriptive.rank.Median();
         int block = Math.max(LEAN_MIN_BLOCK_SAMPLES, signal.length / LEAN_BLOCKS);
+        // each block's level from at most LEAN_MEDIAN_SAMPLES of its samples, evenly strided
+        int stride = Math.max(1, block / LEAN_MEDIAN_SAMPLES);
+        double[] work = new double[block / stride + 1];
         double limit = LEAN_SIGMAS * noiseSd;
         double up = 0;
         double down = 0;
         for (int from = 0; from < signal.length; from += block) {
             int length = Math.min(block, signal.length - from);
-            double level = median.evaluate(signal, from, length);
+            int m = 0;
+            for (int i = from; i < from + length; i += stride) {
+                work[m++] = signal[i];
+            }
+            double level = Selection.medianInPlace(work, m);
             for (int i = from; i < from + length; i++) {
                 double d = signal[i] - level;
                 if (d > limit) {

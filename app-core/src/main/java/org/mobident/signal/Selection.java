@@ -4,13 +4,13 @@ package org.mobident.signal;
  * Order statistics by selection (Hoare's FIND, Commun. ACM 4 (1961) 321), expected time
  * linear in the number of values, with a median-of-three pivot. No full sort.
  */
-final class Selection {
+public final class Selection {
 
     private Selection() {
     }
 
     /** Median of {@code values} (not modified); for an even count the mean of the two middle values. */
-    static double median(double[] values) {
+    public static double median(double[] values) {
         return medianInPlace(values.clone(), values.length);
     }
 
@@ -20,7 +20,7 @@ final class Selection {
      * @param work  values, reordered in place
      * @param count how many leading entries to use, at least 1
      */
-    static double medianInPlace(double[] work, int count) {
+    public static double medianInPlace(double[] work, int count) {
         if (count < 1) {
             throw new IllegalArgumentException("median of no values");
         }
