@@ -162,13 +162,34 @@ final class GroupNamer {
     /** One-to-one nearest assignment of analytes with a target mobility to free groups. */
     private void nearest(List<StandardAnalyte> analytes, List<Double> target, List<Double> window,
                          List<Integer> sign, NamingBasis basis) {
+        Pairing p = pairing(target, window, sign);
+        for (int i = 0; i < p.partner().length; i++) {
+            if (p.partner()[i] >= 0) {
+                assign(analytes.get(p.order().get(i)), p.free().get(p.partner()[i]), basis);
+            }
+        }
+    }
+
+    /**
+     * The monotone one-to-one pairing of targets (in increasing order) with the free groups (by
+     * mobility) at least Σ(Δμ/w)², |Δμ| ≤ w and signs agreeing.
+     *
+     * @param order   target indices in increasing order of target
+     * @param free    the free groups
+     * @param partner for each position of {@code order}, the index into {@code free}, or −1
+     * @param cost    the cost of each pair, by positions
+     */
+    private record Pairing(List<Integer> order, List<Integer> free, int[] partner, MonotoneMatcher.Cost cost) {
+    }
+
+    private Pairing pairing(List<Double> target, List<Double> window, List<Integer> sign) {
         List<Integer> idx = new ArrayList<>();
-        for (int i = 0; i < analytes.size(); i++) {
+        for (int i = 0; i < target.size(); i++) {
             idx.add(i);
         }
         idx.sort(Comparator.comparingDouble(target::get));
         List<Integer> free = freeGroupsByMobility();
-        int[] partner = MonotoneMatcher.match(idx.size(), free.size(), (i, j) -> {
+        MonotoneMatcher.Cost cost = (i, j) -> {
             int a = idx.get(i);
             double m = groups.get(free.get(j)).mean();
             double d = Math.abs(m - target.get(a));
@@ -177,12 +198,8 @@ final class GroupNamer {
             }
             double z = d / window.get(a);
             return z * z;
-        }, 1.0);
-        for (int i = 0; i < partner.length; i++) {
-            if (partner[i] >= 0) {
-                assign(analytes.get(idx.get(i)), free.get(partner[i]), basis);
-            }
-        }
+        };
+        return new Pairing(idx, free, MonotoneMatcher.match(idx.size(), free.size(), cost, 1.0), cost);
     }
 
     /**
@@ -218,7 +235,7 @@ final class GroupNamer {
         int steps = (int) Math.round((APPROX_SCALE_MAX - APPROX_SCALE_MIN) / APPROX_SCALE_STEP);
         for (int k = 0; k <= steps; k++) {
             double scale = APPROX_SCALE_MIN + k * APPROX_SCALE_STEP;
-            double[] fit = scaledFit(as, scaled(approx, scale), window, sign);
+            double[] fit = scaledFit(scaled(approx, scale), window, sign);
             double prior = (scale - 1) / APPROX_SCALE_SD;
             double cost = fit[1] + prior * prior;
             if (fit[0] > bestNamed || (fit[0] == bestNamed && cost < bestCost)) {
@@ -246,31 +263,14 @@ final class GroupNamer {
     }
 
     /** {analytes named, Σ(Δμ/w)² of the names} of the one-to-one nearest assignment to free groups. */
-    private double[] scaledFit(List<StandardAnalyte> analytes, List<Double> target, List<Double> window,
-                               List<Integer> sign) {
-        List<Integer> idx = new ArrayList<>();
-        for (int i = 0; i < analytes.size(); i++) {
-            idx.add(i);
-        }
-        idx.sort(Comparator.comparingDouble(target::get));
-        List<Integer> free = freeGroupsByMobility();
-        MonotoneMatcher.Cost cost = (i, j) -> {
-            int a = idx.get(i);
-            double m = groups.get(free.get(j)).mean();
-            double d = Math.abs(m - target.get(a));
-            if (d > window.get(a) || !signAgrees(sign.get(a), m)) {
-                return Double.POSITIVE_INFINITY;
-            }
-            double z = d / window.get(a);
-            return z * z;
-        };
-        int[] partner = MonotoneMatcher.match(idx.size(), free.size(), cost, 1.0);
+    private double[] scaledFit(List<Double> target, List<Double> window, List<Integer> sign) {
+        Pairing p = pairing(target, window, sign);
         double named = 0;
         double sum = 0;
-        for (int i = 0; i < partner.length; i++) {
-            if (partner[i] >= 0) {
+        for (int i = 0; i < p.partner().length; i++) {
+            if (p.partner()[i] >= 0) {
                 named++;
-                sum += cost.of(i, partner[i]);
+                sum += p.cost().of(i, p.partner()[i]);
             }
         }
         return new double[] {named, sum};

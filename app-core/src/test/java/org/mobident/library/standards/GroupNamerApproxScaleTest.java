@@ -3,7 +3,8 @@ package org.mobident.library.standards;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import java.util.ArrayList;
+import static org.mobident.library.standards.StandardsRuns.anion;
+import static org.mobident.library.standards.StandardsRuns.groups;
 import java.util.List;
 import java.util.Set;
 import org.junit.jupiter.api.Test;
@@ -18,18 +19,7 @@ class GroupNamerApproxScaleTest {
 
     private static final BuildSettings DEFAULTS = BuildSettings.defaults();
 
-    private static StandardAnalyte anion(String name, double approx) {
-        return new StandardAnalyte(name, 0, -1, approx, 0, 0);
-    }
 
-    /** Groups in order of mean mobility (most negative first), the first to pass the detector last. */
-    private static List<GroupNamer.GroupInfo> groups(double... means) {
-        List<GroupNamer.GroupInfo> out = new ArrayList<>();
-        for (int i = 0; i < means.length; i++) {
-            out.add(new GroupNamer.GroupInfo(means[i], 4, 0.5, means.length - 1 - i));
-        }
-        return out;
-    }
 
     private static final StandardsMix MIX = new StandardsMix("m", List.of(anion("a", -80), anion("b", -76),
             anion("c", -71), anion("d", -56), anion("e", -47)));

@@ -4,6 +4,8 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertNull;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import static org.mobident.library.standards.StandardsRuns.anion;
+import static org.mobident.library.standards.StandardsRuns.groups;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Set;
@@ -16,17 +18,7 @@ class GroupNamerEliminationTest {
 
     private static final BuildSettings DEFAULTS = BuildSettings.defaults();
 
-    private static StandardAnalyte anion(String name, double approx) {
-        return new StandardAnalyte(name, 0, -1, approx, 0, 0);
-    }
 
-    private static List<GroupNamer.GroupInfo> groups(double... means) {
-        List<GroupNamer.GroupInfo> out = new ArrayList<>();
-        for (int i = 0; i < means.length; i++) {
-            out.add(new GroupNamer.GroupInfo(means[i], 4, 0.5, means.length - 1 - i));
-        }
-        return out;
-    }
 
     private static Library reference(String[] names, double[] mobilities) {
         List<LibraryEntry> es = new ArrayList<>();

@@ -100,4 +100,19 @@ final class StandardsRuns {
     static StandardsSheet sheet(String mix, StandardAnalyte... analytes) {
         return new StandardsSheet("standards.csv", List.of(new StandardsMix(mix, List.of(analytes))));
     }
+
+    /** An anion of the standards sheet with an approx_mobility (NaN: none). */
+    static StandardAnalyte anion(String name, double approx) {
+        return new StandardAnalyte(name, 0, -1, approx, 0, 0);
+    }
+
+    /** Groups of the given mean mobilities, in that order, seen in 4 runs at half the largest peak's
+     *  height, the first to pass the detector last. */
+    static List<GroupNamer.GroupInfo> groups(double... means) {
+        List<GroupNamer.GroupInfo> out = new java.util.ArrayList<>();
+        for (int i = 0; i < means.length; i++) {
+            out.add(new GroupNamer.GroupInfo(means[i], 4, 0.5, means.length - 1 - i));
+        }
+        return out;
+    }
 }
