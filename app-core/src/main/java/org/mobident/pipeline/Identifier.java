@@ -447,10 +447,9 @@ public final class Identifier {
 
     /**
      * The zones in the marker window that point the other way from the run's peaks, at S/N
-     * {@value #OTHER_WAY_MARKER_MIN_SN} or more and as wide as a zone there would be (see {@link
-     * #withWeakMarkers}): a neutral marker that absorbs gives a peak where the ions of an indirect
-     * method give dips, and the vacancy of a sample solvent that absorbs less than the buffer a dip in
-     * a direct one. They are candidates for the marker only; none is reported unless chosen as the
+     * {@value #OTHER_WAY_MARKER_MIN_SN} or more: a neutral marker that absorbs gives a peak where the
+     * ions of an indirect method give dips, and the vacancy of a sample solvent that absorbs less than
+     * the buffer a dip in a direct one. They are candidates for the marker only; none is reported unless chosen as the
      * marker. Empty without a window.
      */
     private List<Peak> otherWayInWindow(RunConditions c, Trace trace, List<Peak> peaks, double noiseSd) {
@@ -466,11 +465,12 @@ public final class Identifier {
         if (!reachesOtherWay(window.signals(), c.detectionOrDirect() == Detection.INDIRECT, noiseSd)) {
             return List.of();
         }
-        double widthPerTime = typicalWidthPerTime(peaks);
         PeakSettings search = settings.peakSettings().withMinSignalToNoise(OTHER_WAY_MARKER_MIN_SN);
         List<Peak> out = new ArrayList<>();
         for (Peak p : PeakDetector.analyse(window, opposite(c.detectionOrDirect()), search).peaks()) {
-            if (p.signalToNoise() >= OTHER_WAY_MARKER_MIN_SN && zoneWide(p, widthPerTime)) {
+            // no width test: a marker is narrower than the run's dispersed zones, and at this S/N
+            // noise does not pass; the library's evidence decides
+            if (p.signalToNoise() >= OTHER_WAY_MARKER_MIN_SN) {
                 out.add(p);
             }
         }

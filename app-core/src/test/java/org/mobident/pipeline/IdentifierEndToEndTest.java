@@ -359,6 +359,27 @@ class IdentifierEndToEndTest {
     }
 
     @Test
+    void aSolventDipMarksTheEofInADirectRunOfWiderZones() {
+        // direct detection, cations at 15,000 plates (zones three times as wide per time as the marker
+        // at 150,000), and the EOF marked by a dip (a sample solvent absorbing less than the buffer)
+        List<Truth> zones = draw(CATIONS, new SplittableRandom(86), 0);
+        RunConditions c = conditions(60, 52, 25, 0, Detection.DIRECT, 200, 500);
+        SimulationSpec.Builder b = SimulationSpec.builder(c).eofMobility(45.0).neutralMarker(0.0)
+                .samplingHz(20).durationS(900).noiseSd(0.004).baseline(0.3).seed(86);
+        for (Truth z : zones) {
+            b.zone(z.name(), z.mobility(), 0.8, 15_000);
+        }
+        double markerS = 0.52 * 0.60 / (45.0e-9 * 25_000); // t = Ld·Lt/(μ_EOF·V) (IUPAC)
+        Trace t = withRise(TraceSimulator.simulate("solvent-dip", b.build()), markerS, -0.4);
+        RunResult r = new Identifier(CATIONS, IdentifySettings.defaults().withThreads(1))
+                .identify(new RunSpec("solvent-dip", Path.of("solvent-dip.csv"), c, "test", 0), t);
+        assertEquals(45.0, r.eofMobility(), 0.05, "the EOF mobility used to synthesise; " + r.notes());
+        for (Truth z : zones) {
+            assertTrue(r.peaks().stream().anyMatch(p -> z.name().equals(p.match().assigned())), z.name());
+        }
+    }
+
+    @Test
     void aMarkerPointingTheOtherWayWinsOverATallerForeignDipInTheWindow() {
         // as above, with a weakly charged substance (μ = −2) 2.5 times the ions' height, a dip, in the window
         List<Truth> zones = draw(ANIONS, new SplittableRandom(84), 0);
