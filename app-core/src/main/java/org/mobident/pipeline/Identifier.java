@@ -327,41 +327,55 @@ public final class Identifier {
      * @param noiseSd its baseline noise SD
      * @param otherWay zones in the marker window that point the other way from the run's peaks
      *                 (candidates for the neutral marker only)
-     * @param detectionNote why the trace was read the other way from its stated detection, or null
+     * @param readingNotes how the run was read where that was not as stated: the other way from its
+     *                     stated detection, or matched as a buffer it did not name (first in its notes)
      * @param otherReading the run read the other way from its stated detection, where its trace
      *                     leans that way (the library decides between the two), or null
      */
     record Detected(RunSpec run, RunResult failure, List<Peak> peaks, double noiseSd, Trace markerWindow,
                     ExpectedZoneProbe probe, List<Peak> foundWhereExpected, List<Peak> beforeLook,
-                    SamplingCheck.Span sampling, List<Peak> otherWay, String detectionNote, Detected otherReading) {
+                    SamplingCheck.Span sampling, List<Peak> otherWay, List<String> readingNotes,
+                    Detected otherReading) {
+        Detected {
+            readingNotes = List.copyOf(readingNotes);
+        }
+
         Detected(RunSpec run, RunResult failure, List<Peak> peaks, double noiseSd) {
             this(run, failure, peaks, noiseSd, null, null, List.of(), null, SamplingCheck.Span.UNKNOWN, List.of(),
-                    null, null);
+                    List.of(), null);
         }
 
         /** The same run with the marker searches done: these peaks, no window, probe or candidates kept. */
         Detected settled(List<Peak> withMarker) {
             return new Detected(run, failure, withMarker, noiseSd, null, null, foundWhereExpected, beforeLook,
-                    sampling, List.of(), detectionNote, null);
+                    sampling, List.of(), readingNotes, null);
+        }
+
+        /** The same with one more note on how the run was read. */
+        Detected withReadingNote(String note) {
+            List<String> more = new ArrayList<>(readingNotes);
+            more.add(note);
+            return new Detected(run, failure, peaks, noiseSd, markerWindow, probe, foundWhereExpected, beforeLook,
+                    sampling, otherWay, more, otherReading);
         }
 
         /** The run with the peaks it had before the second look added its zones. */
         Detected withoutLook() {
             return new Detected(run, failure, beforeLook, noiseSd, null, null, List.of(), null, sampling, List.of(),
-                    detectionNote, null);
+                    readingNotes, null);
         }
 
         /** This run taken as one of another buffer. */
         Detected inBuffer(String label) {
             return new Detected(run.withConditions(run.conditions().withBuffer(label)), failure, peaks, noiseSd,
-                    markerWindow, probe, foundWhereExpected, beforeLook, sampling, otherWay, detectionNote,
+                    markerWindow, probe, foundWhereExpected, beforeLook, sampling, otherWay, readingNotes,
                     otherReading);
         }
 
         /** This reading, with the other one to weigh against it. */
         Detected orReadAs(Detected other) {
             return new Detected(run, failure, peaks, noiseSd, markerWindow, probe, foundWhereExpected, beforeLook,
-                    sampling, otherWay, detectionNote, other);
+                    sampling, otherWay, readingNotes, other);
         }
     }
 
@@ -415,7 +429,8 @@ public final class Identifier {
                 : c.hasGeometry() ? trace : null;
         return new Detected(run, null, analysis.peaks(), analysis.noiseSd(), window,
                 settings.lookWhereExpected() ? analysis.probe() : null, List.of(), null, SamplingCheck.Span.of(trace),
-                otherWayInWindow(c, trace, analysis.peaks(), analysis.noiseSd()), detectionNote, null);
+                otherWayInWindow(c, trace, analysis.peaks(), analysis.noiseSd()),
+                detectionNote == null ? List.of() : List.of(detectionNote), null);
     }
 
     /** A run result's peaks. */
@@ -779,7 +794,8 @@ public final class Identifier {
             String note = String.format(Locale.ROOT, "no buffer given: matched with the entries of %s, under which "
                             + "the library identifies most of the run's peaks (identified per buffer: %s); give "
                             + "the run's buffer to fix it", best.result().spec().conditions().buffer(), others);
-            return new Finished(best.result().withFirstNote(note), best.settled());
+            // the note rides on with the run as settled, for the pass under the batch's prior
+            return new Finished(best.result().withFirstNote(note), best.settled().withReadingNote(note));
         }
         if (d.otherReading() != null) {
             // the trace leans the other way from its stated detection: read that way unless the stated
@@ -868,9 +884,7 @@ public final class Identifier {
             for (Peak p : peaks) {
                 rows.add(new PeakResult(p, PeakRole.ANALYTE, Double.NaN, Double.NaN, Double.NaN, PeakMatch.none()));
             }
-            if (d.detectionNote() != null) {
-                notes.add(d.detectionNote());
-            }
+            notes.addAll(d.readingNotes());
             notes.add(choice.note());
             return new Finished(new RunResult(run, null, choice.note(), Double.NaN, null, rows, notes, d.noiseSd(),
                     RunScale.OFF, temperatureFactor), settled);
@@ -917,7 +931,7 @@ public final class Identifier {
                 ExpectedZoneProbe.Outcome look = d.probe().lookFor(peaks, expected);
                 if (!look.added().isEmpty()) {
                     Finished withFound = finishingOnce(new Detected(run, null, look.peaks(), d.noiseSd(), null, null,
-                            look.added(), peaks, d.sampling(), List.of(), d.detectionNote(), null), learned);
+                            look.added(), peaks, d.sampling(), List.of(), d.readingNotes(), null), learned);
                     if (keepsEveryIdentification(rows, withFound.result().peaks())) {
                         return withFound;
                     }
@@ -961,9 +975,7 @@ public final class Identifier {
         if (choice.note() != null && !choice.note().isEmpty()) {
             notes.add(0, choice.note());
         }
-        if (d.detectionNote() != null) {
-            notes.add(0, d.detectionNote());
-        }
+        notes.addAll(0, d.readingNotes());
         return new Finished(new RunResult(run, null, scale.describe(), scale.eofMobility(), scale, rows, notes,
                 d.noiseSd(), runScale, temperatureFactor), settled);
     }

@@ -188,6 +188,34 @@ class IdentifierEndToEndTest {
     }
 
     @Test
+    void aBatchWithoutBuffersCallsAsWithThemAndEveryRunSaysWhichBufferItTook() throws Exception {
+        // a consistency check on the bundled demo runs (two buffers in the library): the batch's second
+        // pass, under the prior learned from its runs, must keep each run's note
+        Path demo = Path.of("..", "demo-data");
+        Library library = org.mobident.library.LibraryCsv.read(demo.resolve("library.csv"));
+        List<RunSpec> withBuffers = org.mobident.trace.io.RunSheetReader.read(demo.resolve("runs.csv"),
+                RunConditions.EMPTY).runs();
+        List<RunSpec> without = new ArrayList<>();
+        for (RunSpec r : withBuffers) {
+            without.add(r.withConditions(r.conditions().withBuffer(null)));
+        }
+        Identifier identifier = new Identifier(library, IdentifySettings.defaults().withThreads(1));
+        List<RunResult> a = identifier.identifyAll(withBuffers);
+        List<RunResult> b = identifier.identifyAll(without);
+        for (int i = 0; i < a.size(); i++) {
+            RunResult x = a.get(i);
+            RunResult y = b.get(i);
+            assertEquals(x.spec().conditions().buffer(), y.spec().conditions().buffer(), x.spec().name());
+            assertTrue(y.notes().get(0).startsWith("no buffer given: matched with the entries of "
+                    + x.spec().conditions().buffer()), y.notes().toString());
+            for (int k = 0; k < x.peaks().size(); k++) {
+                assertEquals(x.peaks().get(k).match().assigned(), y.peaks().get(k).match().assigned(),
+                        x.spec().name() + " peak " + (k + 1));
+            }
+        }
+    }
+
+    @Test
     void markerFoundWithoutWindowByLibraryFit() {
         SplittableRandom rnd = new SplittableRandom(21);
         List<Truth> zones = draw(ANIONS, rnd, 0);
