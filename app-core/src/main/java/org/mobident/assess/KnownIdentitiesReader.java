@@ -46,10 +46,14 @@ public final class KnownIdentitiesReader {
 
     /** The columns of the format, in documentation order. */
     public static final List<String> COLUMNS = List.of(RUN, KIND, ANALYTE, TIME_S, MOBILITY, HEIGHT_SD);
+    /** Free text a lab may keep beside each row (what was spiked, at what concentration); not read. */
+    static final String NOTE = "note";
 
     private static final Pattern DECIMAL = Pattern.compile("[+-]?(\\d+\\.?\\d*|\\.\\d+)([eE][+-]?\\d+)?");
     /** The table as the table reader expects it. */
-    private static final TableSpec SPEC = TableSpec.of("known-identities table", COLUMNS, List.of(RUN))
+    private static final TableSpec SPEC = TableSpec.of("known-identities table",
+                    java.util.stream.Stream.concat(COLUMNS.stream(), java.util.stream.Stream.of(NOTE)).toList(),
+                    List.of(RUN))
             .listingPresentColumns().withSniffedDelimiter();
 
     private KnownIdentitiesReader() {

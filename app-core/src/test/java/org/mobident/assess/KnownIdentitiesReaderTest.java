@@ -85,6 +85,15 @@ class KnownIdentitiesReaderTest {
     }
 
     @Test
+    void aNoteColumnIsAllowedAndNotRead() throws InputException {
+        KnownIdentities k = KnownIdentitiesReader.read("run,analyte,note\ns1,nitrate,spiked at 2 mg/L\n", "known.csv");
+        assertEquals(1, k.rows().size());
+        assertEquals("nitrate", k.rows().get(0).name());
+        InputException e = refused("run,analyte,notes_x\ns1,nitrate,spiked\n");
+        assertEquals("notes_x", e.field());
+    }
+
+    @Test
     void missingRunColumnIsNamed() {
         InputException e = refused("kind,analyte\nanalyte,chloride\n");
         assertEquals("known.csv", e.file());
