@@ -504,13 +504,7 @@ public final class Identifier {
         if (!(noiseSd > 0) || signal.length == 0) {
             return true;
         }
-        int stride = Math.max(1, signal.length / (10 * LEAN_MEDIAN_SAMPLES));
-        double[] work = new double[signal.length / stride + 1];
-        int m = 0;
-        for (int i = 0; i < signal.length; i += stride) {
-            work[m++] = signal[i];
-        }
-        double median = Selection.medianInPlace(work, m);
+        double median = Selection.stridedMedian(signal, 0, signal.length, 10 * LEAN_MEDIAN_SAMPLES);
         double reach = 0;
         for (double v : signal) {
             reach = Math.max(reach, dips ? v - median : median - v);
@@ -533,19 +527,13 @@ public final class Identifier {
             return false;
         }
         int block = Math.max(LEAN_MIN_BLOCK_SAMPLES, signal.length / LEAN_BLOCKS);
-        // each block's level from at most LEAN_MEDIAN_SAMPLES of its samples, evenly strided
-        int stride = Math.max(1, block / LEAN_MEDIAN_SAMPLES);
-        double[] work = new double[block / stride + 1];
         double limit = LEAN_SIGMAS * noiseSd;
         double up = 0;
         double down = 0;
         for (int from = 0; from < signal.length; from += block) {
             int length = Math.min(block, signal.length - from);
-            int m = 0;
-            for (int i = from; i < from + length; i += stride) {
-                work[m++] = signal[i];
-            }
-            double level = Selection.medianInPlace(work, m);
+            // the block's level from about LEAN_MEDIAN_SAMPLES of its samples, evenly strided
+            double level = Selection.stridedMedian(signal, from, length, LEAN_MEDIAN_SAMPLES);
             for (int i = from; i < from + length; i++) {
                 double d = signal[i] - level;
                 if (d > limit) {

@@ -15,6 +15,20 @@ public final class Selection {
     }
 
     /**
+     * Median of about {@code samples} evenly strided values of {@code values[from, from + length)}
+     * (all of them when there are fewer): a level, read cheaply off a long stretch (not modified).
+     */
+    public static double stridedMedian(double[] values, int from, int length, int samples) {
+        int stride = Math.max(1, length / Math.max(1, samples));
+        double[] work = new double[(length + stride - 1) / stride];
+        int m = 0;
+        for (int i = from; i < from + length; i += stride) {
+            work[m++] = values[i];
+        }
+        return medianInPlace(work, m);
+    }
+
+    /**
      * Median of the first {@code count} entries of {@code work}, which is reordered.
      *
      * @param work  values, reordered in place

@@ -45,4 +45,17 @@ class SelectionTest {
         assertEquals(7.0, Selection.median(new double[] {7}));
         assertThrows(IllegalArgumentException.class, () -> Selection.median(new double[0]));
     }
+
+    @Test
+    void stridedMedianTakesEveryKthValueOfItsStretch() {
+        // 0..99 in a stretch from 10 of length 100: every 10th value (10, 20, ..., 100), median 55;
+        // with more samples asked than values, the median of all of them, 59.5
+        double[] v = new double[120];
+        for (int i = 0; i < v.length; i++) {
+            v[i] = i;
+        }
+        assertEquals(55.0, Selection.stridedMedian(v, 10, 100, 10));
+        assertEquals(59.5, Selection.stridedMedian(v, 10, 100, 1000));
+        assertEquals(5.0, v[5], "the values are not moved");
+    }
 }
