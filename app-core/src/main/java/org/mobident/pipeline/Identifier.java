@@ -39,6 +39,7 @@ import org.mobident.settings.PeakSettings;
 import org.mobident.signal.ExpectedZoneProbe;
 import org.mobident.signal.PeakDetector;
 import org.mobident.signal.Selection;
+import org.mobident.signal.FlatTop;
 import org.mobident.signal.TraceAnalysis;
 import org.mobident.trace.Detection;
 import org.mobident.trace.RunConditions;
@@ -427,10 +428,29 @@ public final class Identifier {
         RunConditions c = run.conditions();
         Trace window = c.hasMarkerWindow() ? markerWindow(c, trace, analysis.peaks())
                 : c.hasGeometry() ? trace : null;
+        List<String> notes = new ArrayList<>(2);
+        if (detectionNote != null) {
+            notes.add(detectionNote);
+        }
+        if (!analysis.flatTops().isEmpty()) {
+            notes.add(flatTopNote(analysis.flatTops()));
+        }
         return new Detected(run, null, analysis.peaks(), analysis.noiseSd(), window,
                 settings.lookWhereExpected() ? analysis.probe() : null, List.of(), null, SamplingCheck.Span.of(trace),
-                otherWayInWindow(c, trace, analysis.peaks(), analysis.noiseSd()),
-                detectionNote == null ? List.of() : List.of(detectionNote), null);
+                otherWayInWindow(c, trace, analysis.peaks(), analysis.noiseSd()), notes, null);
+    }
+
+    /** The run note on zone tops the detector cut flat. */
+    static String flatTopNote(List<FlatTop> tops) {
+        StringBuilder at = new StringBuilder();
+        for (FlatTop top : tops) {
+            at.append(at.length() == 0 ? "" : ", ").append(String.format(Locale.ROOT, "%.1f-%.1f s",
+                    top.fromS(), top.toS()));
+        }
+        return String.format(Locale.ROOT, "the detector saturated (a flat top at %s): %s rebuilt from the "
+                        + "flanks, so height and area there are estimates and the centre carries the fit's "
+                        + "uncertainty; dilute or inject less to quantify",
+                at, tops.size() == 1 ? "that zone's top was" : "those zones' tops were");
     }
 
     /** A run result's peaks. */

@@ -157,6 +157,7 @@ public final class PeakDetector {
             double sigma = flooredNoise(y);
             return new TraceAnalysis(List.of(), sigma, NoiseEstimator.expectedNormalRange(2) * sigma);
         }
+        List<FlatTop> flatTops = FlatTops.repair(t, y);
         List<int[]> spikes = new ArrayList<>();
         SpikeFilter.despike(t, y, spikes);
         double floor = noiseFloor(y);
@@ -264,7 +265,14 @@ public final class PeakDetector {
                 double overlap = overlapShiftS(reported, k);
                 apexSd = Math.sqrt(apexSd * apexSd + overlap * overlap);
             }
-            peaks.add(new Peak(nearestIndex(t, apexTime), apexTime, apexSd, m.centreTimeS, m.centreTimeSdS,
+            double centreSd = m.centreTimeSdS;
+            double cut = flatTopCentreSd(flatTops, m.startTimeS, m.endTimeS);
+            if (cut > 0) {
+                // a top repaired from its flanks: its centre is as sure as the flank fit, no surer
+                apexSd = Math.hypot(apexSd, cut);
+                centreSd = Math.hypot(centreSd, cut);
+            }
+            peaks.add(new Peak(nearestIndex(t, apexTime), apexTime, apexSd, m.centreTimeS, centreSd,
                     m.startTimeS, m.endTimeS, m.height, m.area, correctedArea, m.widthHalfS,
                     plates, resolution, m.signalToNoise, dip, m.centreShapeSdS));
         }
@@ -272,7 +280,17 @@ public final class PeakDetector {
         ExpectedZoneProbe probe = new ExpectedZoneProbe(t, raw, concavity, concavitySd, localNoise, correlation,
                 sampling, SignalLimits.FIT_MIN_SIGMA_FACTOR * typicalSigma,
                 SignalLimits.FIT_MAX_SIGMA_FACTOR * typicalSigma, rule[0], rule[1], dip);
-        return new TraceAnalysis(peaks, sigma, peakToPeak, probe);
+        return new TraceAnalysis(peaks, sigma, peakToPeak, probe, flatTops);
+    }
+
+    /** The fit uncertainty of a repaired flat top whose centre lies in [from, to], s (0 when none does). */
+    private static double flatTopCentreSd(List<FlatTop> flatTops, double fromS, double toS) {
+        for (FlatTop top : flatTops) {
+            if (top.centreS() >= fromS && top.centreS() <= toS) {
+                return top.centreSdS();
+            }
+        }
+        return 0.0;
     }
 
     /**

@@ -333,6 +333,38 @@ final class SignalLimits {
     /** Running moments are recomputed from scratch this often, to bound rounding drift. */
     static final int SMOOTHING_MOMENTS_REFRESH = 2048;
 
+    /** A saturated top: at least this many consecutive samples at exactly the trace's largest value
+     *  (with noise of even one converter step, three equal samples at a true apex are rare; a
+     *  modelling choice). */
+    static final int FLAT_TOP_MIN_SAMPLES = 3;
+
+    /** A flat stretch longer than the trace's length over this divisor is a dead or idle signal, not
+     *  a cut top. */
+    static final int FLAT_TOP_MAX_SHARE_DIVISOR = 20;
+
+    /** The cut level must stand this many noise SDs above the trace's median to be a zone's top. */
+    static final double FLAT_TOP_MIN_RISE_SIGMAS = 20.0;
+
+    /** Samples fitted on each side of a flat top: this many plateau lengths, at least the minimum. */
+    static final double FLAT_TOP_FLANK_IN_PLATEAUS = 1.5;
+    static final int FLAT_TOP_MIN_FLANK_SAMPLES = 4;
+
+    /** A flank ends where the signal climbs this many noise SDs above its lowest value so far (the
+     *  next zone begins there; a modelling choice). */
+    static final double FLAT_TOP_FLANK_RISE_SIGMAS = 4.0;
+
+    /** The flank fit's top must pass the cut by this many noise SDs, or this fraction of the cut's
+     *  height, whichever is larger (modelling choices, checked on clipped simulated zones). */
+    static final double FLAT_TOP_MIN_EXCESS_SIGMAS = 3.0;
+    static final double FLAT_TOP_MIN_EXCESS_FRACTION = 0.02;
+
+    /** A flank fit whose height is more than this many times the cut's height extrapolates too far
+     *  to be used. */
+    static final double FLAT_TOP_MAX_RISE = 20.0;
+
+    /** Evaluation and iteration cap of the flank fit. */
+    static final int FLAT_TOP_MAX_EVALUATIONS = 200;
+
     private SignalLimits() {
     }
 }

@@ -14,14 +14,18 @@ import org.mobident.result.Peak;
  *                 noise where it sits and its own width
  * @param probe    a second look at the trace at times where zones are expected, or null (it
  *                 holds the corrected trace: drop the analysis once the look is done)
+ * @param flatTops zone tops the detector cut flat (saturation), repaired from their flanks before
+ *                 detection; empty for most runs
  */
-public record TraceAnalysis(List<Peak> peaks, double noiseSd, double noisePeakToPeak, ExpectedZoneProbe probe) {
+public record TraceAnalysis(List<Peak> peaks, double noiseSd, double noisePeakToPeak, ExpectedZoneProbe probe,
+                            List<FlatTop> flatTops) {
     public TraceAnalysis {
         peaks = List.copyOf(peaks);
+        flatTops = List.copyOf(flatTops);
     }
 
-    /** An analysis that cannot look again (no probe). */
+    /** An analysis that cannot look again (no probe) and found no cut tops. */
     public TraceAnalysis(List<Peak> peaks, double noiseSd, double noisePeakToPeak) {
-        this(peaks, noiseSd, noisePeakToPeak, null);
+        this(peaks, noiseSd, noisePeakToPeak, null, List.of());
     }
 }

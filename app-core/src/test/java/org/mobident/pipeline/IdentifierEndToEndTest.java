@@ -153,6 +153,41 @@ class IdentifierEndToEndTest {
         assertIdentified(run(CATIONS, c, eof, zones, seed, 0.004), zones);
     }
 
+    @Test
+    void aRunWhoseDetectorSaturatedIsNamedAsIfItHadNotAndSaysSo() {
+        // the same cation run read whole and read by a detector that cuts every value above a level
+        // half-way up the tallest zones: the same names, the mobilities within their uncertainty of
+        // the whole run's, and a note on the flat tops
+        SplittableRandom rnd = new SplittableRandom(41);
+        double eof = 45.0;
+        List<Truth> zones = draw(CATIONS, rnd, 0);
+        RunConditions c = conditions(60, 52, 25, 0, Detection.DIRECT, 200, 500);
+        SimulationSpec.Builder b = SimulationSpec.builder(c).eofMobility(eof).neutralMarker(1.0)
+                .samplingHz(20).durationS(900).noiseSd(0.004).baseline(0.3).seed(41);
+        for (Truth z : zones) {
+            b.zone(z.name(), z.mobility(), 0.8, 120_000);
+        }
+        Trace whole = TraceSimulator.simulate("whole", b.build());
+        double[] y = whole.signals();
+        double level = 0.3 + 0.45;
+        int cut = 0;
+        for (int i = 0; i < y.length; i++) {
+            if (y[i] > level) {
+                y[i] = level;
+                cut++;
+            }
+        }
+        assertTrue(cut > 20, "the drawn run must be cut: " + cut);
+        Trace saturated = new Trace("cut", "cut.csv", whole.timesS(), y);
+        Identifier identifier = new Identifier(CATIONS, IdentifySettings.defaults().withThreads(1));
+        RunResult a = identifier.identify(new RunSpec("whole", Path.of("whole.csv"), c, "test", 0), whole);
+        RunResult r = identifier.identify(new RunSpec("cut", Path.of("cut.csv"), c, "test", 0), saturated);
+        assertIdentified(a, zones);
+        assertIdentified(r, zones);
+        assertTrue(r.notes().stream().anyMatch(n -> n.startsWith("the detector saturated")), r.notes().toString());
+        assertTrue(a.notes().stream().noneMatch(n -> n.contains("saturated")), a.notes().toString());
+    }
+
     /** The anion and cation libraries in one, each entry labelled with its own buffer. */
     private static Library twoBuffers() {
         List<LibraryEntry> all = new ArrayList<>();
