@@ -428,7 +428,10 @@ public final class Identifier {
         RunConditions c = run.conditions();
         Trace window = c.hasMarkerWindow() ? markerWindow(c, trace, analysis.peaks())
                 : c.hasGeometry() ? trace : null;
-        List<String> notes = new ArrayList<>(2);
+        List<String> notes = new ArrayList<>(3);
+        if (!trace.readingNote().isEmpty()) {
+            notes.add(trace.readingNote());
+        }
         if (detectionNote != null) {
             notes.add(detectionNote);
         }

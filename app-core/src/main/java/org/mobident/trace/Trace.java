@@ -13,6 +13,7 @@ public final class Trace {
     private final String sourceFile;
     private final double[] timeS;
     private final double[] signal;
+    private final String readingNote;
 
     /**
      * @param name       run name (trace file name without extension)
@@ -21,11 +22,12 @@ public final class Trace {
      * @param signal     finite signal values, same length (copied, not modified)
      */
     public Trace(String name, String sourceFile, double[] timeS, double[] signal) {
-        this(name, sourceFile, timeS, signal, true);
+        this(name, sourceFile, timeS, signal, true, "");
     }
 
-    private Trace(String name, String sourceFile, double[] timeS, double[] signal, boolean copy) {
+    private Trace(String name, String sourceFile, double[] timeS, double[] signal, boolean copy, String readingNote) {
         this.name = Objects.requireNonNull(name, "name");
+        this.readingNote = Objects.requireNonNull(readingNote, "readingNote");
         this.sourceFile = Objects.requireNonNull(sourceFile, "sourceFile");
         if (timeS.length != signal.length) {
             throw new IllegalArgumentException("time and signal differ in length: "
@@ -60,7 +62,20 @@ public final class Trace {
      * @param signal     finite signal values, same length (taken over, not copied)
      */
     public static Trace adopting(String name, String sourceFile, double[] timeS, double[] signal) {
-        return new Trace(name, sourceFile, timeS, signal, false);
+        return new Trace(name, sourceFile, timeS, signal, false, "");
+    }
+
+    /**
+     * How the file was read where that departs from what it says (e.g. times rebuilt as an even grid
+     * because they were written with too few decimals); empty when it was read as written.
+     */
+    public String readingNote() {
+        return readingNote;
+    }
+
+    /** The same trace with a note on how it was read (see {@link #readingNote()}). */
+    public Trace withReadingNote(String note) {
+        return new Trace(name, sourceFile, timeS, signal, false, note);
     }
 
     public String name() {
@@ -112,12 +127,12 @@ public final class Trace {
     /** The points [fromIndex, toIndex) as a trace of their own (same name and source), copied once. */
     public Trace slice(int fromIndex, int toIndex) {
         return new Trace(name, sourceFile, Arrays.copyOfRange(timeS, fromIndex, toIndex),
-                Arrays.copyOfRange(signal, fromIndex, toIndex), false);
+                Arrays.copyOfRange(signal, fromIndex, toIndex), false, readingNote);
     }
 
     /** A new trace with the same times and source but another signal. */
     public Trace withSignal(double[] newSignal) {
-        return new Trace(name, sourceFile, timeS, newSignal);
+        return new Trace(name, sourceFile, timeS, newSignal.clone(), false, readingNote);
     }
 
     @Override

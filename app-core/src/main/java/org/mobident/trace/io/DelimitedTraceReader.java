@@ -761,6 +761,7 @@ public final class DelimitedTraceReader {
             int dataStart = pos;
             double previousRaw = Double.NaN;
             long previousLine = 0;
+            InputException firstRepeat = null;
             while (true) {
                 int plain = plainRow(timeIndex, signalIndex, decimalComma);
                 if (plain == END_OF_BYTES) {
@@ -794,9 +795,14 @@ public final class DelimitedTraceReader {
                     String hint = repeats && count > 1
                             ? "; if the time is written with too few decimals for the sampling rate, export more"
                             : "";
-                    throw new InputException(file, line, timeName, "time " + quote(timeIndex) + " "
+                    InputException e = new InputException(file, line, timeName, "time " + quote(timeIndex) + " "
                             + (repeats ? "repeats" : "is before") + " the previous time " + shortNumber(previousRaw)
                             + " (line " + previousLine + "); times must strictly increase" + hint);
+                    if (!(repeats && count > 1 && tS == times[count - 1])) {
+                        throw e;
+                    }
+                    // kept for now: an even grid may explain every repeat (checked once all rows are read)
+                    firstRepeat = firstRepeat == null ? e : firstRepeat;
                 }
                 if (count == ROWS_BEFORE_ESTIMATE && pos < n) {
                     double bytesPerRow = (double) (pos - dataStart) / (count + 1); // this row included
@@ -826,18 +832,28 @@ public final class DelimitedTraceReader {
                 throw new InputException(file, previousLine, null,
                         "the file has a single data point; a trace needs at least two");
             }
+            if (count < times.length) {
+                times = Arrays.copyOf(times, count);
+                signal = Arrays.copyOf(signal, count);
+            }
+            String note = "";
+            if (firstRepeat != null) {
+                EvenGrid grid = EvenGrid.under(times);
+                if (grid == null) {
+                    throw firstRepeat;
+                }
+                times = grid.timesS();
+                note = grid.describe();
+            }
             if (unitAssumed && times[count - 1] <= UNITLESS_MINUTES_LIMIT) {
                 throw new InputException(file, headerLine, timeName, "the time column states no unit and ends at "
                         + shortNumber(times[count - 1]) + ", which looks like minutes rather than seconds; "
                         + "name the unit in the header (e.g. time_min or time_s) or give it as an option "
                         + "(--time-unit min or s)");
             }
-            if (count < times.length) {
-                times = Arrays.copyOf(times, count);
-                signal = Arrays.copyOf(signal, count);
-            }
             // the arrays are ours alone: hand them over rather than have the trace copy them again
-            return Trace.adopting(traceName, file, times, signal);
+            Trace trace = Trace.adopting(traceName, file, times, signal);
+            return note.isEmpty() ? trace : trace.withReadingNote(note);
         }
 
         // ---- header ----
