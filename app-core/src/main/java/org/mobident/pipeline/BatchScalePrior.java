@@ -4,6 +4,8 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 import java.util.Optional;
+import org.apache.commons.math3.distribution.NormalDistribution;
+import org.apache.commons.math3.distribution.TDistribution;
 import org.mobident.result.RunResult;
 import org.mobident.result.RunScale;
 import org.mobident.settings.ScalePrior;
@@ -18,7 +20,9 @@ import org.mobident.settings.ScalePrior;
  * 177): with weights w_r = 1/s_r², the weighted mean m and Q = Σ w_r (a_r − m)²,
  * τ² = max(0, (Q − (k − 1)) / (Σw − Σw²/Σw)). The prior for every run of the buffer is then
  * centred on the random-effects mean (weights 1/(s_r² + τ²)), with a standard deviation of
- * √(τ² + SE²) (SE the standard error of that mean), but never below {@link #MIN_FACTOR_SD} and
+ * √(τ² + SE²) (SE the standard error of that mean), widened for a new run as the prediction
+ * interval of Higgins et al. (2009) widens it ({@link #predictionWidening}: a spread learned from five
+ * runs is itself uncertain, and a run a kelvin off must not be pulled to the others), but never below {@link #MIN_FACTOR_SD} and
  * {@link #MIN_OFFSET_SD}. The spread of b never exceeds the settings' own prior; that of a may,
  * up to {@value #MAX_FACTOR_SD_SHARE_OF_BOUND} of the plausible bound on |a − 1| (so the bound
  * stays two SDs out): runs whose capillaries scatter by ±2.5 K (±6 % on every mobility) must not
@@ -73,9 +77,26 @@ final class BatchScalePrior {
         }
         double[] fa = randomEffects(a);
         double[] fb = randomEffects(b);
-        double sdA = learnedFactorSd(fa[1], base);
-        double sdB = Math.min(base.offsetSd(), Math.max(MIN_OFFSET_SD, fb[1]));
+        double widen = predictionWidening(a.size());
+        double sdA = learnedFactorSd(widen * fa[1], base);
+        double sdB = Math.min(base.offsetSd(), Math.max(MIN_OFFSET_SD, widen * fb[1]));
         return Optional.of(new Learned(base.centredOn(fa[0], sdA, fb[0], sdB), a.size()));
+    }
+
+    /**
+     * The factor that widens √(τ² + SE²) into the spread of a new run's value learned from k runs:
+     * the random-effects prediction interval of Higgins, Thompson &amp; Spiegelhalter (J. R. Stat. Soc. A
+     * 172 (2009) 137) is m ± t(0.975, k − 2)·√(τ² + SE²), as τ² itself comes from few runs; a normal
+     * prior of the same 95 % width has the SD times t(0.975, k − 2)/z(0.975) (1.62 for five runs, 1.03
+     * for fifty).
+     */
+    static double predictionWidening(int runs) {
+        if (runs < 3) {
+            throw new IllegalArgumentException("a prediction needs at least three runs, got " + runs);
+        }
+        double t = new TDistribution(null, runs - 2).inverseCumulativeProbability(0.975);
+        double z = new NormalDistribution(null, 0, 1).inverseCumulativeProbability(0.975);
+        return t / z;
     }
 
     /** The prior's SD of a from the batch's spread: at least {@link #MIN_FACTOR_SD}, at most the larger

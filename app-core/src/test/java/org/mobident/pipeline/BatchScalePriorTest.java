@@ -2,9 +2,15 @@ package org.mobident.pipeline;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 
+import java.nio.file.Path;
+import java.util.ArrayList;
 import java.util.List;
 import org.junit.jupiter.api.Test;
+import org.mobident.result.RunResult;
+import org.mobident.result.RunScale;
 import org.mobident.settings.ScalePrior;
+import org.mobident.trace.RunConditions;
+import org.mobident.trace.RunSpec;
 
 /** The batch-learned scale prior: the DerSimonian–Laird random-effects estimate, worked by hand. */
 class BatchScalePriorTest {
@@ -46,5 +52,24 @@ class BatchScalePriorTest {
         // a settings prior wider than half its bound is never narrowed from above
         ScalePrior wide = new ScalePrior(1.0, 0.0, 0.04, 0.5, 0.06, 3.0);
         assertEquals(0.04, BatchScalePrior.learnedFactorSd(0.05, wide), 1e-15);
+    }
+
+    @Test
+    void aNewRunIsPredictedWithStudentsTForTheRunsLearnedFrom() {
+        // Student t table, two-sided 95 %: t(3) = 3.182, t(48) = 2.011; z = 1.960 (any statistics
+        // handbook, e.g. Fisher & Yates, Statistical Tables, table III; from memory)
+        assertEquals(3.182 / 1.960, BatchScalePrior.predictionWidening(5), 0.001);
+        assertEquals(2.011 / 1.960, BatchScalePrior.predictionWidening(50), 0.001);
+        // the five runs of the hand-worked example: the spread √2e-4 widened by t(3)/z
+        List<RunResult> runs = new ArrayList<>();
+        double[] factors = {1.00, 1.02, 0.98, 1.01, 0.99};
+        for (int k = 0; k < factors.length; k++) {
+            RunSpec spec = new RunSpec("r" + k, Path.of("r" + k + ".csv"), RunConditions.EMPTY, "runs.csv", k + 2);
+            RunScale scale = new RunScale(RunScale.Status.FITTED, factors[k], 0.01, 0.0, 0.2, 0.0, 4);
+            runs.add(new RunResult(spec, null, "", 40.0, null, List.of(), List.of(), 0.01, scale, 1.0));
+        }
+        ScalePrior learned = BatchScalePrior.learn(runs, ScalePrior.DEFAULT).orElseThrow().prior();
+        assertEquals(1.00, learned.factorCentre(), 1e-12);
+        assertEquals(Math.sqrt(2e-4) * 3.182 / 1.960, learned.factorSd(), 2e-5);
     }
 }
