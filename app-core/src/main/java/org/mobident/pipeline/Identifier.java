@@ -36,6 +36,7 @@ import org.mobident.result.RunScale;
 import org.mobident.settings.IdentifySettings;
 import org.mobident.settings.MatchSettings;
 import org.mobident.settings.PeakSettings;
+import org.mobident.settings.ScalePrior;
 import org.mobident.signal.ExpectedZoneProbe;
 import org.mobident.signal.PeakDetector;
 import org.mobident.signal.Selection;
@@ -207,14 +208,78 @@ public final class Identifier {
             }
         }
         progress.passStarted(2, again.size());
-        List<RunResult> second = parallel(again, i -> told(listener, i, counted(progress, 2, finish(detected.get(i),
-                        learned.get(bufferKey(detected.get(i).run().conditions().buffer()))))),
+        List<RunResult> second = parallel(again, i -> {
+                    BatchScalePrior.Learned prior = learned.get(bufferKey(detected.get(i).run().conditions().buffer()));
+                    return told(listener, i, counted(progress, 2, secondPass(done.get(i), detected.get(i), prior)));
+                },
                 (i, e) -> first.get(i));
         List<RunResult> out = new ArrayList<>(first);
         for (int k = 0; k < again.size(); k++) {
             out.set(again.get(k), second.get(k));
         }
         return out;
+    }
+
+    /**
+     * The run matched again under the batch's prior; or, when its own scale factor lies far outside
+     * the batch's and its peaks say so, under the batch's prior with the settings' spread of a.
+     *
+     * <p>A temperature, voltage or length misstated for one run moves its scale factor a away from the
+     * batch's, while its offset b still behaves like the others'. When the first pass put a more than
+     * {@value #OUTSIDE_BATCH_SDS} combined SDs from the batch's centre, the run is matched a third time
+     * with the batch's prior widened on a alone; the evidences of the two matches (same peaks and
+     * markers) then weigh "a run like the others" against "a run whose factor is its own", the latter
+     * held to {@link #BATCH_OUTLIER_SHARE} of runs beforehand. A run a kelvin off in a batch of runs
+     * that agree closely is thus read with its own factor instead of being pulled to the batch's (which
+     * renamed its peaks), and says so; a run that merely reads its pattern shifted by one entry, with
+     * an offset the batch does not allow, stays under the batch's prior.
+     */
+    private RunResult secondPass(Finished own, Detected d, BatchScalePrior.Learned learned) {
+        Finished batch = finishing(d, learned);
+        ScalePrior prior = learned.prior();
+        RunScale first = own.result().runScale();
+        double wide = settings.matchSettings().scalePrior().factorSd();
+        if (!first.fitted() || !(wide > prior.factorSd()) || !(Math.abs(first.factor() - prior.factorCentre())
+                > OUTSIDE_BATCH_SDS * Math.hypot(prior.factorSd(), first.factorSd()))) {
+            return batch.result();
+        }
+        BatchScalePrior.Learned ownFactor = new BatchScalePrior.Learned(prior.centredOn(prior.factorCentre(), wide,
+                prior.offsetCentre(), prior.offsetSd()), learned.runs());
+        Finished alone = finishing(d, ownFactor);
+        double threshold = Math.log((1 - BATCH_OUTLIER_SHARE) / BATCH_OUTLIER_SHARE);
+        if (!Double.isFinite(alone.logEvidence()) || !Double.isFinite(batch.logEvidence())
+                || !sameReading(alone.result(), batch.result())
+                || !(alone.logEvidence() - batch.logEvidence() > threshold)) {
+            return batch.result();
+        }
+        RunScale s = alone.result().runScale();
+        return alone.result().withFirstNote(String.format(Locale.ROOT, "the run's scale factor (a = %.4f ± %.4f) "
+                        + "lies outside its batch's (a = %.4f ± %.4f): read with a factor of its own (prior SD %.3f) "
+                        + "and the batch's offset; check the temperature, voltage and lengths stated for it",
+                s.factor(), s.factorSd(), prior.factorCentre(), prior.factorSd(), wide));
+    }
+
+    /** How far, in combined SDs, a run's first-pass factor must lie from its batch's to be looked at again. */
+    static final double OUTSIDE_BATCH_SDS = 2.0;
+
+    /**
+     * Share of a batch's runs whose scale factor is held beforehand to depart from the others' (a
+     * modelling choice: a temperature, voltage or length misstated on about one run in ten).
+     */
+    static final double BATCH_OUTLIER_SHARE = 0.1;
+
+    /** True when two results of one run hold the same peaks in the same roles (the same markers). */
+    private static boolean sameReading(RunResult a, RunResult b) {
+        if (a.peaks().size() != b.peaks().size()) {
+            return false;
+        }
+        for (int k = 0; k < a.peaks().size(); k++) {
+            if (!a.peaks().get(k).peak().equals(b.peaks().get(k).peak())
+                    || a.peaks().get(k).role() != b.peaks().get(k).role()) {
+                return false;
+            }
+        }
+        return true;
     }
 
     /**
@@ -780,8 +845,15 @@ public final class Identifier {
         return finishing(d, learned).result();
     }
 
-    /** A finished run with the run as detected after the weak-marker search (for a second pass). */
-    private record Finished(RunResult result, Detected settled) {
+    /**
+     * A finished run with the run as detected after the weak-marker search (for a second pass), and
+     * the log evidence of its peaks under the library and the scale prior it was matched with
+     * ({@link RunMatch#logEvidence()}; NaN when nothing was matched).
+     */
+    private record Finished(RunResult result, Detected settled, double logEvidence) {
+        Finished(RunResult result, Detected settled) {
+            this(result, settled, Double.NaN);
+        }
     }
 
     private Finished finishing(Detected d, BatchScalePrior.Learned learned) {
@@ -806,7 +878,8 @@ public final class Identifier {
                             + "the library identifies most of the run's peaks (identified per buffer: %s); give "
                             + "the run's buffer to fix it", best.result().spec().conditions().buffer(), others);
             // the note rides on with the run as settled, for the pass under the batch's prior
-            return new Finished(best.result().withFirstNote(note), best.settled().withReadingNote(note));
+            return new Finished(best.result().withFirstNote(note), best.settled().withReadingNote(note),
+                    best.logEvidence());
         }
         if (d.otherReading() != null) {
             // the trace leans the other way from its stated detection: read that way unless the stated
@@ -988,7 +1061,7 @@ public final class Identifier {
         }
         notes.addAll(0, d.readingNotes());
         return new Finished(new RunResult(run, null, scale.describe(), scale.eofMobility(), scale, rows, notes,
-                d.noiseSd(), runScale, temperatureFactor), settled);
+                d.noiseSd(), runScale, temperatureFactor), settled, match == null ? Double.NaN : match.logEvidence());
     }
 
     /**

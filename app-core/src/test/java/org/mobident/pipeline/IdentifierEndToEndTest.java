@@ -188,6 +188,42 @@ class IdentifierEndToEndTest {
         assertTrue(a.notes().stream().noneMatch(n -> n.contains("saturated")), a.notes().toString());
     }
 
+    @Test
+    void aRunWhoseTemperatureIsMistypedInABatchThatAgreesIsReadWithItsOwnScale(@org.junit.jupiter.api.io.TempDir
+                                                                                 Path dir) throws Exception {
+        // twenty runs of one method that agree closely; the sheet states 26 °C for one that ran at 25
+        // like the others: a 1 K error is 2.3 % on every mobility (the viscosity of water, IAPWS
+        // 2008), about as far as neighbouring anions lie apart
+        Library library = org.mobident.library.LibraryCsv.read(Path.of("..", "demo-data", "library.csv"));
+        Path sheet = org.mobident.simulate.ArchiveGenerator.write(library, 20, 14_000, 5, dir, false);
+        List<String> lines = java.nio.file.Files.readAllLines(sheet);
+        String[] row = lines.get(7).split(",", -1);
+        assertEquals("25", row[5], lines.get(0));
+        row[5] = "26";
+        lines.set(7, String.join(",", row));
+        Path mistyped = dir.resolve("mistyped.csv");
+        java.nio.file.Files.write(mistyped, lines);
+        Identifier identifier = new Identifier(library, IdentifySettings.defaults().withThreads(1));
+        List<RunResult> right = identifier.identifyAll(
+                org.mobident.trace.io.RunSheetReader.read(sheet, RunConditions.EMPTY).runs());
+        List<RunResult> typo = identifier.identifyAll(
+                org.mobident.trace.io.RunSheetReader.read(mistyped, RunConditions.EMPTY).runs());
+        for (int r = 0; r < right.size(); r++) {
+            List<PeakResult> a = right.get(r).peaks();
+            List<PeakResult> b = typo.get(r).peaks();
+            assertEquals(a.size(), b.size());
+            for (int k = 0; k < a.size(); k++) {
+                assertEquals(a.get(k).match().assigned(), b.get(k).match().assigned(), "run " + r + " peak " + k);
+                assertEquals(a.get(k).match().status(), b.get(k).match().status(), "run " + r + " peak " + k);
+            }
+            boolean told = typo.get(r).notes().stream().anyMatch(n -> n.contains("lies outside its batch's"));
+            assertEquals(r == 6, told, "run " + r + ": " + typo.get(r).notes());
+        }
+        // the mistyped run's fitted scale undoes the wrong conversion: η(26)/η(25) = 0.8705/0.8900
+        // (IAPWS 2008, from memory)
+        assertEquals(0.8705 / 0.8900, typo.get(6).runScale().factor(), 0.008);
+    }
+
     /** The anion and cation libraries in one, each entry labelled with its own buffer. */
     private static Library twoBuffers() {
         List<LibraryEntry> all = new ArrayList<>();
