@@ -22,8 +22,8 @@ import org.mobident.settings.ScalePrior;
  * centred on the random-effects mean (weights 1/(s_r² + τ²)), with a standard deviation of
  * √(τ² + SE²) (SE the standard error of that mean), widened for a new run as the prediction
  * interval of Higgins et al. (2009) widens it ({@link #predictionWidening}: a spread learned from five
- * runs is itself uncertain, and a run a kelvin off must not be pulled to the others), but never below {@link #MIN_FACTOR_SD} and
- * {@link #MIN_OFFSET_SD}. The spread of b never exceeds the settings' own prior; that of a may,
+ * runs is itself uncertain, and a run a kelvin off must not be pulled to the others), but never
+ * below {@link #MIN_FACTOR_SD} and {@link #MIN_OFFSET_SD}. The spread of b never exceeds the settings' own prior; that of a may,
  * up to {@value #MAX_FACTOR_SD_SHARE_OF_BOUND} of the plausible bound on |a − 1| (so the bound
  * stays two SDs out): runs whose capillaries scatter by ±2.5 K (±6 % on every mobility) must not
  * be read against a prior that allows ±0.9 K, or a run far off reads its pattern shifted by one

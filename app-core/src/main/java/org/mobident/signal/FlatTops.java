@@ -22,8 +22,8 @@ import org.apache.commons.math3.util.Pair;
  * {@code y = c + A exp(−(t − μ)²/(2s²))} with its own {@code s} on each side of {@code μ} (zones
  * dispersed by their own concentration rise on one side and fall steeply on the other; the
  * bi-Gaussian follows both: Buys &amp; de Clerk, Anal. Chem. 44 (1972) 1273, from memory), by
- * Levenberg–Marquardt, and the plateau is replaced by the
- * fitted curve (never below the cut level): the usual way to estimate the top of a clipped peak from
+ * Levenberg–Marquardt, and the plateau is replaced by the fitted curve (never below the cut level):
+ * the usual way to estimate the top of a clipped peak from
  * its flanks (censored data: the samples at the cut carry only "at least this much"). A fit that puts
  * its centre outside the plateau, does not rise clearly above the cut (a coarse converter repeats a
  * true apex's value without any cut), or extrapolates the height more than
@@ -138,8 +138,7 @@ final class FlatTops {
 
     /**
      * The bi-Gaussian-on-a-constant fit of the flanks [lo, a) and (b, hi]: {c, A, μ, s_left, s_right,
-     * sd(μ)}, or null
-     * when it fails or is implausible.
+     * sd(μ)}, or null when it fails or is implausible.
      */
     private static double[] flankFit(double[] t, double[] y, int lo, int a, int b, int hi, double top,
                                      double noiseSd) {

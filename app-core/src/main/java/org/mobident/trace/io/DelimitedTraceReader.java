@@ -795,14 +795,18 @@ public final class DelimitedTraceReader {
                     String hint = repeats && count > 1
                             ? "; if the time is written with too few decimals for the sampling rate, export more"
                             : "";
-                    InputException e = new InputException(file, line, timeName, "time " + quote(timeIndex) + " "
-                            + (repeats ? "repeats" : "is before") + " the previous time " + shortNumber(previousRaw)
-                            + " (line " + previousLine + "); times must strictly increase" + hint);
-                    if (!(repeats && count > 1 && tS == times[count - 1])) {
-                        throw e;
+                    boolean rounded = repeats && count > 1 && tS == times[count - 1];
+                    if (!rounded || firstRepeat == null) {
+                        InputException e = new InputException(file, line, timeName, "time " + quote(timeIndex) + " "
+                                + (repeats ? "repeats" : "is before") + " the previous time "
+                                + shortNumber(previousRaw) + " (line " + previousLine + "); times must strictly increase"
+                                + hint);
+                        if (!rounded) {
+                            throw e;
+                        }
+                        // kept for now: an even grid may explain every repeat (checked once all rows are read)
+                        firstRepeat = e;
                     }
-                    // kept for now: an even grid may explain every repeat (checked once all rows are read)
-                    firstRepeat = firstRepeat == null ? e : firstRepeat;
                 }
                 if (count == ROWS_BEFORE_ESTIMATE && pos < n) {
                     double bytesPerRow = (double) (pos - dataStart) / (count + 1); // this row included
