@@ -249,6 +249,7 @@ public final class PeakDetector {
         }
         reported = withoutDoubtfulFaintPeaks(reported, t[0], t[n - 1]);
         reported = withFaintZones(reported, t, raw, inPeak, spikes, sampling, localNoise, reporting);
+        reported = withoutBaselineSteps(reported, t, y);
         List<Peak> peaks = new ArrayList<>(reported.size());
         for (int k = 0; k < reported.size(); k++) {
             Measured m = reported.get(k);
@@ -507,6 +508,62 @@ public final class PeakDetector {
             return new Measured(apexTimeS, apexTimeSdS, height, startTimeS, endTimeS, area, widthHalfS, fitted,
                     smoothedHeight, this.centre, centre, centreSd, sn, shapeSd);
         }
+    }
+
+    /**
+     * The reported peaks without the edges of baseline steps. A sharp step of the background (a
+     * bubble, a lamp or a junction settling) leaves, while the baseline follows it, a broad hump of low
+     * S/N beside it; a zone returns to the level it left, a step does not. A peak below the
+     * quantitation limit (S/N &lt; 10) whose w½/t exceeds {@link SignalLimits#STEP_MIN_WIDTH_RATIO}
+     * times that of the run's narrower quantifiable zones (zones broaden with their migration time)
+     * and has no other peak within that reach is dropped when the signal's median level over
+     * {@link SignalLimits#STEP_LEVEL_WIDTHS} of its widths before its start and after its end differ by
+     * more than {@link SignalLimits#STEP_MAX_LEVEL_SHARE} of its height.
+     */
+    private static List<Measured> withoutBaselineSteps(List<Measured> reported, double[] t, double[] y) {
+        double reference = widthReference(reported);
+        if (Double.isNaN(reference)) {
+            return reported;
+        }
+        List<Measured> kept = new ArrayList<>(reported.size());
+        for (Measured m : reported) {
+            if (m.signalToNoise >= Tolerances.QUANTITATION_LIMIT_SIGNAL_TO_NOISE || !(m.apexTimeS > 0)
+                    || !(m.widthHalfS / m.apexTimeS > SignalLimits.STEP_MIN_WIDTH_RATIO * reference)) {
+                kept.add(m);
+                continue;
+            }
+            double reach = SignalLimits.STEP_LEVEL_WIDTHS * m.widthHalfS;
+            if (hasNeighbourWithin(reported, m, m.startTimeS - reach, m.endTimeS + reach)) {
+                kept.add(m); // a neighbour's flank would pass for a step: judged only on its own
+                continue;
+            }
+            double before = levelBetween(t, y, m.startTimeS - reach, m.startTimeS);
+            double after = levelBetween(t, y, m.endTimeS, m.endTimeS + reach);
+            if (!(Math.abs(after - before) > SignalLimits.STEP_MAX_LEVEL_SHARE * m.height)) {
+                kept.add(m);
+            }
+        }
+        return kept;
+    }
+
+    /** True when another of the peaks reaches into [fromS, toS]. */
+    private static boolean hasNeighbourWithin(List<Measured> peaks, Measured self, double fromS, double toS) {
+        for (Measured o : peaks) {
+            if (o != self && o.endTimeS > fromS && o.startTimeS < toS) {
+                return true;
+            }
+        }
+        return false;
+    }
+
+    /** Median of y over the samples with times in [fromS, toS] (NaN when there is none). */
+    private static double levelBetween(double[] t, double[] y, double fromS, double toS) {
+        int from = Math.max(0, nearestIndex(t, fromS));
+        int to = Math.min(t.length - 1, nearestIndex(t, toS));
+        if (to < from) {
+            return Double.NaN;
+        }
+        return Selection.stridedMedian(y, from, to - from + 1, SignalLimits.SCALE_SAMPLE_CAP);
     }
 
     /**
