@@ -20,7 +20,7 @@ class MarkerPriorTest {
      * With no library evidence (no evaluator: no reading explains the run, so the peak outside the
      * window is tried too), the weights of the readings are the prior alone: the window's share
      * {@link MarkerLocator#IN_WINDOW_PRIOR} is split with a detected peak weighing 1 and one below the
-     * lowest detection limit {@link MarkerLocator#FAINT_CANDIDATE_WEIGHT}, so 0.95 × 1/1.2 and
+     * detection limit {@link MarkerLocator#FAINT_CANDIDATE_WEIGHT}, so 0.95 × 1/1.2 and
      * 0.95 × 0.2/1.2; the peak outside gets the rest, 0.05 (normalised weights of a discrete prior).
      */
     @Test
@@ -40,8 +40,10 @@ class MarkerPriorTest {
 
     @Test
     void weightsFollowTheDetectionLimit() {
-        assertEquals(1.0, MarkerLocator.candidateWeight(peak(100, 1, 2.0)), 0.0);
+        // the detection limit S/N = 3 (ICH Q2(R1), signal-to-noise approach)
+        assertEquals(1.0, MarkerLocator.candidateWeight(peak(100, 1, 3.0)), 0.0);
         assertEquals(1.0, MarkerLocator.candidateWeight(peak(100, 1, Double.NaN)), 0.0);
-        assertEquals(0.2, MarkerLocator.candidateWeight(peak(100, 1, 1.99)), 0.0);
+        assertEquals(0.2, MarkerLocator.candidateWeight(peak(100, 1, 2.99)), 0.0);
+        assertEquals(0.2, MarkerLocator.candidateWeight(peak(100, 1, 1.5)), 0.0);
     }
 }
