@@ -512,13 +512,14 @@ public final class PeakDetector {
 
     /**
      * The reported peaks without the edges of baseline steps. A sharp step of the background (a
-     * bubble, a lamp or a junction settling) leaves, while the baseline follows it, a broad hump of low
-     * S/N beside it; a zone returns to the level it left, a step does not. A peak below the
-     * quantitation limit (S/N &lt; 10) whose w½/t exceeds {@link SignalLimits#STEP_MIN_WIDTH_RATIO}
-     * times that of the run's narrower quantifiable zones (zones broaden with their migration time)
-     * and has no other peak within that reach is dropped when the signal's median level over
-     * {@link SignalLimits#STEP_LEVEL_WIDTHS} of its widths before its start and after its end differ by
-     * more than {@link SignalLimits#STEP_MAX_LEVEL_SHARE} of its height.
+     * bubble, a lamp or a junction settling) leaves, while the baseline follows it, a broad hump
+     * beside it; a zone returns to the level it left, a step does not. A peak whose w½/t exceeds
+     * {@link SignalLimits#STEP_MIN_WIDTH_RATIO} times that of the run's narrower quantifiable zones
+     * (zones broaden with their migration time) and that has no other peak within
+     * {@link SignalLimits#STEP_LEVEL_WIDTHS} of its widths is dropped when the signal's median levels
+     * over that reach before its start and after its end differ by more than
+     * {@link SignalLimits#STEP_MAX_LEVEL_SHARE} of its height. Small steps leave humps below the
+     * quantitation limit; a step of 40 noise SDs or more leaves one of S/N 10 to 50.
      */
     private static List<Measured> withoutBaselineSteps(List<Measured> reported, double[] t, double[] y) {
         double reference = widthReference(reported);
@@ -527,8 +528,7 @@ public final class PeakDetector {
         }
         List<Measured> kept = new ArrayList<>(reported.size());
         for (Measured m : reported) {
-            if (m.signalToNoise >= Tolerances.QUANTITATION_LIMIT_SIGNAL_TO_NOISE || !(m.apexTimeS > 0)
-                    || !(m.widthHalfS / m.apexTimeS > SignalLimits.STEP_MIN_WIDTH_RATIO * reference)) {
+            if (!(m.apexTimeS > 0) || !(m.widthHalfS / m.apexTimeS > SignalLimits.STEP_MIN_WIDTH_RATIO * reference)) {
                 kept.add(m);
                 continue;
             }
