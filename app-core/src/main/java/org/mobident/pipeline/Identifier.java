@@ -105,6 +105,11 @@ public final class Identifier {
     /** Relative time step of the numerical slope dμ/dt of a run's scale at an expected zone. */
     static final double EXPECTED_SLOPE_STEP = 1e-4;
     /** The remark on a peak found by the second look where the library expected a zone. */
+    /** The remark on a peak whose mobility no ion in water reaches. */
+    static final String BEYOND_ANY_ION = String.format(Locale.ROOT, "mobility beyond any ion's (±%.0f units): a "
+            + "disturbance of the run (the injection, the voltage coming on, a bubble), not an ion's zone",
+            PhysicalBounds.MAX_ION_MOBILITY);
+
     static final String FOUND_WHERE_EXPECTED = "found by a fitted zone where the library expects one "
             + "(hidden in a larger peak or on its flank)";
 
@@ -1002,7 +1007,8 @@ public final class Identifier {
                 rows.add(new PeakResult(p, PeakRole.MOBILITY_MARKER, m, s, atLib, PeakMatch.none(), atLib));
             } else {
                 PeakMatch pm = match == null ? PeakMatch.none() : mixed(choice, i, k, ms);
-                rows.add(new PeakResult(p, PeakRole.ANALYTE, m, s, atLib, pm, runScale.corrected(atLib)));
+                rows.add(new PeakResult(p, PeakRole.ANALYTE, m, s, atLib, pm, runScale.corrected(atLib),
+                        PhysicalBounds.plausibleIon(m) ? null : BEYOND_ANY_ION));
                 k++;
             }
         }

@@ -224,6 +224,38 @@ class IdentifierEndToEndTest {
         assertEquals(0.8705 / 0.8900, typo.get(6).runScale().factor(), 0.008);
     }
 
+    @Test
+    void aDisturbanceAtTheStartIsMarkedAsNoIonAndLeavesTheNamesAlone() {
+        // a swing of the signal in the first seconds (the injection, the voltage coming on) comes out
+        // at a mobility beyond any ion's: no name, and a remark saying what it is
+        SplittableRandom rnd = new SplittableRandom(51);
+        List<Truth> zones = draw(CATIONS, rnd, 0);
+        RunConditions c = conditions(60, 52, 25, 0, Detection.DIRECT, 200, 500);
+        SimulationSpec.Builder b = SimulationSpec.builder(c).eofMobility(45.0).neutralMarker(1.0)
+                .samplingHz(20).durationS(900).noiseSd(0.004).baseline(0.3).seed(51);
+        for (Truth z : zones) {
+            b.zone(z.name(), z.mobility(), 0.8, 120_000);
+        }
+        Trace clean = TraceSimulator.simulate("swing", b.build());
+        double[] t = clean.timesS();
+        double[] y = clean.signals();
+        for (int i = 0; i < t.length; i++) {
+            double u = (t[i] - 2.0) / 0.5;
+            y[i] += 3.0 * Math.exp(-0.5 * u * u);
+        }
+        RunResult r = new Identifier(CATIONS, IdentifySettings.defaults().withThreads(1))
+                .identify(new RunSpec("swing", Path.of("swing.csv"), c, "test", 0), new Trace("swing", "swing.csv", t, y));
+        List<PeakResult> early = r.peaks().stream().filter(p -> p.peak().apexTimeS() < 10).toList();
+        assertEquals(1, early.size(), r.peaks().toString());
+        // μ_app = Ld·Lt/(V·t) at t = 2 s: 52·60/(25,000·2) = 0.0624 cm²/(V s), 6,240 units: far beyond any ion
+        assertTrue(Math.abs(early.get(0).mobility()) > 130, String.valueOf(early.get(0).mobility()));
+        assertNull(early.get(0).match().assigned());
+        assertEquals(Identifier.BEYOND_ANY_ION, early.get(0).note());
+        for (Truth z : zones) {
+            assertTrue(r.peaks().stream().anyMatch(p -> z.name().equals(p.match().assigned())), z.name());
+        }
+    }
+
     /** The anion and cation libraries in one, each entry labelled with its own buffer. */
     private static Library twoBuffers() {
         List<LibraryEntry> all = new ArrayList<>();
