@@ -402,24 +402,27 @@ public final class Identifier {
      *                     stated detection, or matched as a buffer it did not name (first in its notes)
      * @param otherReading the run read the other way from its stated detection, where its trace
      *                     leans that way (the library decides between the two), or null
+     * @param flatTops     zone tops the detector cut flat, rebuilt from their flanks (their peaks'
+     *                     rows say so)
      */
     record Detected(RunSpec run, RunResult failure, List<Peak> peaks, double noiseSd, Trace markerWindow,
                     ExpectedZoneProbe probe, List<Peak> foundWhereExpected, List<Peak> beforeLook,
                     SamplingCheck.Span sampling, List<Peak> otherWay, List<String> readingNotes,
-                    Detected otherReading) {
+                    Detected otherReading, List<FlatTop> flatTops) {
         Detected {
             readingNotes = List.copyOf(readingNotes);
+            flatTops = List.copyOf(flatTops);
         }
 
         Detected(RunSpec run, RunResult failure, List<Peak> peaks, double noiseSd) {
             this(run, failure, peaks, noiseSd, null, null, List.of(), null, SamplingCheck.Span.UNKNOWN, List.of(),
-                    List.of(), null);
+                    List.of(), null, List.of());
         }
 
         /** The same run with the marker searches done: these peaks, no window, probe or candidates kept. */
         Detected settled(List<Peak> withMarker) {
             return new Detected(run, failure, withMarker, noiseSd, null, null, foundWhereExpected, beforeLook,
-                    sampling, List.of(), readingNotes, null);
+                    sampling, List.of(), readingNotes, null, flatTops);
         }
 
         /** The same with one more note on how the run was read. */
@@ -427,26 +430,26 @@ public final class Identifier {
             List<String> more = new ArrayList<>(readingNotes);
             more.add(note);
             return new Detected(run, failure, peaks, noiseSd, markerWindow, probe, foundWhereExpected, beforeLook,
-                    sampling, otherWay, more, otherReading);
+                    sampling, otherWay, more, otherReading, flatTops);
         }
 
         /** The run with the peaks it had before the second look added its zones. */
         Detected withoutLook() {
             return new Detected(run, failure, beforeLook, noiseSd, null, null, List.of(), null, sampling, List.of(),
-                    readingNotes, null);
+                    readingNotes, null, flatTops);
         }
 
         /** This run taken as one of another buffer. */
         Detected inBuffer(String label) {
             return new Detected(run.withConditions(run.conditions().withBuffer(label)), failure, peaks, noiseSd,
                     markerWindow, probe, foundWhereExpected, beforeLook, sampling, otherWay, readingNotes,
-                    otherReading);
+                    otherReading, flatTops);
         }
 
         /** This reading, with the other one to weigh against it. */
         Detected orReadAs(Detected other) {
             return new Detected(run, failure, peaks, noiseSd, markerWindow, probe, foundWhereExpected, beforeLook,
-                    sampling, otherWay, readingNotes, other);
+                    sampling, otherWay, readingNotes, other, flatTops);
         }
     }
 
@@ -510,7 +513,21 @@ public final class Identifier {
         }
         return new Detected(run, null, analysis.peaks(), analysis.noiseSd(), window,
                 settings.lookWhereExpected() ? analysis.probe() : null, List.of(), null, SamplingCheck.Span.of(trace),
-                otherWayInWindow(c, trace, analysis.peaks(), analysis.noiseSd()), notes, null);
+                otherWayInWindow(c, trace, analysis.peaks(), analysis.noiseSd()), notes, null, analysis.flatTops());
+    }
+
+    /** The remark on a peak whose top the detector cut flat. */
+    static final String CUT_TOP = "top cut flat by the detector (saturated) and rebuilt from the flanks: height, area "
+            + "and corrected area are estimates";
+
+    /** {@link #CUT_TOP} when one of the cut tops lies within the peak, else null. */
+    private static String cutTopRemark(List<FlatTop> tops, Peak p) {
+        for (FlatTop top : tops) {
+            if (top.centreS() >= p.startTimeS() && top.centreS() <= p.endTimeS()) {
+                return CUT_TOP;
+            }
+        }
+        return null;
     }
 
     /** The run note on zone tops the detector cut flat. */
@@ -971,7 +988,8 @@ public final class Identifier {
         if (choice.best() == null) {
             List<PeakResult> rows = new ArrayList<>();
             for (Peak p : peaks) {
-                rows.add(new PeakResult(p, PeakRole.ANALYTE, Double.NaN, Double.NaN, Double.NaN, PeakMatch.none()));
+                rows.add(new PeakResult(p, PeakRole.ANALYTE, Double.NaN, Double.NaN, Double.NaN, PeakMatch.none(),
+                        Double.NaN, cutTopRemark(d.flatTops(), p)));
             }
             notes.addAll(d.readingNotes());
             notes.add(choice.note());
@@ -1002,13 +1020,15 @@ public final class Identifier {
             double s = scale.mobilitySd(p.migrationTimeS(), p.migrationTimeSdS());
             double atLib = convert(m, runTempC, libraryTempC);
             if (i == best.neutralIndex()) {
-                rows.add(new PeakResult(p, PeakRole.NEUTRAL_MARKER, m, s, atLib, PeakMatch.none(), atLib));
+                rows.add(new PeakResult(p, PeakRole.NEUTRAL_MARKER, m, s, atLib, PeakMatch.none(), atLib,
+                        cutTopRemark(d.flatTops(), p)));
             } else if (i == best.refIndex()) {
-                rows.add(new PeakResult(p, PeakRole.MOBILITY_MARKER, m, s, atLib, PeakMatch.none(), atLib));
+                rows.add(new PeakResult(p, PeakRole.MOBILITY_MARKER, m, s, atLib, PeakMatch.none(), atLib,
+                        cutTopRemark(d.flatTops(), p)));
             } else {
                 PeakMatch pm = match == null ? PeakMatch.none() : mixed(choice, i, k, ms);
                 rows.add(new PeakResult(p, PeakRole.ANALYTE, m, s, atLib, pm, runScale.corrected(atLib),
-                        PhysicalBounds.plausibleIon(m) ? null : BEYOND_ANY_ION));
+                        PhysicalBounds.plausibleIon(m) ? cutTopRemark(d.flatTops(), p) : BEYOND_ANY_ION));
                 k++;
             }
         }
@@ -1021,7 +1041,8 @@ public final class Identifier {
                 ExpectedZoneProbe.Outcome look = d.probe().lookFor(peaks, expected);
                 if (!look.added().isEmpty()) {
                     Finished withFound = finishingOnce(new Detected(run, null, look.peaks(), d.noiseSd(), null, null,
-                            look.added(), peaks, d.sampling(), List.of(), d.readingNotes(), null), learned);
+                            look.added(), peaks, d.sampling(), List.of(), d.readingNotes(), null, d.flatTops()),
+                            learned);
                     if (keepsEveryIdentification(rows, withFound.result().peaks())) {
                         return withFound;
                     }

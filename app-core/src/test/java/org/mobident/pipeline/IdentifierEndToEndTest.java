@@ -186,6 +186,15 @@ class IdentifierEndToEndTest {
         assertIdentified(r, zones);
         assertTrue(r.notes().stream().anyMatch(n -> n.startsWith("the detector saturated")), r.notes().toString());
         assertTrue(a.notes().stream().noneMatch(n -> n.contains("saturated")), a.notes().toString());
+        // the rows of the cut zones say so (the tallest zones: those above the cut level)
+        long remarked = r.peaks().stream().filter(p -> Identifier.CUT_TOP.equals(p.note())).count();
+        assertTrue(remarked >= 1, r.peaks().toString());
+        for (PeakResult p : r.peaks()) {
+            if (Identifier.CUT_TOP.equals(p.note())) {
+                assertTrue(p.peak().height() > 0.45, "a zone below the cut remarked: " + p);
+            }
+        }
+        assertTrue(a.peaks().stream().noneMatch(p -> Identifier.CUT_TOP.equals(p.note())));
     }
 
     @Test
