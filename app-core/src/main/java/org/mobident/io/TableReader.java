@@ -229,7 +229,41 @@ public final class TableReader implements AutoCloseable {
         }
     }
 
+    /**
+     * Refuses a first row that names no known column and reads like data (numbers, file names): a
+     * table whose header row was left out. Said as such, rather than as an unknown column named
+     * after the first run's trace file.
+     */
+    private void refuseDataAsHeader(List<String> cells) throws InputException {
+        int filled = 0;
+        int dataLike = 0;
+        for (String cell : cells) {
+            String raw = cell.strip();
+            if (raw.isEmpty()) {
+                continue;
+            }
+            if (spec.known().contains(spec.normalise(raw))) {
+                return;
+            }
+            filled++;
+            dataLike += DATA_CELL.matcher(raw).matches() ? 1 : 0;
+        }
+        if (filled > 0 && 2 * dataLike >= filled) {
+            List<String> shown = cells.subList(0, Math.min(cells.size(), 4));
+            throw new InputException(file, headerLine, null, "the first row is not a header: it reads like data ("
+                    + String.join(", ", shown) + (cells.size() > 4 ? ", ..." : "") + "); the first row must name "
+                    + "the columns: " + String.join(", ", spec.known()));
+        }
+    }
+
+    /** A cell that reads as data rather than a column name: a number (decimal point or comma, sign,
+     *  exponent, optional unit word after it) or a file name with an extension. */
+    private static final java.util.regex.Pattern DATA_CELL = java.util.regex.Pattern.compile(
+            "[+\\-\u2212]?(\\d+([.,]\\d*)?|[.,]\\d+)([eE][+\\-]?\\d+)?(\\s*\\p{L}+)?"
+                    + "|.*\\.(?i:csv|txt|tsv|dat|cdf|nc|asc)");
+
     private void header(List<String> cells) throws InputException {
+        refuseDataAsHeader(cells);
         Map<String, Integer> firstAt = new HashMap<>();
         for (int i = 0; i < cells.size(); i++) {
             String raw = cells.get(i).strip();

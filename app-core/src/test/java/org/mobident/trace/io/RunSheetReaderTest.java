@@ -328,4 +328,18 @@ class RunSheetReaderTest {
         assertEquals(dir.resolve("nope.csv").toString(), m.file());
         assertNull(m.field());
     }
+
+    @Test
+    void aSheetWithoutItsHeaderRowIsToldSo() throws Exception {
+        // the header row left out: the first run's row is not read as column names
+        InputException e = assertThrows(InputException.class,
+                () -> read("traces/a.csv,64.5,56,-30,1.2,25,borate,120,180,indirect\n"
+                        + "traces/b.csv,64.5,56,-30,1.2,25,borate,120,180,indirect\n"));
+        assertEquals(1, e.line(), e::getMessage);
+        assertTrue(e.problem().startsWith("the first row is not a header"), e.getMessage());
+        assertTrue(e.problem().contains("traces/a.csv, 64.5, 56, -30, ..."), e.getMessage());
+        // a header of unknown names stays an unknown column, with its suggestion
+        InputException typo = assertThrows(InputException.class, () -> read("fiel,temprature_c\ntraces/a.csv,25\n"));
+        assertTrue(typo.problem().startsWith("unknown column 'fiel'"), typo.getMessage());
+    }
 }
