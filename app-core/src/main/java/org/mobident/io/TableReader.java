@@ -229,6 +229,20 @@ public final class TableReader implements AutoCloseable {
         }
     }
 
+    /** True when more than half of the named header cells are no column of this kind of table. */
+    private boolean mostlyForeign(List<String> cells) {
+        int named = 0;
+        int unknown = 0;
+        for (String cell : cells) {
+            String raw = cell.strip();
+            if (!raw.isEmpty()) {
+                named++;
+                unknown += spec.known().contains(spec.normalise(raw)) ? 0 : 1;
+            }
+        }
+        return 2 * unknown > named;
+    }
+
     /**
      * Refuses a first row that names no known column and reads like data (numbers, file names): a
      * table whose header row was left out. Said as such, rather than as an unknown column named
@@ -275,7 +289,9 @@ public final class TableReader implements AutoCloseable {
             if (!spec.known().contains(name)) {
                 if (spec.unknownIsError()) {
                     String hint = !spec.sniffDelimiter() && (raw.indexOf(';') >= 0 || raw.indexOf('\t') >= 0)
-                            ? " (the " + spec.what() + " is comma-delimited)" : "";
+                            ? " (the " + spec.what() + " is comma-delimited)"
+                            : mostlyForeign(cells) ? "; most of this header's columns are not a " + spec.what()
+                            + "'s: is it the right file (or were two files given the other way round)?" : "";
                     throw new InputException(file, headerLine, raw, "unknown column '" + raw + "'"
                             + Suggestions.didYouMean(name, spec.known()) + "; known columns: "
                             + String.join(", ", spec.known()) + hint);

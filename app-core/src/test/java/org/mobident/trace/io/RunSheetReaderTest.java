@@ -342,4 +342,16 @@ class RunSheetReaderTest {
         InputException typo = assertThrows(InputException.class, () -> read("fiel,temprature_c\ntraces/a.csv,25\n"));
         assertTrue(typo.problem().startsWith("unknown column 'fiel'"), typo.getMessage());
     }
+
+    @Test
+    void aLibraryGivenAsTheRunSheetIsToldItMayBeTheWrongFile() throws Exception {
+        InputException library = assertThrows(InputException.class,
+                () -> read("name,mobility,mobility_sd,n,charge,buffer\nchloride,-79.1,0.3,6,-1,borate\n"));
+        assertTrue(library.problem().contains("is it the right file"), library.getMessage());
+        // one misspelt column among known ones is a misspelling, not another file
+        InputException typo = assertThrows(InputException.class,
+                () -> read("file,total_length_cm,detector_length_cm,voltage_kv,temprature_c\ntraces/a.csv,60,50,25,25\n"));
+        assertTrue(typo.problem().startsWith("unknown column 'temprature_c'"), typo.getMessage());
+        assertTrue(!typo.problem().contains("right file"), typo.getMessage());
+    }
 }
