@@ -104,12 +104,12 @@ public final class Identifier {
     static final double SAME_TEMPERATURE_K = 0.05;
     /** Relative time step of the numerical slope dμ/dt of a run's scale at an expected zone. */
     static final double EXPECTED_SLOPE_STEP = 1e-4;
-    /** The remark on a peak found by the second look where the library expected a zone. */
     /** The remark on a peak whose mobility no ion in water reaches. */
     static final String BEYOND_ANY_ION = String.format(Locale.ROOT, "mobility beyond any ion's (±%.0f units): a "
             + "disturbance of the run (the injection, the voltage coming on, a bubble), not an ion's zone",
             PhysicalBounds.MAX_ION_MOBILITY);
 
+    /** The remark on a peak found by the second look where the library expected a zone. */
     static final String FOUND_WHERE_EXPECTED = "found by a fitted zone where the library expects one "
             + "(hidden in a larger peak or on its flank)";
 
@@ -523,7 +523,7 @@ public final class Identifier {
     /** {@link #CUT_TOP} when one of the cut tops lies within the peak, else null. */
     private static String cutTopRemark(List<FlatTop> tops, Peak p) {
         for (FlatTop top : tops) {
-            if (top.centreS() >= p.startTimeS() && top.centreS() <= p.endTimeS()) {
+            if (top.centredWithin(p.startTimeS(), p.endTimeS())) {
                 return CUT_TOP;
             }
         }

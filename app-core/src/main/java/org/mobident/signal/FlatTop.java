@@ -9,4 +9,9 @@ package org.mobident.signal;
  * @param centreSdS standard uncertainty of that centre, s
  */
 public record FlatTop(double fromS, double toS, double centreS, double centreSdS) {
+
+    /** True when the rebuilt top's centre lies in [fromS, toS] (a peak's start and end): the peak is the cut zone. */
+    public boolean centredWithin(double fromS, double toS) {
+        return centreS >= fromS && centreS <= toS;
+    }
 }

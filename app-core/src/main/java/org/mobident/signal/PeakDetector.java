@@ -287,7 +287,7 @@ public final class PeakDetector {
     /** The fit uncertainty of a repaired flat top whose centre lies in [from, to], s (0 when none does). */
     private static double flatTopCentreSd(List<FlatTop> flatTops, double fromS, double toS) {
         for (FlatTop top : flatTops) {
-            if (top.centreS() >= fromS && top.centreS() <= toS) {
+            if (top.centredWithin(fromS, toS)) {
                 return top.centreSdS();
             }
         }

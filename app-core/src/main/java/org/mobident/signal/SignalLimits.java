@@ -365,16 +365,16 @@ final class SignalLimits {
     /** Evaluation and iteration cap of the flank fit. */
     static final int FLAT_TOP_MAX_EVALUATIONS = 200;
 
-    /** A faint peak whose w½/t exceeds this many times that of the run's narrower quantifiable zones is
+    /** A peak whose w½/t exceeds this many times that of the run's narrower quantifiable zones is
      *  checked for being a baseline step's edge. */
     static final double STEP_MIN_WIDTH_RATIO = 1.5;
 
     /** The levels before and after a peak are medians over this many of its widths. */
     static final double STEP_LEVEL_WIDTHS = 2.0;
 
-    /** A faint broad peak whose levels before and after differ by more than this share of its height
-     *  is a step's edge, not a zone (a modelling choice, checked on baseline steps of 3–15 noise SDs
-     *  from the independent generator). */
+    /** A broad peak whose levels before and after differ by more than this share of its height is a
+     *  step's edge, not a zone (a modelling choice, checked on baseline steps of 3–15 noise SDs from
+     *  the independent generator and of ±12 and ±150 in BaselineStepTest). */
     static final double STEP_MAX_LEVEL_SHARE = 0.5;
 
     private SignalLimits() {
