@@ -147,13 +147,18 @@ final class SkewedClusterFit {
      * @param residualSumOfSquares RSS, signal units²
      * @param points               samples fitted
      */
-    record Result(List<Zone> zones, double residualSumOfSquares, int points) {
+    record Result(List<Zone> zones, double residualSumOfSquares, int points, int fixedShapes) {
         Result {
             zones = List.copyOf(zones);
         }
 
+        Result(List<Zone> zones, double residualSumOfSquares, int points) {
+            this(zones, residualSumOfSquares, points, 0);
+        }
+
+        /** Fitted parameters: σ, and A, μ and a of each zone (a only where its shape is not held). */
         int parameters() {
-            return 1 + 3 * zones.size();
+            return 1 + 3 * zones.size() - fixedShapes;
         }
 
         /** True when every zone is placed to better than its width ({@link Zone#placed()}). */
@@ -235,6 +240,19 @@ final class SkewedClusterFit {
      */
     static Result fit(double[] t, double[] v, int first, int last, double[] startApexS, double startSigmaS,
                       double minSigmaS, double maxSigmaS, double noiseSd, int direction) {
+        return fit(t, v, first, last, startApexS, startSigmaS, minSigmaS, maxSigmaS, noiseSd, direction,
+                new boolean[startApexS.length]);
+    }
+
+    /**
+     * As {@link #fit(double[], double[], int, int, double[], double, double, double, double, int)},
+     * with the zones marked in {@code nearlySymmetric} held at the least size a (nearly Gaussian):
+     * a dilute zone is hardly dispersed by electromigration, and a free size lets a small zone
+     * behind a tall one take over the tall zone's flank, which moves its first moment far from its
+     * own top.
+     */
+    static Result fit(double[] t, double[] v, int first, int last, double[] startApexS, double startSigmaS,
+                      double minSigmaS, double maxSigmaS, double noiseSd, int direction, boolean[] nearlySymmetric) {
         int k = startApexS.length;
         int n = last - first + 1;
         int parameters = 1 + 3 * k;
@@ -264,14 +282,14 @@ final class SkewedClusterFit {
         boolean fronting = direction <= 0;
         Result emg = better(
                 tailing ? fit(u, target, w, area, ref, span, +1, ZoneForm.EXPONENTIAL, startApexS, startSigmaS,
-                        minSigmaS, maxSigmaS) : null,
+                        minSigmaS, maxSigmaS, nearlySymmetric) : null,
                 fronting ? fit(u, target, w, area, ref, span, -1, ZoneForm.EXPONENTIAL, startApexS, startSigmaS,
-                        minSigmaS, maxSigmaS) : null);
+                        minSigmaS, maxSigmaS, nearlySymmetric) : null);
         Result triangle = better(
                 tailing ? fit(u, target, w, area, ref, span, +1, ZoneForm.TRIANGLE, startApexS, startSigmaS,
-                        minSigmaS, maxSigmaS) : null,
+                        minSigmaS, maxSigmaS, nearlySymmetric) : null,
                 fronting ? fit(u, target, w, area, ref, span, -1, ZoneForm.TRIANGLE, startApexS, startSigmaS,
-                        minSigmaS, maxSigmaS) : null);
+                        minSigmaS, maxSigmaS, nearlySymmetric) : null);
         if (emg == null || triangle == null) {
             return emg == null ? triangle : emg;
         }
@@ -302,7 +320,7 @@ final class SkewedClusterFit {
      *  {@code ref}. */
     private static Result fit(double[] u, double[] target, double[] w, double area, double ref, double span,
                               double sign, ZoneForm form, double[] startApexS, double startSigmaS, double minSigmaS,
-                              double maxSigmaS) {
+                              double maxSigmaS, boolean[] nearlySymmetric) {
         int k = startApexS.length;
         int n = u.length;
         int parameters = 1 + 3 * k;
@@ -339,9 +357,9 @@ final class SkewedClusterFit {
             double apex = Math.min(span, Math.max(0, startApexS[j] - ref));
             double centroid = shareArea[j] > 0 ? shareMoment[j] / shareArea[j] : apex;
             byShares[2 + 3 * j] = apex;
-            byShares[3 + 3 * j] = Math.max(minTau, Math.min(span, Math.abs(centroid - apex)));
+            byShares[3 + 3 * j] = nearlySymmetric[j] ? minTau : Math.max(minTau, Math.min(span, Math.abs(centroid - apex)));
             common[2 + 3 * j] = apex;
-            common[3 + 3 * j] = commonTau;
+            common[3 + 3 * j] = nearlySymmetric[j] ? minTau : commonTau;
         }
         List<double[]> starts = new ArrayList<>();
         starts.add(byShares);
@@ -351,11 +369,19 @@ final class SkewedClusterFit {
             // of the zones, and a local search from the wrong owner does not find the right one
             // (an owner's τ reaches from its apex to the centre of the whole cluster)
             double centroid = moment / area;
+            int held = 0;
+            for (int j = 0; j < k; j++) {
+                held |= nearlySymmetric[j] ? 1 << j : 0;
+            }
             for (int mask = 1; mask < (1 << k); mask++) {
+                if ((mask & held) != 0) {
+                    continue; // a held zone keeps its least size in every start
+                }
                 double[] start = common.clone();
                 for (int j = 0; j < k; j++) {
                     double owner = Math.max(minTau, Math.min(span, Math.abs(centroid - start[2 + 3 * j])));
-                    start[3 + 3 * j] = (mask & (1 << j)) != 0 ? owner : Math.max(minTau, SMALL_TAU_FRACTION * sigma0);
+                    start[3 + 3 * j] = nearlySymmetric[j] ? minTau
+                            : (mask & (1 << j)) != 0 ? owner : Math.max(minTau, SMALL_TAU_FRACTION * sigma0);
                 }
                 starts.add(start);
             }
@@ -370,7 +396,7 @@ final class SkewedClusterFit {
                 continue;
             }
             Result r = solve(u, target, ref, span, sign, form, start, k, area, minTau, minSigmaS, maxSigmaS,
-                    startApexS);
+                    startApexS, nearlySymmetric);
             if (r != null && (best == null || r.residualSumOfSquares() < best.residualSumOfSquares())) {
                 best = r;
             }
@@ -409,9 +435,10 @@ final class SkewedClusterFit {
     /** Levenberg–Marquardt from one start; null when it fails. */
     private static Result solve(double[] u, double[] target, double ref, double span, double sign, ZoneForm form,
                                 double[] start, int k, double area, double minTau, double minSigmaS,
-                                double maxSigmaS, double[] startApexS) {
+                                double maxSigmaS, double[] startApexS, boolean[] nearlySymmetric) {
         int n = u.length;
-        int parameters = 1 + 3 * k;
+        Layout layout = Layout.of(nearlySymmetric);
+        int parameters = layout.size();
         double minArea = 1e-6 * area;
         // each zone's Gaussian centre (its sharp flank) stays between the midpoints to its neighbours'
         // starting apexes: a zone may change its shape, not take over a neighbour's top
@@ -425,14 +452,17 @@ final class SkewedClusterFit {
             double[] q = p.toArray();
             q[0] = Math.min(maxSigmaS, Math.max(minSigmaS, q[0]));
             for (int j = 0; j < k; j++) {
-                q[1 + 3 * j] = Math.max(minArea, q[1 + 3 * j]);
-                q[2 + 3 * j] = Math.min(hi[j], Math.max(lo[j], q[2 + 3 * j]));
-                q[3 + 3 * j] = Math.min(span, Math.max(minTau, q[3 + 3 * j]));
+                int b = layout.areaIndex(j);
+                q[b] = Math.max(minArea, q[b]);
+                q[b + 1] = Math.min(hi[j], Math.max(lo[j], q[b + 1]));
+                if (layout.shapeFree(j)) {
+                    q[b + 2] = Math.min(span, Math.max(minTau, q[b + 2]));
+                }
             }
             return new ArrayRealVector(q, false);
         };
-        LevenbergMarquardt.Solution solution = LevenbergMarquardt.fit(start, model(u, k, sign, form), target, validator,
-                MAX_EVALUATIONS, MAX_ITERATIONS, true);
+        LevenbergMarquardt.Solution solution = LevenbergMarquardt.fit(layout.pack(start),
+                model(u, k, sign, form, layout, minTau), target, validator, MAX_EVALUATIONS, MAX_ITERATIONS, true);
         if (solution == null) {
             return null;
         }
@@ -442,41 +472,96 @@ final class SkewedClusterFit {
         double residualVariance = rss / (n - parameters);
         List<Zone> zones = new ArrayList<>(k);
         for (int j = 0; j < k; j++) {
-            int c = 2 + 3 * j;
-            int a = 3 + 3 * j;
+            int c = layout.areaIndex(j) + 1;
+            int a = c + 1;
+            boolean free = layout.shapeFree(j);
             double varCentre = covariance[c][c] * residualVariance;
-            double varMoment = (covariance[c][c] + covariance[a][a]
-                    + 2 * sign * covariance[c][a]) * residualVariance;
+            double varMoment = free ? (covariance[c][c] + covariance[a][a] + 2 * sign * covariance[c][a])
+                    * residualVariance : varCentre;
             if (!(varCentre >= 0) || !(varMoment >= 0) || !Double.isFinite(p[c])) {
                 return null;
             }
-            zones.add(new Zone(p[1 + 3 * j], ref + p[c], p[0], sign * p[a], Math.sqrt(varMoment),
+            zones.add(new Zone(p[c - 1], ref + p[c], p[0], sign * (free ? p[a] : minTau), Math.sqrt(varMoment),
                     Math.sqrt(varCentre), form));
         }
         zones.sort(java.util.Comparator.comparingDouble(Zone::firstMomentS));
-        return new Result(zones, rss, n);
+        return new Result(zones, rss, n, layout.heldCount());
     }
 
-    /** The sum of zones of one form and its Jacobian (parameters σ, then A, μ, a per zone). */
-    private static MultivariateJacobianFunction model(double[] u, int k, double s, ZoneForm form) {
+    /**
+     * Where each zone's parameters sit in the fitted vector: σ first, then per zone A, μ and, unless
+     * the zone's shape is held at the least size, a.
+     */
+    private record Layout(int[] firstIndex, boolean[] fixed, int size) {
+
+        static Layout of(boolean[] nearlySymmetric) {
+            int k = nearlySymmetric.length;
+            int[] index = new int[k];
+            int next = 1;
+            for (int j = 0; j < k; j++) {
+                index[j] = next;
+                next += nearlySymmetric[j] ? 2 : 3;
+            }
+            return new Layout(index, nearlySymmetric.clone(), next);
+        }
+
+        int areaIndex(int zone) {
+            return firstIndex[zone];
+        }
+
+        boolean shapeFree(int zone) {
+            return !fixed[zone];
+        }
+
+        int heldCount() {
+            int count = 0;
+            for (boolean h : fixed) {
+                count += h ? 1 : 0;
+            }
+            return count;
+        }
+
+        /** The fitted vector from a full one (σ, then A, μ, a of every zone). */
+        double[] pack(double[] full) {
+            double[] p = new double[size];
+            p[0] = full[0];
+            for (int j = 0; j < firstIndex.length; j++) {
+                p[firstIndex[j]] = full[1 + 3 * j];
+                p[firstIndex[j] + 1] = full[2 + 3 * j];
+                if (!fixed[j]) {
+                    p[firstIndex[j] + 2] = full[3 + 3 * j];
+                }
+            }
+            return p;
+        }
+    }
+
+    /** The sum of zones of one form and its Jacobian (parameters as {@link Layout} places them; a held
+     *  zone's size is {@code heldTau}). */
+    private static MultivariateJacobianFunction model(double[] u, int k, double s, ZoneForm form, Layout layout,
+                                                      double heldTau) {
         return point -> {
             double[] p = point.toArray();
             double sigma = p[0];
             int n = u.length;
             double[] value = new double[n];
-            double[][] jacobian = new double[n][1 + 3 * k];
+            double[][] jacobian = new double[n][layout.size()];
             double[] g = new double[4];
             for (int j = 0; j < k; j++) {
-                double area = p[1 + 3 * j];
-                double mu = p[2 + 3 * j];
-                double a = p[3 + 3 * j];
+                int b = layout.areaIndex(j);
+                boolean free = layout.shapeFree(j);
+                double area = p[b];
+                double mu = p[b + 1];
+                double a = free ? p[b + 2] : heldTau;
                 for (int i = 0; i < n; i++) {
                     form.evaluate(s * (u[i] - mu), sigma, a, g);
                     value[i] += area * g[0];
                     jacobian[i][0] += area * g[2];
-                    jacobian[i][1 + 3 * j] = g[0];
-                    jacobian[i][2 + 3 * j] = -s * area * g[1];
-                    jacobian[i][3 + 3 * j] = area * g[3];
+                    jacobian[i][b] = g[0];
+                    jacobian[i][b + 1] = -s * area * g[1];
+                    if (free) {
+                        jacobian[i][b + 2] = area * g[3];
+                    }
                 }
             }
             return new Pair<>(new ArrayRealVector(value, false), new Array2DRowRealMatrix(jacobian, false));

@@ -53,6 +53,30 @@ class SkewedClusterTest {
     }
 
     @Test
+    void aSmallZoneHeldNearlySymmetricKeepsItsCentreBehindATailingZone() {
+        // a tall tailing zone (first moment 50.0 s, τ 1.2 s) and a small Gaussian one at 51.2 s on
+        // its tail, 15 times lower: built from Grushka's definitions, so both first moments are known
+        double[] t = Synthetic.regularTimes(44, 0.05, 240);
+        double[] y = new double[t.length];
+        addEmg(t, y, 1.0, 50.0, 0.25, 1.2);
+        Synthetic.addGaussian(t, y, 51.2, 0.06, 0.25);
+        Synthetic.addNoise(y, 0.001, 9);
+        double[] starts = {48.9, 51.2};
+        SkewedClusterFit.Result held = SkewedClusterFit.fit(t, y, 0, t.length - 1, starts, 0.3, 0.05, 3.0,
+                0.001, +1, new boolean[] {false, true});
+        assertNotNull(held);
+        // σ, then A, μ, a of the tall zone and A, μ of the held one
+        assertEquals(6, held.parameters());
+        SkewedClusterFit.Zone small = held.zones().get(1);
+        assertEquals(51.2, small.firstMomentS(), 0.05);
+        assertEquals(small.apexTimeS(), small.firstMomentS(), 0.05);
+        assertEquals(50.0, held.zones().get(0).firstMomentS(), 0.05);
+        // fitted free, the same data need no more parameters to be explained: the held fit reaches
+        // the noise (residual variance near 0.001²)
+        assertEquals(1.0, held.residualSumOfSquares() / (held.points() - held.parameters()) / 1e-6, 0.3);
+    }
+
+    @Test
     void aTailingPairIsFittedAsTailing() {
         double[] t = Synthetic.regularTimes(40, 0.05, 600);
         double[] y = new double[t.length];
