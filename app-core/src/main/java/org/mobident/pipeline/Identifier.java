@@ -3,11 +3,13 @@ package org.mobident.pipeline;
 import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.HashMap;
+import java.util.HashSet;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 import java.util.Objects;
+import java.util.Set;
 import java.util.concurrent.ExecutionException;
 import java.util.concurrent.ExecutorService;
 import java.util.concurrent.Executors;
@@ -1167,16 +1169,28 @@ public final class Identifier {
     /**
      * True when every analyte identified in {@code before} is still identified in {@code after}
      * (on whichever peak), at odds c/(1 − c) at least 1/{@value #LOOK_MAX_ODDS_LOSS} of what they
-     * were. A zone found by the second look adds a name and, where it splits a merged pair, makes
-     * its neighbour's name surer; when it takes a name away instead, or makes it much less sure,
-     * the look has made two zones of one whose shape neither fitted form follows, and its zones
-     * are dropped.
+     * were, and every name called at all (identified or ambiguous) is still called. A zone found
+     * by the second look adds a name and, where it splits a merged pair, makes its neighbour's
+     * name surer; when it takes a name away instead, or makes it much less sure, the look has made
+     * two zones of one whose shape neither fitted form follows, and its zones are dropped. The
+     * ambiguous names count too: in a run that reads two ways (a pattern that also fits shifted by
+     * one entry), a zone looked for under one reading tips the run to it and renames the others
+     * (a lab-day run went from three ambiguous right names to four identified wrong ones).
      */
     static boolean keepsEveryIdentification(List<PeakResult> before, List<PeakResult> after) {
         Map<String, Double> still = new HashMap<>();
+        Set<String> called = new HashSet<>();
         for (PeakResult pr : after) {
             if (pr.match().status() == MatchStatus.IDENTIFIED) {
                 still.merge(pr.match().assigned(), pr.match().confidence(), Math::max);
+            }
+            if (pr.match().assigned() != null) {
+                called.add(pr.match().assigned());
+            }
+        }
+        for (PeakResult pr : before) {
+            if (pr.match().assigned() != null && !called.contains(pr.match().assigned())) {
+                return false;
             }
         }
         for (PeakResult pr : before) {

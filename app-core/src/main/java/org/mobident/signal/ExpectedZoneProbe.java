@@ -39,11 +39,12 @@ import org.mobident.result.Peak;
  * zone is kept when
  * <ul>
  *   <li>the fall of the residual sum of squares passes the extra-sum-of-squares F-test (Bates
- *       &amp; Watts 1988, §3.5) at {@value #MAX_P_VALUE}; for noise of lag-one correlation ρ, F is
- *       divided by (1 + ρ)/(1 − ρ) (the variance inflation of correlated samples, see {@link
- *       LocalNoise}) and the residual degrees of freedom multiplied by (1 − ρ²)/(1 + ρ²), the share
- *       of independent samples in a variance estimated from first-order autoregressive noise (the
- *       variance of a sample variance is 2σ⁴/n · Σρ_k², Bartlett 1946; from memory);</li>
+ *       &amp; Watts 1988, §3.5) at {@value #MAX_P_VALUE}, on residuals prewhitened for noise of
+ *       lag-one correlation ρ ({@link #whitenedRss}: first-order autoregressive noise becomes
+ *       independent innovations, and a zone, sharper than the noise's slow wander, keeps most of
+ *       its fall). Dividing F by the long-run inflation (1 + ρ)/(1 − ρ) instead, as earlier
+ *       versions did, treats every residual as slow as the noise: at ρ = 0.85 it left 3 effective
+ *       degrees of freedom of 20, and zones whose fit took 95 % of the residual failed;</li>
  *   <li>the fit with it explains the samples down to the noise (residual variance at most
  *       {@link SignalLimits#SKEWED_CLUSTER_MISFIT_RATIO} times the local noise variance), or is a
  *       fit of skewed zones that leaves at most 1/{@value #MISFIT_EXPLAINED_RATIO} of the residual
@@ -65,9 +66,9 @@ import org.mobident.result.Peak;
  * of neighbours), and first on that of the neighbours taken as Gaussians of their measured apex,
  * height and width where the tallest shows no skew, a Gaussian of the expected width, placed
  * anywhere within the reach and scaled to their residual by linear least squares, must take from
- * it more than the noise alone would at 0.01: the fall over the local noise variance (and the
- * correlation inflation) at least the 0.99 quantile of χ²(1), {@value #SCREEN_CHI_SQUARE} (a matched
- * filter on the residual). The full fits run only where it does. The noise, not the residual left,
+ * it more than the noise alone would at 0.01: the fall over the local noise variance, times the
+ * variance the template's sum gathers from correlated noise ({@link #correlatedVarianceRatio}), at
+ * least the 0.99 quantile of χ²(1), {@value #SCREEN_CHI_SQUARE} (a matched filter on the residual). The full fits run only where it does. The noise, not the residual left,
  * is the yardstick: where the neighbours' stand-in misses their shape somewhere in the stretch, a
  * residual yardstick would swallow the zone's own fall (a stand-in that misses lets more looks
  * through, which costs time, not calls: the full test decides). A skewed neighbour's measured apex
@@ -84,7 +85,15 @@ import org.mobident.result.Peak;
  * zone's apex lies on its sharp side. The fit with the smaller residual is judged first; where
  * it fails the tests below, the other is (one skewed zone and a bump on its diffuse toe can follow
  * a merged pair about as closely as the pair itself, with the extra zone far from where it is
- * expected), each at the F-test level divided by the number of fits tried. Which fitted zone
+ * expected), each at the F-test level divided by the number of fits tried. Two more fits join
+ * them where a neighbour takes part: where a peak holds the expected time, one that starts the
+ * extra zone at that peak's top and the peak's own zone half its width beyond, away from the
+ * expected time (a merged pair of skewed zones can sum to one top without skew, the top being the
+ * expected zone's sharp side; measured on a lab-day pair 1.2 s apart, only this start reached the
+ * noise); and, for one skewed neighbour, one with the extra zone held nearly symmetric ({@link
+ * SkewedClusterFit}: a small zone is too dilute to be dispersed, and a free shape let it take over
+ * the tall zone's flank, its first moment seconds from its own top and out of the reach while the
+ * top sat where the library expected it). Which fitted zone
  * is the extra one: the choice that pairs the others with the neighbours in time order at the least
  * sum of distances (first moments for skewed fits, apexes for Gaussians) plus the extra zone's
  * distance from the expected time.
@@ -125,6 +134,10 @@ public final class ExpectedZoneProbe {
      *  more than this many expected widths apart (a modelling choice: below it the two starts are
      *  the same for the fit). */
     static final double SHIFTED_START_MIN_WIDTHS = 0.25;
+    /** The swapped start puts the neighbour this many of its widths at half height beyond its top
+     *  (a modelling choice: about where the far zone of a merged pair of equal skewed zones has its
+     *  top). */
+    static final double SWAPPED_START_WIDTHS = 0.5;
     /** Fitted width at half height of the extra zone, as multiples of the width expected there. */
     static final double MIN_WIDTH_FACTOR = 0.5;
     static final double MAX_WIDTH_FACTOR = 4.0;
@@ -235,6 +248,75 @@ public final class ExpectedZoneProbe {
         return new Outcome(resolved, addedNow);
     }
 
+    /**
+     * The residual sum of squares of a fit after the first-order autoregressive filter of lag-one
+     * correlation ρ: w₁ = √(1 − ρ²)·r₁, w_i = r_i − ρ·r_{i−1} (the Prais–Winsten transformation;
+     * Prais &amp; Winsten 1954, from memory). Residuals of AR(1) noise of marginal variance σ²
+     * become independent innovations of variance σ²(1 − ρ²) (Box &amp; Jenkins, Time Series
+     * Analysis, 1970, §3.2); ρ = 0 gives the plain sum.
+     */
+    static double whitenedRss(double[] residuals, double rho) {
+        double previous = residuals[0];
+        double sum = (1 - rho * rho) * previous * previous;
+        for (int i = 1; i < residuals.length; i++) {
+            double w = residuals[i] - rho * previous;
+            sum += w * w;
+            previous = residuals[i];
+        }
+        return sum;
+    }
+
+    /** The residuals of a fit at the fitted samples. */
+    private static double[] residuals(Fit fit, double[] ft, double[] fv) {
+        double[] r = new double[ft.length];
+        for (int i = 0; i < r.length; i++) {
+            r[i] = fv[i] - fit.model.applyAsDouble(ft[i]);
+        }
+        return r;
+    }
+
+    /**
+     * How much more a weighted sum Σ g_i e_i varies over AR(1) noise of lag-one correlation ρ than
+     * over white noise of the same variance: gᵀRg / gᵀg with R_ij = ρ^|i−j| (the variance of a
+     * linear form, Var(gᵀe) = σ² gᵀRg). A template much wider than the noise's correlation length
+     * gives the long-run inflation (1 + ρ)/(1 − ρ); a narrow one much less. Computed in O(n) with
+     * the forward and backward filters a_i = g_i + ρ a_{i−1}, b_i = g_i + ρ b_{i+1}, whose sum less
+     * g_i is Σ_j ρ^|i−j| g_j.
+     */
+    static double correlatedVarianceRatio(double[] g, double rho) {
+        int n = g.length;
+        double gg = 0;
+        for (double x : g) {
+            gg += x * x;
+        }
+        if (!(rho > 0) || !(gg > 0)) {
+            return 1.0;
+        }
+        double[] forward = new double[n];
+        for (int i = 0; i < n; i++) {
+            forward[i] = g[i] + (i > 0 ? rho * forward[i - 1] : 0);
+        }
+        double backward = 0;
+        double gRg = 0;
+        for (int i = n - 1; i >= 0; i--) {
+            backward = g[i] + (i < n - 1 ? rho * backward : 0);
+            gRg += g[i] * (forward[i] + backward - g[i]);
+        }
+        return gRg / gg;
+    }
+
+    /** Of the peaks, the one whose extent holds a time (the nearest apex of several), or null. */
+    private static Peak holder(List<Peak> peaks, double timeS) {
+        Peak out = null;
+        for (Peak p : peaks) {
+            if (timeS >= p.startTimeS() && timeS <= p.endTimeS()
+                    && (out == null || Math.abs(p.apexTimeS() - timeS) < Math.abs(out.apexTimeS() - timeS))) {
+                out = p;
+            }
+        }
+        return out;
+    }
+
     /** A zone found: the new peak, the neighbours it replaces and their refitted versions. */
     private record Found(Peak zone, List<Peak> replaced, List<Peak> refitted) {
     }
@@ -315,21 +397,21 @@ public final class ExpectedZoneProbe {
                 >= SignalLimits.SKEW_CHECK_MIN_WIDTHS * tallest.widthHalfS()) {
             direction = tallest.centreTimeS() > tallest.apexTimeS() ? 1 : -1;
         }
-        double inflation = inflation();
         // the cheap tests first: on the measured peaks where they are not skewed, then on the
         // neighbours' own Gaussian fit (one per set of neighbours and run)
         int centreIndex = nearestIndex(e.timeS());
         int support = (int) Math.ceil(0.5 * SignalLimits.NOISE_SUPPORT_WIDTHS * expectedWidth / sampling);
         double localSd = noise.around(centreIndex, support, false).rawSd();
-        double screenVariance = localSd * localSd * inflation;
+        double rho = sampledCorrelation(ft);
+        double noiseVariance = localSd * localSd;
         boolean skewedToo = k < MAX_SKEWED_ZONES;
         if (k > 0 && direction == 0
-                && !residualHoldsZone(ft, fv, Fit.measured(neighbours), e, startSigma, screenVariance)) {
+                && !residualHoldsZone(ft, fv, Fit.measured(neighbours), e, startSigma, noiseVariance, rho)) {
             return null; // not even the peaks as measured leave room for a zone there
         }
         Optional<Fit> alone = k == 0 ? Optional.of(Fit.empty(fv)) : neighbourFits.computeIfAbsent(neighbours,
                 key -> Optional.ofNullable(neighboursFit(key, outside, expectedWidth, startSigma, maxSigma)));
-        if (alone.isEmpty() || !residualHoldsZone(ft, fv, alone.get(), e, startSigma, screenVariance)) {
+        if (alone.isEmpty() || !residualHoldsZone(ft, fv, alone.get(), e, startSigma, noiseVariance, rho)) {
             return null;
         }
         Fit reduced = k == 0 ? alone.get() : best(ft, fv, without, startSigma, maxSigma, skewedToo, direction);
@@ -351,13 +433,46 @@ public final class ExpectedZoneProbe {
                 candidates.add(other);
             }
         }
+        Peak holder = holder(neighbours, e.timeS());
+        if (holder != null) {
+            // the top of the peak that holds the expected time may be the expected zone's own, with
+            // the zone that peak was taken for hidden beyond it (a merged pair of skewed zones whose
+            // sum shows one top and no skew): the extra zone started at that top, the neighbour
+            // half the peak's width further on, away from the expected time
+            double[] swapped = Arrays.copyOf(without, k + 1);
+            int j = neighbours.indexOf(holder);
+            double away = holder.apexTimeS() >= e.timeS() ? 1 : -1;
+            swapped[j] = Math.min(ft[n - 1], Math.max(ft[0], holder.apexTimeS() + away * SWAPPED_START_WIDTHS
+                    * holder.widthHalfS()));
+            swapped[k] = Math.min(ft[n - 1], Math.max(ft[0], holder.apexTimeS()));
+            Arrays.sort(swapped);
+            Fit other = best(ft, fv, swapped, startSigma, maxSigma, true, direction);
+            if (other != null && other.zones.size() == k + 1) {
+                candidates.add(other);
+            }
+        }
+        if (k > 0 && k < MAX_SKEWED_ZONES) {
+            // the extra zone nearly symmetric among skewed neighbours: a small zone is too dilute to
+            // be dispersed, and a free shape lets it take over the tall neighbour's flank, which puts
+            // its first moment seconds from its own top (a zone behind a tailing neighbour then
+            // fails the reach with its top where the library expects it)
+            boolean[] held = new boolean[k + 1];
+            for (int j = 0; j <= k; j++) {
+                held[j] = with[j] == e.timeS();
+            }
+            Fit symmetric = skewedFit(SkewedClusterFit.fit(ft, fv, 0, n - 1, with, startSigma, minSigmaS, maxSigma,
+                    noise.global().rawSd(), direction, held));
+            if (symmetric != null && symmetric.zones.size() == k + 1) {
+                candidates.add(symmetric);
+            }
+        }
         // the better fit first; a fit that puts the extra zone elsewhere (one skewed zone and a
         // bump on its toe can follow a merged pair as closely as the pair itself) gives way to the
         // other, at the test level shared between them
         candidates.sort(Comparator.comparingDouble(Fit::rss));
         double level = MAX_P_VALUE / Math.max(1, candidates.size());
         for (Fit full : candidates) {
-            Found found = judged(full, reduced, level, n, localSd, neighbours, e, expectedWidth);
+            Found found = judged(full, reduced, level, ft, fv, rho, localSd, neighbours, e, expectedWidth);
             if (found != null) {
                 return found;
             }
@@ -366,18 +481,24 @@ public final class ExpectedZoneProbe {
     }
 
     /** The zone found by a fit with the extra zone, or null when the fit fails any of the tests. */
-    private Found judged(Fit full, Fit reduced, double level, int n, double localSd, List<Peak> neighbours,
-                         ExpectedZone e, double expectedWidth) {
-        double inflation = inflation();
+    private Found judged(Fit full, Fit reduced, double level, double[] ft, double[] fv, double rho, double localSd,
+                         List<Peak> neighbours, ExpectedZone e, double expectedWidth) {
+        int n = ft.length;
         int dof = n - full.parameters;
-        double dofEffective = effectiveDegreesOfFreedom(dof, correlation);
         double fall = reduced.rss - full.rss;
-        if (!(fall > 0) || !(full.rss > 0)) {
+        if (!(fall > 0) || !(full.rss > 0) || dof < 1) {
             return null;
         }
+        // the extra-sum-of-squares test on the prewhitened residuals: correlated noise wanders
+        // slowly, and its residuals would pass for zones
         int extra = Math.max(1, full.parameters - reduced.parameters);
-        double f = (fall / extra) / (full.rss / dof) / inflation;
-        double p = 1.0 - new FDistribution(null, extra, dofEffective).cumulativeProbability(f);
+        double whiteFull = whitenedRss(residuals(full, ft, fv), rho);
+        double whiteFall = whitenedRss(residuals(reduced, ft, fv), rho) - whiteFull;
+        if (!(whiteFall > 0) || !(whiteFull > 0)) {
+            return null;
+        }
+        double f = (whiteFall / extra) / (whiteFull / dof);
+        double p = 1.0 - new FDistribution(null, extra, dof).cumulativeProbability(f);
         if (!(p < level)) {
             return null;
         }
@@ -395,7 +516,7 @@ public final class ExpectedZoneProbe {
                 || z.widthHalfS < MIN_WIDTH_FACTOR * expectedWidth || z.widthHalfS > MAX_WIDTH_FACTOR * expectedWidth) {
             return null;
         }
-        double rootInflation = Math.sqrt(inflation);
+        double rootInflation = Math.sqrt(inflation());
         Peak found = peak(z, rootInflation, z.apexS - 1.5 * z.widthHalfS, z.apexS + 1.5 * z.widthHalfS);
         if (!(found.signalToNoise() >= Tolerances.LOWEST_DETECTION_LIMIT_SIGNAL_TO_NOISE)) {
             return null;
@@ -433,15 +554,15 @@ public final class ExpectedZoneProbe {
         return (1 + correlation) / (1 - correlation);
     }
 
-    /**
-     * The degrees of freedom of a variance estimated from {@code dof} residuals of noise with lag-one
-     * correlation ρ: a sample variance of first-order autoregressive noise has variance
-     * 2σ⁴/n · (1 + ρ²)/(1 − ρ²) (Σ_k ρ^{2|k|}; Bartlett 1946, from memory), that of a χ² with
-     * n(1 − ρ²)/(1 + ρ²) degrees of freedom. At least 1.
-     */
-    static double effectiveDegreesOfFreedom(int dof, double correlation) {
-        double r2 = correlation * correlation;
-        return Math.max(1.0, dof * (1 - r2) / (1 + r2));
+    /** The lag-one correlation of the noise between successive fitted samples (every m-th sample of
+     *  the run: ρ^m). */
+    private double sampledCorrelation(double[] ft) {
+        int n = ft.length;
+        if (n < 2 || !(correlation > 0)) {
+            return 0.0;
+        }
+        long stride = Math.max(1, Math.round((ft[n - 1] - ft[0]) / ((n - 1) * sampling)));
+        return Math.pow(correlation, stride);
     }
 
     /** The samples from one time to another, every m-th on a finely sampled run (at most
@@ -529,10 +650,11 @@ public final class ExpectedZoneProbe {
      * noise alone and a stand-in that follows the neighbours, the fall at one place over the noise
      * variance is χ²(1)).
      *
-     * @param noiseVariance the local noise variance, times the variance inflation of correlated noise
+     * @param noiseVariance the local noise variance
+     * @param rho           the lag-one correlation of the noise between the fitted samples
      */
     private static boolean residualHoldsZone(double[] ft, double[] fv, Fit reduced, ExpectedZone e, double sigma,
-                                             double noiseVariance) {
+                                             double noiseVariance, double rho) {
         int n = ft.length;
         double[] r = new double[n];
         for (int i = 0; i < n; i++) {
@@ -541,18 +663,19 @@ public final class ExpectedZoneProbe {
         double bestFall = 0;
         double step = 0.5 * sigma;
         for (double at = e.timeS() - e.reachS(); at <= e.timeS() + e.reachS() + 1e-9 * step; at += step) {
+            double[] g = new double[n];
             double rg = 0;
             double gg = 0;
             for (int i = 0; i < n; i++) {
                 double z = (ft[i] - at) / sigma;
                 if (Math.abs(z) < 5) {
-                    double g = Math.exp(-0.5 * z * z);
-                    rg += r[i] * g;
-                    gg += g * g;
+                    g[i] = Math.exp(-0.5 * z * z);
+                    rg += r[i] * g[i];
+                    gg += g[i] * g[i];
                 }
             }
             if (rg > 0 && gg > 0) {
-                bestFall = Math.max(bestFall, rg * rg / gg);
+                bestFall = Math.max(bestFall, rg * rg / gg / correlatedVarianceRatio(g, rho));
             }
         }
         return bestFall >= SCREEN_CHI_SQUARE * noiseVariance;
@@ -659,24 +782,28 @@ public final class ExpectedZoneProbe {
         if (apexes.length > MAX_SKEWED_ZONES || !skewedToo) {
             return gaussian;
         }
-        Fit skewed = null;
-        SkewedClusterFit.Result s = SkewedClusterFit.fit(ft, fv, first, last, apexes, startSigma, minSigmaS,
-                maxSigma, noiseSd, direction);
-        if (s != null) {
-            List<Zone> zones = new ArrayList<>();
-            for (SkewedClusterFit.Zone c : s.zones()) {
-                double apex = c.apexTimeS();
-                zones.add(new Zone(apex, c.centreSdS(), c.firstMomentS(), c.firstMomentSdS(), c.value(apex),
-                        c.areaTimesS(), c.widthHalfS(), c.placed()));
-            }
-            zones.sort(Comparator.comparingDouble(Zone::apexS));
-            skewed = new Fit(zones, s.residualSumOfSquares(), s.parameters(), s.points(),
-                    sumOf(s.zones(), SkewedClusterFit.Zone::value), true);
-        }
+        Fit skewed = skewedFit(SkewedClusterFit.fit(ft, fv, first, last, apexes, startSigma, minSigmaS,
+                maxSigma, noiseSd, direction));
         if (gaussian == null || skewed == null) {
             return gaussian == null ? skewed : gaussian;
         }
         return skewed.bic() < gaussian.bic() ? skewed : gaussian;
+    }
+
+    /** A skewed-cluster fit in common terms; null for null. */
+    private static Fit skewedFit(SkewedClusterFit.Result s) {
+        if (s == null) {
+            return null;
+        }
+        List<Zone> zones = new ArrayList<>();
+        for (SkewedClusterFit.Zone c : s.zones()) {
+            double apex = c.apexTimeS();
+            zones.add(new Zone(apex, c.centreSdS(), c.firstMomentS(), c.firstMomentSdS(), c.value(apex),
+                    c.areaTimesS(), c.widthHalfS(), c.placed()));
+        }
+        zones.sort(Comparator.comparingDouble(Zone::apexS));
+        return new Fit(zones, s.residualSumOfSquares(), s.parameters(), s.points(),
+                sumOf(s.zones(), SkewedClusterFit.Zone::value), true);
     }
 
     /** The sum of fitted zones as a function of time. */

@@ -107,17 +107,36 @@ class SecondLookTest {
                 call("chlorate", 0.60, MatchStatus.AMBIGUOUS), call(null, 1.0, MatchStatus.UNASSIGNED));
         // a merged pair split: the neighbour's name kept, surer, and one more name
         assertTrue(Identifier.keepsEveryIdentification(before, List.of(call("nitrite", 0.995, MatchStatus.IDENTIFIED),
-                call("nitrate", 0.95, MatchStatus.IDENTIFIED), call(null, 1.0, MatchStatus.UNASSIGNED))));
-        // a little less sure (odds 99 -> 65.7, within a factor of 2) is kept; ambiguous calls may change
+                call("nitrate", 0.95, MatchStatus.IDENTIFIED), call("chlorate", 0.62, MatchStatus.AMBIGUOUS),
+                call(null, 1.0, MatchStatus.UNASSIGNED))));
+        // a little less sure (odds 99 -> 65.7, within a factor of 2) is kept; an ambiguous call may
+        // become surer or less sure
         assertTrue(Identifier.keepsEveryIdentification(before, List.of(call("nitrite", 0.985, MatchStatus.IDENTIFIED),
-                call("nitrate", 0.9, MatchStatus.IDENTIFIED))));
+                call("nitrate", 0.9, MatchStatus.IDENTIFIED), call("chlorate", 0.9, MatchStatus.IDENTIFIED))));
+        assertTrue(Identifier.keepsEveryIdentification(before, List.of(call("nitrite", 0.99, MatchStatus.IDENTIFIED),
+                call("nitrate", 0.9, MatchStatus.IDENTIFIED), call("chlorate", 0.4, MatchStatus.AMBIGUOUS))));
         // one zone made into two: the identified name lost, or left ambiguous
         assertFalse(Identifier.keepsEveryIdentification(before, List.of(call("nitrate", 0.95, MatchStatus.IDENTIFIED),
-                call(null, 1.0, MatchStatus.UNASSIGNED))));
+                call("chlorate", 0.60, MatchStatus.AMBIGUOUS), call(null, 1.0, MatchStatus.UNASSIGNED))));
         assertFalse(Identifier.keepsEveryIdentification(before, List.of(call("nitrite", 0.70, MatchStatus.AMBIGUOUS),
-                call("nitrate", 0.6, MatchStatus.AMBIGUOUS))));
+                call("nitrate", 0.6, MatchStatus.AMBIGUOUS), call("chlorate", 0.60, MatchStatus.AMBIGUOUS))));
         // still identified but far less sure: odds 99 -> 13.3, more than halved
         assertFalse(Identifier.keepsEveryIdentification(before, List.of(call("nitrite", 0.93, MatchStatus.IDENTIFIED),
-                call("nitrate", 0.85, MatchStatus.IDENTIFIED))));
+                call("nitrate", 0.85, MatchStatus.IDENTIFIED), call("chlorate", 0.60, MatchStatus.AMBIGUOUS))));
+    }
+
+    @Test
+    void dropsZonesThatRenameTheAmbiguousCalls() {
+        // a run that reads two ways, its three names ambiguous at 0.46; a zone looked for under the
+        // other reading tips the run to it: every name changes, none was identified before
+        List<PeakResult> before = List.of(call("bromide", 0.46, MatchStatus.AMBIGUOUS),
+                call("nitrite", 0.46, MatchStatus.AMBIGUOUS), call("fluoride", 0.46, MatchStatus.AMBIGUOUS));
+        assertFalse(Identifier.keepsEveryIdentification(before, List.of(call("chloride", 0.92, MatchStatus.IDENTIFIED),
+                call("nitrate", 0.92, MatchStatus.IDENTIFIED), call("formate", 0.92, MatchStatus.IDENTIFIED),
+                call("phosphate", 0.91, MatchStatus.IDENTIFIED))));
+        // the same zone added under the run's one reading keeps every name
+        assertTrue(Identifier.keepsEveryIdentification(before, List.of(call("bromide", 0.5, MatchStatus.AMBIGUOUS),
+                call("nitrite", 0.5, MatchStatus.AMBIGUOUS), call("fluoride", 0.5, MatchStatus.AMBIGUOUS),
+                call("phosphate", 0.5, MatchStatus.AMBIGUOUS))));
     }
 }

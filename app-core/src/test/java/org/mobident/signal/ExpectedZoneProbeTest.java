@@ -207,41 +207,97 @@ class ExpectedZoneProbeTest {
     }
 
     @Test
-    void correlatedNoiseLeavesTheVarianceFewerDegreesOfFreedom() {
-        // white noise: every residual counts
-        assertEquals(40.0, ExpectedZoneProbe.effectiveDegreesOfFreedom(40, 0.0), 1e-12);
-        // the definition by simulation: a χ² variance estimate with ν degrees of freedom has
-        // Var(s²) = 2σ⁴/ν, so ν = 2σ⁴/Var(s²) over many stretches of AR(1) noise of marginal SD 1
-        double rho = 0.6;
-        int n = 200;
-        int stretches = 4000;
-        double[] variances = new double[stretches];
-        for (int r = 0; r < stretches; r++) {
-            double[] y = new double[n];
-            Synthetic.addCorrelatedNoise(y, 1.0, rho, 1000 + r);
-            double mean = 0;
-            for (double v : y) {
-                mean += v / n;
+    void prewhiteningLeavesTheInnovations() {
+        // white residuals: the plain sum of squares
+        double[] white = {1.0, -2.0, 0.5, 3.0};
+        assertEquals(1 + 4 + 0.25 + 9, ExpectedZoneProbe.whitenedRss(white, 0.0), 1e-12);
+        // AR(1) noise of marginal SD 1 and ρ = 0.8 has innovations of variance 1 − ρ² = 0.36 (Box &
+        // Jenkins 1970, §3.2): the whitened sum over n samples is about 0.36 n, the plain one about n
+        double rho = 0.8;
+        double[] e = new double[20000];
+        Synthetic.addCorrelatedNoise(e, 1.0, rho, 77);
+        double plain = ExpectedZoneProbe.whitenedRss(e, 0.0) / e.length;
+        double whitened = ExpectedZoneProbe.whitenedRss(e, rho) / e.length;
+        assertEquals(1.0, plain, 0.1);
+        assertEquals(1 - rho * rho, whitened, 0.02);
+    }
+
+    @Test
+    void aTemplateGathersCorrelatedNoiseByItsWidth() {
+        double rho = 0.85;
+        // the direct double sum Σ_ij g_i g_j ρ^|i−j| / Σ g_i² for a Gaussian template of SD 1.3
+        // samples, as the screen uses at 4 Hz
+        double[] g = new double[40];
+        for (int i = 0; i < g.length; i++) {
+            double z = (i - 20) / 1.3;
+            g[i] = Math.exp(-0.5 * z * z);
+        }
+        double gRg = 0;
+        double gg = 0;
+        for (int i = 0; i < g.length; i++) {
+            gg += g[i] * g[i];
+            for (int j = 0; j < g.length; j++) {
+                gRg += g[i] * g[j] * Math.pow(rho, Math.abs(i - j));
             }
-            double ss = 0;
-            for (double v : y) {
-                ss += (v - mean) * (v - mean);
+        }
+        assertEquals(gRg / gg, ExpectedZoneProbe.correlatedVarianceRatio(g, rho), 1e-9);
+        // far below the long-run inflation (1 + ρ)/(1 − ρ) = 12.3 a narrow zone would be held to
+        assertTrue(ExpectedZoneProbe.correlatedVarianceRatio(g, rho) < 0.6 * (1 + rho) / (1 - rho));
+        // a constant template much longer than the correlation length reaches it (the variance of
+        // a mean of AR(1) samples, n σ² (1 + ρ)/(1 − ρ) for large n)
+        double[] flat = new double[5000];
+        java.util.Arrays.fill(flat, 1.0);
+        assertEquals((1 + rho) / (1 - rho), ExpectedZoneProbe.correlatedVarianceRatio(flat, rho), 0.05);
+        // white noise: no change
+        assertEquals(1.0, ExpectedZoneProbe.correlatedVarianceRatio(g, 0.0), 1e-12);
+    }
+
+    /** As {@link #trace(double, long)} with first-order autoregressive noise of marginal SD 1. */
+    private static Trace correlatedTrace(double hiddenHeight, double rho, long seed) {
+        double[] t = Synthetic.regularTimes(0, 0.2, 1000);
+        double[] y = new double[t.length];
+        Synthetic.addGaussian(t, y, 40, 80, SIGMA_S);
+        Synthetic.addGaussian(t, y, 60, 60, SIGMA_S);
+        Synthetic.addGaussian(t, y, 150, 70, SIGMA_S);
+        Synthetic.addGaussian(t, y, 100, 300, SIGMA_S);
+        if (hiddenHeight > 0) {
+            Synthetic.addGaussian(t, y, HIDDEN_S, hiddenHeight, SIGMA_S);
+        }
+        Synthetic.addCorrelatedNoise(y, 1.0, rho, seed);
+        return Synthetic.trace(t, y);
+    }
+
+    @Test
+    void findsTheHiddenZoneInCorrelatedNoiseAndNothingWhereNoneIs() {
+        // ρ = 0.85 at 5 Hz, as a detector's time constant gives: the hidden zone 30 noise SDs tall
+        // 1.3 s behind one 300 tall
+        int left = 0;
+        int found = 0;
+        int ghosts = 0;
+        for (long seed = 1; seed <= 8; seed++) {
+            TraceAnalysis a = PeakDetector.analyse(correlatedTrace(30, 0.85, seed), Detection.DIRECT,
+                    PeakSettings.DEFAULT);
+            if (!reported(a.peaks(), HIDDEN_S, 0.5)) {
+                left++;
+                ExpectedZoneProbe.Outcome o = a.probe().lookFor(a.peaks(),
+                        List.of(new ExpectedZoneProbe.ExpectedZone(HIDDEN_S + 0.2, 0.8)));
+                if (o.added().size() == 1) {
+                    // by construction: centre 101.3 s
+                    assertEquals(HIDDEN_S, o.added().get(0).migrationTimeS(), 0.3, "seed " + seed);
+                    found++;
+                }
             }
-            variances[r] = ss / (n - 1);
+            TraceAnalysis none = PeakDetector.analyse(correlatedTrace(0, 0.85, seed), Detection.DIRECT,
+                    PeakSettings.DEFAULT);
+            ghosts += none.probe().lookFor(none.peaks(), List.of(
+                    new ExpectedZoneProbe.ExpectedZone(HIDDEN_S, 0.8),
+                    new ExpectedZoneProbe.ExpectedZone(99.0, 0.8),
+                    new ExpectedZoneProbe.ExpectedZone(120.0, 0.8))).added().size();
         }
-        double m = 0;
-        for (double v : variances) {
-            m += v / stretches;
-        }
-        double spread = 0;
-        for (double v : variances) {
-            spread += (v - m) * (v - m) / (stretches - 1);
-        }
-        double simulated = 2 * m * m / spread;
-        // n(1 − ρ²)/(1 + ρ²) = 200 × 0.64 / 1.36 = 94.1; the simulated value to its sampling error
-        assertEquals(94.1, ExpectedZoneProbe.effectiveDegreesOfFreedom(n, rho), 0.05);
-        assertEquals(simulated, ExpectedZoneProbe.effectiveDegreesOfFreedom(n, rho), 0.1 * simulated,
-                "simulated " + simulated);
+        assertTrue(left >= 4, "the detector itself found the hidden zone in " + (8 - left) + " of 8 traces");
+        assertTrue(found >= left - 1, "found in " + found + " of " + left + " traces left to the probe");
+        // 24 looks where no zone is, each at 1e-3: none expected
+        assertTrue(ghosts <= 1, ghosts + " zones found where none is");
     }
 
     @Test
