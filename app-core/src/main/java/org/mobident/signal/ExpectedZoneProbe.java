@@ -533,6 +533,10 @@ public final class ExpectedZoneProbe {
             if (Math.abs(own.apexS - old.apexTimeS()) > old.widthHalfS()) {
                 return null; // the fit moved a neighbour: not the same peaks with one zone more
             }
+            if (!full.skewed && Math.abs(own.apexS - z.apexS) < SignalLimits.SHOULDER_MIN_SEPARATION_SIGMAS
+                    * Math.max(own.widthHalfS, z.widthHalfS) / GaussianClusterFit.HALF_WIDTH_PER_SIGMA) {
+                return null; // two Gaussians on one top: a shape the Gaussian does not follow, not two zones
+            }
             if (z.centreS > old.startTimeS() && z.centreS < old.endTimeS()) {
                 // the new zone lay inside this peak: the peak is split at the crossing of the two zones
                 double cut = 0.5 * (own.apexS + z.apexS);
