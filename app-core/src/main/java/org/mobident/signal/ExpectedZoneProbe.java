@@ -90,7 +90,9 @@ import org.mobident.result.Peak;
  * extra zone at that peak's top and the peak's own zone half its width beyond, away from the
  * expected time (a merged pair of skewed zones can sum to one top without skew, the top being the
  * expected zone's sharp side; measured on a lab-day pair 1.2 s apart, only this start reached the
- * noise); and, for one skewed neighbour, one with the extra zone held nearly symmetric ({@link
+ * noise; only where the peak is wider than {@value #SWAPPED_MIN_WIDTHS} expected widths); and,
+ * for one neighbour that is skewed or that Gaussians do not follow down to the noise, one with the
+ * extra zone held nearly symmetric ({@link
  * SkewedClusterFit}: a small zone is too dilute to be dispersed, and a free shape let it take over
  * the tall zone's flank, its first moment seconds from its own top and out of the reach while the
  * top sat where the library expected it). Which fitted zone
@@ -138,6 +140,9 @@ public final class ExpectedZoneProbe {
      *  (a modelling choice: about where the far zone of a merged pair of equal skewed zones has its
      *  top). */
     static final double SWAPPED_START_WIDTHS = 0.5;
+    /** ... and is tried only where that peak is wider than this many expected widths (a modelling
+     *  choice: a merged pair is wider than one zone; on three lab-day seeds no zone was lost by it). */
+    static final double SWAPPED_MIN_WIDTHS = 1.5;
     /** Fitted width at half height of the extra zone, as multiples of the width expected there. */
     static final double MIN_WIDTH_FACTOR = 0.5;
     static final double MAX_WIDTH_FACTOR = 4.0;
@@ -434,11 +439,11 @@ public final class ExpectedZoneProbe {
             }
         }
         Peak holder = holder(neighbours, e.timeS());
-        if (holder != null) {
+        if (holder != null && holder.widthHalfS() > SWAPPED_MIN_WIDTHS * expectedWidth) {
             // the top of the peak that holds the expected time may be the expected zone's own, with
             // the zone that peak was taken for hidden beyond it (a merged pair of skewed zones whose
-            // sum shows one top and no skew): the extra zone started at that top, the neighbour
-            // half the peak's width further on, away from the expected time
+            // sum shows one top and no skew, wider than one zone): the extra zone started at that
+            // top, the neighbour half the peak's width further on, away from the expected time
             double[] swapped = Arrays.copyOf(without, k + 1);
             int j = neighbours.indexOf(holder);
             double away = holder.apexTimeS() >= e.timeS() ? 1 : -1;
@@ -451,11 +456,14 @@ public final class ExpectedZoneProbe {
                 candidates.add(other);
             }
         }
-        if (k > 0 && k < MAX_SKEWED_ZONES) {
+        if (k > 0 && k < MAX_SKEWED_ZONES && (reduced.skewed || !adequate(reduced))) {
             // the extra zone nearly symmetric among skewed neighbours: a small zone is too dilute to
             // be dispersed, and a free shape lets it take over the tall neighbour's flank, which puts
             // its first moment seconds from its own top (a zone behind a tailing neighbour then
-            // fails the reach with its top where the library expects it)
+            // fails the reach with its top where the library expects it). Only where the
+            // neighbour alone is skewed or leaves more than the noise: Gaussian neighbours that
+            // explain the samples leave little for a held shape to add, and its fits cost a tenth
+            // more time on the README benchmark
             boolean[] held = new boolean[k + 1];
             for (int j = 0; j <= k; j++) {
                 held[j] = with[j] == e.timeS();
