@@ -24,6 +24,15 @@ class ExpectedZoneProbeTest {
     /** The hidden zone's centre, 1.3 s after the tall zone's: Rs = 1.18 × 1.3 / (2 × 1.18) ≈ 0.65. */
     private static final double HIDDEN_S = 101.3;
 
+    /** The isolated zones that give the run's widths (at 40, 60 and 150 s), sampled at {@code t}. */
+    private static double[] isolatedZones(double[] t) {
+        double[] y = new double[t.length];
+        Synthetic.addGaussian(t, y, 40, 80, SIGMA_S);
+        Synthetic.addGaussian(t, y, 60, 60, SIGMA_S);
+        Synthetic.addGaussian(t, y, 150, 70, SIGMA_S);
+        return y;
+    }
+
     /** A trace with isolated zones that give the run's widths, a zone 300 noise SDs tall at 100 s and,
      *  when {@code hiddenHeight > 0}, a small zone on its falling flank. */
     private static Trace trace(double hiddenHeight, long seed) {
@@ -34,10 +43,7 @@ class ExpectedZoneProbeTest {
      *  (none when 0). */
     private static Trace trace(double hiddenHeight, long seed, double beforeHeight) {
         double[] t = Synthetic.regularTimes(0, 0.2, 1000);
-        double[] y = new double[t.length];
-        Synthetic.addGaussian(t, y, 40, 80, SIGMA_S);
-        Synthetic.addGaussian(t, y, 60, 60, SIGMA_S);
-        Synthetic.addGaussian(t, y, 150, 70, SIGMA_S);
+        double[] y = isolatedZones(t);
         if (beforeHeight > 0) {
             Synthetic.addGaussian(t, y, 95.5, beforeHeight, SIGMA_S);
         }
@@ -154,10 +160,7 @@ class ExpectedZoneProbeTest {
      *  0.5 s apart (a front lies a third of the base after the first moment). */
     private static Trace frontingPair(long seed, double firstBaseS) {
         double[] t = Synthetic.regularTimes(0, 0.2, 1000);
-        double[] y = new double[t.length];
-        Synthetic.addGaussian(t, y, 40, 80, SIGMA_S);
-        Synthetic.addGaussian(t, y, 60, 60, SIGMA_S);
-        Synthetic.addGaussian(t, y, 150, 70, SIGMA_S);
+        double[] y = isolatedZones(t);
         TriangleZoneTest.addTriangle(t, y, 1000, 100.0, SIGMA_S, firstBaseS);
         TriangleZoneTest.addTriangle(t, y, 500, SECOND_OF_PAIR_S, SIGMA_S, -4.5);
         Synthetic.addNoise(y, 1.0, seed);
@@ -214,10 +217,7 @@ class ExpectedZoneProbeTest {
         int added = 0;
         for (long seed = 1; seed <= 6; seed++) {
             double[] t = Synthetic.regularTimes(0, 0.2, 1000);
-            double[] y = new double[t.length];
-            Synthetic.addGaussian(t, y, 40, 80, SIGMA_S);
-            Synthetic.addGaussian(t, y, 60, 60, SIGMA_S);
-            Synthetic.addGaussian(t, y, 150, 70, SIGMA_S);
+            double[] y = isolatedZones(t);
             Synthetic.addGaussian(t, y, 100, 200, SIGMA_S);
             Synthetic.addGaussian(t, y, 100, 40, 4 * SIGMA_S);
             Synthetic.addNoise(y, 1.0, seed);
@@ -277,10 +277,7 @@ class ExpectedZoneProbeTest {
     /** As {@link #trace(double, long)} with first-order autoregressive noise of marginal SD 1. */
     private static Trace correlatedTrace(double hiddenHeight, double rho, long seed) {
         double[] t = Synthetic.regularTimes(0, 0.2, 1000);
-        double[] y = new double[t.length];
-        Synthetic.addGaussian(t, y, 40, 80, SIGMA_S);
-        Synthetic.addGaussian(t, y, 60, 60, SIGMA_S);
-        Synthetic.addGaussian(t, y, 150, 70, SIGMA_S);
+        double[] y = isolatedZones(t);
         Synthetic.addGaussian(t, y, 100, 300, SIGMA_S);
         if (hiddenHeight > 0) {
             Synthetic.addGaussian(t, y, HIDDEN_S, hiddenHeight, SIGMA_S);
