@@ -146,14 +146,11 @@ final class SkewedClusterFit {
      * @param zones                zones in order of first moment
      * @param residualSumOfSquares RSS, signal units²
      * @param points               samples fitted
+     * @param fixedShapes          zones whose size a was held, not fitted
      */
     record Result(List<Zone> zones, double residualSumOfSquares, int points, int fixedShapes) {
         Result {
             zones = List.copyOf(zones);
-        }
-
-        Result(List<Zone> zones, double residualSumOfSquares, int points) {
-            this(zones, residualSumOfSquares, points, 0);
         }
 
         /** Fitted parameters: σ, and A, μ and a of each zone (a only where its shape is not held). */
